@@ -1,0 +1,100 @@
+import { requirePositive } from './InputError';
+import { checkPart, checkSampler, type Look, type Part, type Sampler } from './types';
+import { checkLookOptions, type LookOptions } from './lookOptions';
+import { gcd } from './gcd';
+
+export interface ApparentMotion {
+  /** n·f/s: pattern pitches travelled between two samples. */
+  ratio: number;
+  /** Perceived step per sample in pitches, in [-0.5, 0.5]: ratio − round(ratio). */
+  step: number;
+  /** Signed apparent speed, rev/s, from the single-image step (same sign as the speed = forward). */
+  apparentHz: number;
+  /** s > 2·n·|f|: the sampler is above the pattern's Nyquist rate and shows the true speed. */
+  faithful: boolean;
+  /** Image count q seen at once: > 1 only under a flash locked or near-locked to p/q. */
+  images: number;
+  /** What the viewer reads (physics.md §2 precedence). */
+  look: Look;
+  /** Lowest-terms p/q of the lock or near-lock found (q = 1 otherwise, p = round(ratio)). */
+  p: number;
+  q: number;
+  /** Signed drift of the q-image group, rev/s (equals apparentHz when q = 1). */
+  driftHz: number;
+}
+
+export type ApparentMotionOptions = Partial<LookOptions> & { sampler?: Sampler };
+
+/**
+ * What a sampler at `rateHz` shows of a turning part (physics.md §2–§3).
+ *
+ * ratio r = n·f/s; step e = r − round(r) in [−0.5, 0.5]; apparent speed a = e·s/n rev/s.
+ * Precedence: a group of q ≤ maxImages images whose drift |r − p/q|·s/n is below the still
+ * threshold reads 'still' (under 'frames' only q = 1 freezes); otherwise a faithful sampler
+ * (s > 2·n·|f|, Nyquist–Shannon) reads 'true'; otherwise |e| ≥ unclearStep reads 'unclear',
+ * and the sign of e against the sign of f reads 'forward' or 'backward'.
+ *
+ * Units: speedHz in rev/s (signed), rateHz in Hz (samples per second).
+ * Throws InputError for a non-finite speed, a feature count that is not a whole number ≥ 1,
+ * a rate ≤ 0 or non-finite, an unknown sampler, or bad look options.
+ *
+ * @example
+ * // Wikipedia, "Stroboscopic effect": a disc at 60 rev/s under 61 flashes/s turns back at 1 rev/s.
+ * apparentMotion({ speedHz: 60, symmetry: 1 }, 61).apparentHz // -1
+ *
+ * Sources: Shannon 1949 (sampling theorem); the alias relation n·f − s·round(n·f/s) of any DSP text.
+ */
+export function apparentMotion(part: Part, rateHz: number, opts?: ApparentMotionOptions): ApparentMotion {
+  const { speedHz: f, symmetry: n } = checkPart(part);
+  const s = requirePositive(rateHz, 'rate');
+  const sampler = checkSampler(opts?.sampler);
+  const o = checkLookOptions(opts);
+
+  const ratio = (n * f) / s;
+  const k = Math.round(ratio);
+  const step = clampHalf(ratio - k);
+  const apparentHz = (step * s) / n;
+  const faithful = Math.abs(ratio) < 0.5;
+  const base = { ratio, step, apparentHz, faithful };
+
+  // Lock test (§3): the smallest q whose group drifts slower than the still threshold.
+  // |r − p/q|·s/n < stillHz  ⇔  |n·f − (p/q)·s| < n·stillHz  (pattern-frequency form, exact).
+  const lockQ = sampler === 'flash' ? o.maxImages : 1;
+  const stillPatternHz = n * o.stillHz;
+  for (let q = 1; q <= lockQ; q++) {
+    const p = Math.round(ratio * q);
+    const driftPatternHz = n * f - (p * s) / q;
+    if (Math.abs(driftPatternHz) < stillPatternHz) {
+      return { ...base, images: q, look: 'still', p: Math.abs(p), q, driftHz: driftPatternHz / n };
+    }
+  }
+
+  // Near-lock under a flash: the smallest q ≥ 2 whose group creeps by less than
+  // groupSpacingsPerS of its own spacing (1/(n·q) rev) per second is seen as q images.
+  let images = 1;
+  let p = Math.abs(k);
+  let q = 1;
+  let driftHz = apparentHz;
+  if (sampler === 'flash' && !faithful) {
+    for (let qq = 2; qq <= o.maxImages; qq++) {
+      const pp = Math.round(ratio * qq);
+      const drift = (n * f - (pp * s) / qq) / n;
+      if (Math.abs(drift) * n * qq < o.groupSpacingsPerS && gcd(Math.abs(pp), qq) === 1) {
+        images = qq;
+        p = Math.abs(pp);
+        q = qq;
+        driftHz = drift;
+        break;
+      }
+    }
+  }
+  const common = { ...base, images, p, q, driftHz };
+  if (faithful) return { ...common, look: 'true' };
+  if (Math.abs(step) >= o.unclearStep) return { ...common, look: 'unclear' };
+  return { ...common, look: Math.sign(step) === Math.sign(f) ? 'forward' : 'backward' };
+}
+
+/** Rounding can leave ratio − round(ratio) a hair outside [−0.5, 0.5]; keep the documented range. */
+function clampHalf(e: number): number {
+  return e > 0.5 ? 0.5 : e < -0.5 ? -0.5 : e;
+}

@@ -1,0 +1,53 @@
+import { InputError, requirePositive, requireWhole, requireBetween } from './InputError';
+import { MAX_IMAGES_LIMIT } from './types';
+
+/** How an observer's eye reads a sampled part. Every field is a judgement, documented here. */
+export interface LookOptions {
+  /**
+   * Apparent speeds below this read as "looks still" (rev/s). Default 0.25 rpm, about
+   * 1.5 degrees per second: slower drift is hard to notice in the few seconds a person
+   * looks (a judgement, not a published figure).
+   */
+  stillHz: number;
+  /**
+   * A step of at least this many pitches per sample (up to 0.5) is too close to half a
+   * pitch for direction to be told. Default 0.45 (physics.md §2).
+   */
+  unclearStep: number;
+  /** Largest image count looked for in a lock (physics.md §3). Default 8. */
+  maxImages: number;
+  /**
+   * Under a flash, a group of q images that drifts less than this many of its own spacings
+   * per second is still seen as q separate images (a judgement). Default 1.
+   */
+  groupSpacingsPerS: number;
+}
+
+export const defaultLookOptions: Readonly<LookOptions> = Object.freeze({
+  stillHz: 0.25 / 60,
+  unclearStep: 0.45,
+  maxImages: 8,
+  groupSpacingsPerS: 1,
+});
+
+/** Fills in and validates look options. Throws InputError. */
+export function checkLookOptions(opts: Partial<LookOptions> | undefined): LookOptions {
+  if (opts !== undefined && (typeof opts !== 'object' || opts === null)) {
+    throw new InputError('options', 'options must be an object.');
+  }
+  const o = { ...defaultLookOptions, ...stripUndefined(opts ?? {}) };
+  return {
+    stillHz: requirePositive(o.stillHz, 'still threshold'),
+    unclearStep: requireBetween(o.unclearStep, 'unclear step', 0, 0.5),
+    maxImages: requireWhole(o.maxImages, 'largest image count', 1, MAX_IMAGES_LIMIT),
+    groupSpacingsPerS: requirePositive(o.groupSpacingsPerS, 'image group spacing'),
+  };
+}
+
+function stripUndefined<T extends object>(o: T): Partial<T> {
+  const out: Partial<T> = {};
+  for (const key of Object.keys(o) as Array<keyof T>) {
+    if (o[key] !== undefined) out[key] = o[key];
+  }
+  return out;
+}

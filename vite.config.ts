@@ -1,0 +1,61 @@
+/// <reference types="vitest/config" />
+import { defineConfig } from 'vite';
+import preact from '@preact/preset-vite';
+import { VitePWA } from 'vite-plugin-pwa';
+
+// The app is fully static and must work with no network after the first visit:
+// every built file and icon is precached by the generated service worker.
+export default defineConfig({
+  plugins: [
+    preact(),
+    VitePWA({
+      registerType: 'prompt',
+      injectRegister: false,
+      includeAssets: ['favicon.svg', 'robots.txt'],
+      manifest: {
+        name: 'Trueturn',
+        short_name: 'Trueturn',
+        description: 'What a strobe, camera or flickering light really shows of a turning part.',
+        theme_color: '#0d3b4f',
+        background_color: '#f4f1ea',
+        display: 'standalone',
+        start_url: '.',
+        scope: '.',
+        icons: [
+          { src: 'icon-192.png', sizes: '192x192', type: 'image/png' },
+          { src: 'icon-512.png', sizes: '512x512', type: 'image/png' },
+          { src: 'icon-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+        ],
+      },
+      workbox: {
+        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest,txt}'],
+        navigateFallback: 'index.html',
+      },
+    }),
+  ],
+  build: { target: 'es2022' },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          include: ['test/core/**/*.test.ts', 'test/state/**/*.test.{ts,tsx}', 'test/views/**/*.test.{ts,tsx}', 'test/render/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'browser',
+          include: ['test/browser/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['test/browser/global-setup.ts'],
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
