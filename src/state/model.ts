@@ -1,0 +1,81 @@
+// The shapes the app keeps: what the user set up, and the machines they saved.
+// Plain data in user-facing units (rpm, flashes per minute, percent), so a saved file reads
+// naturally; conversion to core units (rev/s, Hz, s) happens in computed views.
+
+export type SpeedUnit = 'rpm' | 'Hz' | 'rad/s';
+export type SamplerKind = 'camera' | 'strobe' | 'lighting';
+
+/** A turning part. */
+export interface PartSpec {
+  /** What the crew calls it: "cooling fan", "drive pulley". */
+  name: string;
+  /** Signed speed in rpm (+ = the viewer's reference direction). */
+  speedRpm: number;
+  /** Identical, equally spaced features: blades, spokes, jaws, bolts. 1 = a single mark. */
+  features: number;
+  /** Speed tolerance, ± percent (slip, drift, nameplate uncertainty). */
+  tolerancePercent: number;
+  /** When set, the speed comes from an induction motor's mains, poles and slip. */
+  motor?: { mainsHz: number; poles: number; slipPercent: number };
+}
+
+/** A camera: frame rate, exposure and rolling-shutter readout. */
+export interface CameraSpec {
+  frameRate: number;
+  /** Exposure given as a shutter angle (degrees) or a time (seconds, e.g. 1/500). */
+  exposure: { mode: 'angle'; angleDeg: number } | { mode: 'time'; seconds: number };
+  /** Top-to-bottom readout of a rolling shutter, ms (0 = global shutter). */
+  readoutMs: number;
+}
+
+/** A stroboscope: its current rate and its own range, in flashes per minute. */
+export interface StrobeSpec {
+  rateFpm: number;
+  minFpm: number;
+  maxFpm: number;
+}
+
+/** Lighting on mains: flicker at twice mains, at mains, or a custom frequency. */
+export interface LightingSpec {
+  mainsHz: 50 | 60;
+  flicker: 'double' | 'mains' | 'custom';
+  customHz: number;
+  /** Percent flicker, 100·(Lmax − Lmin)/(Lmax + Lmin). */
+  modulationPercent: number;
+}
+
+/** Everything the check screen shows, as the user set it. */
+export interface Setup {
+  parts: PartSpec[];
+  /** Index into parts of the part being checked. */
+  activePart: number;
+  samplerKind: SamplerKind;
+  camera: CameraSpec;
+  strobe: StrobeSpec;
+  lighting: LightingSpec;
+  /** Wanted slow forward creep for inspection, rpm. */
+  creepRpm: number;
+}
+
+/** A saved machine: a named set-up. */
+export interface Machine {
+  id: string;
+  name: string;
+  setup: Setup;
+  /** ISO 8601 times. */
+  createdAt: string;
+  updatedAt: string;
+  notes: string;
+}
+
+/** The set-up a first visit opens with. */
+export const defaultSetup: Setup = {
+  parts: [{ name: 'Fan', speedRpm: 1770, features: 6, tolerancePercent: 1 }],
+  activePart: 0,
+  samplerKind: 'strobe',
+  // 30000/1001 frames/s (SMPTE ST 12-1), 180° shutter, a typical phone readout (Ringaby & Forssén 2011).
+  camera: { frameRate: 30000 / 1001, exposure: { mode: 'angle', angleDeg: 180 }, readoutMs: 25 },
+  strobe: { rateFpm: 1770, minFpm: 30, maxFpm: 12000 },
+  lighting: { mainsHz: 50, flicker: 'double', customHz: 300, modulationPercent: 30 },
+  creepRpm: 2,
+};
