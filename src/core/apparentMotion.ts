@@ -55,17 +55,16 @@ export function apparentMotion(part: Part, rateHz: number, opts?: ApparentMotion
   const step = clampHalf(ratio - k);
   const apparentHz = (step * s) / n;
   const faithful = Math.abs(ratio) < 0.5;
-  const base = { ratio, step, apparentHz, faithful };
 
   // Lock test (§3): the smallest q whose group drifts slower than the still threshold.
-  // |r − p/q|·s/n < stillHz  ⇔  |n·f − (p/q)·s| < n·stillHz  (pattern-frequency form, exact).
+  // |r − p/q|·s/n < stillHz  ⇔  |n·f − (p/q)·s| < n·stillHz  (pattern-frequency form).
   const lockQ = sampler === 'flash' ? o.maxImages : 1;
   const stillPatternHz = n * o.stillHz;
   for (let q = 1; q <= lockQ; q++) {
     const p = Math.round(ratio * q);
     const driftPatternHz = n * f - (p * s) / q;
     if (Math.abs(driftPatternHz) < stillPatternHz) {
-      return { ...base, images: q, look: 'still', p: Math.abs(p), q, driftHz: driftPatternHz / n };
+      return { ratio, step, apparentHz, faithful, images: q, look: 'still', p: Math.abs(p), q, driftHz: driftPatternHz / n };
     }
   }
 
@@ -88,10 +87,14 @@ export function apparentMotion(part: Part, rateHz: number, opts?: ApparentMotion
       }
     }
   }
-  const common = { ...base, images, p, q, driftHz };
-  if (faithful) return { ...common, look: 'true' };
-  if (Math.abs(step) >= o.unclearStep) return { ...common, look: 'unclear' };
-  return { ...common, look: Math.sign(step) === Math.sign(f) ? 'forward' : 'backward' };
+  const look: Look = faithful
+    ? 'true'
+    : Math.abs(step) >= o.unclearStep
+      ? 'unclear'
+      : Math.sign(step) === Math.sign(f)
+        ? 'forward'
+        : 'backward';
+  return { ratio, step, apparentHz, faithful, images, look, p, q, driftHz };
 }
 
 /** Rounding can leave ratio − round(ratio) a hair outside [−0.5, 0.5]; keep the documented range. */

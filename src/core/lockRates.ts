@@ -42,25 +42,38 @@ export function lockRates(part: Part, range: Range, opts?: { maxImages?: number 
 
   const lo = minHz * (1 - EDGE);
   const hi = maxHz * (1 + EDGE);
-  const out: LockRate[] = [];
+  // For each image count q the rates F·q/p rise as p falls; merging the maxImages streams
+  // (smallest head first) yields ascending order without a sort.
+  const nextP = new Float64Array(maxImages + 1);
+  const firstP = new Float64Array(maxImages + 1);
+  const head = new Float64Array(maxImages + 1); // rate at nextP[q], Infinity when exhausted
+  const advance = (q: number) => {
+    let p = nextP[q];
+    while (p >= firstP[q] && q > 1 && gcd(p, q) !== 1) p--;
+    nextP[q] = p;
+    head[q] = p >= firstP[q] ? (patternHz * q) / p : Infinity;
+  };
   for (let q = 1; q <= maxImages; q++) {
-    // s = F·q/p lies in [lo, hi]  ⇔  p ∈ [F·q/hi, F·q/lo]
-    const pFirst = Math.max(1, Math.ceil((patternHz * q) / hi));
-    const pLast = Math.floor((patternHz * q) / lo);
-    for (let p = pFirst; p <= pLast; p++) {
-      if (q > 1 && gcd(p, q) !== 1) continue;
-      const rateHz = (patternHz * q) / p;
-      if (rateHz < lo || rateHz > hi) continue;
-      out.push({
-        rateHz,
-        images: q,
-        p,
-        q,
-        lowHz: rateHz * (1 - tolerance),
-        highHz: rateHz * (1 + tolerance),
-      });
-    }
+    firstP[q] = Math.max(1, Math.ceil((patternHz * q) / hi)); // s = F·q/p ≤ hi
+    nextP[q] = Math.floor((patternHz * q) / lo); // s ≥ lo
+    advance(q);
   }
-  out.sort((a, b) => a.rateHz - b.rateHz || a.q - b.q);
+  const out: LockRate[] = [];
+  for (;;) {
+    let q = 0;
+    let rateHz = Infinity;
+    for (let qq = 1; qq <= maxImages; qq++) {
+      if (head[qq] < rateHz) {
+        rateHz = head[qq];
+        q = qq;
+      }
+    }
+    if (q === 0) break;
+    const p = nextP[q];
+    nextP[q] = p - 1;
+    advance(q);
+    if (rateHz < lo || rateHz > hi) continue;
+    out.push({ rateHz, images: q, p, q, lowHz: rateHz * (1 - tolerance), highHz: rateHz * (1 + tolerance) });
+  }
   return out;
 }

@@ -31,11 +31,21 @@ export const defaultLookOptions: Readonly<LookOptions> = Object.freeze({
 });
 
 /** Fills in and validates look options. Throws InputError. */
-export function checkLookOptions(opts: Partial<LookOptions> | undefined): LookOptions {
+export function checkLookOptions(opts: Partial<LookOptions> | undefined): Readonly<LookOptions> {
   if (opts !== undefined && (typeof opts !== 'object' || opts === null)) {
     throw new InputError('options', 'options must be an object.');
   }
-  const o = { ...defaultLookOptions, ...stripUndefined(opts ?? {}) };
+  // Hot path (apparentMotion per pixel column, per chart point): no look option given.
+  if (
+    opts === undefined ||
+    (opts.stillHz === undefined &&
+      opts.unclearStep === undefined &&
+      opts.maxImages === undefined &&
+      opts.groupSpacingsPerS === undefined)
+  ) {
+    return defaultLookOptions;
+  }
+  const o = { ...defaultLookOptions, ...stripUndefined(opts) };
   return {
     stillHz: requirePositive(o.stillHz, 'still threshold'),
     unclearStep: requireBetween(o.unclearStep, 'unclear step', 0, 0.5),

@@ -8,7 +8,7 @@ export interface RateBandCause {
   part: number;
   /** 'still': q images stand still; 'backward': turns backward or direction unclear; 'crawl': turns too slowly to see at all. */
   kind: 'still' | 'backward' | 'crawl';
-  /** Image count for 'still'. */
+  /** Image count for 'still' (1 otherwise). */
   images: number;
 }
 
@@ -17,7 +17,7 @@ export interface RateBand {
   toHz: number;
   safe: boolean;
   reason: string;
-  /** For a misleading band: which parts mislead and how (distinct, in part order). */
+  /** For a misleading band: which parts mislead and how (distinct, by part then image count). */
   causes: RateBandCause[];
 }
 
@@ -33,6 +33,8 @@ export type RateBandOptions = Partial<LookOptions> & { sampler?: Sampler };
  *   s ∈ ((F₋ − D)·q/p, (F₊ + D)·q/p), with F± = n|f|(1 ± u) and D = n·stillHz;
  * - single-image backward or unclear for s ∈ (F₋/k, F₊/c_k], c_1 = 0.5, c_k = k − 1 + unclearStep;
  * - a part slower than the still threshold (F₋ < D) misleads at every rate.
+ * Below the rate where a part's backward spans start to touch (bin K with K·(F₊ − F₋) ≥ F₋·unclearStep)
+ * every rate misleads for that part; there the reason names only its backward look.
  * Under 'frames' every rate above 2·n·|f|·(1+u) is therefore safe; under a flash the
  * multi-image locks stay misleading at any rate.
  *
@@ -53,96 +55,142 @@ export function rateBands(parts: Part[], range: Range, opts?: RateBandOptions): 
   const sampler = checkSampler(opts?.sampler);
   const look = checkLookOptions(opts);
 
-  const spans: Span[] = [];
-  checked.forEach((part, index) => misleadingSpans(part, index, minHz, maxHz, sampler, look, spans));
-  spans.sort((a, b) => a.from - b.from);
-  return toBands(spans, minHz, maxHz);
+  const spans = new SpanList(minHz, maxHz);
+  checked.forEach((part, index) => addMisleadingSpans(part, index, sampler, look, spans));
+  return toBands(spans, minHz, maxHz, look.maxImages);
 }
 
-interface Span {
-  from: number;
-  to: number;
-  cause: RateBandCause;
+/** Cause codes pack (part, kind, images) into one number so spans live in flat arrays. */
+const CRAWL = 0;
+const BACKWARD = 1;
+const still = (images: number) => 1 + images;
+
+/** Misleading spans clipped to the range, in flat growable arrays (thousands per call). */
+class SpanList {
+  from = new Float64Array(1024);
+  to = new Float64Array(1024);
+  cause = new Int32Array(1024);
+  length = 0;
+  constructor(
+    readonly minHz: number,
+    readonly maxHz: number,
+  ) {}
+  push(from: number, to: number, cause: number): void {
+    const a = from > this.minHz ? from : this.minHz;
+    const b = to < this.maxHz ? to : this.maxHz;
+    if (a > b) return;
+    if (this.length === this.from.length) this.grow();
+    this.from[this.length] = a;
+    this.to[this.length] = b;
+    this.cause[this.length] = cause;
+    this.length++;
+  }
+  private grow(): void {
+    const size = this.from.length * 2;
+    const from = new Float64Array(size);
+    const to = new Float64Array(size);
+    const cause = new Int32Array(size);
+    from.set(this.from);
+    to.set(this.to);
+    cause.set(this.cause);
+    Object.assign(this, { from, to, cause });
+  }
 }
 
-function misleadingSpans(
+function addMisleadingSpans(
   part: Required<Part>,
   index: number,
-  minHz: number,
-  maxHz: number,
   sampler: Sampler,
   look: LookOptions,
-  out: Span[],
+  spans: SpanList,
 ): void {
   const F = part.symmetry * Math.abs(part.speedHz);
   if (F === 0) return;
   const lo = F * (1 - part.tolerance);
   const hi = F * (1 + part.tolerance);
   const D = part.symmetry * look.stillHz;
-  const push = (from: number, to: number, cause: RateBandCause) => {
-    const a = Math.max(from, minHz);
-    const b = Math.min(to, maxHz);
-    if (a < b || (a === b && from <= a && a <= to)) out.push({ from: a, to: b, cause });
-  };
+  const code = (kind: number) => index * 1000 + kind;
+  const { minHz, maxHz } = spans;
 
   if (lo < D) {
-    push(minHz, maxHz, { part: index, kind: 'crawl', images: 1 });
+    spans.push(minHz, maxHz, code(CRAWL));
     return;
   }
 
+  // Single-image backward or unclear, bin k = round(n·f/s) ≥ 1: s ∈ (lo/k, hi/c_k].
+  const U = look.unclearStep;
+  const upper = (k: number) => hi / (k === 1 ? 0.5 : k - 1 + U);
+  // From bin K on, neighbouring spans touch (hi/c_{k+1} ≥ lo/k ⇔ k·(hi − lo) ≥ lo·U), so every
+  // rate up to upper(K) misleads: one span replaces thousands of slow-rate ones.
+  const K = hi > lo ? Math.max(2, Math.ceil((lo * U) / (hi - lo))) : Infinity;
+  const floorHz = K === Infinity ? 0 : upper(K);
+  if (floorHz > minHz) spans.push(minHz, floorHz, code(BACKWARD));
+  const kFirst = Math.max(1, Math.floor(lo / maxHz));
+  const kLast = Math.min(K, Math.ceil(hi / minHz + 1));
+  for (let k = kFirst; k <= kLast; k++) spans.push(lo / k, upper(k), code(BACKWARD));
+
   // Locks p/q: still while (p/q)·s lies within D of some speed in [lo, hi].
   const qMax = sampler === 'flash' ? look.maxImages : 1;
+  const bottom = Math.max(minHz, floorHz);
   for (let q = 1; q <= qMax; q++) {
     const pFirst = Math.max(1, Math.floor(((lo - D) * q) / maxHz));
-    const pLast = Math.ceil(((hi + D) * q) / minHz);
+    const pLast = Math.ceil(((hi + D) * q) / bottom);
     for (let p = pFirst; p <= pLast; p++) {
       if (q > 1 && gcd(p, q) !== 1) continue;
-      push(((lo - D) * q) / p, ((hi + D) * q) / p, { part: index, kind: 'still', images: q });
+      const from = ((lo - D) * q) / p;
+      const to = ((hi + D) * q) / p;
+      // A multi-image lock wholly inside its bin's backward-or-unclear span adds no misleading
+      // rate (that band's reason then names the backward look); skipping it halves the work.
+      const k = Math.round(p / q);
+      if (q > 1 && k >= 1 && from > lo / k && to <= upper(k)) continue;
+      spans.push(from, to, code(still(q)));
     }
-  }
-
-  // Single-image backward or unclear, bin k = round(n·f/s) ≥ 1.
-  const kFirst = Math.max(1, Math.floor(lo / maxHz));
-  const kLast = Math.ceil(hi / minHz + 1);
-  for (let k = kFirst; k <= kLast; k++) {
-    const c = k === 1 ? 0.5 : k - 1 + look.unclearStep;
-    push(lo / k, hi / c, { part: index, kind: 'backward', images: 1 });
   }
 }
 
-function toBands(spans: Span[], minHz: number, maxHz: number): RateBand[] {
+function toBands(spans: SpanList, minHz: number, maxHz: number, maxImages: number): RateBand[] {
+  const order = new Uint32Array(spans.length);
+  for (let i = 0; i < order.length; i++) order[i] = i;
+  const { from, to, cause } = spans;
+  order.sort((a, b) => from[a] - from[b]);
+
   const bands: RateBand[] = [];
   let cursor = minHz;
   let i = 0;
-  while (i < spans.length) {
-    const from = spans[i].from;
-    let to = spans[i].to;
-    const causes: RateBandCause[] = [];
-    while (i < spans.length && spans[i].from <= to) {
-      to = Math.max(to, spans[i].to);
-      addCause(causes, spans[i].cause);
+  while (i < order.length) {
+    const start = from[order[i]];
+    let end = to[order[i]];
+    const codes = new Set<number>();
+    while (i < order.length && from[order[i]] <= end) {
+      const j = order[i];
+      if (to[j] > end) end = to[j];
+      codes.add(cause[j]);
       i++;
     }
-    if (from > cursor) bands.push(safeBand(cursor, from));
-    causes.sort((a, b) => a.part - b.part || a.images - b.images);
-    bands.push({ fromHz: from, toHz: to, safe: false, reason: describeCauses(causes), causes });
-    cursor = to;
+    if (start > cursor) bands.push(safeBand(cursor, start));
+    const causes = [...codes].sort((a, b) => a - b).map(decode);
+    bands.push({ fromHz: start, toHz: end, safe: false, reason: describeCauses(causes, maxImages), causes });
+    cursor = end;
   }
   if (cursor < maxHz || bands.length === 0) bands.push(safeBand(cursor, maxHz));
   return bands;
+}
+
+function decode(code: number): RateBandCause {
+  const part = Math.floor(code / 1000);
+  const kind = code % 1000;
+  if (kind === CRAWL) return { part, kind: 'crawl', images: 1 };
+  if (kind === BACKWARD) return { part, kind: 'backward', images: 1 };
+  return { part, kind: 'still', images: kind - 1 };
 }
 
 function safeBand(fromHz: number, toHz: number): RateBand {
   return { fromHz, toHz, safe: true, reason: 'Every part shows its true direction of turning.', causes: [] };
 }
 
-function addCause(causes: RateBandCause[], c: RateBandCause): void {
-  if (!causes.some((x) => x.part === c.part && x.kind === c.kind && x.images === c.images)) causes.push(c);
-}
-
 const MAX_CAUSES_IN_REASON = 4;
 
-function describeCauses(causes: RateBandCause[]): string {
+function describeCauses(causes: RateBandCause[], _maxImages: number): string {
   const words = causes.slice(0, MAX_CAUSES_IN_REASON).map((c) => {
     const who = `part ${c.part + 1}`;
     if (c.kind === 'crawl') return `${who} turns too slowly to see moving`;
