@@ -44,7 +44,7 @@ export function parseNumber(text: string, field = 'value'): number {
   return splitNumber(text, field).value;
 }
 
-const NUMBER = /^\s*([+-−]?)\s*((?:\d[\d\s\u00a0\u202f.,']*)?\d|\d*[.,]\d+)(?:[eE]([+-]?\d+))?\s*(.*?)\s*$/u;
+const NUMBER = /^\s*([+\-−]?)\s*((?:\d[\d\s\u00a0\u202f.,']*)?\d|\d*[.,]\d+)(?:[eE]([+-]?\d+))?\s*(.*?)\s*$/u;
 
 function splitNumber(text: string, field: string): { value: number; unit: string } {
   if (typeof text !== 'string') throw new InputError(field, `${field} must be typed as text.`);
