@@ -35,8 +35,8 @@ export const mToIn = (m: number): number => requireFinite(m, 'length') / 0.0254;
  * Reads a number as people type it: "1780", "1,780", "1 780", "29.97", "29,97", "1.780,5",
  * "-3", "+2.5", "1e3", with an optional unit after it ("1780 rpm"), which is ignored here
  * (see parseQuantity). A comma followed by exactly three digits and no decimal point is a
- * thousands separator; otherwise a lone comma is the decimal mark. When both marks appear,
- * the last one is the decimal mark.
+ * thousands separator, unless only zeros stand before it ("0,125" is 0.125); otherwise a
+ * lone comma is the decimal mark. When both marks appear, the last one is the decimal mark.
  * Throws InputError naming `field` for empty text or text that is not a number.
  * @example parseNumber('1,780 rpm') // 1780
  */
@@ -50,12 +50,12 @@ function splitNumber(text: string, field: string): { value: number; unit: string
   if (typeof text !== 'string') throw new InputError(field, `${field} must be typed as text.`);
   if (text.trim() === '') throw new InputError(field, `${field} is empty: type a number.`);
   const m = NUMBER.exec(text);
-  if (!m) throw new InputError(field, `"${text.slice(0, 24)}" is not a number.`);
+  if (!m) throw new InputError(field, `"${text.slice(0, 24)}" is not a number for ${field}.`);
   const sign = m[1] === '-' || m[1] === '−' ? -1 : 1;
   const digits = normaliseDigits(m[2], text, field);
   const exponent = m[3] ? Number(m[3]) : 0;
   const value = sign * Number(digits) * Math.pow(10, exponent);
-  if (!Number.isFinite(value)) throw new InputError(field, `"${text.slice(0, 24)}" is too large.`);
+  if (!Number.isFinite(value)) throw new InputError(field, `"${text.slice(0, 24)}" is too large for ${field}.`);
   return { value, unit: m[4] };
 }
 
@@ -70,13 +70,13 @@ function normaliseDigits(raw: string, text: string, field: string): string {
     out = s.split(group).join('').replace(decimal, '.');
   } else if (lastComma >= 0) {
     const groups = s.split(',');
-    const thousands = groups.length > 1 && groups.slice(1).every((g) => g.length === 3) && groups[0].length > 0 && groups[0].length <= 3;
+    const thousands = groups.length > 1 && groups.slice(1).every((g) => g.length === 3) && groups[0].length > 0 && groups[0].length <= 3 && !/^0+$/.test(groups[0]);
     out = thousands ? groups.join('') : groups.length === 2 ? groups.join('.') : '';
   } else {
     const groups = s.split('.');
     out = groups.length <= 2 ? s : groups.slice(1).every((g) => g.length === 3) ? groups.join('') : '';
   }
-  if (!/^\d*\.?\d+$|^\d+\.?$/.test(out)) throw new InputError(field, `"${text.slice(0, 24)}" is not a number.`);
+  if (!/^\d*\.?\d+$|^\d+\.?$/.test(out)) throw new InputError(field, `"${text.slice(0, 24)}" is not a number for ${field}.`);
   return out;
 }
 
@@ -104,7 +104,13 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: str
   const table = UNITS[kind];
   if (kind === 'time' && typeof text === 'string') {
     const frac = /^\s*1\s*\/\s*(\d+(?:[.,]\d+)?)\s*(s)?\s*$/i.exec(text);
-    if (frac) return 1 / parseNumber(frac[1], field);
+    if (frac) {
+      const under = parseNumber(frac[1], field);
+      if (under === 0) {
+        throw new InputError(field, `${field}: 1/${frac[1]} is not a time; the number under the line must be above zero.`);
+      }
+      return 1 / under;
+    }
   }
   const { value, unit } = splitNumber(text, field);
   const key = (unit || defaultUnit).trim().toLowerCase();
