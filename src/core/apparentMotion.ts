@@ -87,9 +87,12 @@ export function apparentMotion(part: Part, rateHz: number, opts?: ApparentMotion
       }
     }
   }
+  // A step of exactly unclearStep from decimal inputs (29 rev/s at 20 frames/s: 1.45 − 1 = 0.45)
+  // can land a hair below it in binary; allow for the rounding of the ratio itself.
+  const unclearFrom = o.unclearStep - 4 * Number.EPSILON * Math.max(1, Math.abs(ratio));
   const look: Look = faithful
     ? 'true'
-    : Math.abs(step) >= o.unclearStep
+    : Math.abs(step) >= unclearFrom
       ? 'unclear'
       : Math.sign(step) === Math.sign(f)
         ? 'forward'
