@@ -1,8 +1,14 @@
+import { InputError } from './InputError';
+
 /**
  * Greatest common divisor of two whole numbers ≥ 0 (Euclid's algorithm).
+ * Throws InputError for anything else (NaN or Infinity would otherwise loop for ever).
  * @example gcd(12, 18) // 6
  */
 export function gcd(a: number, b: number): number {
+  if (!(Number.isInteger(a) && Number.isInteger(b) && a >= 0 && b >= 0)) {
+    throw new InputError('whole numbers', `whole numbers of at least 0 are needed (got ${String(a)} and ${String(b)}).`);
+  }
   while (b !== 0) [a, b] = [b, a % b];
   return a;
 }
