@@ -22,6 +22,19 @@ export function requireFinite(value: unknown, field: string): number {
   return value;
 }
 
+/**
+ * A computed result, passed through when finite. Inputs that are each valid but far apart in
+ * size (a speed of 1e300 rev/s at 1e-300 Hz) can overflow; the core never returns NaN or
+ * Infinity, so that throws InputError naming the field to check.
+ * @example requireFiniteResult(2 * 30, 'speed') // 60
+ */
+export function requireFiniteResult(value: number, field: string): number {
+  if (!Number.isFinite(value)) {
+    throw new InputError(field, `${field} is too large or too small for a result to be computed: check the units.`);
+  }
+  return value;
+}
+
 /** A finite number > 0. */
 export function requirePositive(value: unknown, field: string): number {
   const v = requireFinite(value, field);

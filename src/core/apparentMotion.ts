@@ -1,4 +1,4 @@
-import { requirePositive } from './InputError';
+import { requireFiniteResult, requirePositive } from './InputError';
 import { checkPart, checkSampler, type Look, type Part, type Sampler } from './types';
 import { checkLookOptions, type LookOptions } from './lookOptions';
 import { gcd } from './gcd';
@@ -50,7 +50,7 @@ export function apparentMotion(part: Part, rateHz: number, opts?: ApparentMotion
   const sampler = checkSampler(opts?.sampler);
   const o = checkLookOptions(opts);
 
-  const ratio = (n * f) / s;
+  const ratio = requireFiniteResult((n * f) / s, 'rate');
   const k = Math.round(ratio);
   const step = clampHalf(ratio - k);
   const apparentHz = (step * s) / n;

@@ -1,4 +1,12 @@
-import { InputError, requireBetween, requireFinite, requireNonNegative, requirePositive, requireWhole } from './InputError';
+import {
+  InputError,
+  requireBetween,
+  requireFinite,
+  requireFiniteResult,
+  requireNonNegative,
+  requirePositive,
+  requireWhole,
+} from './InputError';
 
 /**
  * Synchronous speed of an induction motor (physics.md §8): 120·fm/P rpm = 2·fm/P rev/s.
@@ -10,7 +18,7 @@ export function synchronousSpeedHz(mainsHz: number, poles: number): number {
   const fm = requirePositive(mainsHz, 'mains frequency');
   const P = requireWhole(poles, 'poles', 2, 1000);
   if (P % 2 !== 0) throw new InputError('poles', `poles come in pairs: give an even number (got ${P}).`);
-  return (2 * fm) / P;
+  return requireFiniteResult((2 * fm) / P, 'mains frequency');
 }
 
 /**
@@ -28,7 +36,7 @@ export function motorSpeedHz(mainsHz: number, poles: number, slip: number): numb
  */
 export function slipFromSpeed(speedHz: number, mainsHz: number, poles: number): number {
   const f = requireNonNegative(speedHz, 'speed');
-  return 1 - f / synchronousSpeedHz(mainsHz, poles);
+  return requireFiniteResult(1 - f / synchronousSpeedHz(mainsHz, poles), 'speed');
 }
 
 /**
@@ -40,7 +48,7 @@ export function beltSpeedHz(driverHz: number, driverDiameterM: number, drivenDia
   const f1 = requireFinite(driverHz, 'driver speed');
   const D1 = requirePositive(driverDiameterM, 'driver pulley diameter');
   const D2 = requirePositive(drivenDiameterM, 'driven pulley diameter');
-  return (f1 * D1) / D2;
+  return requireFiniteResult((f1 * D1) / D2, 'driver speed');
 }
 
 /**
@@ -51,7 +59,7 @@ export function gearSpeedHz(driverHz: number, driverTeeth: number, drivenTeeth: 
   const f1 = requireFinite(driverHz, 'driver speed');
   const z1 = requireWhole(driverTeeth, 'driver teeth', 1, 100_000);
   const z2 = requireWhole(drivenTeeth, 'driven teeth', 1, 100_000);
-  return -(f1 * z1) / z2;
+  return requireFiniteResult(-(f1 * z1) / z2, 'driver speed');
 }
 
 /**
@@ -61,7 +69,7 @@ export function gearSpeedHz(driverHz: number, driverTeeth: number, drivenTeeth: 
 export function wheelSpeedHz(groundSpeedMps: number, diameterM: number): number {
   const v = requireFinite(groundSpeedMps, 'ground speed');
   const D = requirePositive(diameterM, 'wheel diameter');
-  return v / (Math.PI * D);
+  return requireFiniteResult(v / (Math.PI * D), 'ground speed');
 }
 
 const TYRE = /^\s*(\d{2,3}(?:\.\d+)?)\s*\/\s*(\d{2,3}(?:\.\d+)?)\s*(?:Z?R|-|D|B)\s*(\d{2}(?:\.\d)?)\b/i;

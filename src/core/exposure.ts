@@ -1,4 +1,4 @@
-import { InputError, requireFinite, requireNonNegative, requirePositive, requireWhole } from './InputError';
+import { InputError, requireFinite, requireFiniteResult, requireNonNegative, requirePositive, requireWhole } from './InputError';
 import { MAX_SYMMETRY } from './types';
 
 /**
@@ -9,7 +9,7 @@ import { MAX_SYMMETRY } from './types';
 export function blurDegrees(speedHz: number, exposureS: number): number {
   const f = requireFinite(speedHz, 'speed');
   const t = requireNonNegative(exposureS, 'exposure');
-  return 360 * Math.abs(f) * t;
+  return requireFiniteResult(360 * Math.abs(f) * t, 'speed');
 }
 
 /**
@@ -21,7 +21,7 @@ export function blurPitches(speedHz: number, symmetry: number, exposureS: number
   const f = requireFinite(speedHz, 'speed');
   const n = requireWhole(symmetry, 'features (blades, spokes)', 1, MAX_SYMMETRY);
   const t = requireNonNegative(exposureS, 'exposure');
-  return n * Math.abs(f) * t;
+  return requireFiniteResult(n * Math.abs(f) * t, 'speed');
 }
 
 /**
@@ -34,7 +34,7 @@ export function exposureFromShutterAngle(angleDeg: number, rateHz: number): numb
   const a = requirePositive(angleDeg, 'shutter angle');
   if (a > 360) throw new InputError('shutter angle', `shutter angle must be at most 360° (got ${a}).`);
   const s = requirePositive(rateHz, 'frame rate');
-  return a / 360 / s;
+  return requireFiniteResult(a / 360 / s, 'frame rate');
 }
 
 /**
@@ -61,7 +61,7 @@ export function flashArcBlurM(speedHz: number, radiusM: number, flashS: number):
   const f = requireFinite(speedHz, 'speed');
   const r = requireNonNegative(radiusM, 'radius');
   const t = requireNonNegative(flashS, 'flash duration');
-  return 2 * Math.PI * r * Math.abs(f) * t;
+  return requireFiniteResult(2 * Math.PI * r * Math.abs(f) * t, 'speed');
 }
 
 /**
@@ -73,5 +73,5 @@ export function flashArcBlurM(speedHz: number, radiusM: number, flashS: number):
 export function rollingSkewDegrees(speedHz: number, readoutS: number): number {
   const f = requireFinite(speedHz, 'speed');
   const T = requireNonNegative(readoutS, 'readout time');
-  return 360 * Math.abs(f) * T;
+  return requireFiniteResult(360 * Math.abs(f) * T, 'speed');
 }

@@ -1,4 +1,4 @@
-import { InputError, requireBetween, requirePositive } from './InputError';
+import { InputError, requireBetween, requireFiniteResult, requirePositive } from './InputError';
 
 export type FlickerRisk = 'no-effect' | 'low-risk' | 'elevated';
 
@@ -37,7 +37,9 @@ export function flickerRisk(flickerHz: number, modulationPercent: number): Flick
 export function percentFlicker(maxLevel: number, minLevel: number): number {
   const hi = requirePositive(maxLevel, 'highest light level');
   const lo = requireBetween(minLevel, 'lowest light level', 0, hi);
-  return (100 * (hi - lo)) / (hi + lo);
+  // Halve huge levels first so that hi + lo cannot overflow (exact at that size).
+  const [h, l] = hi > 8e307 ? [hi / 2, lo / 2] : [hi, lo];
+  return 100 * ((h - l) / (h + l));
 }
 
 /** One sinusoidal component of the light: frequency (Hz) and amplitude relative to the mean (0…1+). */
@@ -52,7 +54,7 @@ export interface LightComponent {
  */
 export function svmThreshold(frequencyHz: number): number {
   const f = requirePositive(frequencyHz, 'flicker frequency');
-  return 2.865e-5 * Math.pow(f, 1.543) + 0.225;
+  return requireFiniteResult(2.865e-5 * Math.pow(f, 1.543) + 0.225, 'flicker frequency');
 }
 
 /**

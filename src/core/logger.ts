@@ -1,4 +1,4 @@
-import { requireFinite, requireNonNegative, requirePositive, requireWhole } from './InputError';
+import { requireFinite, requireFiniteResult, requireNonNegative, requirePositive, requireWhole } from './InputError';
 
 /**
  * Where a component lands after sampling (physics.md §9): |f − fs·round(f/fs)|, in [0, fs/2].
@@ -9,7 +9,9 @@ import { requireFinite, requireNonNegative, requirePositive, requireWhole } from
 export function foldedHz(signalHz: number, sampleHz: number): number {
   const f = requireNonNegative(signalHz, 'signal frequency');
   const fs = requirePositive(sampleHz, 'sample rate');
-  return Math.abs(f - fs * Math.round(f / fs));
+  // f mod fs is exact in floating point, so the fold stays in [0, fs/2] even when f/fs is huge.
+  const r = f % fs;
+  return Math.min(r, fs - r);
 }
 
 /**
@@ -24,7 +26,7 @@ export function lowPassGainDb(signalHz: number, cutoffHz: number, order: number)
   const m = requireWhole(order, 'filter order', 1, 20);
   if (f === 0) return 0;
   // Far above the cutoff (f/fc)^(2m) can overflow; there 1 + x^(2m) ≈ x^(2m) to 1e-30.
-  const decades = 2 * m * Math.log10(f / fc);
+  const decades = 2 * m * (Math.log10(f) - Math.log10(fc));
   return decades > 30 ? -10 * decades : -10 * Math.log10(1 + Math.pow(f / fc, 2 * m));
 }
 
@@ -35,7 +37,7 @@ export function lowPassGainDb(signalHz: number, cutoffHz: number, order: number)
 export function rcCutoffHz(resistanceOhm: number, capacitanceF: number): number {
   const R = requirePositive(resistanceOhm, 'resistance');
   const C = requirePositive(capacitanceF, 'capacitance');
-  return 1 / (2 * Math.PI * R * C);
+  return requireFiniteResult(1 / (2 * Math.PI * R * C), 'resistance');
 }
 
 /**

@@ -1,35 +1,35 @@
-import { InputError, requireFinite } from './InputError';
+import { InputError, requireFinite, requireFiniteResult as finite } from './InputError';
 
 // Conversions at the edges (physics.md: the core works in rev/s, Hz, s, m). Exact factors.
 
 /** @example rpmToHz(1800) // 30 */
 export const rpmToHz = (rpm: number): number => requireFinite(rpm, 'speed') / 60;
 /** @example hzToRpm(30) // 1800 */
-export const hzToRpm = (hz: number): number => requireFinite(hz, 'speed') * 60;
+export const hzToRpm = (hz: number): number => finite(requireFinite(hz, 'speed') * 60, 'speed');
 /** @example radPerSToHz(2 * Math.PI) // 1 */
 export const radPerSToHz = (w: number): number => requireFinite(w, 'speed') / (2 * Math.PI);
 /** @example hzToRadPerS(1) // 6.283185307179586 */
-export const hzToRadPerS = (hz: number): number => requireFinite(hz, 'speed') * 2 * Math.PI;
+export const hzToRadPerS = (hz: number): number => finite(requireFinite(hz, 'speed') * 2 * Math.PI, 'speed');
 /** Flashes per minute to Hz. @example fpmToHz(3600) // 60 */
 export const fpmToHz = (fpm: number): number => requireFinite(fpm, 'flash rate') / 60;
 /** Hz to flashes per minute. @example hzToFpm(60) // 3600 */
-export const hzToFpm = (hz: number): number => requireFinite(hz, 'flash rate') * 60;
+export const hzToFpm = (hz: number): number => finite(requireFinite(hz, 'flash rate') * 60, 'flash rate');
 /** @example kmhToMps(36) // 10 */
 export const kmhToMps = (kmh: number): number => requireFinite(kmh, 'ground speed') / 3.6;
 /** @example mpsToKmh(10) // 36 */
-export const mpsToKmh = (mps: number): number => requireFinite(mps, 'ground speed') * 3.6;
+export const mpsToKmh = (mps: number): number => finite(requireFinite(mps, 'ground speed') * 3.6, 'ground speed');
 /** International mile (1959): 1609.344 m. @example mphToMps(1) // 0.44704 */
-export const mphToMps = (mph: number): number => (requireFinite(mph, 'ground speed') * 1609.344) / 3600;
+export const mphToMps = (mph: number): number => finite((requireFinite(mph, 'ground speed') * 1609.344) / 3600, 'ground speed');
 /** @example mpsToMph(0.44704) // 1 */
-export const mpsToMph = (mps: number): number => (requireFinite(mps, 'ground speed') * 3600) / 1609.344;
+export const mpsToMph = (mps: number): number => finite((requireFinite(mps, 'ground speed') * 3600) / 1609.344, 'ground speed');
 /** @example mmToM(25.4) // 0.0254 */
 export const mmToM = (mm: number): number => requireFinite(mm, 'length') / 1000;
 /** @example mToMm(0.0254) // 25.4 */
-export const mToMm = (m: number): number => requireFinite(m, 'length') * 1000;
+export const mToMm = (m: number): number => finite(requireFinite(m, 'length') * 1000, 'length');
 /** International inch: 25.4 mm exactly. @example inToM(1) // 0.0254 */
 export const inToM = (inch: number): number => requireFinite(inch, 'length') * 0.0254;
 /** @example mToIn(0.0254) // 1 */
-export const mToIn = (m: number): number => requireFinite(m, 'length') / 0.0254;
+export const mToIn = (m: number): number => finite(requireFinite(m, 'length') / 0.0254, 'length');
 
 /**
  * Reads a number as people type it: "1780", "1,780", "1 780", "29.97", "29,97", "1.780,5",
@@ -118,7 +118,7 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: str
   if (factor === undefined) {
     throw new InputError(field, `"${unit}" is not a unit for ${field}; use ${Object.keys(table).join(', ')}.`);
   }
-  return value * factor;
+  return finite(value * factor, field);
 }
 
 /** Unit words a kind accepts, for help text. */
