@@ -9,27 +9,36 @@ export default defineConfig({
   plugins: [
     preact(),
     VitePWA({
+      // A new version waits for the user's go-ahead (src/views/UpdateNotice); registration is
+      // done by the useRegisterSW hook, so no extra script is injected.
       registerType: 'prompt',
       injectRegister: false,
+      // Not matched by globPatterns below; the manifest icons are added by the plugin itself.
       includeAssets: ['favicon.svg', 'robots.txt'],
       manifest: {
+        id: '.',
         name: 'Trueturn',
         short_name: 'Trueturn',
-        description: 'What a strobe, camera or flickering light really shows of a turning part.',
+        description: 'What a strobe, camera or flickering light really shows of a turning part, and which rates to use.',
+        lang: 'en',
         theme_color: '#0d3b4f',
         background_color: '#f4f1ea',
         display: 'standalone',
+        orientation: 'any',
         start_url: '.',
         scope: '.',
+        categories: ['utilities', 'productivity'],
         icons: [
-          { src: 'icon-192.png', sizes: '192x192', type: 'image/png' },
-          { src: 'icon-512.png', sizes: '512x512', type: 'image/png' },
+          { src: 'icon-192.png', sizes: '192x192', type: 'image/png', purpose: 'any' },
+          { src: 'icon-512.png', sizes: '512x512', type: 'image/png', purpose: 'any' },
           { src: 'icon-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
         ],
       },
       workbox: {
-        globPatterns: ['**/*.{js,css,html,svg,png,webmanifest,txt}'],
+        // The whole app (every script, style sheet and page); icons come through the manifest.
+        globPatterns: ['**/*.{js,css,html}'],
         navigateFallback: 'index.html',
+        cleanupOutdatedCaches: true,
       },
     }),
   ],

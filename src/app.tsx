@@ -1,12 +1,46 @@
-import { apparentMotion } from './core';
+import type { ComponentChildren } from 'preact';
+import { currentScreen } from './lib/navigation';
+import { storageMessage, storageStatus } from './state/storage';
+import { sessionMessage, storageOpened } from './state/setup';
+import { AppFrame } from './views/AppFrame';
+import { Banner } from './views/Banner';
+import { CheckScreen } from './views/CheckScreen';
+import { MachinesScreen } from './views/MachinesScreen';
+import './views/Theme/global.css';
 
-// Placeholder page until the check screen lands: shows the core working on one case.
-export function App() {
-  const m = apparentMotion({ speedHz: 60, symmetry: 1 }, 61);
+interface Props {
+  /** The service-worker notice (main.tsx passes it; tests leave it out). */
+  updateNotice?: ComponentChildren;
+}
+
+/** Page layout and navigation: the frame, the notices, and the screen the tab bar chose. */
+export function App({ updateNotice }: Props) {
+  const session = sessionMessage.value;
+  const status = storageStatus.value;
+  const problem = storageMessage.value;
+  const notices = (
+    <>
+      {updateNotice}
+      {session && (
+        <Banner kind={session.kind} onClose={() => (sessionMessage.value = null)} testId="session-message">
+          {session.text}
+        </Banner>
+      )}
+      {storageOpened.value && status.mode === 'memory' && (
+        <Banner kind="problem" testId="storage-status">
+          {status.reason ?? 'Saving is off: changes last only until this tab is closed.'}
+        </Banner>
+      )}
+      {problem && (
+        <Banner kind="problem" onClose={() => (storageMessage.value = null)} testId="storage-message">
+          {problem}
+        </Banner>
+      )}
+    </>
+  );
   return (
-    <main>
-      <h1>Trueturn</h1>
-      <p>A disc at 3600 rpm under 61 flashes per second looks {m.look} at {(m.apparentHz * 60).toFixed(1)} rpm.</p>
-    </main>
+    <AppFrame notices={notices}>
+      {currentScreen.value === 'machines' ? <MachinesScreen /> : <CheckScreen />}
+    </AppFrame>
   );
 }

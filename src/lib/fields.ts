@@ -1,0 +1,141 @@
+// Reading what a person types into a field. Every reader takes the raw text and returns the
+// value in the set-up's own units (rpm, flashes per minute, percent, ms…) or throws the
+// core's InputError with a message fit to show beside the field. Numbers are read by the
+// core's parseNumber/parseQuantity, so "1,780", "29,97" and "1780 rpm" all work.
+import { InputError, MAX_SYMMETRY, parseNumber, parseQuantity } from '../core';
+import type { SpeedUnit } from '../state/model';
+
+/** What reading a field gave: a value, or the message to show beside it. */
+export type FieldReading = { ok: true; value: number } | { ok: false; message: string };
+
+/** Runs a reader and turns its InputError into a message; any other error is a bug and rethrows. */
+export function readField(text: string, reader: (text: string) => number): FieldReading {
+  try {
+    const value = reader(text);
+    if (!Number.isFinite(value)) return { ok: false, message: 'This gives no usable number.' };
+    return { ok: true, value };
+  } catch (error) {
+    if (error instanceof InputError) return { ok: false, message: sentence(error.message) };
+    throw error;
+  }
+}
+
+function sentence(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+function within(value: number, min: number, max: number, what: string, unit = ''): number {
+  if (value < min || value > max) {
+    const u = unit ? ` ${unit}` : '';
+    throw new InputError(what, `${sentence(what)} must be from ${min}${u} to ${max}${u}.`);
+  }
+  return value;
+}
+
+function above(value: number, min: number, max: number, what: string, unit = ''): number {
+  if (value <= min || value > max) {
+    const u = unit ? ` ${unit}` : '';
+    throw new InputError(what, `${sentence(what)} must be above ${min}${u} and at most ${max}${u}.`);
+  }
+  return value;
+}
+
+function whole(value: number, min: number, max: number, what: string): number {
+  if (!Number.isInteger(value) || value < min || value > max) {
+    throw new InputError(what, `${sentence(what)} must be a whole number from ${min} to ${max}.`);
+  }
+  return value;
+}
+
+/** Fastest speed accepted: beyond any machine part a person checks with a strobe or camera. */
+export const MAX_SPEED_RPM = 1_000_000;
+/** Fastest sampler accepted, Hz: strobes reach a few kHz, high-speed cameras far more. */
+export const MAX_RATE_HZ = 1_000_000;
+
+const SPEED_UNIT_WORD: Record<SpeedUnit, string> = { rpm: 'rpm', Hz: 'hz', 'rad/s': 'rad/s' };
+
+/** Signed speed typed in `unit` (or with its own unit word) → rpm. */
+export function readSpeedRpm(text: string, unit: SpeedUnit): number {
+  const hz = parseQuantity(text, 'speed', SPEED_UNIT_WORD[unit], 'speed');
+  return within(hz * 60, -MAX_SPEED_RPM, MAX_SPEED_RPM, 'speed', 'rpm');
+}
+
+/** Identical features on the part: blades, spokes, jaws, bolts. */
+export function readFeatures(text: string): number {
+  return whole(parseNumber(text, 'features'), 1, Math.min(MAX_SYMMETRY, 10_000), 'features');
+}
+
+/** Speed tolerance, ± percent. */
+export function readTolerancePercent(text: string): number {
+  return within(parseQuantity(text, 'percent', '%', 'tolerance'), 0, 50, 'tolerance', '%');
+}
+
+/** Motor poles: an even whole number. */
+export function readPoles(text: string): number {
+  const poles = whole(parseNumber(text, 'poles'), 2, 200, 'poles');
+  if (poles % 2 !== 0) throw new InputError('poles', 'Poles come in pairs: give an even number such as 2, 4 or 6.');
+  return poles;
+}
+
+/** Motor slip, percent of synchronous speed. */
+export function readSlipPercent(text: string): number {
+  return within(parseQuantity(text, 'percent', '%', 'slip'), 0, 50, 'slip', '%');
+}
+
+/** Camera frame rate, frames per second. */
+export function readFrameRate(text: string): number {
+  return above(parseQuantity(text, 'rate', 'fps', 'frame rate'), 0, MAX_RATE_HZ, 'frame rate', 'frames/s');
+}
+
+/** Shutter angle, degrees. */
+export function readShutterAngle(text: string): number {
+  return above(parseQuantity(text, 'angle', '°', 'shutter angle'), 0, 360, 'shutter angle', '°');
+}
+
+/**
+ * Exposure time, seconds. A bare number of 1 or more means 1/x s, as cameras show it
+ * ("500" = 1/500 s); a bare fraction below 1 is seconds ("0.004"); "1/500", "2 ms" and
+ * "0.004 s" are read as written.
+ */
+export function readExposureSeconds(text: string): number {
+  const bare = /^\s*[\d.,\s]+\s*$/.test(text);
+  let seconds: number;
+  if (bare) {
+    const x = parseNumber(text, 'exposure');
+    if (x <= 0) throw new InputError('exposure', 'Exposure must be longer than zero: type 500 for 1/500 s.');
+    seconds = x >= 1 ? 1 / x : x;
+  } else {
+    seconds = parseQuantity(text, 'time', 's', 'exposure');
+  }
+  if (seconds < 1e-6 || seconds > 1) {
+    throw new InputError('exposure', 'Exposure must lie between 1/1,000,000 s and 1 s: type 500 for 1/500 s.');
+  }
+  return seconds;
+}
+
+/** Rolling-shutter readout, ms (0 = a global shutter). */
+export function readReadoutMs(text: string): number {
+  return within(parseQuantity(text, 'time', 'ms', 'readout time') * 1000, 0, 1000, 'readout time', 'ms');
+}
+
+/** A flash rate typed in flashes per minute or Hz (or with its own unit word) → flashes per minute. */
+export function readFlashRateFpm(text: string, unit: 'fpm' | 'Hz', what = 'flash rate'): number {
+  const hz = parseQuantity(text, 'rate', unit === 'fpm' ? 'fpm' : 'hz', what);
+  return above(hz * 60, 0, MAX_RATE_HZ * 60, what, 'flashes/min');
+}
+
+/** A lighting flicker frequency, Hz. */
+export function readFlickerHz(text: string): number {
+  return above(parseQuantity(text, 'rate', 'hz', 'flicker frequency'), 0, MAX_RATE_HZ, 'flicker frequency', 'Hz');
+}
+
+/** Percent flicker (modulation depth), 0–100. */
+export function readModulationPercent(text: string): number {
+  return within(parseQuantity(text, 'percent', '%', 'modulation'), 0, 100, 'modulation', '%');
+}
+
+/** Wanted slow forward creep, rpm (a positive number). */
+export function readCreepRpm(text: string): number {
+  const hz = parseQuantity(text, 'speed', 'rpm', 'creep');
+  return above(hz * 60, 0, 10_000, 'creep', 'rpm');
+}

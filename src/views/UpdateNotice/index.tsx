@@ -1,0 +1,45 @@
+import style from './style.module.css';
+
+interface Props {
+  /** A newer version is installed and waits. */
+  updateReady: boolean;
+  /** The app has just been stored for offline use. */
+  offlineReady: boolean;
+  onUpdate: () => void;
+  onDismiss: () => void;
+}
+
+/** Tells the user the app works offline, or that a newer version is ready, in our own words. */
+export function UpdateNotice({ updateReady, offlineReady, onUpdate, onDismiss }: Props) {
+  if (!updateReady && !offlineReady) return null;
+  return (
+    <div class={style.notice} role="status" data-testid="update-notice">
+      {updateReady ? (
+        <>
+          <p class={style.text}>
+            <strong>A newer Trueturn is ready.</strong> Your saved machines stay as they are.
+          </p>
+          <div class={style.actions}>
+            <button type="button" class={style.primary} onClick={onUpdate}>
+              Switch now
+            </button>
+            <button type="button" class={style.secondary} onClick={onDismiss}>
+              Later
+            </button>
+          </div>
+        </>
+      ) : (
+        <>
+          <p class={style.text}>
+            <strong>Stored on this device.</strong> Trueturn now works with no network.
+          </p>
+          <div class={style.actions}>
+            <button type="button" class={style.secondary} onClick={onDismiss}>
+              Fine
+            </button>
+          </div>
+        </>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,49 @@
+import { formatRpmWithDirection, formatNumber } from '../../lib/format';
+import { formatRate } from '../../lib/rates';
+import { check } from '../../state/check';
+import { flashUnit } from '../../state/setup';
+import { TrustMark } from '../TrustMark';
+import style from './style.module.css';
+
+interface Props {
+  class?: string;
+}
+
+const SAMPLER_WORDS = { strobe: 'strobe at', camera: 'camera at', lighting: 'light flickering at' } as const;
+
+/** What the viewer will see, in big words: the verdict, the apparent speed and the true speed. */
+export function VerdictPanel({ class: extra }: Props) {
+  const r = check.value;
+  const v = r.verdict;
+  const sign = v.trueRpm < 0 ? -1 : 1;
+  const seen = formatRpmWithDirection(v.apparentRpm, sign);
+  const trueSpeed = `${formatNumber(Math.abs(v.trueRpm))} rpm`;
+  const features = r.part.symmetry === 1 ? '1 mark' : `${formatNumber(r.part.symmetry)} features`;
+  return (
+    <section class={`${style.verdict} ${extra ?? ''}`} data-trust={v.trust} aria-labelledby="verdict-title">
+      <h2 id="verdict-title" class={style.title}>
+        What you will see
+      </h2>
+      <div class={style.head} role="status" aria-live="polite" aria-atomic="true">
+        <TrustMark trust={v.trust} />
+        <p class={style.headline} data-testid="verdict">
+          {v.headline}
+          <span class={style.quiet}>. Seen at {seen}; true speed {trueSpeed}.</span>
+        </p>
+      </div>
+      <dl class={style.speeds}>
+        <div>
+          <dt>Seen</dt>
+          <dd data-testid="apparent-speed">{seen}</dd>
+        </div>
+        <div>
+          <dt>True speed</dt>
+          <dd data-testid="true-speed">{trueSpeed}</dd>
+        </div>
+      </dl>
+      <p class={style.context}>
+        {features} · {SAMPLER_WORDS[r.samplerKind]} {formatRate(r.rateHz, r.samplerKind, flashUnit.value)}
+      </p>
+    </section>
+  );
+}
