@@ -431,8 +431,11 @@ export async function readSavedMachines(): Promise<Machine[] | null> {
   return good;
 }
 
-/** Saves the whole list of machines. Resolves true when it reached the device. */
-export function writeSavedMachines(machines: readonly Machine[]): Promise<boolean> {
+/**
+ * Saves the whole list of machines. Resolves true when it reached the device, false when it is
+ * kept in memory only. Rejects with DataError, writing nothing, if a machine is invalid.
+ */
+export async function writeSavedMachines(machines: readonly Machine[]): Promise<boolean> {
   return writeSafely([[KEYS.machines, machines.map((m) => validateMachine(m))]]);
 }
 
