@@ -301,3 +301,13 @@ describe('migrations', () => {
     expect(prototypeIsClean()).toBe(true);
   });
 });
+
+describe('docs/file-format.md', () => {
+  it('shows an example file that this app reads', async () => {
+    const doc = (await import('../../docs/file-format.md?raw')).default;
+    const example = /```json\n([\s\S]*?)\n```/.exec(doc)?.[1];
+    expect(example).toBeDefined();
+    const r = parseMachinesFile(example!);
+    expect(r.ok && r.machines.map((m) => m.name)).toEqual(['Cooler fan, pellet line 2']);
+  });
+});
