@@ -1,0 +1,185 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { lockRates } from '../../src/core/lockRates';
+import { apparentMotion } from '../../src/core/apparentMotion';
+import { bad, expectInputError, finiteOrInputError, notNumbers } from './expectInputError';
+
+const wheel = { speedHz: 2, symmetry: 12 }; // Wikipedia, "Stroboscopic effect": 12 spokes at 2 rev/s
+
+describe('lockRates: published cases', () => {
+  it('lists 24 per second as the one single-image rate of a 12-spoke wheel at 2 rev/s between 20 and 30', () => {
+    // Wikipedia, "Stroboscopic effect": the wheel filmed at 24 frames/s seems still. Doc block example.
+    expect(lockRates(wheel, { minHz: 20, maxHz: 30 }, { maxImages: 1 })).toEqual([
+      { rateHz: 24, images: 1, p: 1, q: 1, lowHz: 24, highHz: 24 },
+    ]);
+  });
+
+  it('adds the multi-image locks p/q between 20 and 30 when up to 8 images are counted', () => {
+    // physics.md §3: s = n·|f|·q/p = 24·q/p, gcd(p, q) = 1, q ≤ 8; worked by hand.
+    const found = lockRates(wheel, { minHz: 20, maxHz: 30 }).map((l) => [l.p, l.q]);
+    expect(found).toEqual([
+      [6, 5], // 24·5/6 = 20 (the lower range end, included)
+      [7, 6], // 20.571…
+      [8, 7], // 21
+      [9, 8], // 21.333…
+      [1, 1], // 24
+      [7, 8], // 27.428…
+      [6, 7], // 28
+      [5, 6], // 28.8
+      [4, 5], // 30 (the upper range end, included)
+    ]);
+  });
+
+  it('shows exactly the locks it lists: at each rate apparentMotion sees q images standing still', () => {
+    for (const lock of lockRates({ speedHz: 10, symmetry: 3 }, { minHz: 5, maxHz: 200 })) {
+      const m = apparentMotion({ speedHz: 10, symmetry: 3 }, lock.rateHz);
+      expect(m.look, `${lock.rateHz} Hz`).toBe('still');
+      expect(m.images, `${lock.rateHz} Hz`).toBe(lock.images);
+    }
+  });
+});
+
+describe('lockRates: structure of physics.md §3', () => {
+  it('gives the sub-multiples n·|f|/p as single images and the multiples q·n·|f| as q images', () => {
+    const locks = lockRates({ speedHz: 10, symmetry: 1 }, { minHz: 1, maxHz: 100 });
+    const single = locks.filter((l) => l.q === 1).map((l) => l.rateHz);
+    expect(single).toEqual([1, 10 / 9, 1.25, 10 / 7, 10 / 6, 2, 2.5, 10 / 3, 5, 10]);
+    const multiples = locks.filter((l) => l.p === 1).map((l) => [l.rateHz, l.images]);
+    expect(multiples).toEqual([
+      [10, 1],
+      [20, 2],
+      [30, 3],
+      [40, 4],
+      [50, 5],
+      [60, 6],
+      [70, 7],
+      [80, 8],
+    ]);
+  });
+
+  it('places the highest single-image rate at n·|f|', () => {
+    // physics.md §3: the highest rate that gives one single image is s = n·|f|.
+    const locks = lockRates({ speedHz: 29.5, symmetry: 6 }, { minHz: 1, maxHz: 2000 });
+    const highestSingle = Math.max(...locks.filter((l) => l.images === 1).map((l) => l.rateHz));
+    expect(highestSingle).toBeCloseTo(6 * 29.5, 9);
+  });
+
+  it('ignores the direction of turning', () => {
+    const range = { minHz: 1, maxHz: 500 };
+    expect(lockRates({ speedHz: -29.5, symmetry: 6 }, range)).toEqual(lockRates({ speedHz: 29.5, symmetry: 6 }, range));
+  });
+
+  it('has no lock-in rates for a part that is not turning', () => {
+    expect(lockRates({ speedHz: 0, symmetry: 4 }, { minHz: 1, maxHz: 100 })).toEqual([]);
+  });
+
+  it('matches a brute-force list of every reduced p/q, ascending, inside the range ends', () => {
+    const arbitrary = fc.record({
+      speedHz: fc.double({ min: -200, max: 200, noNaN: true }).filter((f) => Math.abs(f) > 0.01),
+      symmetry: fc.integer({ min: 1, max: 12 }),
+      lowestOverPattern: fc.double({ min: 0.02, max: 20, noNaN: true }), // keeps the list short
+      span: fc.double({ min: 1.01, max: 20, noNaN: true }),
+      maxImages: fc.integer({ min: 1, max: 8 }),
+    });
+    fc.assert(
+      fc.property(arbitrary, ({ speedHz, symmetry, lowestOverPattern, span, maxImages }) => {
+        const F = symmetry * Math.abs(speedHz);
+        const minHz = F * lowestOverPattern;
+        const maxHz = minHz * span;
+        const got = lockRates({ speedHz, symmetry }, { minHz, maxHz }, { maxImages });
+        const want: Array<[number, number]> = [];
+        for (let q = 1; q <= maxImages; q++) {
+          for (let p = 1; (F * q) / p >= minHz * (1 - 1e-9); p++) {
+            const s = (F * q) / p;
+            if (s <= maxHz * (1 + 1e-9) && reduced(p, q) === 1) want.push([p, q]);
+          }
+        }
+        want.sort((a, b) => (F * a[1]) / a[0] - (F * b[1]) / b[0] || a[1] - b[1]);
+        expect(got.map((l) => [l.p, l.q])).toEqual(want);
+        for (let i = 0; i < got.length; i++) {
+          const l = got[i];
+          expect(l.rateHz).toBeCloseTo((F * l.q) / l.p, 9);
+          expect(l.images).toBe(l.q);
+          if (i > 0) expect(l.rateHz).toBeGreaterThanOrEqual(got[i - 1].rateHz);
+        }
+      }),
+      { numRuns: 100 },
+    );
+  });
+});
+
+describe('lockRates: range ends and tolerance bands', () => {
+  it('includes a lock that falls exactly on either end of the range', () => {
+    expect(lockRates(wheel, { minHz: 24, maxHz: 25 }, { maxImages: 1 }).map((l) => l.rateHz)).toEqual([24]);
+    expect(lockRates(wheel, { minHz: 23, maxHz: 24 }, { maxImages: 1 }).map((l) => l.rateHz)).toEqual([24]);
+  });
+
+  it('leaves out a lock just outside the range', () => {
+    expect(lockRates(wheel, { minHz: 24.001, maxHz: 25 }, { maxImages: 1 })).toEqual([]);
+    expect(lockRates(wheel, { minHz: 23, maxHz: 23.999 }, { maxImages: 1 })).toEqual([]);
+  });
+
+  it('spreads each lock into the band [n|f|(1−u)·q/p, n|f|(1+u)·q/p] for a tolerance u', () => {
+    // physics.md §3: a speed tolerance ±u turns each lock-in rate into a band.
+    const locks = lockRates({ speedHz: 24.5, symmetry: 1, tolerance: 0.03 }, { minHz: 5, maxHz: 100 });
+    expect(locks.length).toBeGreaterThan(0);
+    for (const l of locks) {
+      expect(l.lowHz).toBeCloseTo(24.5 * 0.97 * (l.q / l.p), 9);
+      expect(l.highHz).toBeCloseTo(24.5 * 1.03 * (l.q / l.p), 9);
+      expect(l.lowHz).toBeLessThan(l.rateHz);
+      expect(l.highHz).toBeGreaterThan(l.rateHz);
+    }
+  });
+
+  it('never returns NaN or Infinity for plausible machines and ranges', () => {
+    // Kept to sizes where the list stays short; extreme ratios make the list itself huge.
+    fc.assert(
+      fc.property(
+        fc.double({ min: -1e4, max: 1e4, noNaN: true }),
+        fc.integer({ min: 1, max: 100 }),
+        fc.double({ min: 0, max: 0.5, noNaN: true }),
+        fc.double({ min: 0.01, max: 100, noNaN: true }),
+        (speedHz, symmetry, tolerance, lowestOverPattern) => {
+          const minHz = Math.max(1e-3, symmetry * Math.abs(speedHz) * lowestOverPattern);
+          return finiteOrInputError(() => lockRates({ speedHz, symmetry, tolerance }, { minHz, maxHz: minHz * 1.5 }));
+        },
+      ),
+    );
+  });
+});
+
+describe('lockRates: bad input', () => {
+  const range = { minHz: 20, maxHz: 30 };
+
+  it.each(notNumbers.map((v) => [v]))('rejects a speed of %s', (speedHz) => {
+    expectInputError(() => lockRates(bad({ speedHz, symmetry: 12 }), range), 'speed');
+  });
+
+  it.each([[0], [1.5], [-2]])('rejects a feature count of %s', (symmetry) => {
+    expectInputError(() => lockRates(bad({ speedHz: 2, symmetry }), range), 'features (blades, spokes)');
+  });
+
+  it('rejects an empty, inverted or non-positive range', () => {
+    expectInputError(() => lockRates(wheel, { minHz: 24, maxHz: 24 }), 'rate range', 'empty');
+    expectInputError(() => lockRates(wheel, { minHz: 30, maxHz: 20 }), 'rate range');
+    expectInputError(() => lockRates(wheel, { minHz: 0, maxHz: 20 }), 'lowest rate');
+    expectInputError(() => lockRates(wheel, { minHz: -5, maxHz: 20 }), 'lowest rate');
+    expectInputError(() => lockRates(wheel, bad({ minHz: 20, maxHz: 'fast' })), 'highest rate');
+    expectInputError(() => lockRates(wheel, bad({ minHz: NaN, maxHz: 30 })), 'lowest rate');
+    expectInputError(() => lockRates(wheel, bad({ minHz: 1, maxHz: Infinity })), 'highest rate');
+    expectInputError(() => lockRates(wheel, bad(null)), 'rate range');
+  });
+
+  it.each([[0], [65], [1.5], [NaN]])('rejects a largest image count of %s', (maxImages) => {
+    expectInputError(() => lockRates(wheel, range, { maxImages }), 'largest image count');
+  });
+
+  it('rejects a tolerance outside 0 to 0.5', () => {
+    expectInputError(() => lockRates({ ...wheel, tolerance: 0.6 }, range), 'speed tolerance');
+  });
+});
+
+/** Greatest common divisor, written out here so the test does not lean on the core's gcd. */
+function reduced(a: number, b: number): number {
+  return b === 0 ? a : reduced(b, a % b);
+}
