@@ -8,6 +8,14 @@ export { lockRates, type LockRate } from './lockRates';
 export { ratesForApparent } from './ratesForApparent';
 export { rateBands, type RateBand, type RateBandCause, type RateBandOptions } from './rateBands';
 export {
+  rateMapSeries,
+  defaultRateMapPoints,
+  MAX_RATE_MAP_POINTS,
+  type RateMapSeries,
+  type RateMapLock,
+  type RateMapOptions,
+} from './rateMapSeries';
+export {
   findSpeed,
   type StrobeReading,
   type SpeedCandidate,
@@ -36,3 +44,62 @@ export {
 export { foldedHz, lowPassGainDb, rcCutoffHz, converterRangeDb, orderForAttenuation } from './logger';
 export * from './units';
 export { gcd } from './gcd';
+// Field tools (issue 5): speed finder steps, whole machine, lighting, camera, logger, reports.
+export { plainNumber } from './plainNumber';
+export { safetyCautions, SEIZURE_RISK_LOW_HZ, SEIZURE_RISK_HIGH_HZ, type CautionContext } from './safetyCautions';
+export {
+  speedFinderSteps,
+  motorExpectedRange,
+  type SpeedFinderStage,
+  type SpeedFinderStep,
+  type SpeedFinderInput,
+  type SpeedFinderOptions,
+  type StepCandidate,
+  type StepPrediction,
+} from './speedFinderSteps';
+export {
+  driveChain,
+  type ChainRoot,
+  type ChainLink,
+  type ChainPartSpec,
+  type ChainSpec,
+  type ChainPart,
+} from './driveChain';
+export {
+  stillRates,
+  freezeRates,
+  noStillRates,
+  type StillSpan,
+  type FreezeBand,
+  type StillRateOptions,
+} from './freezeRates';
+export {
+  lightingCheck,
+  type Lamp,
+  type LitPart,
+  type LightingVerdict,
+  type PartUnderLight,
+  type LightingCheck,
+} from './lightingCheck';
+export {
+  cameraPlan,
+  standardFrameRates,
+  type StandardFrameRate,
+  type CameraAbilities,
+  type CameraGoal,
+  type CameraSetting,
+  type CameraPlan,
+  type CameraPlanOptions,
+} from './cameraPlan';
+export {
+  loggerPlan,
+  niceSampleRateHz,
+  ALIAS_AFTER_CONVERTER_NOTE,
+  type MachineTones,
+  type AntiAliasFilter,
+  type LoggerComponent,
+  type LoggerProposal,
+  type LoggerPlan,
+  type LoggerPlanOptions,
+} from './loggerPlan';
+export { csv, csvField, csvTable, type CsvValue, type CsvColumn } from './csv';
