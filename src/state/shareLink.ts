@@ -99,10 +99,11 @@ function toBase64Url(bytes: Uint8Array): string {
   return btoa(binary).replace(/\+/g, '-').replace(/\//g, '_').replace(/=+$/, '');
 }
 
-/** Bytes from unpadded base64url, or null for text that cannot be base64url (e.g. cut short). */
+/**
+ * Bytes from unpadded base64url, or null for text that cannot be base64url (atob refuses, among
+ * others, a length of 4k + 1, which no byte string gives: the link was cut).
+ */
 function fromBase64Url(text: string): Uint8Array | null {
-  // A length of 4k+1 cannot come from any byte string: the link was cut.
-  if (text.length % 4 === 1) return null;
   const padded =
     text.replace(/-/g, '+').replace(/_/g, '/') + '='.repeat((4 - (text.length % 4)) % 4);
   let binary: string;
