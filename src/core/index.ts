@@ -12,6 +12,13 @@ export {
   defaultRateMapPoints,
   MAX_RATE_MAP_POINTS,
   type RateMapSeries,
+  type RateMapOptions,
+} from './rateMapSeries';
+export {
+  rateMapSeries,
+  defaultRateMapPoints,
+  MAX_RATE_MAP_POINTS,
+  type RateMapSeries,
   type RateMapLock,
   type RateMapOptions,
 } from './rateMapSeries';
