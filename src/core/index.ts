@@ -15,14 +15,6 @@ export {
   type RateMapOptions,
 } from './rateMapSeries';
 export {
-  rateMapSeries,
-  defaultRateMapPoints,
-  MAX_RATE_MAP_POINTS,
-  type RateMapSeries,
-  type RateMapLock,
-  type RateMapOptions,
-} from './rateMapSeries';
-export {
   findSpeed,
   type StrobeReading,
   type SpeedCandidate,
