@@ -3,7 +3,13 @@ import { checkPart, type Look, type Part } from './types';
 import { checkLookOptions, type LookOptions } from './lookOptions';
 import { apparentMotion } from './apparentMotion';
 import { rateBands } from './rateBands';
-import { blurDegrees, blurPitches, exposureFromShutterAngle, rollingSkewDegrees, shutterAngleFromExposure } from './exposure';
+import {
+  blurDegrees,
+  blurPitches,
+  exposureFromShutterAngle,
+  rollingSkewDegrees,
+  shutterAngleFromExposure,
+} from './exposure';
 import { hzToRpm } from './units';
 import { plainNumber } from './plainNumber';
 import { safetyCautions } from './safetyCautions';
@@ -22,6 +28,8 @@ const BT709 = 'ITU-R BT.709 picture rates; SMPTE ST 12-1 time code rates for the
 /**
  * Frame rates to offer as presets, ascending. The /1.001 rates are exact fractions, not the
  * rounded labels. 120 and 240 are the high-speed modes of phones and action cameras (common practice).
+ * @example standardFrameRates[3] // { label: '29.97', hz: 29.97002997002997 (30000/1001), source: … }
+ * Sources: ITU-R BT.709 (60, 50, 30, 25, 24 and each divided by 1.001); SMPTE ST 12-1.
  */
 export const standardFrameRates: readonly StandardFrameRate[] = Object.freeze([
   { label: '23.976', hz: 24000 / 1001, source: BT709 },
@@ -55,7 +63,11 @@ export interface CameraAbilities {
  * 'natural': a smoothly blurred disc, as the eye sees a fast part, with no misleading look;
  * 'honest': whatever it shows, nothing misleading (no still, backward or unclear look).
  */
-export type CameraGoal = { kind: 'freeze' } | { kind: 'creep'; creepHz: number } | { kind: 'natural' } | { kind: 'honest' };
+export type CameraGoal =
+  | { kind: 'freeze' }
+  | { kind: 'creep'; creepHz: number }
+  | { kind: 'natural' }
+  | { kind: 'honest' };
 
 export interface CameraSetting {
   frameRate: number;
@@ -138,7 +150,12 @@ const CREEP_BLUR_WEIGHT = 4;
  * Sources: shutter angle t = (θ/360)/s (cinema practice: 180° at 24 frames/s = 1/48 s); the
  * temporal box filter of an exposure (sinc response), as in any imaging text.
  */
-export function cameraPlan(camera: CameraAbilities, part: Part, goal: CameraGoal, opts?: CameraPlanOptions): CameraPlan {
+export function cameraPlan(
+  camera: CameraAbilities,
+  part: Part,
+  goal: CameraGoal,
+  opts?: CameraPlanOptions,
+): CameraPlan {
   const p = checkPart(part);
   const g = checkGoal(goal);
   const sharpBlurDeg = requirePositive(opts?.sharpBlurDeg ?? 2, 'sharp blur limit');
@@ -150,13 +167,19 @@ export function cameraPlan(camera: CameraAbilities, part: Part, goal: CameraGoal
   const all = combos.map(({ frameRate, exposureS, shutterAngle }) =>
     evaluate(p, g, frameRate, exposureS, shutterAngle, readoutS, look, sharpBlurDeg, maxResidual),
   );
-  const byScore = (a: CameraSetting, b: CameraSetting) => b.score - a.score || b.frameRate - a.frameRate || a.exposureS - b.exposureS;
+  const byScore = (a: CameraSetting, b: CameraSetting) =>
+    b.score - a.score || b.frameRate - a.frameRate || a.exposureS - b.exposureS;
   const settings = all.filter((s) => s.reaches).sort(byScore);
-  const nearMisses = all.filter((s) => !s.reaches).sort(byScore).slice(0, NEAR_MISSES);
+  const nearMisses = all
+    .filter((s) => !s.reaches)
+    .sort(byScore)
+    .slice(0, NEAR_MISSES);
   return {
     settings,
     nearMisses,
-    cautions: safetyCautions({ apparentStillness: g.kind === 'freeze' || all.some((s) => s.misleading) }),
+    cautions: safetyCautions({
+      apparentStillness: g.kind === 'freeze' || all.some((s) => s.misleading),
+    }),
   };
 }
 
@@ -164,21 +187,28 @@ function checkGoal(goal: CameraGoal): CameraGoal {
   if (typeof goal !== 'object' || goal === null) {
     throw new InputError('goal', "The goal must be 'freeze', 'creep', 'natural' or 'honest'.");
   }
-  if (goal.kind === 'creep') return { kind: 'creep', creepHz: requirePositive(goal.creepHz, 'wanted creep speed') };
-  if (goal.kind === 'freeze' || goal.kind === 'natural' || goal.kind === 'honest') return { kind: goal.kind };
+  if (goal.kind === 'creep')
+    return { kind: 'creep', creepHz: requirePositive(goal.creepHz, 'wanted creep speed') };
+  if (goal.kind === 'freeze' || goal.kind === 'natural' || goal.kind === 'honest')
+    return { kind: goal.kind };
   throw new InputError('goal', "The goal must be 'freeze', 'creep', 'natural' or 'honest'.");
 }
 
 function settingsOf(camera: CameraAbilities) {
   if (typeof camera !== 'object' || camera === null) {
-    throw new InputError('camera', 'Give the camera\'s frame rates, shutter angles or exposures, and readout time.');
+    throw new InputError(
+      'camera',
+      "Give the camera's frame rates, shutter angles or exposures, and readout time.",
+    );
   }
   if (!Array.isArray(camera.frameRatesHz) || camera.frameRatesHz.length === 0) {
     throw new InputError('frame rates', 'Give at least one frame rate.');
   }
   const rates = camera.frameRatesHz.map((r, i) => requirePositive(r, `frame rate ${i + 1}`));
   const angles = listOf(camera.shutterAnglesDeg, 'shutter angles');
-  const exposures = listOf(camera.exposuresS, 'exposures').map((t, i) => requirePositive(t, `exposure ${i + 1}`));
+  const exposures = listOf(camera.exposuresS, 'exposures').map((t, i) =>
+    requirePositive(t, `exposure ${i + 1}`),
+  );
   if (angles.length === 0 && exposures.length === 0) {
     throw new InputError('shutter', 'Give at least one shutter angle or exposure time.');
   }
@@ -194,7 +224,10 @@ function settingsOf(camera: CameraAbilities) {
   for (const s of rates) {
     angles.forEach((a, i) => {
       if (typeof a !== 'number' || !Number.isFinite(a) || a <= 0 || a > 360) {
-        throw new InputError('shutter angle', `Shutter angle ${i + 1} must lie above 0° and at most 360° (got ${String(a)}).`);
+        throw new InputError(
+          'shutter angle',
+          `Shutter angle ${i + 1} must lie above 0° and at most 360° (got ${String(a)}).`,
+        );
       }
       add(s, exposureFromShutterAngle(a, s), a);
     });
@@ -202,7 +235,10 @@ function settingsOf(camera: CameraAbilities) {
     for (const t of exposures) if (t * s <= 1 + 1e-9) add(s, t, shutterAngleFromExposure(t, s));
   }
   if (out.length === 0) {
-    throw new InputError('exposures', 'None of the exposure times fits within one frame at the frame rates given.');
+    throw new InputError(
+      'exposures',
+      'None of the exposure times fits within one frame at the frame rates given.',
+    );
   }
   return out;
 }
@@ -227,17 +263,24 @@ function evaluate(
   const opts = { ...look, sampler: 'frames' as const };
   const m = apparentMotion(part, frameRate, opts);
   const apparentRpm = m.look === 'still' ? 0 : hzToRpm(m.apparentHz);
-  const ends = [part.speedHz * (1 - part.tolerance), part.speedHz * (1 + part.tolerance)].map((speedHz) => {
-    const e = apparentMotion({ ...part, speedHz }, frameRate, opts);
-    return e.look === 'still' ? 0 : hzToRpm(e.apparentHz);
-  });
+  const ends = [part.speedHz * (1 - part.tolerance), part.speedHz * (1 + part.tolerance)].map(
+    (speedHz) => {
+      const e = apparentMotion({ ...part, speedHz }, frameRate, opts);
+      return e.look === 'still' ? 0 : hzToRpm(e.apparentHz);
+    },
+  );
   const apparentRpmRange: [number, number] = [Math.min(...ends), Math.max(...ends)];
-  const bands = rateBands([part], { minHz: frameRate * (1 - 1e-9), maxHz: frameRate * (1 + 1e-9) }, opts);
+  const bands = rateBands(
+    [part],
+    { minHz: frameRate * (1 - 1e-9), maxHz: frameRate * (1 + 1e-9) },
+    opts,
+  );
   const misleading = bands.some((b) => !b.safe);
   const blurDeg = blurDegrees(part.speedHz, exposureS);
   const blurP = blurPitches(part.speedHz, part.symmetry, exposureS);
   const skewDeg = rollingSkewDegrees(part.speedHz, readoutS);
-  const residualContrast = blurP === 0 ? 1 : Math.abs(Math.sin(Math.PI * blurP) / (Math.PI * blurP));
+  const residualContrast =
+    blurP === 0 ? 1 : Math.abs(Math.sin(Math.PI * blurP) / (Math.PI * blurP));
   const pitchDeg = 360 / part.symmetry;
   const smoothDisc = blurP >= 1 && residualContrast <= maxResidual;
 
@@ -255,7 +298,8 @@ function evaluate(
       const wanted = Math.sign(part.speedHz || 1) * hzToRpm(goal.creepHz);
       const ratio = apparentRpm === 0 ? 0 : apparentRpm / wanted;
       const forward = (m.look === 'forward' || m.look === 'true') && ratio > 0;
-      reaches = forward && !misleading && ratio >= 1 / CREEP_FACTOR && ratio <= CREEP_FACTOR && blurP < 1;
+      reaches =
+        forward && !misleading && ratio >= 1 / CREEP_FACTOR && ratio <= CREEP_FACTOR && blurP < 1;
       // A creep is seen while the features stay apart: clarity falls with blur in pitches.
       const clarity = 1 / (1 + CREEP_BLUR_WEIGHT * blurP);
       factor = (ratio > 0 ? 1 / (1 + Math.abs(Math.log(ratio))) : 0.01) * clarity * straight;
@@ -272,7 +316,20 @@ function evaluate(
     }
   }
   const score = Math.max(0, Math.min(100, 100 * factor));
-  const why = explain(part, m.look, m.images, apparentRpm, misleading, blurDeg, blurP, pitchDeg, skewDeg, residualContrast, sharpBlurDeg, maxResidual);
+  const why = explain(
+    part,
+    m.look,
+    m.images,
+    apparentRpm,
+    misleading,
+    blurDeg,
+    blurP,
+    pitchDeg,
+    skewDeg,
+    residualContrast,
+    sharpBlurDeg,
+    maxResidual,
+  );
   return {
     frameRate,
     exposureS,
@@ -310,16 +367,24 @@ function explain(
   if (blurP >= 1 && residual <= maxResidual) {
     words.push(`Blur of ${plainNumber(blurP)} pitches smears the features into an even disc.`);
   } else {
-    if (look === 'still') words.push(images > 1 ? `${images} positions alternate.` : 'Looks still.');
+    if (look === 'still')
+      words.push(images > 1 ? `${images} positions alternate.` : 'Looks still.');
     else if (look === 'true') words.push('Shows the true speed and direction.');
     else if (look === 'unclear') words.push('Direction cannot be told.');
     else words.push(`Seems to turn ${look} at ${speed}.`);
     if (blurDeg <= sharpBlurDeg) words.push(`Sharp (blur ${plainNumber(blurDeg)}°).`);
-    else if (blurP < 1) words.push(`Blur ${plainNumber(blurDeg)}° (${plainNumber(blurP)} pitch) softens the features.`);
-    else words.push(`Blur ${plainNumber(blurP)} pitches, but the pattern still shows (contrast ${plainNumber(residual)}).`);
+    else if (blurP < 1)
+      words.push(
+        `Blur ${plainNumber(blurDeg)}° (${plainNumber(blurP)} pitch) softens the features.`,
+      );
+    else
+      words.push(
+        `Blur ${plainNumber(blurP)} pitches, but the pattern still shows (contrast ${plainNumber(residual)}).`,
+      );
   }
   const even = blurP >= 1 && residual <= maxResidual;
-  if (misleading && look !== 'still' && !even) words.push('Within the speed tolerance it can look still or backward.');
+  if (misleading && look !== 'still' && !even)
+    words.push('Within the speed tolerance it can look still or backward.');
   if (skewDeg > 0 && !even) {
     words.push(
       skewDeg >= pitchDeg
@@ -327,6 +392,7 @@ function explain(
         : `Rolling shutter bends the features by ${plainNumber(skewDeg)}°.`,
     );
   }
-  if (part.tolerance > 0 && look === 'still') words.push('Freezes only at the nominal speed; within the tolerance it drifts.');
+  if (part.tolerance > 0 && look === 'still')
+    words.push('Freezes only at the nominal speed; within the tolerance it drifts.');
   return words.join(' ');
 }

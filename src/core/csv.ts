@@ -31,12 +31,19 @@ export function csvField(value: CsvValue): string {
   if (value === null || value === undefined) return '';
   if (typeof value === 'number') {
     if (!Number.isFinite(value)) {
-      throw new InputError('table', `A table cell holds ${String(value)}, which cannot be written; this is a bug to report.`);
+      throw new InputError(
+        'table',
+        `A table cell holds ${String(value)}, which cannot be written; this is a bug to report.`,
+      );
     }
     return Object.is(value, -0) ? '0' : String(value);
   }
   if (typeof value === 'boolean') return value ? 'true' : 'false';
-  if (typeof value !== 'string') throw new InputError('table', `A table cell holds a ${typeof value}; only text and numbers can be written.`);
+  if (typeof value !== 'string')
+    throw new InputError(
+      'table',
+      `A table cell holds a ${typeof value}; only text and numbers can be written.`,
+    );
   const guarded = FORMULA_START.test(value) ? `'${value}` : value;
   return NEEDS_QUOTES.test(guarded) ? `"${guarded.replace(/"/g, '""')}"` : guarded;
 }
@@ -50,9 +57,11 @@ export function csvField(value: CsvValue): string {
  * Source: RFC 4180 "Common Format and MIME Type for CSV Files" §2.
  */
 export function csv(rows: CsvValue[][]): string {
-  if (!Array.isArray(rows)) throw new InputError('table', 'The table to write must be a list of rows.');
+  if (!Array.isArray(rows))
+    throw new InputError('table', 'The table to write must be a list of rows.');
   const width = rows.reduce((w, row, i) => {
-    if (!Array.isArray(row)) throw new InputError('table', `Row ${i + 1} of the table is not a list of cells.`);
+    if (!Array.isArray(row))
+      throw new InputError('table', `Row ${i + 1} of the table is not a list of cells.`);
     return Math.max(w, row.length);
   }, 0);
   return rows
@@ -70,11 +79,16 @@ export function csv(rows: CsvValue[][]): string {
  * @example csvTable([{ label: 'rpm', value: (r: { rpm: number }) => r.rpm }], [{ rpm: 1770 }]) // 'rpm\r\n1770\r\n'
  */
 export function csvTable<T>(columns: CsvColumn<T>[], records: T[]): string {
-  if (!Array.isArray(columns) || columns.length === 0) throw new InputError('columns', 'Give at least one column to write.');
-  if (!Array.isArray(records)) throw new InputError('table', 'The records to write must be a list.');
+  if (!Array.isArray(columns) || columns.length === 0)
+    throw new InputError('columns', 'Give at least one column to write.');
+  if (!Array.isArray(records))
+    throw new InputError('table', 'The records to write must be a list.');
   columns.forEach((c, i) => {
     if (typeof c?.label !== 'string' || typeof c.value !== 'function') {
-      throw new InputError('columns', `Column ${i + 1} needs a heading and a way to read its value.`);
+      throw new InputError(
+        'columns',
+        `Column ${i + 1} needs a heading and a way to read its value.`,
+      );
     }
   });
   return csv([columns.map((c) => c.label), ...records.map((r) => columns.map((c) => c.value(r)))]);

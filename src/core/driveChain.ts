@@ -1,4 +1,10 @@
-import { InputError, requireBetween, requireFinite, requirePositive, requireWhole } from './InputError';
+import {
+  InputError,
+  requireBetween,
+  requireFinite,
+  requirePositive,
+  requireWhole,
+} from './InputError';
 import { MAX_SYMMETRY } from './types';
 import { beltSpeedHz, gearSpeedHz, motorSpeedHz, tyreDiameterM, wheelSpeedHz } from './drives';
 
@@ -12,7 +18,13 @@ export type ChainRoot =
    * A wheel rolling at a ground speed (m/s, signed), with its diameter given as an ISO metric
    * tyre size ('205/55R16') or in metres; tolerance covers speedometer error and tyre wear.
    */
-  | { kind: 'wheel'; groundSpeedMps: number; tyreSize?: string; diameterM?: number; tolerance?: number };
+  | {
+      kind: 'wheel';
+      groundSpeedMps: number;
+      tyreSize?: string;
+      diameterM?: number;
+      tolerance?: number;
+    };
 
 /** How a part is driven by the part before it (or by parts[from]). */
 export type ChainLink =
@@ -20,7 +32,13 @@ export type ChainLink =
    * Belt: f2 = f1·D1/D2 (an open belt keeps the direction, a crossed one reverses it). Slip
    * (percent, 0…20) makes the driven pulley run up to that much slower, never faster.
    */
-  | { kind: 'belt'; driverDiameterM: number; drivenDiameterM: number; slipPercent?: number; crossed?: boolean }
+  | {
+      kind: 'belt';
+      driverDiameterM: number;
+      drivenDiameterM: number;
+      slipPercent?: number;
+      crossed?: boolean;
+    }
   /** Gear pair: f2 = f1·z1/z2; an external mesh reverses the direction, an internal (ring) gear keeps it. */
   | { kind: 'gear'; driverTeeth: number; drivenTeeth: number; internal?: boolean }
   /** On the same shaft: same speed. */
@@ -84,7 +102,7 @@ const MAX_TOLERANCE = 0.5;
  */
 export function driveChain(spec: ChainSpec): ChainPart[] {
   if (typeof spec !== 'object' || spec === null) {
-    throw new InputError('drive chain', 'Give the chain\'s first speed and its parts.');
+    throw new InputError('drive chain', "Give the chain's first speed and its parts.");
   }
   if (!Array.isArray(spec.parts) || spec.parts.length === 0) {
     throw new InputError('parts', 'Give at least one part in the chain.');
@@ -93,15 +111,21 @@ export function driveChain(spec: ChainSpec): ChainPart[] {
   const out: ChainPart[] = [];
   spec.parts.forEach((p, i) => {
     const label = `part ${i + 1}`;
-    if (typeof p !== 'object' || p === null) throw new InputError(label, `${label} must give a name and a number of features.`);
+    if (typeof p !== 'object' || p === null)
+      throw new InputError(label, `${label} must give a name and a number of features.`);
     const name = typeof p.name === 'string' && p.name.trim() !== '' ? p.name.trim() : label;
     const symmetry = requireWhole(p.symmetry, `features of ${name}`, 1, MAX_SYMMETRY);
     let band: Band;
     if (i === 0) {
       band = root;
     } else {
-      const from = p.from === undefined ? i - 1 : requireWhole(p.from, `part driving ${name}`, 0, i - 1);
-      if (p.link === undefined) throw new InputError(`link of ${name}`, `Say how ${name} is driven: belt, gear or same shaft.`);
+      const from =
+        p.from === undefined ? i - 1 : requireWhole(p.from, `part driving ${name}`, 0, i - 1);
+      if (p.link === undefined)
+        throw new InputError(
+          `link of ${name}`,
+          `Say how ${name} is driven: belt, gear or same shaft.`,
+        );
       band = applyLink(bandOf(out[from]), p.link, name);
     }
     out.push(toPart(name, symmetry, band));
@@ -119,19 +143,30 @@ interface Band {
 
 function rootBand(root: ChainRoot): Band {
   if (typeof root !== 'object' || root === null) {
-    throw new InputError('first speed', 'Say where the first speed comes from: a known speed, a motor or a wheel.');
+    throw new InputError(
+      'first speed',
+      'Say where the first speed comes from: a known speed, a motor or a wheel.',
+    );
   }
   switch (root.kind) {
     case 'fixed': {
       const f = requireFinite(root.speedHz, 'speed');
       const u = requireBetween(root.tolerance ?? 0, 'speed tolerance', 0, MAX_TOLERANCE);
-      return { nominalHz: f, lowHz: Math.abs(f) * (1 - u), highHz: Math.abs(f) * (1 + u), ratio: 1 };
+      return {
+        nominalHz: f,
+        lowHz: Math.abs(f) * (1 - u),
+        highHz: Math.abs(f) * (1 + u),
+        ratio: 1,
+      };
     }
     case 'motor': {
       const minSlip = requireBetween(root.minSlip, 'smallest slip', 0, 0.5);
       const maxSlip = requireBetween(root.maxSlip, 'largest slip', 0, 0.5);
       if (minSlip > maxSlip) {
-        throw new InputError('slip', `The smallest slip (${minSlip}) must not be above the largest (${maxSlip}).`);
+        throw new InputError(
+          'slip',
+          `The smallest slip (${minSlip}) must not be above the largest (${maxSlip}).`,
+        );
       }
       const lowHz = motorSpeedHz(root.mainsHz, root.poles, maxSlip);
       const highHz = motorSpeedHz(root.mainsHz, root.poles, minSlip);
@@ -141,13 +176,26 @@ function rootBand(root: ChainRoot): Band {
       const u = requireBetween(root.tolerance ?? 0, 'speed tolerance', 0, MAX_TOLERANCE);
       let diameterM: number;
       if (root.tyreSize !== undefined) diameterM = tyreDiameterM(root.tyreSize);
-      else if (root.diameterM !== undefined) diameterM = requirePositive(root.diameterM, 'wheel diameter');
-      else throw new InputError('wheel diameter', 'Give the tyre size (e.g. 205/55R16) or the wheel diameter.');
+      else if (root.diameterM !== undefined)
+        diameterM = requirePositive(root.diameterM, 'wheel diameter');
+      else
+        throw new InputError(
+          'wheel diameter',
+          'Give the tyre size (e.g. 205/55R16) or the wheel diameter.',
+        );
       const f = wheelSpeedHz(root.groundSpeedMps, diameterM);
-      return { nominalHz: f, lowHz: Math.abs(f) * (1 - u), highHz: Math.abs(f) * (1 + u), ratio: 1 };
+      return {
+        nominalHz: f,
+        lowHz: Math.abs(f) * (1 - u),
+        highHz: Math.abs(f) * (1 + u),
+        ratio: 1,
+      };
     }
     default:
-      throw new InputError('first speed', 'The first speed must be a known speed, a motor or a wheel.');
+      throw new InputError(
+        'first speed',
+        'The first speed must be a known speed, a motor or a wheel.',
+      );
   }
 }
 
@@ -160,21 +208,31 @@ function applyLink(b: Band, link: ChainLink, name: string): Band {
       return b;
     case 'belt': {
       // The drive formula validates the diameters; its ratio for a driver at 1 rev/s.
-      const k = beltSpeedHz(1, link.driverDiameterM, link.drivenDiameterM) * (link.crossed ? -1 : 1);
-      const slip = requireBetween(link.slipPercent ?? 0, `belt slip of ${name} (percent)`, 0, 20) / 100;
+      const k =
+        beltSpeedHz(1, link.driverDiameterM, link.drivenDiameterM) * (link.crossed ? -1 : 1);
+      const slip =
+        requireBetween(link.slipPercent ?? 0, `belt slip of ${name} (percent)`, 0, 20) / 100;
       const lowHz = b.lowHz * Math.abs(k) * (1 - slip);
       const highHz = b.highHz * Math.abs(k);
       // With slip the nominal speed sits mid-band, not at the slip-free ratio.
       const sign = Math.sign(b.nominalHz * k);
-      return { nominalHz: sign * (lowHz + highHz) / 2, lowHz, highHz, ratio: b.ratio * k };
+      return { nominalHz: (sign * (lowHz + highHz)) / 2, lowHz, highHz, ratio: b.ratio * k };
     }
     case 'gear': {
       const external = gearSpeedHz(1, link.driverTeeth, link.drivenTeeth);
       const k = link.internal ? -external : external;
-      return { nominalHz: b.nominalHz * k, lowHz: b.lowHz * Math.abs(k), highHz: b.highHz * Math.abs(k), ratio: b.ratio * k };
+      return {
+        nominalHz: b.nominalHz * k,
+        lowHz: b.lowHz * Math.abs(k),
+        highHz: b.highHz * Math.abs(k),
+        ratio: b.ratio * k,
+      };
     }
     default:
-      throw new InputError(`link of ${name}`, `${name} must be driven by a belt, a gear or the same shaft.`);
+      throw new InputError(
+        `link of ${name}`,
+        `${name} must be driven by a belt, a gear or the same shaft.`,
+      );
   }
 }
 
@@ -194,5 +252,13 @@ function toPart(name: string, symmetry: number, b: Band): ChainPart {
   }
   // Tiny round-off must not flip a zero speed's sign or push the middle off the nominal.
   const sign = Math.sign(b.nominalHz) || 1;
-  return { name, symmetry, speedHz: mid === 0 ? 0 : sign * mid, tolerance, lowHz: b.lowHz, highHz: b.highHz, ratioToRoot: b.ratio };
+  return {
+    name,
+    symmetry,
+    speedHz: mid === 0 ? 0 : sign * mid,
+    tolerance,
+    lowHz: b.lowHz,
+    highHz: b.highHz,
+    ratioToRoot: b.ratio,
+  };
 }

@@ -52,7 +52,9 @@ export interface FreezeBand {
 export function stillRates(parts: Part[], range: Range, opts?: StillRateOptions): StillSpan[] {
   const { checked, minHz, maxHz, qMax, look } = checkAll(parts, range, opts);
   const out: StillSpan[] = [];
-  checked.forEach((part, index) => addStillSpans(part, index, minHz, maxHz, qMax, look.stillHz, out));
+  checked.forEach((part, index) =>
+    addStillSpans(part, index, minHz, maxHz, qMax, look.stillHz, out),
+  );
   return out.sort((a, b) => a.fromHz - b.fromHz || a.part - b.part || a.images - b.images);
 }
 
@@ -71,7 +73,12 @@ export function stillRates(parts: Part[], range: Range, opts?: StillRateOptions)
  * freezeRates([{ speedHz: 2, symmetry: 12 }, { speedHz: 3, symmetry: 5 }], 0, { minHz: 20, maxHz: 30 }, { sampler: 'frames' })
  * // [{ fromHz: 23.95, toHz: 24.05, p: 1, lockRateHz: 24, dense: false }]
  */
-export function freezeRates(parts: Part[], target: number, range: Range, opts?: StillRateOptions): FreezeBand[] {
+export function freezeRates(
+  parts: Part[],
+  target: number,
+  range: Range,
+  opts?: StillRateOptions,
+): FreezeBand[] {
   const { checked, minHz, maxHz, qMax, look } = checkAll(parts, range, opts);
   const t = requireWhole(target, 'part to freeze', 0, checked.length - 1);
   const own: StillSpan[] = [];
@@ -85,7 +92,13 @@ export function freezeRates(parts: Part[], target: number, range: Range, opts?: 
   const out: FreezeBand[] = [];
   for (const span of own.sort((a, b) => a.fromHz - b.fromHz)) {
     for (const [fromHz, toHz] of subtract([span.fromHz, span.toHz], blocked)) {
-      out.push({ fromHz, toHz, p: span.p, lockRateHz: span.p === 0 ? 0 : patternHz / span.p, dense: span.dense });
+      out.push({
+        fromHz,
+        toHz,
+        p: span.p,
+        lockRateHz: span.p === 0 ? 0 : patternHz / span.p,
+        dense: span.dense,
+      });
     }
   }
   return out;
@@ -103,7 +116,11 @@ export function freezeRates(parts: Part[], target: number, range: Range, opts?: 
  * noStillRates([{ speedHz: 20, symmetry: 1 }], { minHz: 15, maxHz: 25 }, { sampler: 'frames' })
  * // [{ fromHz: 15, toHz: 19.995833… }, { fromHz: 20.004166…, toHz: 25 }]
  */
-export function noStillRates(parts: Part[], range: Range, opts?: StillRateOptions): Array<{ fromHz: number; toHz: number }> {
+export function noStillRates(
+  parts: Part[],
+  range: Range,
+  opts?: StillRateOptions,
+): Array<{ fromHz: number; toHz: number }> {
   const { minHz, maxHz } = checkRange(range);
   const spans = stillRates(parts, range, opts);
   return subtract([minHz, maxHz], union(spans)).map(([fromHz, toHz]) => ({ fromHz, toHz }));
@@ -170,7 +187,10 @@ function union(spans: Array<{ fromHz: number; toHz: number }>): Array<[number, n
 }
 
 /** [from, to] minus disjoint ascending blocks; the pieces left, each of positive width. */
-function subtract(span: [number, number], blocks: Array<[number, number]>): Array<[number, number]> {
+function subtract(
+  span: [number, number],
+  blocks: Array<[number, number]>,
+): Array<[number, number]> {
   const out: Array<[number, number]> = [];
   let cursor = span[0];
   for (const [a, b] of blocks) {

@@ -45,7 +45,12 @@ export * from './units';
 export { gcd } from './gcd';
 // Field tools (issue 5): speed finder steps, whole machine, lighting, camera, logger, reports.
 export { plainNumber } from './plainNumber';
-export { safetyCautions, SEIZURE_RISK_LOW_HZ, SEIZURE_RISK_HIGH_HZ, type CautionContext } from './safetyCautions';
+export {
+  safetyCautions,
+  SEIZURE_RISK_LOW_HZ,
+  SEIZURE_RISK_HIGH_HZ,
+  type CautionContext,
+} from './safetyCautions';
 export {
   speedFinderSteps,
   motorExpectedRange,

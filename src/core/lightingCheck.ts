@@ -88,17 +88,30 @@ const SEVERITY: Record<Look, number> = { true: 0, forward: 1, unclear: 2, backwa
  *
  * Sources: IEEE Std 1789-2015 (risk lines), CIE TN 006:2016 (SVM), physics.md §2–§3 (looks).
  */
-export function lightingCheck(lamp: Lamp, parts: LitPart[], opts?: Partial<LookOptions>): LightingCheck {
+export function lightingCheck(
+  lamp: Lamp,
+  parts: LitPart[],
+  opts?: Partial<LookOptions>,
+): LightingCheck {
   if (typeof lamp !== 'object' || lamp === null) {
-    throw new InputError('lamp', 'Give the mains frequency, how the lamp flickers and its modulation.');
+    throw new InputError(
+      'lamp',
+      'Give the mains frequency, how the lamp flickers and its modulation.',
+    );
   }
   if (lamp.mainsHz !== 50 && lamp.mainsHz !== 60) {
-    throw new InputError('mains frequency', `The mains frequency must be 50 or 60 Hz (got ${String(lamp.mainsHz)}).`);
+    throw new InputError(
+      'mains frequency',
+      `The mains frequency must be 50 or 60 Hz (got ${String(lamp.mainsHz)}).`,
+    );
   }
   const flickerHz = flickerFrequency(lamp);
   const modulation = requireBetween(lamp.modulationPercent, 'modulation (percent flicker)', 0, 100);
   if (!Array.isArray(parts) || parts.length === 0) {
-    throw new InputError('parts', 'Give at least one part of the machine to check under this light.');
+    throw new InputError(
+      'parts',
+      'Give at least one part of the machine to check under this light.',
+    );
   }
   const look = checkLookOptions(opts);
   const { lowRiskPercent, noEffectPercent } = flickerLimits(flickerHz);
@@ -107,7 +120,9 @@ export function lightingCheck(lamp: Lamp, parts: LitPart[], opts?: Partial<LookO
   const visible = visibility >= 1;
   const flickers = modulation > 0;
 
-  const rows = parts.map((p, i) => partUnderLight(p, i, flickerHz, flickers, visible, visibility, look));
+  const rows = parts.map((p, i) =>
+    partUnderLight(p, i, flickerHz, flickers, visible, visibility, look),
+  );
   const verdict: LightingVerdict = rows.some((r) => r.hazard)
     ? 'hazard'
     : rows.some((r) => r.verdict === 'caution') || risk === 'elevated'
@@ -136,7 +151,10 @@ function flickerFrequency(lamp: Lamp): number {
   if (lamp.flicker === 'double') return 2 * lamp.mainsHz;
   if (lamp.flicker === 'mains') return lamp.mainsHz;
   if (typeof lamp.flicker === 'number') return requirePositive(lamp.flicker, 'flicker frequency');
-  throw new InputError('flicker', "The flicker must be 'double' (twice the mains), 'mains', or a frequency in Hz.");
+  throw new InputError(
+    'flicker',
+    "The flicker must be 'double' (twice the mains), 'mains', or a frequency in Hz.",
+  );
 }
 
 function partUnderLight(
@@ -149,29 +167,59 @@ function partUnderLight(
   look: LookOptions,
 ): PartUnderLight {
   const part = checkPart(raw, `part ${index + 1}`);
-  const name = typeof raw.name === 'string' && raw.name.trim() !== '' ? raw.name.trim() : `part ${index + 1}`;
+  const name =
+    typeof raw.name === 'string' && raw.name.trim() !== '' ? raw.name.trim() : `part ${index + 1}`;
   const opts = { ...look, sampler: 'flash' as const };
   const nominal = apparentMotion(part, flickerHz, opts);
   const apparentRpm = nominal.look === 'still' ? 0 : hzToRpm(nominal.apparentHz);
 
   // Still anywhere in the tolerance band: the closed-form still spans around this one rate.
-  const stills = stillRates([part], { minHz: flickerHz * (1 - 1e-9), maxHz: flickerHz * (1 + 1e-9) }, opts);
+  const stills = stillRates(
+    [part],
+    { minHz: flickerHz * (1 - 1e-9), maxHz: flickerHz * (1 + 1e-9) },
+    opts,
+  );
   let worstLook: Look = nominal.look;
   let images = nominal.look === 'still' ? nominal.images : 1;
   if (stills.length > 0) {
     worstLook = 'still';
     images = Math.min(...stills.map((s) => s.images));
   } else {
-    for (const speedHz of [part.speedHz * (1 - part.tolerance), part.speedHz * (1 + part.tolerance)]) {
+    for (const speedHz of [
+      part.speedHz * (1 - part.tolerance),
+      part.speedHz * (1 + part.tolerance),
+    ]) {
       const m = apparentMotion({ ...part, speedHz }, flickerHz, opts);
       if (SEVERITY[m.look] > SEVERITY[worstLook]) worstLook = m.look;
     }
   }
-  const misleading = flickers && (worstLook === 'still' || worstLook === 'backward' || worstLook === 'unclear');
+  const misleading =
+    flickers && (worstLook === 'still' || worstLook === 'backward' || worstLook === 'unclear');
   const hazard = misleading && visible;
   const verdict: LightingVerdict = hazard ? 'hazard' : misleading ? 'caution' : 'fine';
-  const text = describePart(name, part.speedHz, worstLook, images, nominal.look, apparentRpm, flickers, visible, visibility, verdict);
-  return { name, look: nominal.look, apparentRpm, worstLook, images, misleading, hazard, verdict, text };
+  const text = describePart(
+    name,
+    part.speedHz,
+    worstLook,
+    images,
+    nominal.look,
+    apparentRpm,
+    flickers,
+    visible,
+    visibility,
+    verdict,
+  );
+  return {
+    name,
+    look: nominal.look,
+    apparentRpm,
+    worstLook,
+    images,
+    misleading,
+    hazard,
+    verdict,
+    text,
+  };
 }
 
 function describePart(
@@ -239,7 +287,11 @@ function summarise(
 }
 
 function riskWords(risk: FlickerRisk): string {
-  return risk === 'no-effect' ? 'no observable effect' : risk === 'low-risk' ? 'low risk' : 'above the low-risk line';
+  return risk === 'no-effect'
+    ? 'no observable effect'
+    : risk === 'low-risk'
+      ? 'low risk'
+      : 'above the low-risk line';
 }
 
 function remedies(lamp: Lamp, flickerHz: number, noEffectPercent: number): string[] {
@@ -254,9 +306,13 @@ function remedies(lamp: Lamp, flickerHz: number, noEffectPercent: number): strin
         'supply: their flicker peaks fall at different moments and largely cancel.',
     );
   } else {
-    out.push('Raise the dimmer\'s switching frequency, or run the lamps undimmed where the dimmer then stops switching.');
+    out.push(
+      "Raise the dimmer's switching frequency, or run the lamps undimmed where the dimmer then stops switching.",
+    );
   }
-  out.push('Light the working area of the machine with a task lamp on a steady source, so the flickering light no longer dominates.');
+  out.push(
+    'Light the working area of the machine with a task lamp on a steady source, so the flickering light no longer dominates.',
+  );
   out.push('Local lighting rules and machinery-safety rules take precedence over this check.');
   return out;
 }

@@ -108,7 +108,7 @@ const HALF_POWER_DB = 10 * Math.log10(2);
  * // 25 Hz shaft, harmonics to 10× (250 Hz), 16 bits (98.08 dB), no filter, 1000 samples/s:
  * // nothing aliases, but nothing stops content above 750 Hz from folding onto 0–250 Hz.
  * loggerPlan({ shaftHz: 25, harmonics: 10 }, 1000, { kind: 'none' }, 16).proposal
- * // { sampleHz: 2000, order: 8, cutoffHz: 370.9…, droopDb: 0.1…, aliasRejectionDb: 102.3…, why: … }
+ * // { sampleHz: 1600, order: 8, cutoffHz: 299.2…, droopDb: 0.238…, aliasRejectionDb: 104.7…, why: … }
  *
  * Sources: Shannon 1949 (Nyquist limit); the alias relation of any DSP text; Butterworth 1930
  * (|H| = 1/sqrt(1 + (f/fc)^(2m)), −3.01 dB at the cutoff); Bennett 1948 / Analog Devices MT-001
@@ -125,9 +125,17 @@ export function loggerPlan(
   const fs = requirePositive(sampleHz, 'sample rate');
   const { cutoffHz, order } = checkFilter(filter);
   const rangeDb = converterRangeDb(bits);
-  const droopDb = requireBetween(opts?.passbandDroopDb ?? 1, 'passband loss allowed (dB)', 0.01, HALF_POWER_DB);
+  const droopDb = requireBetween(
+    opts?.passbandDroopDb ?? 1,
+    'passband loss allowed (dB)',
+    0.01,
+    HALF_POWER_DB,
+  );
   const maxOrder = requireWhole(opts?.maxOrder ?? 8, 'highest filter order', 1, 20);
-  const maxSampleHz = opts?.maxSampleHz === undefined ? Infinity : requirePositive(opts.maxSampleHz, 'fastest sample rate');
+  const maxSampleHz =
+    opts?.maxSampleHz === undefined
+      ? Infinity
+      : requirePositive(opts.maxSampleHz, 'fastest sample rate');
 
   const nyquistHz = fs / 2;
   const gain = (hz: number) => (cutoffHz === undefined ? 0 : lowPassGainDb(hz, cutoffHz, order));
@@ -136,22 +144,35 @@ export function loggerPlan(
     const g = gain(hz);
     const neededDb = aliases ? rangeDb : 0;
     const pass = aliases ? -g >= rangeDb : -g <= HALF_POWER_DB + 1e-9;
-    return { label, hz, foldedHz: foldedHz(hz, fs), aliases, gainDb: g, neededDb, pass, text: describe(label, hz, aliases, g, fs, rangeDb, pass) };
+    return {
+      label,
+      hz,
+      foldedHz: foldedHz(hz, fs),
+      aliases,
+      gainDb: g,
+      neededDb,
+      pass,
+      text: describe(label, hz, aliases, g, fs, rangeDb, pass),
+    };
   });
 
   const fmax = Math.max(...list.map((c) => c.hz));
   const guardHz = Math.max(fs - fmax, nyquistHz);
-  const guardDb = -gain(guardHz);
+  const guardDb = 0 - gain(guardHz); // 0 − 0 is +0: no "-0 dB" without a filter
   const guard = { hz: guardHz, attenuationDb: guardDb, enough: guardDb >= rangeDb };
   const allPass = components.every((c) => c.pass) && guard.enough;
   const proposal = propose(fmax, rangeDb, droopDb, maxOrder, maxSampleHz);
 
   const notes: string[] = [];
   if (cutoffHz === undefined) {
-    notes.push(`There is no anti-alias filter: anything in the signal above ${plainNumber(nyquistHz)} Hz folds into the record.`);
+    notes.push(
+      `There is no anti-alias filter: anything in the signal above ${plainNumber(nyquistHz)} Hz folds into the record.`,
+    );
   }
   if (components.some((c) => c.aliases && !c.pass)) {
-    notes.push('Some components fold onto false frequencies with too little attenuation: they will look like real tones in the record.');
+    notes.push(
+      'Some components fold onto false frequencies with too little attenuation: they will look like real tones in the record.',
+    );
   } else if (!guard.enough) {
     notes.push(
       `Content at ${plainNumber(guardHz)} Hz and above folds onto the components of interest; the filter takes off ` +
@@ -183,9 +204,16 @@ export function loggerPlan(
  * series, the 2.56·bandwidth family of vibration analysers (1.28, 2.56, 5.12, 6.4) and the
  * 48 kHz audio family (1.2, 2.4, 4.8, 9.6), with 1.6, 3.2 and 8 for the binary steps.
  */
-const NICE_MANTISSAS = [100, 120, 125, 128, 160, 200, 240, 250, 256, 320, 400, 480, 500, 512, 640, 800, 960];
+const NICE_MANTISSAS = [
+  100, 120, 125, 128, 160, 200, 240, 250, 256, 320, 400, 480, 500, 512, 640, 800, 960,
+];
 
-/** Smallest nice rate ≥ hz (exact decimal values, no float drift). */
+/**
+ * The smallest nice sample rate at or above hz (see NICE_MANTISSAS; exact decimal values).
+ * Units: Hz. Throws InputError for a rate ≤ 0 or not a number.
+ * @example niceSampleRateHz(1297) // 1600
+ * Source: common practice (the rates loggers, vibration analysers and audio converters offer).
+ */
 export function niceSampleRateHz(hz: number): number {
   const f = requirePositive(hz, 'sample rate');
   let exponent = Math.floor(Math.log10(f)) - 2;
@@ -198,7 +226,13 @@ export function niceSampleRateHz(hz: number): number {
   }
 }
 
-function propose(fmax: number, rangeDb: number, droopDb: number, maxOrder: number, maxSampleHz: number): LoggerProposal | undefined {
+function propose(
+  fmax: number,
+  rangeDb: number,
+  droopDb: number,
+  maxOrder: number,
+  maxSampleHz: number,
+): LoggerProposal | undefined {
   const passK = Math.pow(10, droopDb / 10) - 1;
   const stopK = Math.pow(10, rangeDb / 10) - 1;
   const needs = [];
@@ -231,12 +265,13 @@ function propose(fmax: number, rangeDb: number, droopDb: number, maxOrder: numbe
 
 function componentsOf(tones: MachineTones): Array<{ label: string; hz: number }> {
   if (typeof tones !== 'object' || tones === null) {
-    throw new InputError('machine', 'Give the shaft speed and the machine\'s tones.');
+    throw new InputError('machine', "Give the shaft speed and the machine's tones.");
   }
   const f = requirePositive(tones.shaftHz, 'shaft speed');
   const harmonics = requireWhole(tones.harmonics ?? 1, 'harmonics', 1, 200);
   const out: Array<{ label: string; hz: number }> = [];
-  for (let k = 1; k <= harmonics; k++) out.push({ label: k === 1 ? '1× shaft' : `${k}× shaft`, hz: k * f });
+  for (let k = 1; k <= harmonics; k++)
+    out.push({ label: k === 1 ? '1× shaft' : `${k}× shaft`, hz: k * f });
   listOf(tones.blades, 'blade counts').forEach((b, i) => {
     const n = requireWhole(b, `blade count ${i + 1}`, 1, 1000);
     out.push({ label: `blade pass (${n} blades)`, hz: n * f });
@@ -247,7 +282,8 @@ function componentsOf(tones: MachineTones): Array<{ label: string; hz: number }>
   });
   listOf(tones.extraTones, 'added tones').forEach((t, i) => {
     const hz = requirePositive(t?.hz, `added tone ${i + 1}`);
-    const label = typeof t?.label === 'string' && t.label.trim() !== '' ? t.label.trim() : `tone ${i + 1}`;
+    const label =
+      typeof t?.label === 'string' && t.label.trim() !== '' ? t.label.trim() : `tone ${i + 1}`;
     out.push({ label, hz });
   });
   return out;
@@ -284,7 +320,15 @@ function checkFilter(filter: AntiAliasFilter): { cutoffHz?: number; order: numbe
   }
 }
 
-function describe(label: string, hz: number, aliases: boolean, gainDb: number, fs: number, rangeDb: number, pass: boolean): string {
+function describe(
+  label: string,
+  hz: number,
+  aliases: boolean,
+  gainDb: number,
+  fs: number,
+  rangeDb: number,
+  pass: boolean,
+): string {
   const at = `${label} at ${plainNumber(hz)} Hz`;
   if (!aliases) {
     return pass

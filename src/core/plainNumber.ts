@@ -12,6 +12,8 @@ export function plainNumber(value: number): string {
   const magnitude = Math.abs(value);
   const rounded = magnitude >= 100 ? Math.round(value) : Number(value.toPrecision(3));
   if (rounded === 0) return '0';
+  // From 1e21 up String() switches to an exponent; BigInt writes every digit.
+  if (magnitude >= 1e21) return BigInt(rounded).toString();
   // toPrecision can give an exponent for very small numbers; fixed notation reads better.
   return Math.abs(rounded) < 1e-6 ? rounded.toFixed(9).replace(/0+$/, '') : String(rounded);
 }

@@ -33,16 +33,23 @@ export function safetyCautions(context: CautionContext = {}): string[] {
   }
   const rates = (context.flashRatesHz ?? []).map((r, i) => requireFinite(r, `flash rate ${i + 1}`));
   const sweep = context.flashSweepHz;
-  const sweepLow = sweep === undefined ? Infinity : requireFinite(sweep.minHz, 'lowest rate of the sweep');
-  const sweepHigh = sweep === undefined ? -Infinity : requireFinite(sweep.maxHz, 'highest rate of the sweep');
+  const sweepLow =
+    sweep === undefined ? Infinity : requireFinite(sweep.minHz, 'lowest rate of the sweep');
+  const sweepHigh =
+    sweep === undefined ? -Infinity : requireFinite(sweep.maxHz, 'highest rate of the sweep');
   const inRisk = (r: number) => r >= SEIZURE_RISK_LOW_HZ && r <= SEIZURE_RISK_HIGH_HZ;
-  if (rates.some(inRisk) || (sweepLow <= SEIZURE_RISK_HIGH_HZ && sweepHigh >= SEIZURE_RISK_LOW_HZ)) {
+  if (
+    rates.some(inRisk) ||
+    (sweepLow <= SEIZURE_RISK_HIGH_HZ && sweepHigh >= SEIZURE_RISK_LOW_HZ)
+  ) {
     out.push(
       'Flashing between about 3 and 60 times a second can trigger seizures in people with ' +
         'photosensitive epilepsy (WCAG 2.x success criterion 2.3.1 uses three flashes a second). ' +
         'Warn people nearby, and keep such rates short.',
     );
   }
-  out.push('This is a planning aid: local codes, the machine maker\'s instructions and licensed practice come first.');
+  out.push(
+    "This is a planning aid: local codes, the machine maker's instructions and licensed practice come first.",
+  );
   return out;
 }

@@ -115,16 +115,26 @@ const COMPARED = 6;
  * Source: physics.md §7 (two adjacent single images, the double image at twice the rate);
  * the sweep from the top down is common practice.
  */
-export function speedFinderSteps(input: SpeedFinderInput, opts?: SpeedFinderOptions): SpeedFinderStep {
+export function speedFinderSteps(
+  input: SpeedFinderInput,
+  opts?: SpeedFinderOptions,
+): SpeedFinderStep {
   if (typeof input !== 'object' || input === null) {
-    throw new InputError('speed finder', 'Give the readings, the features on the part and the strobe range.');
+    throw new InputError(
+      'speed finder',
+      'Give the readings, the features on the part and the strobe range.',
+    );
   }
   if (!Array.isArray(input.readings)) {
-    throw new InputError('readings', 'readings must be a list (it may be empty before the first one).');
+    throw new InputError(
+      'readings',
+      'readings must be a list (it may be empty before the first one).',
+    );
   }
   const n = requireWhole(input.symmetry, 'features (blades, spokes)', 1, MAX_SYMMETRY);
   const strobe = checkRange(input.strobeRange, 'strobe range');
-  const expect = input.expect === undefined ? undefined : checkRange(input.expect, 'expected speed range');
+  const expect =
+    input.expect === undefined ? undefined : checkRange(input.expect, 'expected speed range');
   const margin = requireBetween(opts?.startMargin ?? 0.1, 'start margin', 0, 1);
   const tol = requireBetween(opts?.matchTolerance ?? 0.003, 'match tolerance', 0, 0.1);
   const readings = input.readings.map((r, i) => ({
@@ -134,14 +144,19 @@ export function speedFinderSteps(input: SpeedFinderInput, opts?: SpeedFinderOpti
 
   const startHz = startRate(strobe, expect, n, margin);
   const sweptFromHz =
-    opts?.sweptFromHz === undefined ? startHz : requirePositive(opts.sweptFromHz, 'rate you started from');
+    opts?.sweptFromHz === undefined
+      ? startHz
+      : requirePositive(opts.sweptFromHz, 'rate you started from');
   const base = { sweptFromHz, candidates: [] as StepCandidate[] };
   // The technician watches every rate from the start rate down to the lowest one used; before
   // the first single image the sweep may go down to the strobe's lowest rate.
   const cautionsFor = (rates: number[], open: boolean) =>
     safetyCautions({
       apparentStillness: true,
-      flashSweepHz: { minHz: Math.min(...rates, open ? strobe.minHz : Infinity), maxHz: Math.max(...rates) },
+      flashSweepHz: {
+        minHz: Math.min(...rates, open ? strobe.minHz : Infinity),
+        maxHz: Math.max(...rates),
+      },
     });
   const usedRates = [sweptFromHz, ...readings.map((r) => r.rateHz)];
 
@@ -169,7 +184,13 @@ export function speedFinderSteps(input: SpeedFinderInput, opts?: SpeedFinderOpti
 
   const singles = readings.filter((r) => r.images === 1).map((r) => r.rateHz);
   const firstSingleHz = singles.length > 0 ? Math.max(...singles) : undefined;
-  const table = rankCandidates(finding.candidates, n, firstSingleHz, Math.max(sweptFromHz, firstSingleHz ?? 0), tol);
+  const table = rankCandidates(
+    finding.candidates,
+    n,
+    firstSingleHz,
+    Math.max(sweptFromHz, firstSingleHz ?? 0),
+    tol,
+  );
   const live = table.filter((c) => !c.ruledOut);
   const lead = live[0];
   const tried = (s: number) => readings.some((r) => Math.abs(r.rateHz - s) <= tol * s);
@@ -197,7 +218,9 @@ export function speedFinderSteps(input: SpeedFinderInput, opts?: SpeedFinderOpti
     }
   }
 
-  const candidates = table.map((c) => (plan.rateHz === undefined ? c : { ...c, atNextRate: predict(c.speedHz, n, plan.rateHz) }));
+  const candidates = table.map((c) =>
+    plan.rateHz === undefined ? c : { ...c, atNextRate: predict(c.speedHz, n, plan.rateHz) },
+  );
   if (plan.rateHz !== undefined) usedRates.push(plan.rateHz);
   return {
     sweptFromHz,
@@ -221,12 +244,20 @@ type CheckState = 'passed' | 'failed' | 'no-room';
  * Throws InputError for mains ≤ 0, poles not an even whole number ≥ 2, or slips outside
  * 0…0.5 or not in order.
  * @example motorExpectedRange(50, 4) // { minHz: 23.75, maxHz: 25 } (1425 to 1500 rpm)
+ * Sources: IEC 60034-1 / NEMA MG 1 (synchronous speed 120·fm/P); Engineering ToolBox (typical speeds).
  */
-export function motorExpectedRange(mainsHz: number, poles: number, slip?: { min: number; max: number }): Range {
+export function motorExpectedRange(
+  mainsHz: number,
+  poles: number,
+  slip?: { min: number; max: number },
+): Range {
   const min = requireBetween(slip?.min ?? 0, 'smallest slip', 0, 0.5);
   const max = requireBetween(slip?.max ?? 0.05, 'largest slip', 0, 0.5);
   if (!(min < max)) {
-    throw new InputError('slip', `The slip range is empty: the smallest slip (${min}) must be below the largest (${max}).`);
+    throw new InputError(
+      'slip',
+      `The slip range is empty: the smallest slip (${min}) must be below the largest (${max}).`,
+    );
   }
   return { minHz: motorSpeedHz(mainsHz, poles, max), maxHz: motorSpeedHz(mainsHz, poles, min) };
 }
@@ -244,12 +275,17 @@ function rate(rateHz: number) {
 const fpm = (hz: number) => `${plainNumber(hzToFpm(hz))} flashes/min`;
 const rpm = (hz: number) => `${plainNumber(hzToRpm(hz))} rpm`;
 
-function startInstruction(startHz: number, strobe: Range, expect: Range | undefined, n: number): string {
+function startInstruction(
+  startHz: number,
+  strobe: Range,
+  expect: Range | undefined,
+  n: number,
+): string {
   const where = expect
     ? startHz >= strobe.maxHz
-      ? 'the top of the strobe\'s range'
+      ? "the top of the strobe's range"
       : 'just above the expected speed'
-    : 'the top of the strobe\'s range';
+    : "the top of the strobe's range";
   const mark = n === 1 ? 'the mark' : 'the part';
   let text =
     `Set the strobe to ${fpm(startHz)} (${where}) and lower the rate slowly. Several images may stand ` +
@@ -257,7 +293,7 @@ function startInstruction(startHz: number, strobe: Range, expect: Range | undefi
     'record that rate with 1 image.';
   if (expect && n * expect.minHz > strobe.maxHz) {
     text +=
-      ' The expected speed is above the strobe\'s top rate, so the first single image will be at a ' +
+      " The expected speed is above the strobe's top rate, so the first single image will be at a " +
       'fraction of the true speed; the steps that follow sort that out.';
   }
   if (n > 1) text += ' A single reflective mark on the part makes the reading unambiguous.';
@@ -282,7 +318,14 @@ function rankCandidates(
       : c.expected
         ? 'Fits every reading and the expected range.'
         : 'Fits every reading.';
-    return { speedHz: c.speedHz, rpm: hzToRpm(c.speedHz), expected: c.expected, ruledOut, likeliest: false, note };
+    return {
+      speedHz: c.speedHz,
+      rpm: hzToRpm(c.speedHz),
+      expected: c.expected,
+      ruledOut,
+      likeliest: false,
+      note,
+    };
   });
   // A sweep that rules out everything did not happen as assumed: rank on the readings alone.
   const keep = rows.every((r) => r.ruledOut) ? rows.map((r) => ({ ...r, ruledOut: false })) : rows;
@@ -351,11 +394,17 @@ function separate(
     }
   }
   if (!best || best.distinct < 2) return undefined;
-  return { stage: 'separate', rateHz: best.rateHz, instruction: separateInstruction(best.rateHz, compared, n) };
+  return {
+    stage: 'separate',
+    rateHz: best.rateHz,
+    instruction: separateInstruction(best.rateHz, compared, n),
+  };
 }
 
 function separateInstruction(s: number, compared: StepCandidate[], n: number): string {
-  const views = compared.map((c) => `at ${rpm(c.speedHz)}: ${predict(c.speedHz, n, s).text}`).join('; ');
+  const views = compared
+    .map((c) => `at ${rpm(c.speedHz)}: ${predict(c.speedHz, n, s).text}`)
+    .join('; ');
   return `Several speeds still fit. Set ${fpm(s)} and compare what you see with each (${views}). Record it.`;
 }
 
@@ -373,10 +422,11 @@ function done(
     check === 'passed'
       ? ', confirmed by the two images).'
       : check === 'no-room'
-        ? '; the two-image check does not fit in the strobe\'s range).'
+        ? "; the two-image check does not fit in the strobe's range)."
         : `; the check at ${fpm(confirmHz ?? 0)} did not show two images, and this is the speed that fits every reading).`;
   if (rivals > 1) {
-    text += ' Other speeds in the table fit the readings too and no rate in the strobe\'s range tells them apart; the one given is the slowest.';
+    text +=
+      " Other speeds in the table fit the readings too and no rate in the strobe's range tells them apart; the one given is the slowest.";
   }
   if (expect && !lead.expected) {
     text +=
@@ -397,8 +447,10 @@ function predict(speedHz: number, n: number, rateHz: number): StepPrediction {
 
 function describeView(m: ApparentMotion, apparentRpm: number): string {
   const speed = `${plainNumber(Math.abs(apparentRpm))} rpm`;
-  if (m.look === 'still') return m.images === 1 ? 'a single image stands still' : `${m.images} images stand still`;
-  if (m.look === 'true') return 'moves at its true speed (the rate is above twice the pattern rate)';
+  if (m.look === 'still')
+    return m.images === 1 ? 'a single image stands still' : `${m.images} images stand still`;
+  if (m.look === 'true')
+    return 'moves at its true speed (the rate is above twice the pattern rate)';
   if (m.images > 1) return `${m.images} images drift slowly (${speed})`;
   if (m.look === 'unclear') return 'flickers with no clear direction';
   return `creeps ${m.look} at ${speed}`;

@@ -19,7 +19,13 @@ describe('driveChain: speeds along the drives', () => {
 
   it('turns the fan of a 100 mm to 250 mm belt at 0.4 times the motor, with the same relative tolerance', () => {
     // Belt drive D1·n1 = D2·n2 (physics.md §8): 1450–1500 rpm × 0.4 = 580–600 rpm.
-    const [m, fan] = driveChain({ root: motor50, parts: [{ name: 'motor', symmetry: 1 }, { name: 'fan', symmetry: 6, link: belt }] });
+    const [m, fan] = driveChain({
+      root: motor50,
+      parts: [
+        { name: 'motor', symmetry: 1 },
+        { name: 'fan', symmetry: 6, link: belt },
+      ],
+    });
     expect(fan.lowHz * 60).toBeCloseTo(580, 9);
     expect(fan.highHz * 60).toBeCloseTo(600, 9);
     expect(fan.ratioToRoot).toBeCloseTo(0.4, 15);
@@ -28,7 +34,13 @@ describe('driveChain: speeds along the drives', () => {
   });
 
   it('matches its doc example', () => {
-    const fan = driveChain({ root: motor50, parts: [{ name: 'motor', symmetry: 1 }, { name: 'fan', symmetry: 6, link: belt }] })[1];
+    const fan = driveChain({
+      root: motor50,
+      parts: [
+        { name: 'motor', symmetry: 1 },
+        { name: 'fan', symmetry: 6, link: belt },
+      ],
+    })[1];
     expect(fan.name).toBe('fan');
     expect(fan.lowHz).toBeCloseTo(9.666666666666666, 12);
     expect(fan.highHz).toBeCloseTo(10, 12);
@@ -43,7 +55,11 @@ describe('driveChain: speeds along the drives', () => {
       root: { kind: 'fixed', speedHz: 1000 / 60, tolerance: 0.01 },
       parts: [
         { name: 'driver', symmetry: 1 },
-        { name: 'driven', symmetry: 1, link: { kind: 'belt', driverDiameterM: 0.2, drivenDiameterM: 0.2, slipPercent: 2 } },
+        {
+          name: 'driven',
+          symmetry: 1,
+          link: { kind: 'belt', driverDiameterM: 0.2, drivenDiameterM: 0.2, slipPercent: 2 },
+        },
       ],
     });
     expect(driven.lowHz * 60).toBeCloseTo(970.2, 9);
@@ -59,7 +75,12 @@ describe('driveChain: speeds along the drives', () => {
       parts: [
         { name: 'pinion', symmetry: 20 },
         { name: 'wheel', symmetry: 60, link: { kind: 'gear', driverTeeth: 20, drivenTeeth: 60 } },
-        { name: 'ring', symmetry: 60, link: { kind: 'gear', driverTeeth: 20, drivenTeeth: 60, internal: true }, from: 0 },
+        {
+          name: 'ring',
+          symmetry: 60,
+          link: { kind: 'gear', driverTeeth: 20, drivenTeeth: 60, internal: true },
+          from: 0,
+        },
       ],
     };
     const [pinion, wheel, ring] = driveChain(spec);
@@ -96,7 +117,10 @@ describe('driveChain: speeds along the drives', () => {
   });
 
   it('takes a wheel diameter in metres when no tyre size is given, and rolls backward at a negative ground speed', () => {
-    const [wheel] = driveChain({ root: { kind: 'wheel', groundSpeedMps: -Math.PI, diameterM: 0.5 }, parts: [{ name: 'w', symmetry: 1 }] });
+    const [wheel] = driveChain({
+      root: { kind: 'wheel', groundSpeedMps: -Math.PI, diameterM: 0.5 },
+      parts: [{ name: 'w', symmetry: 1 }],
+    });
     expect(wheel.speedHz).toBeCloseTo(-2, 12);
   });
 
@@ -106,24 +130,41 @@ describe('driveChain: speeds along the drives', () => {
       parts: [
         { name: 'motor', symmetry: 1 },
         { name: 'fan', symmetry: 6, link: belt },
-        { name: 'pump', symmetry: 5, link: { kind: 'belt', driverDiameterM: 0.1, drivenDiameterM: 0.2 }, from: 0 },
+        {
+          name: 'pump',
+          symmetry: 5,
+          link: { kind: 'belt', driverDiameterM: 0.1, drivenDiameterM: 0.2 },
+          from: 0,
+        },
       ],
     });
     expect(parts.map((p) => p.speedHz)).toEqual([25, 10, 12.5]);
   });
 
   it('gives parts that the look computations accept directly', () => {
-    const chain = driveChain({ root: motor50, parts: [{ name: 'motor', symmetry: 1 }, { name: 'fan', symmetry: 6, link: belt }] });
+    const chain = driveChain({
+      root: motor50,
+      parts: [
+        { name: 'motor', symmetry: 1 },
+        { name: 'fan', symmetry: 6, link: belt },
+      ],
+    });
     for (const part of chain) expect(() => apparentMotion(part, 50)).not.toThrow();
   });
 
   it('names unnamed parts by their place in the chain', () => {
-    const [p] = driveChain({ root: { kind: 'fixed', speedHz: 1 }, parts: [{ name: ' ', symmetry: 1 }] });
+    const [p] = driveChain({
+      root: { kind: 'fixed', speedHz: 1 },
+      parts: [{ name: ' ', symmetry: 1 }],
+    });
     expect(p.name).toBe('part 1');
   });
 
   it('reports a part that is not turning as still with no tolerance', () => {
-    const [p] = driveChain({ root: { kind: 'fixed', speedHz: 0, tolerance: 0.1 }, parts: [{ name: 'idle', symmetry: 3 }] });
+    const [p] = driveChain({
+      root: { kind: 'fixed', speedHz: 0, tolerance: 0.1 },
+      parts: [{ name: 'idle', symmetry: 3 }],
+    });
     expect(p).toMatchObject({ speedHz: 0, tolerance: 0, lowHz: 0, highHz: 0 });
   });
 });
@@ -137,30 +178,82 @@ describe('driveChain: bad input', () => {
   });
 
   it('rejects an unknown first speed and a wheel without a size', () => {
-    expectInputError(() => driveChain({ root: bad({ kind: 'turbine' }), parts: [first] }), 'first speed');
+    expectInputError(
+      () => driveChain({ root: bad({ kind: 'turbine' }), parts: [first] }),
+      'first speed',
+    );
     expectInputError(() => driveChain({ root: bad(undefined), parts: [first] }), 'first speed');
-    expectInputError(() => driveChain({ root: { kind: 'wheel', groundSpeedMps: 10 }, parts: [first] }), 'wheel diameter');
-    expectInputError(() => driveChain({ root: { kind: 'wheel', groundSpeedMps: 10, tyreSize: 'big' }, parts: [first] }), 'tyre size');
+    expectInputError(
+      () => driveChain({ root: { kind: 'wheel', groundSpeedMps: 10 }, parts: [first] }),
+      'wheel diameter',
+    );
+    expectInputError(
+      () =>
+        driveChain({
+          root: { kind: 'wheel', groundSpeedMps: 10, tyreSize: 'big' },
+          parts: [first],
+        }),
+      'tyre size',
+    );
   });
 
   it('rejects slips out of order and tolerances outside 0 to 50 %', () => {
-    expectInputError(() => driveChain({ root: { ...motor50, minSlip: 0.05, maxSlip: 0.01 }, parts: [first] }), 'slip');
-    expectInputError(() => driveChain({ root: { kind: 'fixed', speedHz: 1, tolerance: 0.6 }, parts: [first] }), 'speed tolerance');
-    expectInputError(() => driveChain({ root: { kind: 'fixed', speedHz: NaN }, parts: [first] }), 'speed');
+    expectInputError(
+      () => driveChain({ root: { ...motor50, minSlip: 0.05, maxSlip: 0.01 }, parts: [first] }),
+      'slip',
+    );
+    expectInputError(
+      () => driveChain({ root: { kind: 'fixed', speedHz: 1, tolerance: 0.6 }, parts: [first] }),
+      'speed tolerance',
+    );
+    expectInputError(
+      () => driveChain({ root: { kind: 'fixed', speedHz: NaN }, parts: [first] }),
+      'speed',
+    );
   });
 
   it('rejects a part without a link, an unknown link, and a driver that is not an earlier part', () => {
-    expectInputError(() => driveChain({ root: motor50, parts: [first, { name: 'fan', symmetry: 6 }] }), 'link of fan', 'fan is driven');
-    expectInputError(() => driveChain({ root: motor50, parts: [first, { name: 'fan', symmetry: 6, link: bad({ kind: 'chain' }) }] }), 'link of fan', 'fan must be driven');
-    expectInputError(() => driveChain({ root: motor50, parts: [first, { name: 'fan', symmetry: 6, link: belt, from: 1 }] }), 'part driving fan');
-    expectInputError(() => driveChain({ root: motor50, parts: [first, { name: 'fan', symmetry: 6, link: belt, from: -1 }] }), 'part driving fan');
+    expectInputError(
+      () => driveChain({ root: motor50, parts: [first, { name: 'fan', symmetry: 6 }] }),
+      'link of fan',
+      'fan is driven',
+    );
+    expectInputError(
+      () =>
+        driveChain({
+          root: motor50,
+          parts: [first, { name: 'fan', symmetry: 6, link: bad({ kind: 'chain' }) }],
+        }),
+      'link of fan',
+      'fan must be driven',
+    );
+    expectInputError(
+      () =>
+        driveChain({
+          root: motor50,
+          parts: [first, { name: 'fan', symmetry: 6, link: belt, from: 1 }],
+        }),
+      'part driving fan',
+    );
+    expectInputError(
+      () =>
+        driveChain({
+          root: motor50,
+          parts: [first, { name: 'fan', symmetry: 6, link: belt, from: -1 }],
+        }),
+      'part driving fan',
+    );
   });
 
   it('rejects bad diameters, teeth, slip and feature counts', () => {
-    const chain = (link: unknown, symmetry = 6) => driveChain({ root: motor50, parts: [first, { name: 'fan', symmetry, link: bad(link) }] });
+    const chain = (link: unknown, symmetry = 6) =>
+      driveChain({ root: motor50, parts: [first, { name: 'fan', symmetry, link: bad(link) }] });
     expectInputError(() => chain({ ...belt, drivenDiameterM: 0 }), 'driven pulley diameter');
     expectInputError(() => chain({ ...belt, slipPercent: 30 }), 'belt slip of fan (percent)');
-    expectInputError(() => chain({ kind: 'gear', driverTeeth: 20.5, drivenTeeth: 60 }), 'driver teeth');
+    expectInputError(
+      () => chain({ kind: 'gear', driverTeeth: 20.5, drivenTeeth: 60 }),
+      'driver teeth',
+    );
     expectInputError(() => chain(belt, 0), 'features of fan');
     expectInputError(() => driveChain({ root: motor50, parts: [bad('motor')] }), 'part 1');
   });

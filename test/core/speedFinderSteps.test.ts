@@ -22,7 +22,12 @@ describe('speedFinderSteps: the usual procedure', () => {
 
   it('starts just above the expected speed of a 4-pole motor on 60 Hz', () => {
     // IEC 60034-1 / NEMA MG 1: 1800 rpm synchronous = 30 rev/s; 10 % above is 33 Hz (1980 flashes/min).
-    const step = speedFinderSteps({ readings: [], symmetry: 1, strobeRange: strobe, expect: motorExpectedRange(60, 4) });
+    const step = speedFinderSteps({
+      readings: [],
+      symmetry: 1,
+      strobeRange: strobe,
+      expect: motorExpectedRange(60, 4),
+    });
     expect(step.rateHz).toBeCloseTo(33, 12);
     expect(step.instruction).toMatch(/1980 flashes\/min \(just above the expected speed\)/);
     expect(step.sweptFromHz).toBeCloseTo(33, 12);
@@ -39,11 +44,25 @@ describe('speedFinderSteps: the usual procedure', () => {
     expect(step.rateHz).toBe(59); // physics.md §7: twice the single-image rate shows a double image
     expect(step.rateFpm).toBe(3540);
     const [lead, twice] = step.candidates;
-    expect(lead).toMatchObject({ speedHz: F1, rpm: 1770, expected: true, likeliest: true, ruledOut: false });
-    expect(lead.atNextRate).toMatchObject({ images: 2, look: 'still', text: '2 images stand still' });
+    expect(lead).toMatchObject({
+      speedHz: F1,
+      rpm: 1770,
+      expected: true,
+      likeliest: true,
+      ruledOut: false,
+    });
+    expect(lead.atNextRate).toMatchObject({
+      images: 2,
+      look: 'still',
+      text: '2 images stand still',
+    });
     // The speed twice as fast would show a single image there: the check tells them apart.
     expect(twice).toMatchObject({ speedHz: 59, rpm: 3540, expected: false });
-    expect(twice.atNextRate).toMatchObject({ images: 1, look: 'still', text: 'a single image stands still' });
+    expect(twice.atNextRate).toMatchObject({
+      images: 1,
+      look: 'still',
+      text: 'a single image stands still',
+    });
   });
 
   it('finishes with the speed once the double image is seen', () => {
@@ -66,7 +85,11 @@ describe('speedFinderSteps: the usual procedure', () => {
 
   it('rules out faster speeds whose single image would have stood still first on the way down', () => {
     // From 12 000 flashes/min down, 3540 rpm freezes as a single image at 3540 before 1770.
-    const step = speedFinderSteps({ readings: [{ rateHz: F1, images: 1 }], symmetry: 1, strobeRange: strobe });
+    const step = speedFinderSteps({
+      readings: [{ rateHz: F1, images: 1 }],
+      symmetry: 1,
+      strobeRange: strobe,
+    });
     const faster = step.candidates.find((c) => c.speedHz === 59);
     expect(faster).toMatchObject({ ruledOut: true, likeliest: false });
     expect(faster?.note).toMatch(/3540 flashes\/min on the way down/);
@@ -95,7 +118,11 @@ describe('speedFinderSteps: the usual procedure', () => {
 
   it('confirms at two thirds of the rate when twice the rate is beyond the strobe', () => {
     // r = n·f/s = 3/2 is the lock p/q = 3/2: two images stand still (physics.md §3).
-    const step = speedFinderSteps({ readings: [{ rateHz: F1, images: 1 }], symmetry: 1, strobeRange: { minHz: 1, maxHz: 40 } });
+    const step = speedFinderSteps({
+      readings: [{ rateHz: F1, images: 1 }],
+      symmetry: 1,
+      strobeRange: { minHz: 1, maxHz: 40 },
+    });
     expect(step.stage).toBe('confirm');
     expect(step.rateHz).toBeCloseTo((2 / 3) * F1, 12);
     expect(step.instruction).toMatch(/two thirds of the single-image rate/);
@@ -103,7 +130,11 @@ describe('speedFinderSteps: the usual procedure', () => {
   });
 
   it('keeps coming down after a double image and points at half its rate for the single image', () => {
-    const step = speedFinderSteps({ readings: [{ rateHz: 2 * F1, images: 2 }], symmetry: 1, strobeRange: strobe });
+    const step = speedFinderSteps({
+      readings: [{ rateHz: 2 * F1, images: 2 }],
+      symmetry: 1,
+      strobeRange: strobe,
+    });
     expect(step.stage).toBe('come-down');
     expect(step.rateHz).toBe(F1);
     expect(step.instruction).toMatch(/Keep lowering the rate from 3540 flashes\/min/);
@@ -127,7 +158,9 @@ describe('speedFinderSteps: the usual procedure', () => {
     );
     expect(step.stage).toBe('separate');
     expect(step.rateHz).toBe(60);
-    const views = Object.fromEntries(step.candidates.slice(0, 2).map((c) => [c.rpm, c.atNextRate?.text]));
+    const views = Object.fromEntries(
+      step.candidates.slice(0, 2).map((c) => [c.rpm, c.atNextRate?.text]),
+    );
     expect(views).toEqual({ 1200: '3 images stand still', 3600: 'a single image stands still' });
     expect(step.instruction).toMatch(/Several speeds still fit/);
   });
@@ -195,7 +228,10 @@ describe('motorExpectedRange: nameplate data to an expected speed', () => {
       [50, 8, 750],
     ];
     for (const [mains, poles, rpm] of table) {
-      expect(motorExpectedRange(mains, poles).maxHz * 60, `${poles} poles at ${mains} Hz`).toBeCloseTo(rpm, 9);
+      expect(
+        motorExpectedRange(mains, poles).maxHz * 60,
+        `${poles} poles at ${mains} Hz`,
+      ).toBeCloseTo(rpm, 9);
     }
   });
 
@@ -244,13 +280,25 @@ describe('speedFinderSteps and motorExpectedRange: bad input', () => {
   });
 
   it('rejects an empty or inverted strobe range and expected range', () => {
-    expectInputError(() => speedFinderSteps({ ...ok, strobeRange: { minHz: 200, maxHz: 0.5 } }), 'strobe range');
-    expectInputError(() => speedFinderSteps({ ...ok, expect: { minHz: 30, maxHz: 30 } }), 'expected speed range');
+    expectInputError(
+      () => speedFinderSteps({ ...ok, strobeRange: { minHz: 200, maxHz: 0.5 } }),
+      'strobe range',
+    );
+    expectInputError(
+      () => speedFinderSteps({ ...ok, expect: { minHz: 30, maxHz: 30 } }),
+      'expected speed range',
+    );
   });
 
   it('rejects readings with a rate that is not above zero or an image count that is not whole', () => {
-    expectInputError(() => speedFinderSteps({ ...ok, readings: [{ rateHz: 0, images: 1 }] }), 'rate of reading 1');
-    expectInputError(() => speedFinderSteps({ ...ok, readings: [{ rateHz: 30, images: 1.5 }] }), 'images in reading 1');
+    expectInputError(
+      () => speedFinderSteps({ ...ok, readings: [{ rateHz: 0, images: 1 }] }),
+      'rate of reading 1',
+    );
+    expectInputError(
+      () => speedFinderSteps({ ...ok, readings: [{ rateHz: 30, images: 1.5 }] }),
+      'images in reading 1',
+    );
     expectInputError(() => speedFinderSteps({ ...ok, readings: [bad(null)] }), 'rate of reading 1');
   });
 

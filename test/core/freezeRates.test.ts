@@ -1,0 +1,291 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { freezeRates, noStillRates, stillRates, type StillSpan } from '../../src/core/freezeRates';
+import { apparentMotion } from '../../src/core/apparentMotion';
+import { driveChain } from '../../src/core/driveChain';
+import { defaultLookOptions } from '../../src/core/lookOptions';
+import type { Part, Sampler } from '../../src/core/types';
+import { bad, expectInputError } from './expectInputError';
+
+const SEED = 1949; // fixed so that any failure reproduces
+const stillHz = defaultLookOptions.stillHz; // 0.25 rpm, the still threshold of lookOptions
+const wheel = { speedHz: 2, symmetry: 12 }; // Wikipedia, "Stroboscopic effect": 12 spokes at 2 rev/s
+
+const inside = (spans: Array<{ fromHz: number; toHz: number }>, s: number) =>
+  spans.some((x) => x.fromHz < s && s < x.toHz);
+/** Rates this close to a span edge are left out of the brute-force checks (round-off decides them). */
+const nearEdge = (spans: Array<{ fromHz: number; toHz: number }>, s: number) =>
+  spans.some((x) => Math.abs(x.fromHz - s) < 1e-9 * s || Math.abs(x.toHz - s) < 1e-9 * s);
+
+describe('stillRates: where parts can look still', () => {
+  it('puts the 12-spoke wheel at 2 rev/s still around 24 frames/s, widened by the still threshold', () => {
+    // Wikipedia, "Stroboscopic effect". Width: D = n·stillHz = 12·0.25 rpm = 0.05 Hz either side.
+    const spans = stillRates([wheel], { minHz: 20, maxHz: 30 }, { sampler: 'frames' });
+    expect(spans).toHaveLength(1);
+    expect(spans[0]).toMatchObject({ part: 0, images: 1, p: 1, dense: false });
+    expect(spans[0].fromHz).toBeCloseTo(23.95, 12);
+    expect(spans[0].toHz).toBeCloseTo(24.05, 12);
+  });
+
+  it('adds the multi-image locks under a flash, at s = n·|f|·q/p', () => {
+    // physics.md §3, worked by hand: 24·q/p in 20–30 Hz with q ≤ 8 (as in lockRates' own test).
+    const spans = stillRates([wheel], { minHz: 20, maxHz: 30 });
+    expect(spans.map((s) => [s.p, s.images])).toEqual([
+      [6, 5],
+      [7, 6],
+      [8, 7],
+      [9, 8],
+      [1, 1],
+      [7, 8],
+      [6, 7],
+      [5, 6],
+      [4, 5],
+    ]);
+  });
+
+  it('agrees with apparentMotion at every rate for parts of exact speed: still inside a span, not outside', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.2, max: 60, noNaN: true }),
+        fc.integer({ min: 1, max: 12 }),
+        fc.constantFrom<Sampler>('flash', 'frames'),
+        fc.double({ min: 2, max: 200, noNaN: true }),
+        (speedHz, symmetry, sampler, rateHz) => {
+          const part = { speedHz, symmetry };
+          const spans = stillRates([part], { minHz: 2, maxHz: 200 }, { sampler });
+          if (nearEdge(spans, rateHz)) return true;
+          const m = apparentMotion(part, rateHz, { sampler });
+          const holding = spans.filter((x) => x.fromHz < rateHz && rateHz < x.toHz);
+          expect(m.look === 'still').toBe(holding.length > 0);
+          if (holding.length > 0) expect(m.images).toBe(Math.min(...holding.map((x) => x.images)));
+          return true;
+        },
+      ),
+      { seed: SEED, numRuns: 500 },
+    );
+  });
+
+  it('has, at every rate inside a span, a speed within the tolerance that looks still there', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1, max: 60, noNaN: true }),
+        fc.integer({ min: 1, max: 8 }),
+        fc.double({ min: 0.001, max: 0.05, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (speedHz, symmetry, tolerance, where) => {
+          const part = { speedHz, symmetry, tolerance };
+          const spans = stillRates([part], { minHz: 0.5, maxHz: 300 });
+          const span = spans[Math.floor(where * spans.length) % spans.length];
+          const s = (span.fromHz + span.toHz) / 2;
+          const F = symmetry * speedHz;
+          // The lock order there: p·s/q nearest the band (dense spans are single-image locks).
+          const p = span.dense ? Math.max(1, Math.round(F / s)) : span.p;
+          const lockSpeed = (p * s) / (span.images * symmetry);
+          const speed = Math.min(
+            Math.max(lockSpeed, speedHz * (1 - tolerance)),
+            speedHz * (1 + tolerance),
+          );
+          expect(apparentMotion({ speedHz: speed, symmetry }, s).look).toBe('still');
+          return true;
+        },
+      ),
+      { seed: SEED, numRuns: 300 },
+    );
+  });
+
+  it('joins the overlapping single-image spans of a toleranced part below one rate into a dense span', () => {
+    // One mark at 30 rev/s ± 1 %: w = 0.01 + D/F, spans p and p+1 overlap from p ≥ (1 − w)/(2w) = 48.8,
+    // so every rate below 30/49·(1 + w) = 0.618 Hz is still for some speed in the band.
+    const w = 0.01 + stillHz / 30;
+    const spans = stillRates(
+      [{ speedHz: 30, symmetry: 1, tolerance: 0.01 }],
+      { minHz: 0.1, maxHz: 100 },
+      { sampler: 'frames' },
+    );
+    expect(spans[0]).toMatchObject({ fromHz: 0.1, p: 49, dense: true });
+    expect(spans[0].toHz).toBeCloseTo((30 / 49) * (1 + w), 12);
+    expect(spans[0].toHz).toBeCloseTo(0.618, 3);
+    // Brute force: every rate below it has a whole p with p·s inside (F₋ − D, F₊ + D).
+    for (let s = 0.1; s < spans[0].toHz; s += 0.001) {
+      const p = Math.ceil((30 * 0.99 - stillHz) / s);
+      expect(p * s, `${s} Hz`).toBeLessThan(30 * 1.01 + stillHz);
+    }
+  });
+
+  it('shows a part slower than the still threshold as still everywhere, and leaves out one that is not turning', () => {
+    // 0.1 rpm is below the 0.25 rpm threshold: the lock p = 0 (apparentMotion's p for r < 0.5).
+    expect(stillRates([{ speedHz: 0.1 / 60, symmetry: 1 }], { minHz: 1, maxHz: 10 })).toEqual([
+      { fromHz: 1, toHz: 10, part: 0, images: 1, p: 0, dense: true },
+    ]);
+    expect(stillRates([{ speedHz: 0, symmetry: 4 }], { minHz: 1, maxHz: 10 })).toEqual([]);
+  });
+});
+
+describe('freezeRates: freeze one part while no other looks still', () => {
+  it('freezes the 12-spoke wheel near 24 frames/s while a 5-spoke wheel at 3 rev/s does not look still (doc example)', () => {
+    const bands = freezeRates(
+      [wheel, { speedHz: 3, symmetry: 5 }],
+      0,
+      { minHz: 20, maxHz: 30 },
+      { sampler: 'frames' },
+    );
+    expect(bands).toHaveLength(1);
+    expect(bands[0]).toMatchObject({ p: 1, lockRateHz: 24, dense: false });
+    expect(bands[0].fromHz).toBeCloseTo(23.95, 12);
+    expect(bands[0].toHz).toBeCloseTo(24.05, 12);
+  });
+
+  it('cuts out the rates where another part stands still', () => {
+    // Part 2 (one mark at 24.02 rev/s) stands still from 24.02 − D to 24.02 + D, D = 0.25 rpm:
+    // the wheel's band loses its top.
+    const other = { speedHz: 24.02, symmetry: 1 };
+    const [band] = freezeRates([wheel, other], 0, { minHz: 20, maxHz: 30 }, { sampler: 'frames' });
+    expect(band.fromHz).toBeCloseTo(23.95, 12);
+    expect(band.toHz).toBeCloseTo(24.02 - stillHz, 12);
+  });
+
+  it('finds where a belt-driven fan freezes while its motor does not look still', () => {
+    // A motor measured at 1450 rpm ± 0.2 % drives a 6-blade fan through a 100 mm → 250 mm belt:
+    // 580 rpm, pattern 6·580/60 = 58 Hz. Under a strobe with up to 2 images counted the motor's
+    // mark (24.17 Hz) locks at 24.17·q/p, none of them near 58 Hz.
+    const chain = driveChain({
+      root: { kind: 'fixed', speedHz: 1450 / 60, tolerance: 0.002 },
+      parts: [
+        { name: 'motor', symmetry: 1 },
+        {
+          name: 'fan',
+          symmetry: 6,
+          link: { kind: 'belt', driverDiameterM: 0.1, drivenDiameterM: 0.25 },
+        },
+      ],
+    });
+    const bands = freezeRates(chain, 1, { minHz: 30, maxHz: 100 }, { maxImages: 2 });
+    const top = bands[bands.length - 1];
+    expect(top.p).toBe(1);
+    expect(top.lockRateHz).toBeCloseTo(58, 12);
+    expect(top.fromHz).toBeLessThan(58);
+    expect(top.toHz).toBeGreaterThan(58);
+    expect(apparentMotion(chain[1], 58).look).toBe('still');
+    expect(apparentMotion(chain[0], 58, { maxImages: 2 }).look).not.toBe('still');
+  });
+
+  it('gives exactly the target’s single-image spans minus every other part’s still spans', () => {
+    fc.assert(
+      fc.property(
+        fc.array(
+          fc.record({
+            speedHz: fc.double({ min: 1, max: 40, noNaN: true }),
+            symmetry: fc.integer({ min: 1, max: 8 }),
+            tolerance: fc.double({ min: 0, max: 0.02, noNaN: true }),
+          }),
+          { minLength: 2, maxLength: 4 },
+        ),
+        fc.constantFrom<Sampler>('flash', 'frames'),
+        fc.array(fc.double({ min: 5, max: 120, noNaN: true }), { minLength: 20, maxLength: 20 }),
+        (parts: Part[], sampler, rates) => {
+          const range = { minHz: 5, maxHz: 120 };
+          const bands = freezeRates(parts, 0, range, { sampler });
+          const own = stillRates([parts[0]], range, { sampler: 'frames' }); // single images only
+          const others = stillRates(parts.slice(1), range, { sampler });
+          for (let i = 1; i < bands.length; i++)
+            expect(bands[i].fromHz).toBeGreaterThanOrEqual(bands[i - 1].toHz);
+          for (const s of rates) {
+            if (nearEdge([...bands, ...own, ...others], s)) continue;
+            expect(inside(bands, s), `${s} Hz`).toBe(inside(own, s) && !inside(others, s));
+          }
+          return true;
+        },
+      ),
+      { seed: SEED, numRuns: 100 },
+    );
+  });
+
+  it('reports lock order 0 for a target slower than the still threshold', () => {
+    // The other part (one mark at 10 rev/s) freezes on camera only at 10/p ≤ 10 frames/s, below the range.
+    const bands = freezeRates(
+      [
+        { speedHz: 0.001, symmetry: 1 },
+        { speedHz: 10, symmetry: 1 },
+      ],
+      0,
+      { minHz: 11, maxHz: 20 },
+      { sampler: 'frames' },
+    );
+    expect(bands).toEqual([{ fromHz: 11, toHz: 20, p: 0, lockRateHz: 0, dense: true }]);
+  });
+});
+
+describe('noStillRates: rates at which no part looks still', () => {
+  it('leaves out only the rates within 0.25 rpm of the lock (doc example)', () => {
+    const bands = noStillRates(
+      [{ speedHz: 20, symmetry: 1 }],
+      { minHz: 15, maxHz: 25 },
+      { sampler: 'frames' },
+    );
+    expect(bands).toHaveLength(2);
+    expect(bands[0].fromHz).toBe(15);
+    expect(bands[0].toHz).toBeCloseTo(20 - stillHz, 12);
+    expect(bands[1].fromHz).toBeCloseTo(20 + stillHz, 12);
+    expect(bands[1].toHz).toBe(25);
+  });
+
+  it('is the exact complement of the still spans', () => {
+    fc.assert(
+      fc.property(
+        fc.array(
+          fc.record({
+            speedHz: fc.double({ min: 0.5, max: 40, noNaN: true }),
+            symmetry: fc.integer({ min: 1, max: 8 }),
+            tolerance: fc.double({ min: 0, max: 0.02, noNaN: true }),
+          }),
+          { minLength: 1, maxLength: 3 },
+        ),
+        fc.array(fc.double({ min: 5, max: 150, noNaN: true }), { minLength: 20, maxLength: 20 }),
+        (parts: Part[], rates) => {
+          const range = { minHz: 5, maxHz: 150 };
+          const free = noStillRates(parts, range);
+          const spans: StillSpan[] = stillRates(parts, range);
+          for (const s of rates) {
+            if (nearEdge([...free, ...spans], s)) continue;
+            expect(inside(free, s), `${s} Hz`).toBe(!inside(spans, s));
+          }
+          return true;
+        },
+      ),
+      { seed: SEED, numRuns: 100 },
+    );
+  });
+
+  it('returns the whole range when nothing can look still in it', () => {
+    // One mark at 10 rev/s on camera between 15 and 19 frames/s: its single-image locks are 10/p ≤ 10.
+    expect(
+      noStillRates([{ speedHz: 10, symmetry: 1 }], { minHz: 15, maxHz: 19 }, { sampler: 'frames' }),
+    ).toEqual([{ fromHz: 15, toHz: 19 }]);
+  });
+});
+
+describe('stillRates, freezeRates, noStillRates: bad input', () => {
+  const range = { minHz: 1, maxHz: 10 };
+
+  it('rejects an empty part list and a bad part', () => {
+    expectInputError(() => stillRates([], range), 'parts', 'part');
+    expectInputError(() => noStillRates(bad('fan'), range), 'parts', 'part');
+    expectInputError(() => freezeRates([{ speedHz: NaN, symmetry: 1 }], 0, range), 'speed');
+    expectInputError(
+      () => stillRates([{ speedHz: 1, symmetry: 0 }], range),
+      'features (blades, spokes)',
+    );
+  });
+
+  it('rejects a target that is not the index of a part', () => {
+    expectInputError(() => freezeRates([wheel], 1, range), 'part to freeze');
+    expectInputError(() => freezeRates([wheel], -1, range), 'part to freeze');
+    expectInputError(() => freezeRates([wheel], 0.5, range), 'part to freeze');
+  });
+
+  it('rejects an inverted range, an unknown sampler and bad look options', () => {
+    expectInputError(() => stillRates([wheel], { minHz: 10, maxHz: 1 }), 'rate range', 'empty');
+    expectInputError(() => freezeRates([wheel], 0, range, { sampler: bad('video') }), 'sampler');
+    expectInputError(() => noStillRates([wheel], range, { maxImages: 0 }), 'largest image count');
+  });
+});
