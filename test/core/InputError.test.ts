@@ -56,10 +56,13 @@ describe('requirePositive', () => {
     expect(requirePositive(61, 'rate')).toBe(61);
   });
 
-  it.each([[0], [-0], [-1], [-Number.MIN_VALUE]])('rejects %s as not greater than zero', (value) => {
-    const error = expectInputError(() => requirePositive(value, 'rate'), 'rate');
-    expect(error.message).toContain('greater than zero');
-  });
+  it.each([[0], [-0], [-1], [-Number.MIN_VALUE]])(
+    'rejects %s as not greater than zero',
+    (value) => {
+      const error = expectInputError(() => requirePositive(value, 'rate'), 'rate');
+      expect(error.message).toContain('greater than zero');
+    },
+  );
 
   it.each(notNumbers.map((v) => [v]))('rejects %s naming the field', (value) => {
     expectInputError(() => requirePositive(value, 'rate'), 'rate');
@@ -74,7 +77,8 @@ describe('requireNonNegative', () => {
 
   it('rejects negative numbers and non-numbers', () => {
     expectInputError(() => requireNonNegative(-0.001, 'exposure'), 'exposure', 'negative');
-    for (const value of notNumbers) expectInputError(() => requireNonNegative(value, 'exposure'), 'exposure');
+    for (const value of notNumbers)
+      expectInputError(() => requireNonNegative(value, 'exposure'), 'exposure');
   });
 });
 
@@ -97,7 +101,8 @@ describe('requireWhole', () => {
   });
 
   it('rejects non-numbers', () => {
-    for (const value of notNumbers) expectInputError(() => requireWhole(value, 'blades', 1), 'blades');
+    for (const value of notNumbers)
+      expectInputError(() => requireWhole(value, 'blades', 1), 'blades');
   });
 });
 
@@ -111,7 +116,8 @@ describe('requireBetween', () => {
   it('rejects numbers outside it and non-numbers', () => {
     expectInputError(() => requireBetween(1.01, 'slip', 0, 1), 'slip', 'between 0 and 1');
     expectInputError(() => requireBetween(-0.01, 'slip', 0, 1), 'slip');
-    for (const value of notNumbers) expectInputError(() => requireBetween(value, 'slip', 0, 1), 'slip');
+    for (const value of notNumbers)
+      expectInputError(() => requireBetween(value, 'slip', 0, 1), 'slip');
   });
 });
 

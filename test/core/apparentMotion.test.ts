@@ -2,7 +2,14 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { apparentMotion } from '../../src/core/apparentMotion';
 import { defaultLookOptions } from '../../src/core/lookOptions';
-import { anyFinite, anyPositive, bad, expectInputError, finiteOrInputError, notNumbers } from './expectInputError';
+import {
+  anyFinite,
+  anyPositive,
+  bad,
+  expectInputError,
+  finiteOrInputError,
+  notNumbers,
+} from './expectInputError';
 
 const oneMark = (speedHz: number) => ({ speedHz, symmetry: 1 });
 
@@ -58,9 +65,15 @@ describe('apparentMotion: published cases', () => {
   it('shows nothing faster than 500 rev/s at 1000 samples per second', () => {
     // Common practice: 1000 samples/s show nothing above 500 Hz (Shannon 1949: half the rate).
     expect(apparentMotion(oneMark(499), 1000, { sampler: 'frames' }).faithful).toBe(true);
-    expect(apparentMotion(oneMark(499), 1000, { sampler: 'frames' }).apparentHz).toBeCloseTo(499, 9);
+    expect(apparentMotion(oneMark(499), 1000, { sampler: 'frames' }).apparentHz).toBeCloseTo(
+      499,
+      9,
+    );
     expect(apparentMotion(oneMark(500), 1000, { sampler: 'frames' }).faithful).toBe(false);
-    expect(apparentMotion(oneMark(501), 1000, { sampler: 'frames' }).apparentHz).toBeCloseTo(-499, 9);
+    expect(apparentMotion(oneMark(501), 1000, { sampler: 'frames' }).apparentHz).toBeCloseTo(
+      -499,
+      9,
+    );
     fc.assert(
       fc.property(fc.double({ min: 0, max: 1e5, noNaN: true }), (f) => {
         return Math.abs(apparentMotion(oneMark(f), 1000, { sampler: 'frames' }).apparentHz) <= 500;
@@ -176,7 +189,9 @@ describe('apparentMotion: precedence of physics.md §2', () => {
   });
 
   it('follows a custom unclear step', () => {
-    expect(apparentMotion(oneMark(28.8), 20, { sampler: 'frames', unclearStep: 0.4 }).look).toBe('unclear');
+    expect(apparentMotion(oneMark(28.8), 20, { sampler: 'frames', unclearStep: 0.4 }).look).toBe(
+      'unclear',
+    );
   });
 
   it('reports a creeping double image near half a turn per flash', () => {
@@ -211,15 +226,20 @@ describe('apparentMotion: relations that hold for every input', () => {
 
   it('keeps the step in [−0.5, 0.5] and ties ratio, step and apparent speed together', () => {
     fc.assert(
-      fc.property(part, rate, fc.constantFrom('flash' as const, 'frames' as const), (p, s, sampler) => {
-        const m = apparentMotion(p, s, { sampler });
-        expect(Math.abs(m.step)).toBeLessThanOrEqual(0.5);
-        expect(m.ratio).toBeCloseTo((p.symmetry * p.speedHz) / s, 9);
-        expect(m.apparentHz * p.symmetry).toBeCloseTo(m.step * s, 6);
-        expect(['true', 'forward', 'backward', 'still', 'unclear']).toContain(m.look);
-        expect(m.images).toBeGreaterThanOrEqual(1);
-        if (sampler === 'frames') expect(m.images).toBe(1);
-      }),
+      fc.property(
+        part,
+        rate,
+        fc.constantFrom('flash' as const, 'frames' as const),
+        (p, s, sampler) => {
+          const m = apparentMotion(p, s, { sampler });
+          expect(Math.abs(m.step)).toBeLessThanOrEqual(0.5);
+          expect(m.ratio).toBeCloseTo((p.symmetry * p.speedHz) / s, 9);
+          expect(m.apparentHz * p.symmetry).toBeCloseTo(m.step * s, 6);
+          expect(['true', 'forward', 'backward', 'still', 'unclear']).toContain(m.look);
+          expect(m.images).toBeGreaterThanOrEqual(1);
+          if (sampler === 'frames') expect(m.images).toBe(1);
+        },
+      ),
     );
   });
 
@@ -238,16 +258,25 @@ describe('apparentMotion: relations that hold for every input', () => {
       fc.property(part, rate, fc.integer({ min: -20, max: 20 }), (p, s, m) => {
         const base = apparentMotion(p, s, { sampler: 'frames' });
         fc.pre(Math.abs(base.step) < 0.49);
-        const alias = apparentMotion({ ...p, speedHz: p.speedHz + (m * s) / p.symmetry }, s, { sampler: 'frames' });
-        return Math.abs(alias.apparentHz - base.apparentHz) <= 1e-9 * (s + Math.abs(p.speedHz) * p.symmetry);
+        const alias = apparentMotion({ ...p, speedHz: p.speedHz + (m * s) / p.symmetry }, s, {
+          sampler: 'frames',
+        });
+        return (
+          Math.abs(alias.apparentHz - base.apparentHz) <=
+          1e-9 * (s + Math.abs(p.speedHz) * p.symmetry)
+        );
       }),
     );
   });
 
   it('never returns NaN or Infinity, whatever finite numbers it is given', () => {
     fc.assert(
-      fc.property(anyFinite(), fc.integer({ min: 1, max: 100_000 }), anyPositive(), (speedHz, symmetry, s) =>
-        finiteOrInputError(() => apparentMotion({ speedHz, symmetry }, s)),
+      fc.property(
+        anyFinite(),
+        fc.integer({ min: 1, max: 100_000 }),
+        anyPositive(),
+        (speedHz, symmetry, s) =>
+          finiteOrInputError(() => apparentMotion({ speedHz, symmetry }, s)),
       ),
       { numRuns: 500 },
     );
@@ -260,7 +289,10 @@ describe('apparentMotion: bad input', () => {
   });
 
   it.each([[0], [1.5], [-2], [NaN], ['3']])('rejects a feature count of %s', (symmetry) => {
-    expectInputError(() => apparentMotion(bad({ speedHz: 60, symmetry }), 61), 'features (blades, spokes)');
+    expectInputError(
+      () => apparentMotion(bad({ speedHz: 60, symmetry }), 61),
+      'features (blades, spokes)',
+    );
   });
 
   it.each([[0], [-61], ...notNumbers.map((v) => [v])])('rejects a rate of %s', (rateHz) => {
@@ -273,8 +305,14 @@ describe('apparentMotion: bad input', () => {
 
   it('rejects an unknown sampler and bad look options', () => {
     expectInputError(() => apparentMotion(oneMark(60), 61, bad({ sampler: 'video' })), 'sampler');
-    expectInputError(() => apparentMotion(oneMark(60), 61, { maxImages: 0 }), 'largest image count');
-    expectInputError(() => apparentMotion(oneMark(60), 61, { maxImages: 65 }), 'largest image count');
+    expectInputError(
+      () => apparentMotion(oneMark(60), 61, { maxImages: 0 }),
+      'largest image count',
+    );
+    expectInputError(
+      () => apparentMotion(oneMark(60), 61, { maxImages: 65 }),
+      'largest image count',
+    );
     expectInputError(() => apparentMotion(oneMark(60), 61, { stillHz: -1 }), 'still threshold');
     expectInputError(() => apparentMotion(oneMark(60), 61, { unclearStep: 0.6 }), 'unclear step');
     expectInputError(() => apparentMotion(oneMark(60), 61, bad(null)), 'options');

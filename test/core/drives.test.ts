@@ -9,7 +9,14 @@ import {
   tyreDiameterM,
   wheelSpeedHz,
 } from '../../src/core/drives';
-import { anyFinite, anyPositive, bad, expectInputError, finiteOrInputError, notNumbers } from './expectInputError';
+import {
+  anyFinite,
+  anyPositive,
+  bad,
+  expectInputError,
+  finiteOrInputError,
+  notNumbers,
+} from './expectInputError';
 
 describe('synchronousSpeedHz', () => {
   // Synchronous speed table, IEC 60034-1 / NEMA MG 1: 120·fm/P rpm.
@@ -40,7 +47,8 @@ describe('synchronousSpeedHz', () => {
   });
 
   it('rejects poles that are not a whole number of at least 2, and mains not above zero', () => {
-    for (const poles of [0, 1, 1.5, -2]) expectInputError(() => synchronousSpeedHz(50, poles), 'poles');
+    for (const poles of [0, 1, 1.5, -2])
+      expectInputError(() => synchronousSpeedHz(50, poles), 'poles');
     expectInputError(() => synchronousSpeedHz(0, 4), 'mains frequency');
     expectInputError(() => synchronousSpeedHz(-50, 4), 'mains frequency');
     for (const v of notNumbers) {
@@ -62,13 +70,16 @@ describe('motorSpeedHz and slipFromSpeed', () => {
     [50, 4, 1450, 1500],
     [50, 6, 960, 1000],
     [50, 8, 720, 750],
-  ])('finds the slip of a %i Hz %i-pole motor running at %i rpm (synchronous %i rpm)', (mains, poles, rpm, syncRpm) => {
-    const slip = slipFromSpeed(rpm / 60, mains, poles);
-    expect(slip).toBeCloseTo((syncRpm - rpm) / syncRpm, 12);
-    expect(slip).toBeGreaterThan(0.015); // full-load slip of these motors: 1.7 % to 4 %
-    expect(slip).toBeLessThan(0.041);
-    expect(motorSpeedHz(mains, poles, slip) * 60).toBeCloseTo(rpm, 9);
-  });
+  ])(
+    'finds the slip of a %i Hz %i-pole motor running at %i rpm (synchronous %i rpm)',
+    (mains, poles, rpm, syncRpm) => {
+      const slip = slipFromSpeed(rpm / 60, mains, poles);
+      expect(slip).toBeCloseTo((syncRpm - rpm) / syncRpm, 12);
+      expect(slip).toBeGreaterThan(0.015); // full-load slip of these motors: 1.7 % to 4 %
+      expect(slip).toBeLessThan(0.041);
+      expect(motorSpeedHz(mains, poles, slip) * 60).toBeCloseTo(rpm, 9);
+    },
+  );
 
   it('states the literal results of its doc examples', () => {
     expect(motorSpeedHz(50, 4, 1 / 30)).toBe(24.166666666666668); // 1450 rpm
@@ -134,16 +145,26 @@ describe('tyreDiameterM', () => {
     expect(tyreDiameterM(size)).toBeCloseTo(metres, 10);
   });
 
-  it.each([[''], ['205/55'], ['R16'], ['205/55R'], ['205/55R165'], ['205/55R7'], ['205/5R16'], ['big wheel'], ['205-55-16']])(
-    'rejects %j as not a tyre size',
+  it.each([
+    [''],
+    ['205/55'],
+    ['R16'],
+    ['205/55R'],
+    ['205/55R165'],
+    ['205/55R7'],
+    ['205/5R16'],
+    ['big wheel'],
+    ['205-55-16'],
+  ])('rejects %j as not a tyre size', (size) => {
+    expectInputError(() => tyreDiameterM(size), 'tyre size');
+  });
+
+  it.each([['20/55R16'], ['205/55R40'], ['999/55R16']])(
+    'rejects %s as outside real tyre sizes',
     (size) => {
-      expectInputError(() => tyreDiameterM(size), 'tyre size');
+      expectInputError(() => tyreDiameterM(size), 'tyre size', 'outside real tyre sizes');
     },
   );
-
-  it.each([['20/55R16'], ['205/55R40'], ['999/55R16']])('rejects %s as outside real tyre sizes', (size) => {
-    expectInputError(() => tyreDiameterM(size), 'tyre size', 'outside real tyre sizes');
-  });
 
   it.each([[205], [null], [undefined], [NaN]])('rejects %s, which is not text', (size) => {
     expectInputError(() => tyreDiameterM(bad(size)), 'tyre size');

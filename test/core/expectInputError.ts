@@ -8,7 +8,18 @@ import { InputError } from '../../src/core/InputError';
 export const bad = (value: unknown): never => value as never;
 
 /** Values that are not usable numbers: NaN, ±Infinity, text, nothing, objects. */
-export const notNumbers: readonly unknown[] = [NaN, Infinity, -Infinity, '3', 'abc', null, undefined, {}, [], true];
+export const notNumbers: readonly unknown[] = [
+  NaN,
+  Infinity,
+  -Infinity,
+  '3',
+  'abc',
+  null,
+  undefined,
+  {},
+  [],
+  true,
+];
 
 /** Runs `run`, which must throw an InputError, and returns that error. */
 export function inputErrorOf(run: () => unknown): InputError {
@@ -27,7 +38,11 @@ export function inputErrorOf(run: () => unknown): InputError {
  * `run` throws an InputError (an Error) for field `field`, and the message names it: it
  * contains `word` (by default the field itself), ignoring case.
  */
-export function expectInputError(run: () => unknown, field: string, word: string = field): InputError {
+export function expectInputError(
+  run: () => unknown,
+  field: string,
+  word: string = field,
+): InputError {
   const error = inputErrorOf(run);
   expect(error).toBeInstanceOf(Error);
   expect(error.name).toBe('InputError');
@@ -37,7 +52,8 @@ export function expectInputError(run: () => unknown, field: string, word: string
 }
 
 /** Finite doubles over the whole range, both signs, subnormals and −0 included. */
-export const anyFinite = (): fc.Arbitrary<number> => fc.double({ noNaN: true, noDefaultInfinity: true });
+export const anyFinite = (): fc.Arbitrary<number> =>
+  fc.double({ noNaN: true, noDefaultInfinity: true });
 
 /** Positive finite doubles over the whole range. */
 export const anyPositive = (): fc.Arbitrary<number> =>
@@ -61,7 +77,8 @@ export function finiteOrInputError(compute: () => unknown): boolean {
 function allNumbersFinite(value: unknown): boolean {
   if (typeof value === 'number') return Number.isFinite(value);
   if (Array.isArray(value)) return value.every(allNumbersFinite);
-  if (typeof value === 'object' && value !== null) return Object.values(value).every(allNumbersFinite);
+  if (typeof value === 'object' && value !== null)
+    return Object.values(value).every(allNumbersFinite);
   return true;
 }
 

@@ -8,7 +8,13 @@ import {
   rollingSkewDegrees,
   shutterAngleFromExposure,
 } from '../../src/core/exposure';
-import { anyFinite, bad, expectInputError, finiteOrInputError, notNumbers } from './expectInputError';
+import {
+  anyFinite,
+  bad,
+  expectInputError,
+  finiteOrInputError,
+  notNumbers,
+} from './expectInputError';
 
 describe('exposureFromShutterAngle', () => {
   it('gives 1/48 s for 180° at 24 frames/s (the cinema rule)', () => {
@@ -49,14 +55,24 @@ describe('shutterAngleFromExposure', () => {
 
   it('undoes exposureFromShutterAngle', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.1, max: 360, noNaN: true }), fc.double({ min: 1, max: 1000, noNaN: true }), (a, s) => {
-        return Math.abs(shutterAngleFromExposure(exposureFromShutterAngle(a, s), s) - a) <= 1e-9 * a;
-      }),
+      fc.property(
+        fc.double({ min: 0.1, max: 360, noNaN: true }),
+        fc.double({ min: 1, max: 1000, noNaN: true }),
+        (a, s) => {
+          return (
+            Math.abs(shutterAngleFromExposure(exposureFromShutterAngle(a, s), s) - a) <= 1e-9 * a
+          );
+        },
+      ),
     );
   });
 
   it('refuses an exposure longer than one frame', () => {
-    expectInputError(() => shutterAngleFromExposure(1 / 20, 24), 'exposure', 'longer than one frame');
+    expectInputError(
+      () => shutterAngleFromExposure(1 / 20, 24),
+      'exposure',
+      'longer than one frame',
+    );
   });
 
   it('rejects exposures and rates not above zero', () => {
@@ -91,7 +107,8 @@ describe('blurDegrees and blurPitches', () => {
   it('rejects bad speeds, exposures and feature counts', () => {
     expectInputError(() => blurDegrees(30, -0.001), 'exposure', 'negative');
     expectInputError(() => blurPitches(30, 6, -1), 'exposure');
-    for (const n of [0, 1.5, -2]) expectInputError(() => blurPitches(30, n, 0.01), 'features (blades, spokes)');
+    for (const n of [0, 1.5, -2])
+      expectInputError(() => blurPitches(30, n, 0.01), 'features (blades, spokes)');
     for (const v of notNumbers) {
       expectInputError(() => blurDegrees(bad(v), 0.001), 'speed');
       expectInputError(() => blurDegrees(30, bad(v)), 'exposure');
@@ -140,16 +157,22 @@ describe('rollingSkewDegrees', () => {
 describe('exposure: never NaN or Infinity', () => {
   it('returns a finite number or throws InputError for any finite input', () => {
     fc.assert(
-      fc.property(anyFinite(), anyFinite(), anyFinite(), fc.integer({ min: 1, max: 100_000 }), (a, b, c, n) => {
-        return (
-          finiteOrInputError(() => blurDegrees(a, b)) &&
-          finiteOrInputError(() => blurPitches(a, n, b)) &&
-          finiteOrInputError(() => exposureFromShutterAngle(a, b)) &&
-          finiteOrInputError(() => shutterAngleFromExposure(a, b)) &&
-          finiteOrInputError(() => flashArcBlurM(a, b, c)) &&
-          finiteOrInputError(() => rollingSkewDegrees(a, b))
-        );
-      }),
+      fc.property(
+        anyFinite(),
+        anyFinite(),
+        anyFinite(),
+        fc.integer({ min: 1, max: 100_000 }),
+        (a, b, c, n) => {
+          return (
+            finiteOrInputError(() => blurDegrees(a, b)) &&
+            finiteOrInputError(() => blurPitches(a, n, b)) &&
+            finiteOrInputError(() => exposureFromShutterAngle(a, b)) &&
+            finiteOrInputError(() => shutterAngleFromExposure(a, b)) &&
+            finiteOrInputError(() => flashArcBlurM(a, b, c)) &&
+            finiteOrInputError(() => rollingSkewDegrees(a, b))
+          );
+        },
+      ),
       { numRuns: 500 },
     );
   });

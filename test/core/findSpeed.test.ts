@@ -2,7 +2,13 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { findSpeed } from '../../src/core/findSpeed';
 import { apparentMotion } from '../../src/core/apparentMotion';
-import { anyPositive, bad, expectInputError, finiteOrInputError, notNumbers } from './expectInputError';
+import {
+  anyPositive,
+  bad,
+  expectInputError,
+  finiteOrInputError,
+  notNumbers,
+} from './expectInputError';
 
 const single = (rateHz: number) => ({ rateHz, images: 1 });
 
@@ -20,7 +26,9 @@ describe('findSpeed: two adjacent single images', () => {
 
   it('keeps the faster whole multiples as less likely candidates, slowest first', () => {
     // Every common multiple of 30 and 20 also fits; by default candidates go up to 8 × 30 = 240.
-    expect(findSpeed([single(30), single(20)], 1).candidates.map((c) => c.speedHz)).toEqual([60, 120, 180, 240]);
+    expect(findSpeed([single(30), single(20)], 1).candidates.map((c) => c.speedHz)).toEqual([
+      60, 120, 180, 240,
+    ]);
   });
 
   it('finds the motor of a fictional pump skid from readings of 1450 and 725 flashes per minute', () => {
@@ -41,7 +49,10 @@ describe('findSpeed: two adjacent single images', () => {
 
   it('accepts multi-image readings: two images at 120 flashes/s rule out the even multiples of 60', () => {
     // n·f = (p/2)·120 with p odd; candidates run up to 8 × the highest reading, 960.
-    const speeds = findSpeed([single(30), single(20), { rateHz: 120, images: 2 }], 1).candidates.map((c) => c.speedHz);
+    const speeds = findSpeed(
+      [single(30), single(20), { rateHz: 120, images: 2 }],
+      1,
+    ).candidates.map((c) => c.speedHz);
     expect(speeds).toEqual([60, 180, 300, 420, 540, 660, 780, 900]);
   });
 });
@@ -90,7 +101,9 @@ describe('findSpeed: ranking and the next rate', () => {
   });
 
   it('keeps the next rate inside the strobe range when one is given', () => {
-    const found = findSpeed([single(30), single(20)], 1, undefined, { rateRange: { minHz: 5, maxHz: 100 } });
+    const found = findSpeed([single(30), single(20)], 1, undefined, {
+      rateRange: { minHz: 5, maxHz: 100 },
+    });
     expect(found.nextRateHz).toBeGreaterThanOrEqual(5);
     expect(found.nextRateHz).toBeLessThanOrEqual(100);
   });
@@ -120,7 +133,9 @@ describe('findSpeed: relations that hold for every input', () => {
           // Readings a technician gets coming down from high rates: F/k, F/(k + 1), and a double image at 2F.
           const readings = [single(F / k), single(F / (k + 1)), { rateHz: 2 * F, images: 2 }];
           const found = findSpeed(readings, symmetry);
-          expect(found.candidates.some((c) => Math.abs(c.speedHz - speedHz) <= 1e-9 * speedHz)).toBe(true);
+          expect(
+            found.candidates.some((c) => Math.abs(c.speedHz - speedHz) <= 1e-9 * speedHz),
+          ).toBe(true);
           for (const c of found.candidates) {
             for (const r of readings) {
               const m = apparentMotion({ speedHz: c.speedHz, symmetry }, r.rateHz);
@@ -137,8 +152,10 @@ describe('findSpeed: relations that hold for every input', () => {
   it('never returns NaN or Infinity, whatever positive rates it is given', () => {
     const reading = fc.record({ rateHz: anyPositive(), images: fc.integer({ min: 1, max: 8 }) });
     fc.assert(
-      fc.property(fc.array(reading, { minLength: 1, maxLength: 4 }), fc.integer({ min: 1, max: 100 }), (readings, n) =>
-        finiteOrInputError(() => findSpeed(readings, n)),
+      fc.property(
+        fc.array(reading, { minLength: 1, maxLength: 4 }),
+        fc.integer({ min: 1, max: 100 }),
+        (readings, n) => finiteOrInputError(() => findSpeed(readings, n)),
       ),
       { numRuns: 300 },
     );
@@ -152,9 +169,15 @@ describe('findSpeed: bad input', () => {
     expectInputError(() => findSpeed(bad(single(30)), 1), 'readings', 'reading');
   });
 
-  it.each([[0], [-30], ...notNumbers.map((v) => [v])])('rejects a reading at a rate of %s', (rateHz) => {
-    expectInputError(() => findSpeed([single(30), bad({ rateHz, images: 1 })], 1), 'rate of reading 2');
-  });
+  it.each([[0], [-30], ...notNumbers.map((v) => [v])])(
+    'rejects a reading at a rate of %s',
+    (rateHz) => {
+      expectInputError(
+        () => findSpeed([single(30), bad({ rateHz, images: 1 })], 1),
+        'rate of reading 2',
+      );
+    },
+  );
 
   it.each([[0], [1.5], [-2], [65], [NaN], ['1']])('rejects a reading of %s images', (images) => {
     expectInputError(() => findSpeed([bad({ rateHz: 30, images })], 1), 'images in reading 1');
@@ -164,19 +187,41 @@ describe('findSpeed: bad input', () => {
     expectInputError(() => findSpeed([bad(null)], 1), 'rate of reading 1');
   });
 
-  it.each([[0], [1.5], [-2], [NaN], [Infinity], ['12'], [null]])('rejects a feature count of %s', (symmetry) => {
-    expectInputError(() => findSpeed([single(30)], bad(symmetry)), 'features (blades, spokes)');
-  });
+  it.each([[0], [1.5], [-2], [NaN], [Infinity], ['12'], [null]])(
+    'rejects a feature count of %s',
+    (symmetry) => {
+      expectInputError(() => findSpeed([single(30)], bad(symmetry)), 'features (blades, spokes)');
+    },
+  );
 
   it('rejects an empty or inverted expected speed range', () => {
-    expectInputError(() => findSpeed([single(30)], 1, { minHz: 50, maxHz: 50 }), 'expected speed range', 'empty');
-    expectInputError(() => findSpeed([single(30)], 1, { minHz: 70, maxHz: 50 }), 'expected speed range');
-    expectInputError(() => findSpeed([single(30)], 1, { minHz: 0, maxHz: 50 }), 'lowest expected speed');
+    expectInputError(
+      () => findSpeed([single(30)], 1, { minHz: 50, maxHz: 50 }),
+      'expected speed range',
+      'empty',
+    );
+    expectInputError(
+      () => findSpeed([single(30)], 1, { minHz: 70, maxHz: 50 }),
+      'expected speed range',
+    );
+    expectInputError(
+      () => findSpeed([single(30)], 1, { minHz: 0, maxHz: 50 }),
+      'lowest expected speed',
+    );
   });
 
   it('rejects bad options', () => {
-    expectInputError(() => findSpeed([single(30)], 1, undefined, { matchTolerance: 0.2 }), 'match tolerance');
-    expectInputError(() => findSpeed([single(30)], 1, undefined, { maxMultiple: 0 }), 'largest multiple');
-    expectInputError(() => findSpeed([single(30)], 1, undefined, { rateRange: { minHz: 9, maxHz: 3 } }), 'strobe range');
+    expectInputError(
+      () => findSpeed([single(30)], 1, undefined, { matchTolerance: 0.2 }),
+      'match tolerance',
+    );
+    expectInputError(
+      () => findSpeed([single(30)], 1, undefined, { maxMultiple: 0 }),
+      'largest multiple',
+    );
+    expectInputError(
+      () => findSpeed([single(30)], 1, undefined, { rateRange: { minHz: 9, maxHz: 3 } }),
+      'strobe range',
+    );
   });
 });

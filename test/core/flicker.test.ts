@@ -1,7 +1,19 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { flickerLimits, flickerRisk, percentFlicker, svm, svmThreshold } from '../../src/core/flicker';
-import { anyFinite, bad, expectInputError, finiteOrInputError, notNumbers } from './expectInputError';
+import {
+  flickerLimits,
+  flickerRisk,
+  percentFlicker,
+  svm,
+  svmThreshold,
+} from '../../src/core/flicker';
+import {
+  anyFinite,
+  bad,
+  expectInputError,
+  finiteOrInputError,
+  notNumbers,
+} from './expectInputError';
 
 // IEEE Std 1789-2015 recommended-practice lines (physics.md §6): low risk 0.025·f below 90 Hz,
 // 0.08·f from 90 to 1250 Hz, no limit above; no observable effect 0.01·f below 90 Hz, 0.0333·f
@@ -25,8 +37,14 @@ describe('flickerLimits: the IEEE Std 1789-2015 lines', () => {
 
   it('gives the mains flicker rates 100 Hz and 120 Hz their 0.08·f and 0.0333·f lines', () => {
     // physics.md §6: mains at 50 or 60 Hz usually flickers at 100 or 120 Hz.
-    expect(flickerLimits(100)).toEqual({ lowRiskPercent: expect.closeTo(8, 12), noEffectPercent: expect.closeTo(3.33, 12) });
-    expect(flickerLimits(120)).toEqual({ lowRiskPercent: expect.closeTo(9.6, 12), noEffectPercent: expect.closeTo(3.996, 12) });
+    expect(flickerLimits(100)).toEqual({
+      lowRiskPercent: expect.closeTo(8, 12),
+      noEffectPercent: expect.closeTo(3.33, 12),
+    });
+    expect(flickerLimits(120)).toEqual({
+      lowRiskPercent: expect.closeTo(9.6, 12),
+      noEffectPercent: expect.closeTo(3.996, 12),
+    });
   });
 
   it('keeps the low-risk line at 1250 Hz (0.08 × 1250 = 100 %) and lifts it above', () => {
@@ -51,7 +69,7 @@ describe('flickerLimits: the IEEE Std 1789-2015 lines', () => {
 });
 
 describe('flickerRisk', () => {
-  it("calls 5 % at 120 Hz low risk: above the 4 % no-effect line, below the 9.6 % low-risk line (doc example)", () => {
+  it('calls 5 % at 120 Hz low risk: above the 4 % no-effect line, below the 9.6 % low-risk line (doc example)', () => {
     expect(flickerRisk(120, 5)).toBe('low-risk');
   });
 
@@ -141,11 +159,15 @@ describe('svm: stroboscopic visibility measure', () => {
     const atThreshold = (f: number) => ({ frequencyHz: f, amplitude: svmThreshold(f) });
     expect(svm([atThreshold(100), atThreshold(300)])).toBeCloseTo(1.206034, 6);
     // One at threshold and one at half of it: (1 + 0.5^3.7)^(1/3.7) = 1.0202.
-    expect(svm([atThreshold(100), { frequencyHz: 300, amplitude: svmThreshold(300) / 2 }])).toBeCloseTo(1.020237, 6);
+    expect(
+      svm([atThreshold(100), { frequencyHz: 300, amplitude: svmThreshold(300) / 2 }]),
+    ).toBeCloseTo(1.020237, 6);
   });
 
   it('falls as the frequency rises for the same amplitude', () => {
-    expect(svm([{ frequencyHz: 100, amplitude: 0.3 }])).toBeGreaterThan(svm([{ frequencyHz: 1000, amplitude: 0.3 }]));
+    expect(svm([{ frequencyHz: 100, amplitude: 0.3 }])).toBeGreaterThan(
+      svm([{ frequencyHz: 1000, amplitude: 0.3 }]),
+    );
   });
 
   it('is zero for steady light', () => {
@@ -156,7 +178,14 @@ describe('svm: stroboscopic visibility measure', () => {
     expectInputError(() => svm([]), 'light components', 'component');
     expectInputError(() => svm(bad(undefined)), 'light components', 'component');
     expectInputError(() => svm([{ frequencyHz: 0, amplitude: 0.1 }]), 'frequency of component 1');
-    expectInputError(() => svm([{ frequencyHz: 100, amplitude: 0.1 }, { frequencyHz: 100, amplitude: -0.1 }]), 'amplitude of component 2');
+    expectInputError(
+      () =>
+        svm([
+          { frequencyHz: 100, amplitude: 0.1 },
+          { frequencyHz: 100, amplitude: -0.1 },
+        ]),
+      'amplitude of component 2',
+    );
     expectInputError(() => svm([{ frequencyHz: 100, amplitude: 11 }]), 'amplitude of component 1');
     expectInputError(() => svm([bad(null)]), 'frequency of component 1');
     for (const v of notNumbers) expectInputError(() => svmThreshold(bad(v)), 'flicker frequency');
@@ -172,7 +201,12 @@ describe('flicker: never NaN or Infinity', () => {
           finiteOrInputError(() => flickerRisk(a, b)) &&
           finiteOrInputError(() => percentFlicker(a, b)) &&
           finiteOrInputError(() => svmThreshold(a)) &&
-          finiteOrInputError(() => svm([{ frequencyHz: a, amplitude: b }, { frequencyHz: c, amplitude: 1 }]))
+          finiteOrInputError(() =>
+            svm([
+              { frequencyHz: a, amplitude: b },
+              { frequencyHz: c, amplitude: 1 },
+            ]),
+          )
         );
       }),
       { numRuns: 500 },

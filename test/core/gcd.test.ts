@@ -28,10 +28,17 @@ describe('gcd', () => {
     );
   });
 
-  it.each([[NaN, 1], [1, NaN], [Infinity, 1], [1, -Infinity], [1.5, 3], [-4, 6], [4, -6], ['4', 6], [null, 2]])(
-    'rejects gcd(%s, %s) instead of looping or answering a negative number',
-    (a, b) => {
-      expectInputError(() => gcd(bad(a), bad(b)), 'whole numbers');
-    },
-  );
+  it.each([
+    [NaN, 1],
+    [1, NaN],
+    [Infinity, 1],
+    [1, -Infinity],
+    [1.5, 3],
+    [-4, 6],
+    [4, -6],
+    ['4', 6],
+    [null, 2],
+  ])('rejects gcd(%s, %s) instead of looping or answering a negative number', (a, b) => {
+    expectInputError(() => gcd(bad(a), bad(b)), 'whole numbers');
+  });
 });

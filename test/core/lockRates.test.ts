@@ -66,7 +66,9 @@ describe('lockRates: structure of physics.md §3', () => {
 
   it('ignores the direction of turning', () => {
     const range = { minHz: 1, maxHz: 500 };
-    expect(lockRates({ speedHz: -29.5, symmetry: 6 }, range)).toEqual(lockRates({ speedHz: 29.5, symmetry: 6 }, range));
+    expect(lockRates({ speedHz: -29.5, symmetry: 6 }, range)).toEqual(
+      lockRates({ speedHz: 29.5, symmetry: 6 }, range),
+    );
   });
 
   it('has no lock-in rates for a part that is not turning', () => {
@@ -110,8 +112,12 @@ describe('lockRates: structure of physics.md §3', () => {
 
 describe('lockRates: range ends and tolerance bands', () => {
   it('includes a lock that falls exactly on either end of the range', () => {
-    expect(lockRates(wheel, { minHz: 24, maxHz: 25 }, { maxImages: 1 }).map((l) => l.rateHz)).toEqual([24]);
-    expect(lockRates(wheel, { minHz: 23, maxHz: 24 }, { maxImages: 1 }).map((l) => l.rateHz)).toEqual([24]);
+    expect(
+      lockRates(wheel, { minHz: 24, maxHz: 25 }, { maxImages: 1 }).map((l) => l.rateHz),
+    ).toEqual([24]);
+    expect(
+      lockRates(wheel, { minHz: 23, maxHz: 24 }, { maxImages: 1 }).map((l) => l.rateHz),
+    ).toEqual([24]);
   });
 
   it('leaves out a lock just outside the range', () => {
@@ -121,7 +127,10 @@ describe('lockRates: range ends and tolerance bands', () => {
 
   it('spreads each lock into the band [n|f|(1−u)·q/p, n|f|(1+u)·q/p] for a tolerance u', () => {
     // physics.md §3: a speed tolerance ±u turns each lock-in rate into a band.
-    const locks = lockRates({ speedHz: 24.5, symmetry: 1, tolerance: 0.03 }, { minHz: 5, maxHz: 100 });
+    const locks = lockRates(
+      { speedHz: 24.5, symmetry: 1, tolerance: 0.03 },
+      { minHz: 5, maxHz: 100 },
+    );
     expect(locks.length).toBeGreaterThan(0);
     for (const l of locks) {
       expect(l.lowHz).toBeCloseTo(24.5 * 0.97 * (l.q / l.p), 9);
@@ -141,7 +150,9 @@ describe('lockRates: range ends and tolerance bands', () => {
         fc.double({ min: 0.01, max: 100, noNaN: true }),
         (speedHz, symmetry, tolerance, lowestOverPattern) => {
           const minHz = Math.max(1e-3, symmetry * Math.abs(speedHz) * lowestOverPattern);
-          return finiteOrInputError(() => lockRates({ speedHz, symmetry, tolerance }, { minHz, maxHz: minHz * 1.5 }));
+          return finiteOrInputError(() =>
+            lockRates({ speedHz, symmetry, tolerance }, { minHz, maxHz: minHz * 1.5 }),
+          );
         },
       ),
     );
@@ -156,7 +167,10 @@ describe('lockRates: bad input', () => {
   });
 
   it.each([[0], [1.5], [-2]])('rejects a feature count of %s', (symmetry) => {
-    expectInputError(() => lockRates(bad({ speedHz: 2, symmetry }), range), 'features (blades, spokes)');
+    expectInputError(
+      () => lockRates(bad({ speedHz: 2, symmetry }), range),
+      'features (blades, spokes)',
+    );
   });
 
   it('rejects an empty, inverted or non-positive range', () => {

@@ -1,7 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { converterRangeDb, foldedHz, lowPassGainDb, orderForAttenuation, rcCutoffHz } from '../../src/core/logger';
-import { anyFinite, anyPositive, bad, expectInputError, finiteOrInputError, notNumbers } from './expectInputError';
+import {
+  converterRangeDb,
+  foldedHz,
+  lowPassGainDb,
+  orderForAttenuation,
+  rcCutoffHz,
+} from '../../src/core/logger';
+import {
+  anyFinite,
+  anyPositive,
+  bad,
+  expectInputError,
+  finiteOrInputError,
+  notNumbers,
+} from './expectInputError';
 
 describe('foldedHz', () => {
   it('folds 20 Hz sampled at 18 or at 22 per second to 2 Hz', () => {
@@ -17,7 +30,9 @@ describe('foldedHz', () => {
     expect(foldedHz(501, 1000)).toBe(499);
     expect(foldedHz(1000, 1000)).toBe(0);
     expect(foldedHz(1250, 1000)).toBe(250);
-    fc.assert(fc.property(fc.double({ min: 0, max: 1e7, noNaN: true }), (f) => foldedHz(f, 1000) <= 500));
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 1e7, noNaN: true }), (f) => foldedHz(f, 1000) <= 500),
+    );
   });
 
   it('folds a component and its aliases f + k·fs to the same place (any DSP text)', () => {
@@ -94,7 +109,8 @@ describe('lowPassGainDb', () => {
   });
 
   it('rejects an order that is not a whole number from 1 to 20 and a cutoff not above zero', () => {
-    for (const m of [0, 1.5, -2, 21]) expectInputError(() => lowPassGainDb(100, 10, m), 'filter order');
+    for (const m of [0, 1.5, -2, 21])
+      expectInputError(() => lowPassGainDb(100, 10, m), 'filter order');
     expectInputError(() => lowPassGainDb(100, 0, 2), 'cutoff frequency');
     for (const v of notNumbers) {
       expectInputError(() => lowPassGainDb(bad(v), 10, 2), 'signal frequency');
@@ -128,7 +144,8 @@ describe('converterRangeDb', () => {
   });
 
   it('rejects bit counts that are not whole numbers from 1 to 64', () => {
-    for (const bits of [0, 1.5, -16, 65]) expectInputError(() => converterRangeDb(bits), 'converter bits');
+    for (const bits of [0, 1.5, -16, 65])
+      expectInputError(() => converterRangeDb(bits), 'converter bits');
     for (const v of notNumbers) expectInputError(() => converterRangeDb(bad(v)), 'converter bits');
   });
 });
@@ -156,7 +173,8 @@ describe('orderForAttenuation', () => {
     expectInputError(() => orderForAttenuation(0, 100, 40), 'signal frequency');
     expectInputError(() => orderForAttenuation(1000, 0, 40), 'cutoff frequency');
     expectInputError(() => orderForAttenuation(1000, 100, -1), 'attenuation needed');
-    for (const v of notNumbers) expectInputError(() => orderForAttenuation(1000, 100, bad(v)), 'attenuation needed');
+    for (const v of notNumbers)
+      expectInputError(() => orderForAttenuation(1000, 100, bad(v)), 'attenuation needed');
   });
 });
 

@@ -28,7 +28,10 @@ describe('checkLookOptions', () => {
   });
 
   it('fills in the options not given and keeps those given', () => {
-    expect(checkLookOptions({ maxImages: 3, stillHz: undefined })).toEqual({ ...defaultLookOptions, maxImages: 3 });
+    expect(checkLookOptions({ maxImages: 3, stillHz: undefined })).toEqual({
+      ...defaultLookOptions,
+      maxImages: 3,
+    });
     expect(checkLookOptions({ unclearStep: 0.4, groupSpacingsPerS: 2 })).toEqual({
       ...defaultLookOptions,
       unclearStep: 0.4,
@@ -40,13 +43,19 @@ describe('checkLookOptions', () => {
     expectInputError(() => checkLookOptions(bad({ stillHz })), 'still threshold');
   });
 
-  it.each([[-0.1], [0.51], [Infinity]])('rejects an unclear step of %s (allowed 0 to 0.5)', (unclearStep) => {
-    expectInputError(() => checkLookOptions(bad({ unclearStep })), 'unclear step');
-  });
+  it.each([[-0.1], [0.51], [Infinity]])(
+    'rejects an unclear step of %s (allowed 0 to 0.5)',
+    (unclearStep) => {
+      expectInputError(() => checkLookOptions(bad({ unclearStep })), 'unclear step');
+    },
+  );
 
-  it.each([[0], [1.5], [-2], [65]])('rejects a largest image count of %s (allowed 1 to 64)', (maxImages) => {
-    expectInputError(() => checkLookOptions(bad({ maxImages })), 'largest image count');
-  });
+  it.each([[0], [1.5], [-2], [65]])(
+    'rejects a largest image count of %s (allowed 1 to 64)',
+    (maxImages) => {
+      expectInputError(() => checkLookOptions(bad({ maxImages })), 'largest image count');
+    },
+  );
 
   it.each([[0], [-1], [null]])('rejects an image group spacing of %s', (groupSpacingsPerS) => {
     expectInputError(() => checkLookOptions(bad({ groupSpacingsPerS })), 'image group spacing');

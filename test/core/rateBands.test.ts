@@ -30,13 +30,21 @@ function contiguousCover(bands: RateBand[], minHz: number, maxHz: number): boole
 describe('rateBands: the camera case', () => {
   it('calls every frame rate above 20 safe for one mark at 10 rev/s (doc example)', () => {
     // Doc block: one mark at 10 rev/s, camera 1–100 frames/s: faithful above 2·n·|f| = 20 (Shannon 1949).
-    const last = rateBands([{ speedHz: 10, symmetry: 1 }], { minHz: 1, maxHz: 100 }, { sampler: 'frames' }).at(-1);
+    const last = rateBands(
+      [{ speedHz: 10, symmetry: 1 }],
+      { minHz: 1, maxHz: 100 },
+      { sampler: 'frames' },
+    ).at(-1);
     expect(last).toMatchObject({ fromHz: 20, toHz: 100, safe: true });
   });
 
   it('calls every frame rate above 2·n·|f|·(1 + u) safe, and the rate just below it misleading', () => {
     // physics.md §4: for frames every rate > 2·n·|f|·(1+u) is safe. 3 blades, 10 rev/s, ±5 %: 63 frames/s.
-    const bands = rateBands([{ speedHz: 10, symmetry: 3, tolerance: 0.05 }], { minHz: 1, maxHz: 200 }, { sampler: 'frames' });
+    const bands = rateBands(
+      [{ speedHz: 10, symmetry: 3, tolerance: 0.05 }],
+      { minHz: 1, maxHz: 200 },
+      { sampler: 'frames' },
+    );
     const last = bands.at(-1)!;
     expect(last.safe).toBe(true);
     expect(last.fromHz).toBeCloseTo(63, 9);
@@ -44,10 +52,16 @@ describe('rateBands: the camera case', () => {
   });
 
   it('names the misleading look in the reason and the causes', () => {
-    const bands = rateBands([{ speedHz: 10, symmetry: 1 }], { minHz: 1, maxHz: 100 }, { sampler: 'frames' });
+    const bands = rateBands(
+      [{ speedHz: 10, symmetry: 1 }],
+      { minHz: 1, maxHz: 100 },
+      { sampler: 'frames' },
+    );
     const band = bandInside(bands, 15)!; // r = 0.667: backward; the band runs on down to the freeze at r = 1
     expect(band.safe).toBe(false);
-    expect(band.reason).toBe('Part 1 looks backward or its direction is unclear; part 1 looks still.');
+    expect(band.reason).toBe(
+      'Part 1 looks backward or its direction is unclear; part 1 looks still.',
+    );
     expect(band.causes).toEqual([
       { part: 0, kind: 'backward', images: 1 },
       { part: 0, kind: 'still', images: 1 },
@@ -102,7 +116,13 @@ describe('rateBands: special parts', () => {
   it('leaves a part that is not turning out: it misleads nobody', () => {
     const bands = rateBands([{ speedHz: 0, symmetry: 4 }], { minHz: 1, maxHz: 100 });
     expect(bands).toEqual([
-      { fromHz: 1, toHz: 100, safe: true, reason: 'Every part shows its true direction of turning.', causes: [] },
+      {
+        fromHz: 1,
+        toHz: 100,
+        safe: true,
+        reason: 'Every part shows its true direction of turning.',
+        causes: [],
+      },
     ]);
   });
 
@@ -111,7 +131,9 @@ describe('rateBands: special parts', () => {
       { speedHz: 0, symmetry: 1 },
       { speedHz: 0.001, symmetry: 1 },
     ];
-    expect(rateBands(parts, { minHz: 1, maxHz: 2 })[0].reason).toBe('Part 2 turns too slowly to see moving.');
+    expect(rateBands(parts, { minHz: 1, maxHz: 2 })[0].reason).toBe(
+      'Part 2 turns too slowly to see moving.',
+    );
   });
 });
 
@@ -132,7 +154,11 @@ describe('rateBands: relations that hold for every input', () => {
         samplerArb,
         (parts, tolerance, minHz, span, sampler) => {
           const maxHz = minHz * span;
-          const bands = rateBands(parts.map((p) => ({ ...p, tolerance })), { minHz, maxHz }, { sampler });
+          const bands = rateBands(
+            parts.map((p) => ({ ...p, tolerance })),
+            { minHz, maxHz },
+            { sampler },
+          );
           // Neighbours differ: two safe bands never touch (misleading ones merge when they touch).
           const alternating = bands.every((b, i) => i === 0 || !(b.safe && bands[i - 1].safe));
           return contiguousCover(bands, minHz, maxHz) && alternating;
@@ -199,7 +225,11 @@ describe('rateBands: relations that hold for every input', () => {
         (speedHz, symmetry, tolerance, lowestOverPattern, sampler) => {
           const minHz = Math.max(1e-3, symmetry * Math.abs(speedHz) * lowestOverPattern);
           return finiteOrInputError(() =>
-            rateBands([{ speedHz, symmetry, tolerance }], { minHz, maxHz: minHz * 10 }, { sampler }),
+            rateBands(
+              [{ speedHz, symmetry, tolerance }],
+              { minHz, maxHz: minHz * 10 },
+              { sampler },
+            ),
           );
         },
       ),
@@ -221,7 +251,10 @@ describe('rateBands: bad input', () => {
     expectInputError(() => rateBands([part, bad(null)], range), 'part 2');
     expectInputError(() => rateBands([part, bad({ speedHz: NaN, symmetry: 1 })], range), 'speed');
     for (const symmetry of [0, 1.5, -2]) {
-      expectInputError(() => rateBands([bad({ speedHz: 10, symmetry })], range), 'features (blades, spokes)');
+      expectInputError(
+        () => rateBands([bad({ speedHz: 10, symmetry })], range),
+        'features (blades, spokes)',
+      );
     }
     expectInputError(() => rateBands([bad({ speedHz: '10', symmetry: 1 })], range), 'speed');
     expectInputError(() => rateBands([bad({ speedHz: Infinity, symmetry: 1 })], range), 'speed');

@@ -10,7 +10,9 @@ const oneMark = (speedHz: number) => ({ speedHz, symmetry: 1 });
 describe('ratesForApparent: worked examples', () => {
   it('finds 29.5 flashes/s to make one mark at 30 rev/s creep forward at 0.5 rev/s', () => {
     // physics.md §4 example check: f = 30, n = 1, a = 0.5 → s = 29.5. Doc block example.
-    expect(ratesForApparent(oneMark(30), 0.5, { minHz: 20, maxHz: 40 })).toEqual([{ rateHz: 29.5, k: 1 }]);
+    expect(ratesForApparent(oneMark(30), 0.5, { minHz: 20, maxHz: 40 })).toEqual([
+      { rateHz: 29.5, k: 1 },
+    ]);
   });
 
   it('finds 30.5 flashes/s to make the same mark creep backward at 0.5 rev/s', () => {
@@ -28,7 +30,10 @@ describe('ratesForApparent: worked examples', () => {
     expect(rates.map((r) => r.k)).toEqual(Array.from({ length: 29 }, (_, i) => 29 - i));
     for (const { rateHz, k } of rates) {
       expect(rateHz).toBeCloseTo(29.5 / k, 12);
-      expect(apparentMotion(oneMark(30), rateHz, { sampler: 'frames' }).apparentHz).toBeCloseTo(0.5, 9);
+      expect(apparentMotion(oneMark(30), rateHz, { sampler: 'frames' }).apparentHz).toBeCloseTo(
+        0.5,
+        9,
+      );
     }
   });
 
@@ -37,14 +42,18 @@ describe('ratesForApparent: worked examples', () => {
     const rates = ratesForApparent({ speedHz: 2, symmetry: 12 }, 0.05, { minHz: 20, maxHz: 30 });
     expect(rates).toHaveLength(1);
     expect(rates[0].rateHz).toBeCloseTo(23.4, 12);
-    expect(apparentMotion({ speedHz: 2, symmetry: 12 }, rates[0].rateHz).apparentHz).toBeCloseTo(0.05, 12);
+    expect(apparentMotion({ speedHz: 2, symmetry: 12 }, rates[0].rateHz).apparentHz).toBeCloseTo(
+      0.05,
+      12,
+    );
   });
 
   it('works for a part turning in the negative direction', () => {
     const part = oneMark(-10);
     const rates = ratesForApparent(part, 2, { minHz: 1, maxHz: 100 });
     expect(rates.length).toBeGreaterThan(0);
-    for (const { rateHz } of rates) expect(apparentMotion(part, rateHz).apparentHz).toBeCloseTo(2, 9);
+    for (const { rateHz } of rates)
+      expect(apparentMotion(part, rateHz).apparentHz).toBeCloseTo(2, 9);
   });
 });
 
@@ -56,7 +65,9 @@ describe('ratesForApparent: the validity limit |k·a/(f − a)| < 0.5', () => {
   });
 
   it('stops just before the half-pitch step: k = 2 for a = 2 at 10 rev/s would give −2, not 2', () => {
-    expect(ratesForApparent(oneMark(10), 2, { minHz: 1, maxHz: 100 })).toEqual([{ rateHz: 8, k: 1 }]);
+    expect(ratesForApparent(oneMark(10), 2, { minHz: 1, maxHz: 100 })).toEqual([
+      { rateHz: 8, k: 1 },
+    ]);
     expect(apparentMotion(oneMark(10), 4, { sampler: 'frames' }).apparentHz).toBeCloseTo(-2, 12);
   });
 
@@ -88,7 +99,9 @@ describe('ratesForApparent: the validity limit |k·a/(f − a)| < 0.5', () => {
         const maxHz = minHz * span;
         const rates = ratesForApparent({ speedHz, symmetry }, apparentHz, { minHz, maxHz });
         return rates.every(({ rateHz }, i) => {
-          const seen = apparentMotion({ speedHz, symmetry }, rateHz, { sampler: 'frames' }).apparentHz;
+          const seen = apparentMotion({ speedHz, symmetry }, rateHz, {
+            sampler: 'frames',
+          }).apparentHz;
           return (
             rateHz >= minHz * (1 - 1e-12) &&
             rateHz <= maxHz * (1 + 1e-12) &&
@@ -109,8 +122,13 @@ describe('ratesForApparent: the validity limit |k·a/(f − a)| < 0.5', () => {
         fc.double({ min: -1e4, max: 1e4, noNaN: true }),
         fc.double({ min: 0.01, max: 100, noNaN: true }),
         (speedHz, symmetry, apparentHz, lowestOverPattern) => {
-          const minHz = Math.max(1e-3, symmetry * Math.abs(speedHz - apparentHz) * lowestOverPattern);
-          return finiteOrInputError(() => ratesForApparent({ speedHz, symmetry }, apparentHz, { minHz, maxHz: minHz * 3 }));
+          const minHz = Math.max(
+            1e-3,
+            symmetry * Math.abs(speedHz - apparentHz) * lowestOverPattern,
+          );
+          return finiteOrInputError(() =>
+            ratesForApparent({ speedHz, symmetry }, apparentHz, { minHz, maxHz: minHz * 3 }),
+          );
         },
       ),
     );
@@ -129,13 +147,26 @@ describe('ratesForApparent: bad input', () => {
   });
 
   it.each([[0], [1.5], [-2]])('rejects a feature count of %s', (symmetry) => {
-    expectInputError(() => ratesForApparent(bad({ speedHz: 30, symmetry }), 0.5, range), 'features (blades, spokes)');
+    expectInputError(
+      () => ratesForApparent(bad({ speedHz: 30, symmetry }), 0.5, range),
+      'features (blades, spokes)',
+    );
   });
 
   it('rejects an empty, inverted or non-positive range', () => {
-    expectInputError(() => ratesForApparent(oneMark(30), 0.5, { minHz: 30, maxHz: 30 }), 'rate range', 'empty');
-    expectInputError(() => ratesForApparent(oneMark(30), 0.5, { minHz: 40, maxHz: 20 }), 'rate range');
-    expectInputError(() => ratesForApparent(oneMark(30), 0.5, { minHz: 0, maxHz: 20 }), 'lowest rate');
+    expectInputError(
+      () => ratesForApparent(oneMark(30), 0.5, { minHz: 30, maxHz: 30 }),
+      'rate range',
+      'empty',
+    );
+    expectInputError(
+      () => ratesForApparent(oneMark(30), 0.5, { minHz: 40, maxHz: 20 }),
+      'rate range',
+    );
+    expectInputError(
+      () => ratesForApparent(oneMark(30), 0.5, { minHz: 0, maxHz: 20 }),
+      'lowest rate',
+    );
     expectInputError(() => ratesForApparent(oneMark(30), 0.5, bad({ minHz: 1 })), 'highest rate');
   });
 });

@@ -1,10 +1,20 @@
 import { describe, expect, it } from 'vitest';
-import { checkPart, checkRange, checkSampler, MAX_IMAGES_LIMIT, MAX_SYMMETRY } from '../../src/core/types';
+import {
+  checkPart,
+  checkRange,
+  checkSampler,
+  MAX_IMAGES_LIMIT,
+  MAX_SYMMETRY,
+} from '../../src/core/types';
 import { bad, expectInputError, notNumbers } from './expectInputError';
 
 describe('checkPart', () => {
   it('fills in a zero tolerance and keeps a signed speed', () => {
-    expect(checkPart({ speedHz: -60, symmetry: 3 })).toEqual({ speedHz: -60, symmetry: 3, tolerance: 0 });
+    expect(checkPart({ speedHz: -60, symmetry: 3 })).toEqual({
+      speedHz: -60,
+      symmetry: 3,
+      tolerance: 0,
+    });
     expect(checkPart({ speedHz: 29.5, symmetry: 1, tolerance: 0.02 })).toEqual({
       speedHz: 29.5,
       symmetry: 1,
@@ -23,7 +33,10 @@ describe('checkPart', () => {
   it.each([[0], [1.5], [-2], [MAX_SYMMETRY + 1]])(
     'rejects a feature count of %s: it must be a whole number of at least 1',
     (symmetry) => {
-      const error = expectInputError(() => checkPart(bad({ speedHz: 10, symmetry })), 'features (blades, spokes)');
+      const error = expectInputError(
+        () => checkPart(bad({ speedHz: 10, symmetry })),
+        'features (blades, spokes)',
+      );
       expect(error.message).toContain('whole number');
     },
   );
@@ -36,13 +49,22 @@ describe('checkPart', () => {
     expect(checkPart({ speedHz: 1, symmetry: MAX_SYMMETRY }).symmetry).toBe(MAX_SYMMETRY);
   });
 
-  it.each([[-0.01], [0.51], [NaN], ['0.02'], [null]])('rejects a tolerance of %s (allowed 0 to 0.5)', (tolerance) => {
-    expectInputError(() => checkPart(bad({ speedHz: 10, symmetry: 1, tolerance })), 'speed tolerance');
-  });
+  it.each([[-0.01], [0.51], [NaN], ['0.02'], [null]])(
+    'rejects a tolerance of %s (allowed 0 to 0.5)',
+    (tolerance) => {
+      expectInputError(
+        () => checkPart(bad({ speedHz: 10, symmetry: 1, tolerance })),
+        'speed tolerance',
+      );
+    },
+  );
 
-  it.each([[null], [undefined], [3], ['part'], [true]])('rejects %s as a part, naming the field given', (part) => {
-    expectInputError(() => checkPart(bad(part), 'part 2'), 'part 2');
-  });
+  it.each([[null], [undefined], [3], ['part'], [true]])(
+    'rejects %s as a part, naming the field given',
+    (part) => {
+      expectInputError(() => checkPart(bad(part), 'part 2'), 'part 2');
+    },
+  );
 });
 
 describe('checkRange', () => {
@@ -67,7 +89,10 @@ describe('checkRange', () => {
   });
 
   it('names its ends after the field it is given', () => {
-    expectInputError(() => checkRange(bad({ minHz: -1, maxHz: 5 }), 'expected speed range'), 'lowest expected speed');
+    expectInputError(
+      () => checkRange(bad({ minHz: -1, maxHz: 5 }), 'expected speed range'),
+      'lowest expected speed',
+    );
   });
 
   it.each([[null], [undefined], [5], ['20-30']])('rejects %s as a range', (range) => {
