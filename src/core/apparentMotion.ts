@@ -40,7 +40,7 @@ export type ApparentMotionOptions = Partial<LookOptions> & { sampler?: Sampler }
  *
  * @example
  * // Wikipedia, "Stroboscopic effect": a disc at 60 rev/s under 61 flashes/s turns back at 1 rev/s.
- * apparentMotion({ speedHz: 60, symmetry: 1 }, 61).apparentHz // -1
+ * apparentMotion({ speedHz: 60, symmetry: 1 }, 61).apparentHz // -1.000000000000001 (1 rev/s backward, to rounding)
  *
  * Sources: Shannon 1949 (sampling theorem); the alias relation n·f − s·round(n·f/s) of any DSP text.
  */

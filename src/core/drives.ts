@@ -32,7 +32,7 @@ export function motorSpeedHz(mainsHz: number, poles: number, slip: number): numb
 
 /**
  * Slip from a measured speed: σ = 1 − f/f_sync.
- * @example slipFromSpeed(29.5, 60, 4) // 0.016666666666666607 (3500 vs 3600 rpm)
+ * @example slipFromSpeed(29.5, 60, 4) // 0.01666666666666672 (1770 vs 1800 rpm)
  */
 export function slipFromSpeed(speedHz: number, mainsHz: number, poles: number): number {
   const f = requireNonNegative(speedHz, 'speed');
@@ -64,7 +64,7 @@ export function gearSpeedHz(driverHz: number, driverTeeth: number, drivenTeeth: 
 
 /**
  * Wheel speed from ground speed (physics.md §8): f = v/(π·D).
- * @example wheelSpeedHz(100 / 3.6, 0.6319) // 13.99… rev/s (100 km/h on a 205/55R16)
+ * @example wheelSpeedHz(100 / 3.6, 0.6319) // 13.992627445613348 rev/s (100 km/h on a 205/55R16)
  */
 export function wheelSpeedHz(groundSpeedMps: number, diameterM: number): number {
   const v = requireFinite(groundSpeedMps, 'ground speed');

@@ -61,7 +61,7 @@ export function svmThreshold(frequencyHz: number): number {
  * Stroboscopic visibility measure, CIE TN 006:2016 (physics.md §6): SVM = (Σ (C/T(f))^3.7)^(1/3.7);
  * SVM = 1 is the visibility threshold for the average observer.
  * Throws InputError for no components, a frequency ≤ 0 or a negative amplitude.
- * @example svm([{ frequencyHz: 100, amplitude: 0.26 }]) // ≈ 1 (near the threshold)
+ * @example svm([{ frequencyHz: 100, amplitude: 0.26 }]) // 1.000292193008748 (just above the threshold)
  */
 export function svm(components: LightComponent[]): number {
   if (!Array.isArray(components) || components.length === 0) {

@@ -18,7 +18,7 @@ export function foldedHz(signalHz: number, sampleHz: number): number {
  * Gain of an order-m Butterworth low-pass (m = 1: an RC stage) in dB, ≤ 0
  * (physics.md §9): 20·log10(1/sqrt(1 + (f/fc)^(2m))).
  * Source: Butterworth 1930; any filter handbook (−3.01 dB at fc, −20·m dB/decade beyond).
- * @example lowPassGainDb(1000, 100, 2) // -40.00043427276862
+ * @example lowPassGainDb(1000, 100, 2) // -40.00043427276863
  */
 export function lowPassGainDb(signalHz: number, cutoffHz: number, order: number): number {
   const f = Math.abs(requireFinite(signalHz, 'signal frequency'));
