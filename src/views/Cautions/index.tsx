@@ -17,14 +17,13 @@ export function Cautions({ class: extra }: Props) {
       {r.showSafety && (
         <aside class={style.caution} aria-labelledby="safety-title" data-testid="safety-notice">
           <h2 id="safety-title" class={style.title}>
-            It is still turning
+            Still turning: do not trust what you see
           </h2>
           <p>
-            A part that looks still, backward or unclear under a strobe, a camera or flickering light is still turning at its
-            true speed. Never reach in, open a guard or touch it because of what you see: isolate it and lock it out first
-            (OSHA 29 CFR 1910.147, ISO 14118 and your site's rules).
+            It moves at its true speed whatever it looks like. Never reach in, open a guard or touch it on the strength of
+            this view: isolate and lock out first (OSHA 29 CFR 1910.147, ISO 14118, your site's rules).
           </p>
-          <p class={style.small}>Trueturn is a planning aid; local codes and licensed practice come first.</p>
+          <p class={style.small}>A planning aid: local codes and licensed practice come first.</p>
         </aside>
       )}
       {r.showPhotosensitivity && (
@@ -33,8 +32,8 @@ export function Cautions({ class: extra }: Props) {
             Flashing light
           </h2>
           <p>
-            Flashing between about 3 and 60 times a second can trigger seizures in people with photosensitive epilepsy (WCAG
-            2.x success criterion 2.3.1 counts from three flashes a second). Warn people nearby and keep such flashing short.
+            3 to 60 flashes a second can trigger seizures in people with photosensitive epilepsy (WCAG 2.x success
+            criterion 2.3.1). Warn people nearby and keep it short.
           </p>
         </aside>
       )}

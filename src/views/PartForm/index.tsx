@@ -76,22 +76,22 @@ export function PartForm({ class: extra }: Props) {
       <div class={style.pair}>
         <NumberField
           id="features"
-          label="Blades, spokes or marks"
+          label="Blades or marks"
           value={part.features}
           toText={numberForField}
           read={readFeatures}
           onValue={setFeatures}
-          hint="Identical features; 1 = one mark."
+          hint="Identical blades, spokes, jaws or bolts; 1 = one mark."
         />
         <NumberField
           id="tolerance"
-          label="Speed tolerance"
+          label="Tolerance"
           value={part.tolerancePercent}
           toText={numberForField}
           read={readTolerancePercent}
           onValue={setTolerancePercent}
           unit="± %"
-          hint="Slip, drift, nameplate."
+          hint="Speed ± for slip, drift, nameplate."
         />
       </div>
     </Panel>

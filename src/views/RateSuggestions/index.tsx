@@ -1,6 +1,6 @@
 import { formatNumber, numberForField } from '../../lib/format';
 import { readCreepRpm } from '../../lib/fields';
-import { formatRate } from '../../lib/rates';
+import { formatRate, formatRateSpan } from '../../lib/rates';
 import { check, type CreepRate, type SuggestedRate } from '../../state/check';
 import { flashUnit, setCreepRpm, setSamplerRateHz, setup } from '../../state/setup';
 import { NumberField } from '../NumberField';
@@ -29,6 +29,7 @@ export function RateSuggestions({ class: extra }: Props) {
   const unit = flashUnit.value;
   const kind = r.samplerKind;
   const rate = (hz: number) => formatRate(hz, kind, unit);
+  const span = (fromHz: number, toHz: number) => formatRateSpan(fromHz, toHz, kind, unit);
   const tolerance = r.part.tolerance > 0;
   return (
     <Panel title="Rates to try" id="suggestions" class={extra}>
@@ -40,7 +41,7 @@ export function RateSuggestions({ class: extra }: Props) {
           <ul class={style.list} data-testid="lock-list">
             {r.locks.map((l) => (
               <li key={`${l.rateHz}-${l.images}`}>
-                <LockButton lock={l} rate={rate} tolerance={tolerance} />
+                <LockButton lock={l} rate={rate} span={span} tolerance={tolerance} />
               </li>
             ))}
           </ul>
@@ -92,10 +93,11 @@ export function RateSuggestions({ class: extra }: Props) {
 interface LockProps {
   lock: SuggestedRate;
   rate: (hz: number) => string;
+  span: (fromHz: number, toHz: number) => string;
   tolerance: boolean;
 }
 
-function LockButton({ lock, rate, tolerance }: LockProps) {
+function LockButton({ lock, rate, span, tolerance }: LockProps) {
   const here = lock.side === 'here';
   return (
     <button
@@ -112,7 +114,7 @@ function LockButton({ lock, rate, tolerance }: LockProps) {
       </span>
       {tolerance && (
         <span class={style.span}>
-          within tolerance {rate(lock.lowHz)} to {rate(lock.highHz)}
+          ± tolerance: {span(lock.lowHz, lock.highHz)}
         </span>
       )}
     </button>

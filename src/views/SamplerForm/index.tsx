@@ -154,16 +154,6 @@ function StrobeFields() {
   const unitWord = unit === 'fpm' ? 'fpm' : 'Hz';
   return (
     <div class={style.fields}>
-      <ChoiceGroup
-        legend="Flash rate unit"
-        name="flash-unit"
-        options={[
-          { value: 'fpm', label: 'Flashes per minute' },
-          { value: 'Hz', label: 'Hz' },
-        ]}
-        value={unit}
-        onChange={(u) => (flashUnit.value = u)}
-      />
       <NumberField
         id="flash-rate"
         label="Flash rate"
@@ -172,12 +162,23 @@ function StrobeFields() {
         toText={toText}
         read={(text) => readFlashRateFpm(text, unit)}
         onValue={setStrobeRateFpm}
-        unit={unitWord}
+        unit={
+          <select
+            class={style.unitSelect}
+            aria-label="Flash rate unit"
+            value={unit}
+            onChange={(e) => (flashUnit.value = (e.currentTarget as HTMLSelectElement).value as 'fpm' | 'Hz')}
+          >
+            <option value="fpm">fpm</option>
+            <option value="Hz">Hz</option>
+          </select>
+        }
+        hint="fpm = flashes per minute."
       />
       <div class={style.pair}>
         <NumberField
           id="strobe-min"
-          label="Strobe's lowest rate"
+          label="Lowest rate"
           value={strobe.minFpm}
           unitKey={unit}
           toText={toText}
@@ -191,7 +192,7 @@ function StrobeFields() {
         />
         <NumberField
           id="strobe-max"
-          label="Strobe's highest rate"
+          label="Highest rate"
           value={strobe.maxFpm}
           unitKey={unit}
           toText={toText}

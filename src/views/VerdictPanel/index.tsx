@@ -1,7 +1,7 @@
 import { formatRpmWithDirection, formatNumber } from '../../lib/format';
 import { formatRate } from '../../lib/rates';
 import { check } from '../../state/check';
-import { flashUnit } from '../../state/setup';
+import { activePart, flashUnit } from '../../state/setup';
 import { TrustMark } from '../TrustMark';
 import style from './style.module.css';
 
@@ -19,6 +19,7 @@ export function VerdictPanel({ class: extra }: Props) {
   const seen = formatRpmWithDirection(v.apparentRpm, sign);
   const trueSpeed = `${formatNumber(Math.abs(v.trueRpm))} rpm`;
   const features = r.part.symmetry === 1 ? '1 mark' : `${formatNumber(r.part.symmetry)} features`;
+  const partName = activePart.value.name.trim();
   return (
     <section class={`${style.verdict} ${extra ?? ''}`} data-trust={v.trust} aria-labelledby="verdict-title">
       <h2 id="verdict-title" class={style.title}>
@@ -42,6 +43,7 @@ export function VerdictPanel({ class: extra }: Props) {
         </div>
       </dl>
       <p class={style.context}>
+        {partName && <span data-testid="part-name">{partName}: </span>}
         {features} · {SAMPLER_WORDS[r.samplerKind]} {formatRate(r.rateHz, r.samplerKind, flashUnit.value)}
       </p>
     </section>

@@ -1,0 +1,56 @@
+// One fresh Chromium per test: Debian's /usr/bin/chromium driven by playwright-core, with a
+// throw-away profile, so no test sees another's storage or service worker.
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+
+export const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+
+export interface Session {
+  context: BrowserContext;
+  page: Page;
+  close: () => Promise<void>;
+}
+
+export async function openBrowser(options: { width?: number; height?: number; colorScheme?: 'light' | 'dark' } = {}): Promise<Session> {
+  const profile = mkdtempSync(join(tmpdir(), 'trueturn-browser-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: CHROMIUM,
+    headless: true,
+    viewport: { width: options.width ?? 390, height: options.height ?? 844 },
+    colorScheme: options.colorScheme ?? 'light',
+    acceptDownloads: true,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+  const page = context.pages()[0] ?? (await context.newPage());
+  return {
+    context,
+    page,
+    close: async () => {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Loads the app and waits until storage has opened and the first verdict is on screen. */
+export async function openApp(page: Page, url: string): Promise<void> {
+  await page.goto(url);
+  await page.getByTestId('verdict').waitFor();
+}
+
+/** Replaces a field's text as a person would: select all, type. */
+export async function typeInto(page: Page, label: string | RegExp, text: string): Promise<void> {
+  const field = page.getByLabel(label, { exact: typeof label === 'string' });
+  await field.fill('');
+  await field.pressSequentially(text);
+}

@@ -1,0 +1,179 @@
+// @vitest-environment happy-dom
+import 'fake-indexeddb/auto';
+import { cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
+import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
+import { apparentMotion, blurDegrees, exposureFromShutterAngle, rollingSkewDegrees } from '../../src/core';
+import { App } from '../../src/app';
+import { formatNumber, formatRpmWithDirection } from '../../src/lib/format';
+import { formatRate } from '../../src/lib/rates';
+import { openScreen } from '../../src/lib/navigation';
+import { check } from '../../src/state/check';
+import { defaultSetup } from '../../src/state/model';
+import { flashUnit, replaceSetup, setup, speedUnit, startSession } from '../../src/state/setup';
+
+beforeAll(async () => {
+  await startSession();
+});
+
+beforeEach(() => {
+  replaceSetup(defaultSetup);
+  speedUnit.value = 'rpm';
+  flashUnit.value = 'fpm';
+  openScreen('check');
+  render(<App />);
+});
+
+afterEach(cleanup);
+
+function field(label: string): HTMLInputElement {
+  return screen.getByLabelText(label, { exact: true }) as HTMLInputElement;
+}
+
+function type(label: string, text: string) {
+  fireEvent.input(field(label), { target: { value: text } });
+}
+
+function verdict(): string {
+  return screen.getByTestId('verdict').firstChild?.textContent ?? '';
+}
+
+describe('the check screen', () => {
+  test('opens on the default set-up: a 6-blade fan at 1770 rpm under a strobe at 1770 fpm looks still', () => {
+    expect(verdict()).toBe('Looks still');
+    expect(screen.getByTestId('true-speed').textContent).toBe('1,770 rpm');
+    expect(screen.getByTestId('safety-notice')).toBeTruthy();
+    // 29.5 flashes per second lies between 3 and 60 (physics.md §10).
+    expect(screen.getByTestId('photosensitivity-notice')).toBeTruthy();
+  });
+
+  test('follows every keystroke: a disc at 3600 rpm under 3660 fpm turns backward at 60 rpm', () => {
+    // Wikipedia, "Stroboscopic effect": 60 rev/s lit at 61 flashes/s seems to turn backwards at 1 rev/s.
+    type('Speed', '3600');
+    type('Blades or marks', '1');
+    type('Flash rate', '3660');
+    expect(verdict()).toBe('Turning backward');
+    const m = apparentMotion({ speedHz: 60, symmetry: 1 }, 61);
+    expect(screen.getByTestId('apparent-speed').textContent).toBe(formatRpmWithDirection(m.apparentHz * 60, 1));
+    expect(screen.getByTestId('apparent-speed').textContent).toBe('60 rpm backward');
+    expect(screen.getByTestId('true-speed').textContent).toBe('3,600 rpm');
+  });
+
+  test('the verdict sits in a polite live region', () => {
+    const region = screen.getByTestId('verdict').parentElement!;
+    expect(region.getAttribute('role')).toBe('status');
+    expect(region.getAttribute('aria-live')).toBe('polite');
+    expect(region.textContent).toContain('Looks still');
+  });
+
+  test('bad text gets a message beside its field and the last good result stays', () => {
+    const before = check.value;
+    type('Speed', 'fast');
+    expect(field('Speed').getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByRole('alert').textContent).toMatch(/not a number/);
+    expect(setup.value.parts[0].speedRpm).toBe(1770);
+    expect(check.value).toBe(before);
+    expect(verdict()).toBe('Looks still');
+  });
+
+  test('nothing on screen says NaN or Infinity, whatever is typed', () => {
+    for (const text of ['', 'abc', 'NaN', '1e999', '-', '0', '-0', '1e-320', '99999999999']) {
+      for (const label of ['Speed', 'Blades or marks', 'Tolerance', 'Flash rate', 'Lowest rate', 'Highest rate', 'Creep speed wanted']) {
+        type(label, text);
+      }
+      const shown = document.body.textContent!.replace(/"[^"]*"/g, '');
+      expect(shown, text).not.toMatch(/NaN|Infinity/);
+    }
+  });
+
+  test('tapping a suggested lock-in rate sets the flash rate', () => {
+    type('Speed', '3600');
+    type('Blades or marks', '1');
+    type('Flash rate', '3500');
+    const list = screen.getByTestId('lock-list');
+    const single = within(list)
+      .getAllByRole('button')
+      .find((b) => b.textContent?.startsWith('3,600 fpm'));
+    expect(single).toBeTruthy();
+    fireEvent.click(single!);
+    expect(setup.value.strobe.rateFpm).toBeCloseTo(3600, 9);
+    expect(field('Flash rate').value).toBe('3600');
+    expect(verdict()).toBe('Looks still');
+  });
+
+  test('tapping the creep rate makes the part creep forward at the wanted speed', () => {
+    type('Speed', '1800');
+    type('Blades or marks', '1');
+    type('Flash rate', '2000');
+    type('Creep speed wanted', '30');
+    const button = within(screen.getByTestId('creep-list'))
+      .getAllByRole('button')
+      .find((b) => b.textContent?.startsWith('1,770 fpm'));
+    fireEvent.click(button!);
+    // physics.md §4 worked check: f = 30 rev/s, creep 0.5 rev/s → 29.5 flashes/s = 1770 fpm.
+    expect(setup.value.strobe.rateFpm).toBeCloseTo(1770, 9);
+    expect(verdict()).toBe('Creeping forward');
+    expect(screen.queryByTestId('safety-notice')).toBeNull();
+  });
+
+  test('a strobe rate can be typed in Hz', () => {
+    fireEvent.change(screen.getByLabelText('Flash rate unit'), { target: { value: 'Hz' } });
+    expect(field('Flash rate').value).toBe('29.5');
+    type('Flash rate', '30');
+    expect(setup.value.strobe.rateFpm).toBe(1800);
+  });
+
+  test('the lowest strobe rate must stay below the highest', () => {
+    type('Lowest rate', '20000');
+    expect(screen.getByRole('alert').textContent).toMatch(/below the highest/);
+    expect(setup.value.strobe.minFpm).toBe(30);
+  });
+
+  test('a camera shows blur per frame and the rolling-shutter bend from the core', () => {
+    fireEvent.click(screen.getByLabelText('Camera'));
+    const t = exposureFromShutterAngle(180, 30000 / 1001);
+    const blur = blurDegrees(1770 / 60, t);
+    expect(screen.getByTestId('blur').textContent).toContain(`${formatNumber(blur)}°`);
+    const skew = rollingSkewDegrees(1770 / 60, 0.025);
+    expect(screen.getByTestId('skew').textContent).toContain(`${formatNumber(skew)}° top to bottom`);
+    expect(screen.queryByTestId('photosensitivity-notice')).toBeNull();
+  });
+
+  test('a camera preset sets the frame rate exactly', () => {
+    fireEvent.click(screen.getByLabelText('Camera'));
+    fireEvent.change(screen.getByLabelText('Frame rate preset'), { target: { value: String(24000 / 1001) } });
+    expect(setup.value.camera.frameRate).toBe(24000 / 1001);
+    expect(field('Frame rate').value).toBe('23.97602');
+  });
+
+  test('exposure can be given as 1/x s', () => {
+    fireEvent.click(screen.getByLabelText('Camera'));
+    fireEvent.click(screen.getByLabelText('Time 1/x s'));
+    type('Exposure time', '1000');
+    expect(setup.value.camera.exposure).toEqual({ mode: 'time', seconds: 1 / 1000 });
+  });
+
+  test('lighting shows its flicker risk and visibility', () => {
+    fireEvent.click(screen.getByLabelText('Lighting'));
+    expect(screen.getByTestId('flicker-risk').textContent).toBe('Above the low-risk line');
+    type('Modulation (percent flicker)', '0');
+    expect(verdict()).toBe('Steady light: true motion');
+    expect(screen.queryByTestId('safety-notice')).toBeNull();
+  });
+
+  test('the speed can come from a motor', () => {
+    fireEvent.click(screen.getByLabelText('Speed from an induction motor'));
+    // Default motor: 4 poles on 50 Hz with 3 % slip: 1500 · 0.97 = 1455 rpm (IEC 60034-1 table for 1500).
+    expect(setup.value.parts[0].speedRpm).toBeCloseTo(1455, 9);
+    expect(field('Speed').value).toBe('1455');
+    type('Poles', '3');
+    expect(screen.getByRole('alert').textContent).toMatch(/pairs/);
+  });
+
+  test('the speed can be typed in Hz', () => {
+    fireEvent.change(screen.getByLabelText('Speed unit'), { target: { value: 'Hz' } });
+    expect(field('Speed').value).toBe('29.5');
+    type('Speed', '30');
+    expect(setup.value.parts[0].speedRpm).toBe(1800);
+    expect(formatRate(check.value.rateHz, 'strobe', 'fpm')).toBe('1,770 fpm');
+  });
+});

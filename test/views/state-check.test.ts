@@ -1,0 +1,295 @@
+import { describe, expect, test } from 'vitest';
+import {
+  apparentMotion,
+  blurDegrees,
+  blurPitches,
+  exposureFromShutterAngle,
+  flickerRisk,
+  lockRates,
+  rateBands,
+  rollingSkewDegrees,
+} from '../../src/core';
+import { computeCheck, corePart, tryCheck, verdictOf } from '../../src/state/check';
+import { defaultSetup, type Setup } from '../../src/state/model';
+
+function setupWith(change: Partial<Setup> & { part?: Partial<Setup['parts'][number]> }): Setup {
+  const { part, ...rest } = change;
+  const s: Setup = structuredClone({ ...defaultSetup, ...rest });
+  if (part) s.parts = [{ ...s.parts[0], ...part }];
+  return s;
+}
+
+/** One mark at 3600 rpm (60 rev/s) under a strobe at `fpm`. */
+function disc(fpm: number, extra: Partial<Setup> = {}): Setup {
+  return setupWith({
+    ...extra,
+    part: { speedRpm: 3600, features: 1, tolerancePercent: 0 },
+    samplerKind: 'strobe',
+    strobe: { rateFpm: fpm, minFpm: 30, maxFpm: 12000 },
+  });
+}
+
+describe('the verdict', () => {
+  test('a disc at 60 rev/s under 61 flashes/s turns backward at 1 rev/s', () => {
+    // Wikipedia, "Stroboscopic effect": 60 rev/s lit at 61 flashes/s seems to turn backwards at 1 rev/s.
+    const r = computeCheck(disc(61 * 60));
+    expect(r.verdict.kind).toBe('backward');
+    expect(r.verdict.headline).toBe('Turning backward');
+    expect(r.verdict.apparentRpm).toBeCloseTo(-60, 9);
+    expect(r.verdict.trueRpm).toBe(3600);
+    expect(r.verdict.trust).toBe('danger');
+  });
+
+  test('the same disc under 59 flashes/s turns forward at 1 rev/s, which is 60 rpm: a creep', () => {
+    // Wikipedia, "Stroboscopic effect": at 59 flashes/s it seems to turn forwards at 1 rev/s.
+    const r = computeCheck(disc(59 * 60));
+    expect(r.verdict.kind).toBe('creeping');
+    expect(r.verdict.headline).toBe('Creeping forward');
+    expect(r.verdict.apparentRpm).toBeCloseTo(60, 9);
+    expect(r.verdict.trust).toBe('caution');
+  });
+
+  test('a 12-spoke wheel at 2 rev/s filmed at 24 frames/s looks still', () => {
+    // Wikipedia, "Stroboscopic effect": a 12-spoke wheel at 2 rev/s filmed at 24 frames/s seems still.
+    const s = setupWith({
+      part: { speedRpm: 120, features: 12, tolerancePercent: 0 },
+      samplerKind: 'camera',
+      camera: { frameRate: 24, exposure: { mode: 'angle', angleDeg: 180 }, readoutMs: 0 },
+    });
+    const r = computeCheck(s);
+    expect(r.verdict.kind).toBe('still');
+    expect(r.verdict.headline).toBe('Looks still');
+    expect(r.showSafety).toBe(true);
+  });
+
+  test('half a turn per flash shows two images standing still', () => {
+    // physics.md §2: exactly half a turn per flash is two images standing still.
+    const r = computeCheck(disc(120 * 60));
+    expect(r.verdict.kind).toBe('images');
+    expect(r.verdict.images).toBe(2);
+    expect(r.verdict.headline).toBe('2 images, standing still');
+  });
+
+  test('a sampler above twice the pattern frequency shows true motion, and no caution', () => {
+    // Nyquist–Shannon (Shannon 1949): s > 2·n·f shows the true speed.
+    const s = setupWith({
+      part: { speedRpm: 600, features: 1, tolerancePercent: 0 },
+      samplerKind: 'camera',
+      camera: { frameRate: 60, exposure: { mode: 'angle', angleDeg: 180 }, readoutMs: 0 },
+    });
+    const r = computeCheck(s);
+    expect(r.verdict.kind).toBe('true');
+    expect(r.verdict.apparentRpm).toBeCloseTo(600, 9);
+    expect(r.showSafety).toBe(false);
+  });
+
+  test('matches the core for every look it can give', () => {
+    const part = { speedHz: 30, symmetry: 6, tolerance: 0 };
+    for (const rateHz of [7, 29.5, 35.9, 36, 90, 179, 181, 360, 1000]) {
+      const m = apparentMotion(part, rateHz, { sampler: 'flash' });
+      const v = verdictOf(m, part);
+      const words = { true: 'true', forward: /creeping|forward/, backward: 'backward', still: /still|images/, unclear: 'unclear' };
+      const want = words[m.look];
+      if (typeof want === 'string') expect(v.kind).toBe(want);
+      else expect(v.kind).toMatch(want);
+      expect(v.images).toBe(m.images);
+    }
+  });
+
+  test('steady light (0 % modulation) shows true motion', () => {
+    const s = setupWith({ samplerKind: 'lighting', lighting: { mainsHz: 50, flicker: 'double', customHz: 300, modulationPercent: 0 } });
+    const r = computeCheck(s);
+    expect(r.verdict.kind).toBe('steady');
+    expect(r.showSafety).toBe(false);
+    expect(r.showPhotosensitivity).toBe(false);
+  });
+});
+
+describe('the cautions', () => {
+  test('the safety notice shows for still, backward and unclear, and not for a forward creep', () => {
+    expect(computeCheck(disc(3600)).showSafety).toBe(true);
+    expect(computeCheck(disc(61 * 60)).showSafety).toBe(true);
+    expect(computeCheck(disc(59 * 60)).showSafety).toBe(false);
+  });
+
+  test('the photosensitivity caution shows for a flash rate from 3 to 60 per second', () => {
+    // physics.md §10, WCAG 2.x success criterion 2.3.1 counts from three flashes per second.
+    expect(computeCheck(disc(3 * 60)).showPhotosensitivity).toBe(true);
+    expect(computeCheck(disc(60 * 60)).showPhotosensitivity).toBe(true);
+    expect(computeCheck(disc(2.9 * 60)).showPhotosensitivity).toBe(false);
+    expect(computeCheck(disc(61 * 60)).showPhotosensitivity).toBe(false);
+  });
+
+  test('a camera is not a flash: no photosensitivity caution at 30 frames/s', () => {
+    const s = setupWith({ samplerKind: 'camera' });
+    expect(computeCheck(s).showPhotosensitivity).toBe(false);
+  });
+
+  test('lighting flickering at mains frequency (50 Hz) carries the photosensitivity caution', () => {
+    const s = setupWith({ samplerKind: 'lighting', lighting: { mainsHz: 50, flicker: 'mains', customHz: 300, modulationPercent: 30 } });
+    expect(computeCheck(s).showPhotosensitivity).toBe(true);
+  });
+});
+
+describe('rates to try', () => {
+  test('lists the nearest lock-in rates on each side, as lockRates gives them', () => {
+    const s = disc(3000);
+    const r = computeCheck(s);
+    const all = lockRates(corePart(s), { minHz: 0.5, maxHz: 200 }, { maxImages: 8 });
+    const below = all.filter((l) => l.rateHz < 50).slice(-3);
+    const above = all.filter((l) => l.rateHz > 50).slice(0, 3);
+    // 60 rev/s at 50 flashes/s is the lock 6/5: five images standing still right at this rate.
+    const here = all.filter((l) => l.rateHz === 50);
+    expect(here.map((l) => l.images)).toEqual([5]);
+    const want = [...below, ...here, ...above];
+    expect(r.locks.map((l) => l.rateHz)).toEqual(want.map((l) => l.rateHz));
+    expect(r.locks.map((l) => l.images)).toEqual(want.map((l) => l.images));
+    expect(r.locks.filter((l) => l.side === 'below')).toHaveLength(3);
+  });
+
+  test('marks the lock at the current rate as here', () => {
+    const r = computeCheck(disc(3600));
+    const here = r.locks.find((l) => l.side === 'here');
+    expect(here?.rateHz).toBe(60);
+    expect(here?.images).toBe(1);
+  });
+
+  test('a camera only suggests single-image rates', () => {
+    const r = computeCheck(setupWith({ samplerKind: 'camera' }));
+    expect(r.locks.length).toBeGreaterThan(0);
+    expect(r.locks.every((l) => l.images === 1)).toBe(true);
+  });
+
+  test('the creep rate shows the part creeping forward at the wanted speed', () => {
+    // physics.md §4 worked check: f = 30 rev/s, one mark, creep 0.5 rev/s forward → 29.5 flashes/s.
+    const s = setupWith({
+      part: { speedRpm: 1800, features: 1, tolerancePercent: 0 },
+      samplerKind: 'strobe',
+      strobe: { rateFpm: 1800, minFpm: 30, maxFpm: 12000 },
+      creepRpm: 30,
+    });
+    const r = computeCheck(s);
+    const nearest = r.creep.find((c) => c.side === 'below');
+    expect(nearest?.rateHz).toBeCloseTo(29.5, 12);
+    expect(nearest?.look).toBe('forward');
+    const m = apparentMotion(corePart(s), nearest!.rateHz);
+    expect(m.apparentHz * 60).toBeCloseTo(30, 9);
+  });
+
+  test('explains why there is no creep rate for a part standing still or a creep faster than the part', () => {
+    expect(computeCheck(setupWith({ part: { speedRpm: 0 } })).creepNote).toMatch(/not turning/);
+    expect(computeCheck(setupWith({ creepRpm: 5000 })).creepNote).toMatch(/slower than the true speed/);
+  });
+});
+
+describe('safe bands', () => {
+  test('are the core\'s bands over the strobe\'s own range', () => {
+    const s = disc(3000);
+    const r = computeCheck(s);
+    const bands = rateBands([corePart(s)], { minHz: 0.5, maxHz: 200 }, { sampler: 'flash' });
+    expect(r.bands.all).toEqual(bands);
+    expect(r.bands.partial).toBe(false);
+    expect(r.bands.safeNearby.every((b) => b.safe)).toBe(true);
+  });
+
+  test('find the band holding the current rate', () => {
+    const r = computeCheck(disc(3600));
+    expect(r.bands.current?.safe).toBe(false);
+    expect(r.bands.current!.fromHz).toBeLessThanOrEqual(60);
+    expect(r.bands.current!.toHz).toBeGreaterThanOrEqual(60);
+  });
+
+  test('for a camera, every rate above twice the pattern frequency with tolerance is safe', () => {
+    // physics.md §4: for frames every rate > 2·n·|f|·(1+u) is safe.
+    const s = setupWith({ part: { speedRpm: 600, features: 2, tolerancePercent: 5 }, samplerKind: 'camera' });
+    const r = computeCheck(s);
+    const last = r.bands.all.at(-1)!;
+    expect(last.safe).toBe(true);
+    expect(last.fromHz).toBeLessThanOrEqual(2 * 2 * 10 * 1.05 + 1e-9);
+    expect(last.toHz).toBe(1000);
+  });
+
+  test('a range too dense to list is searched around the rate only, quickly, and says so', () => {
+    const s = setupWith({ part: { speedRpm: 100_000, features: 500, tolerancePercent: 0 }, samplerKind: 'strobe' });
+    const r = computeCheck(s);
+    expect(r.bands.partial).toBe(true);
+    expect(r.bands.span.minHz).toBeGreaterThanOrEqual(0.5);
+    expect(r.bands.span.maxHz).toBeLessThanOrEqual(200);
+    expect(r.locks.length).toBeGreaterThan(0);
+  });
+});
+
+describe('camera and lighting read-outs', () => {
+  test('the camera read-out is the core\'s blur and rolling-shutter bend', () => {
+    const s = setupWith({ samplerKind: 'camera' });
+    const r = computeCheck(s);
+    const f = 1770 / 60;
+    const t = exposureFromShutterAngle(180, 30000 / 1001);
+    expect(r.camera?.exposureS).toBeCloseTo(t, 15);
+    expect(r.camera?.blurDeg).toBeCloseTo(blurDegrees(f, t), 9);
+    expect(r.camera?.blurPitches).toBeCloseTo(blurPitches(f, 6, t), 9);
+    expect(r.camera?.skewDeg).toBeCloseTo(rollingSkewDegrees(f, 0.025), 9);
+    expect(r.camera?.blurLook).toBe('smeared');
+    expect(r.camera?.skewLook).toBe('broken');
+  });
+
+  test('a short exposure on a slow part is sharp and a global shutter is straight', () => {
+    const s = setupWith({
+      part: { speedRpm: 60, features: 1 },
+      samplerKind: 'camera',
+      camera: { frameRate: 30, exposure: { mode: 'time', seconds: 1 / 2000 }, readoutMs: 0 },
+    });
+    const r = computeCheck(s);
+    // blurDegrees(1 rev/s, 1/2000 s) = 0.18°.
+    expect(r.camera?.blurDeg).toBeCloseTo(0.18, 12);
+    expect(r.camera?.blurLook).toBe('sharp');
+    expect(r.camera?.skewLook).toBe('straight');
+  });
+
+  test('an exposure longer than a frame is capped at one frame and noted', () => {
+    const s = setupWith({ samplerKind: 'camera', camera: { frameRate: 30, exposure: { mode: 'time', seconds: 0.5 }, readoutMs: 25 } });
+    const r = computeCheck(s);
+    expect(r.camera?.exposureS).toBeCloseTo(1 / 30, 15);
+    expect(r.camera?.shutterAngleDeg).toBeCloseTo(360, 9);
+    expect(r.notes.join(' ')).toMatch(/longer than one frame/);
+  });
+
+  test('the lighting read-out is the core\'s IEEE Std 1789-2015 class', () => {
+    const s = setupWith({ samplerKind: 'lighting' });
+    const r = computeCheck(s);
+    expect(r.lighting?.flickerHz).toBe(100);
+    expect(r.lighting?.risk).toBe(flickerRisk(100, 30));
+    // IEEE Std 1789-2015 low-risk line at 100 Hz: 0.08·100 = 8 %.
+    expect(r.lighting?.lowRiskPercent).toBeCloseTo(8, 12);
+  });
+});
+
+describe('refused set-ups', () => {
+  test('tryCheck reports the core\'s message instead of throwing', () => {
+    const s = setupWith({ part: { features: 0 } });
+    const outcome = tryCheck(s);
+    expect(outcome.ok).toBe(false);
+    if (!outcome.ok) expect(outcome.message).toMatch(/features/);
+  });
+
+  test('a strobe rate outside the strobe\'s own range is noted', () => {
+    const r = computeCheck(setupWith({ strobe: { rateFpm: 20000, minFpm: 30, maxFpm: 12000 } }));
+    expect(r.rateInRange).toBe(false);
+    expect(r.notes.join(' ')).toMatch(/outside this strobe's own range/);
+  });
+});
+
+describe('nothing computed is NaN or Infinity', () => {
+  test('across speeds, feature counts and samplers', () => {
+    const kinds = ['strobe', 'camera', 'lighting'] as const;
+    for (const kind of kinds) {
+      for (const speedRpm of [0, 1, -1770, 1770, 12_000, 600_000]) {
+        for (const features of [1, 3, 60, 5000]) {
+          const r = computeCheck(setupWith({ samplerKind: kind, part: { speedRpm, features, tolerancePercent: 2 } }));
+          const text = JSON.stringify(r, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? 'BAD' : v));
+          expect(text, `${kind} ${speedRpm} rpm ${features}`).not.toContain('BAD');
+        }
+      }
+    }
+  });
+});

@@ -1,0 +1,149 @@
+import { beforeEach, describe, expect, test } from 'vitest';
+import { defaultSetup, type Setup } from '../../src/state/model';
+import {
+  activePart,
+  flickerHzOf,
+  openSession,
+  replaceSetup,
+  samplerRateHz,
+  sessionMessage,
+  setExposureSeconds,
+  setFeatures,
+  setMotor,
+  setSamplerKind,
+  setSamplerRateHz,
+  setShutterAngle,
+  setSpeedRpm,
+  setStrobeRange,
+  setup,
+} from '../../src/state/setup';
+
+beforeEach(() => {
+  replaceSetup(defaultSetup);
+  sessionMessage.value = null;
+});
+
+describe('field setters', () => {
+  test('each builds a new set-up object and leaves the default untouched', () => {
+    const before = setup.value;
+    setFeatures(8);
+    expect(setup.value).not.toBe(before);
+    expect(activePart.value.features).toBe(8);
+    expect(defaultSetup.parts[0].features).toBe(6);
+  });
+
+  test('a motor gives the speed (1 − slip)·120·fm/P and typing a speed drops the motor', () => {
+    // IEC 60034-1 / NEMA MG 1 table: 4 poles on 50 Hz = 1500 rpm synchronous; 1450 rpm at 3.33 % slip.
+    setMotor({ mainsHz: 50, poles: 4, slipPercent: (1 - 1450 / 1500) * 100 });
+    expect(activePart.value.speedRpm).toBeCloseTo(1450, 9);
+    expect(activePart.value.motor?.poles).toBe(4);
+    setSpeedRpm(1200);
+    expect(activePart.value.motor).toBeUndefined();
+    expect(activePart.value.speedRpm).toBe(1200);
+  });
+
+  test('a motor keeps the direction the part had', () => {
+    setSpeedRpm(-100);
+    // 2 poles on 60 Hz = 3600 rpm synchronous (IEC 60034-1 / NEMA MG 1 table).
+    setMotor({ mainsHz: 60, poles: 2, slipPercent: 0 });
+    expect(activePart.value.speedRpm).toBeCloseTo(-3600, 9);
+  });
+
+  test('switching exposure between angle and time keeps the values given', () => {
+    setShutterAngle(172.8);
+    expect(setup.value.camera.exposure).toEqual({ mode: 'angle', angleDeg: 172.8 });
+    setExposureSeconds(1 / 50);
+    expect(setup.value.camera.exposure).toEqual({ mode: 'time', seconds: 1 / 50 });
+  });
+
+  test('the strobe range is set as a pair', () => {
+    setStrobeRange(100, 5000);
+    expect(setup.value.strobe).toMatchObject({ minFpm: 100, maxFpm: 5000 });
+  });
+});
+
+describe('the sampler rate', () => {
+  test('is read in Hz from whichever sampler is chosen', () => {
+    expect(samplerRateHz(setup.value)).toBeCloseTo(1770 / 60, 12);
+    setSamplerKind('camera');
+    expect(samplerRateHz(setup.value)).toBeCloseTo(30000 / 1001, 12);
+    setSamplerKind('lighting');
+    // Lighting on 50 Hz mains flickers at twice mains, 100 Hz (physics.md §6).
+    expect(samplerRateHz(setup.value)).toBe(100);
+  });
+
+  test('tapping a rate sets the chosen sampler: fpm for a strobe, fps for a camera, a custom flicker for lighting', () => {
+    setSamplerRateHz(30);
+    expect(setup.value.strobe.rateFpm).toBe(1800);
+    setSamplerKind('camera');
+    setSamplerRateHz(25);
+    expect(setup.value.camera.frameRate).toBe(25);
+    setSamplerKind('lighting');
+    setSamplerRateHz(240);
+    expect(setup.value.lighting.flicker).toBe('custom');
+    expect(flickerHzOf(setup.value.lighting)).toBe(240);
+  });
+
+  test('ignores a rate that is not a positive number', () => {
+    const before = setup.value;
+    setSamplerRateHz(NaN);
+    setSamplerRateHz(-1);
+    setSamplerRateHz(0);
+    expect(setup.value).toBe(before);
+  });
+});
+
+describe('opening the session', () => {
+  const shared: Setup = { ...structuredClone(defaultSetup), creepRpm: 7 };
+  const last: Setup = { ...structuredClone(defaultSetup), creepRpm: 3 };
+
+  test('a share link wins over the last set-up and is cleared from the address', async () => {
+    let cleared = false;
+    await openSession({
+      hash: '#s=1.x',
+      decodeShare: () => ({ ok: true, setup: shared }),
+      loadLast: async () => last,
+      clearHash: () => (cleared = true),
+    });
+    expect(setup.value.creepRpm).toBe(7);
+    expect(cleared).toBe(true);
+    expect(sessionMessage.value?.kind).toBe('info');
+  });
+
+  test('a refused link shows its message and the default set-up, not the last one', async () => {
+    setFeatures(9);
+    await openSession({
+      hash: '#s=1.broken',
+      decodeShare: () => ({ ok: false, error: 'This share link is damaged.' }),
+      loadLast: async () => last,
+      clearHash: () => undefined,
+    });
+    expect(setup.value).toEqual(defaultSetup);
+    expect(sessionMessage.value).toEqual({ kind: 'problem', text: 'This share link is damaged. The default set-up is shown instead.' });
+  });
+
+  test('without a link, the last set-up comes back', async () => {
+    await openSession({
+      hash: '',
+      decodeShare: () => ({ ok: false, error: null }),
+      loadLast: async () => last,
+      clearHash: () => undefined,
+    });
+    expect(setup.value.creepRpm).toBe(3);
+    expect(sessionMessage.value).toBeNull();
+  });
+
+  test('a change made while storage was opening is not overwritten', async () => {
+    await openSession({
+      hash: '',
+      decodeShare: () => ({ ok: false, error: null }),
+      loadLast: async () => {
+        setFeatures(11);
+        return last;
+      },
+      clearHash: () => undefined,
+    });
+    expect(activePart.value.features).toBe(11);
+    expect(setup.value.creepRpm).toBe(defaultSetup.creepRpm);
+  });
+});
