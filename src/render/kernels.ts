@@ -55,7 +55,7 @@ export function shortCoverage(a: number, length: number, duty: number): number {
  */
 export function drawSwept(
   tables: PixelTables,
-  words: Uint32Array,
+  words: Int32Array,
   colour: Float64Array,
   n: number,
   duty: number,
@@ -95,7 +95,7 @@ export function drawSwept(
 /** The flash preview's pixels: the weighted sum of each flash's coverage. */
 export function drawFlashes(
   tables: PixelTables,
-  words: Uint32Array,
+  words: Int32Array,
   colour: Float64Array,
   n: number,
   duty: number,
@@ -150,15 +150,18 @@ function coverage(a: number, length: number, duty: number): number {
   return length <= 1 ? shortCoverage(a, length, duty) : sweptCoverage(a, a + length, duty);
 }
 
-/** Background, then blades, then the mark over blade 0, then the hub on top; one RGBA word. */
+/**
+ * Background, then blades, then the mark over blade 0, then the hub on top; one RGBA word as a
+ * signed 32-bit integer, which the engine keeps unboxed (an unsigned one above 2³¹ may not be).
+ */
 function mix(colour: Float64Array, blade: number, mark: number, hub: number): number {
   const keep = 1 - hub;
   const r = (colour[0] + colour[3] * blade + colour[6] * mark) * keep + colour[9] * hub;
   const g = (colour[1] + colour[4] * blade + colour[7] * mark) * keep + colour[10] * hub;
   const b = (colour[2] + colour[5] * blade + colour[8] * mark) * keep + colour[11] * hub;
   return LITTLE_ENDIAN
-    ? (0xff000000 | (((b + 0.5) | 0) << 16) | (((g + 0.5) | 0) << 8) | ((r + 0.5) | 0)) >>> 0
-    : ((((r + 0.5) | 0) << 24) | (((g + 0.5) | 0) << 16) | (((b + 0.5) | 0) << 8) | 0xff) >>> 0;
+    ? 0xff000000 | (((b + 0.5) | 0) << 16) | (((g + 0.5) | 0) << 8) | ((r + 0.5) | 0)
+    : (((r + 0.5) | 0) << 24) | (((g + 0.5) | 0) << 16) | (((b + 0.5) | 0) << 8) | 0xff;
 }
 
 /** RGBA bytes land in a 32-bit word in the machine's byte order. */

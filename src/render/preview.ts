@@ -38,7 +38,7 @@ const FADE_CUTOFF = Math.log(256);
 export class PreviewRenderer {
   private look: PreviewLook;
   private tables: PixelTables | null = null;
-  private words: Uint32Array | null = null;
+  private words: Int32Array | null = null;
   private readonly flashPhase = new Float64Array(MAX_FLASHES_ON_EYE);
   private readonly flashWeight = new Float64Array(MAX_FLASHES_ON_EYE);
   /** Colours as numbers, refreshed with the look: background, blade − background, mark − blade, hub. */
@@ -102,7 +102,7 @@ export class PreviewRenderer {
   }
 
   /** A 32-bit view of the target's bytes, so each pixel is one store; rebuilt only for a new buffer. */
-  private wordsOf(data: Uint8ClampedArray): Uint32Array {
+  private wordsOf(data: Uint8ClampedArray): Int32Array {
     const w = this.words;
     if (
       w &&
@@ -113,7 +113,7 @@ export class PreviewRenderer {
       return w;
     if (data.byteOffset % 4 !== 0)
       throw new RangeError('The pixel buffer must start on a 4-byte boundary.');
-    this.words = new Uint32Array(data.buffer, data.byteOffset, data.length >> 2);
+    this.words = new Int32Array(data.buffer, data.byteOffset, data.length >> 2);
     return this.words;
   }
 
