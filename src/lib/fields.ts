@@ -60,9 +60,22 @@ export function readSpeedRpm(text: string, unit: SpeedUnit): number {
   return within(hz * 60, -MAX_SPEED_RPM, MAX_SPEED_RPM, 'speed', 'rpm');
 }
 
+/**
+ * A count such as "6" or "6 blades". parseNumber ignores whatever follows the number, so
+ * the words after it are checked here: "1/0" or "12abc" is not a count.
+ */
+function readCount(text: string, what: string, words: RegExp): number {
+  const bare = typeof text === 'string' ? text.trim().replace(words, '').trim() : text;
+  if (typeof bare === 'string' && bare !== '' && !/^[+\-−]?[\d\s.,'\u00a0\u202f]+$/.test(bare)) {
+    throw new InputError(what, `"${text.trim().slice(0, 24)}" is not a whole number.`);
+  }
+  return parseNumber(text, what);
+}
+
 /** Identical features on the part: blades, spokes, jaws, bolts. */
 export function readFeatures(text: string): number {
-  return whole(parseNumber(text, 'features'), 1, Math.min(MAX_SYMMETRY, 10_000), 'features');
+  const n = readCount(text, 'features', /\s*(blades?|spokes?|jaws?|bolts?|marks?|features?|teeth|tooth)$/i);
+  return whole(n, 1, Math.min(MAX_SYMMETRY, 10_000), 'features');
 }
 
 /** Speed tolerance, ± percent. */
@@ -72,7 +85,7 @@ export function readTolerancePercent(text: string): number {
 
 /** Motor poles: an even whole number. */
 export function readPoles(text: string): number {
-  const poles = whole(parseNumber(text, 'poles'), 2, 200, 'poles');
+  const poles = whole(readCount(text, 'poles', /\s*poles?$/i), 2, 200, 'poles');
   if (poles % 2 !== 0) throw new InputError('poles', 'Poles come in pairs: give an even number such as 2, 4 or 6.');
   return poles;
 }

@@ -147,7 +147,7 @@ describe('the check screen', () => {
 
   test('exposure can be given as 1/x s', () => {
     fireEvent.click(screen.getByLabelText('Camera'));
-    fireEvent.click(screen.getByLabelText('Time 1/x s'));
+    fireEvent.click(screen.getByLabelText('As a time'));
     type('Exposure time', '1000');
     expect(setup.value.camera.exposure).toEqual({ mode: 'time', seconds: 1 / 1000 });
   });

@@ -59,6 +59,15 @@ describe('reading whole counts', () => {
     expect(message('2.5', readFeatures)).toMatch(/whole number/);
   });
 
+  test('a count may carry its word, but nothing else after it', () => {
+    expect(value('6 blades', readFeatures)).toBe(6);
+    expect(value('12 spokes', readFeatures)).toBe(12);
+    expect(value('4 poles', readPoles)).toBe(4);
+    expect(message('1/0', readFeatures)).toMatch(/not a whole number/);
+    expect(message('12abc', readFeatures)).toMatch(/not a whole number/);
+    expect(message('4x', readPoles)).toMatch(/not a whole number/);
+  });
+
   test('poles must be even', () => {
     expect(value('4', readPoles)).toBe(4);
     expect(message('3', readPoles)).toMatch(/pairs/);

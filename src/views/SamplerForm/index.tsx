@@ -98,8 +98,8 @@ function CameraFields() {
         legend="Exposure given as"
         name="exposure-mode"
         options={[
-          { value: 'angle', label: 'Shutter angle' },
-          { value: 'time', label: 'Time 1/x s' },
+          { value: 'angle', label: 'As an angle' },
+          { value: 'time', label: 'As a time' },
         ]}
         value={camera.exposure.mode}
         onChange={(mode) => {

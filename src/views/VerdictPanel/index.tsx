@@ -16,7 +16,8 @@ export function VerdictPanel({ class: extra }: Props) {
   const r = check.value;
   const v = r.verdict;
   const sign = v.trueRpm < 0 ? -1 : 1;
-  const seen = formatRpmWithDirection(v.apparentRpm, sign);
+  // Half a pitch per sample can be read either way: give no direction with the speed.
+  const seen = v.kind === 'unclear' ? `${formatNumber(Math.abs(v.apparentRpm))} rpm, either way` : formatRpmWithDirection(v.apparentRpm, sign);
   const trueSpeed = `${formatNumber(Math.abs(v.trueRpm))} rpm`;
   const features = r.part.symmetry === 1 ? '1 mark' : `${formatNumber(r.part.symmetry)} features`;
   const partName = activePart.value.name.trim();

@@ -1,0 +1,66 @@
+// Typed garbage in every field: each gets a message beside it, the results stay as they were,
+// and nothing on screen ever reads NaN or Infinity.
+import { afterEach, describe, expect, inject, test } from 'vitest';
+import type { Page } from 'playwright-core';
+import { openApp, openBrowser, type Session } from './browser';
+
+let session: Session | undefined;
+
+afterEach(async () => {
+  await session?.close();
+  session = undefined;
+});
+
+const GARBAGE = ['abc', '', '   ', 'NaN', '-Infinity', '1e999', '<script>alert(1)</script>', '١٢٣', '1/0', '0x10', '12abc', '--5', '1..2'];
+
+/** The visible text of the page without what the user typed back in quotes. */
+async function shownText(page: Page): Promise<string> {
+  const text = await page.locator('body').innerText();
+  return text.replace(/"[^"]*"/g, '');
+}
+
+async function checkFields(page: Page, labels: string[]) {
+  for (const label of labels) {
+    const field = page.getByLabel(label, { exact: true });
+    const good = await field.inputValue();
+    const verdict = await page.getByTestId('verdict').innerText();
+    const seen = await page.getByTestId('apparent-speed').innerText();
+    for (const text of GARBAGE) {
+      await field.fill(text);
+      expect(await field.getAttribute('aria-invalid'), `${label}: "${text}"`).toBe('true');
+      const messageId = (await field.getAttribute('aria-describedby'))!.split(' ')[0];
+      const message = await page.locator(`[id="${messageId}"]`).innerText();
+      expect(message.length, `${label}: "${text}"`).toBeGreaterThan(5);
+      expect(await page.getByTestId('verdict').innerText()).toBe(verdict);
+      expect(await page.getByTestId('apparent-speed').innerText()).toBe(seen);
+      expect(await shownText(page), `${label}: "${text}"`).not.toMatch(/NaN|Infinity/);
+    }
+    await field.fill(good);
+    expect(await field.getAttribute('aria-invalid')).toBeNull();
+  }
+}
+
+describe('typed garbage', () => {
+  test('every field of the part, the strobe and the creep refuses it beside the field', async () => {
+    session = await openBrowser();
+    const { page } = session;
+    await openApp(page, inject('baseUrl'));
+    await checkFields(page, ['Speed', 'Blades or marks', 'Tolerance', 'Flash rate', 'Lowest rate', 'Highest rate', 'Creep speed wanted']);
+    await page.getByLabel('Speed from an induction motor').check();
+    await checkFields(page, ['Poles', 'Slip']);
+    expect(await page.locator('script:not([src])').count()).toBe(0);
+  });
+
+  test('every camera and lighting field refuses it beside the field', async () => {
+    session = await openBrowser();
+    const { page } = session;
+    await openApp(page, inject('baseUrl'));
+    await page.getByRole('radio', { name: 'Camera' }).check();
+    await checkFields(page, ['Frame rate', 'Shutter angle', 'Rolling readout time']);
+    await page.getByRole('radio', { name: 'As a time' }).check();
+    await checkFields(page, ['Exposure time']);
+    await page.getByRole('radio', { name: 'Lighting' }).check();
+    await page.getByRole('radio', { name: 'Other' }).check();
+    await checkFields(page, ['Flicker frequency', 'Modulation (percent flicker)']);
+  });
+});

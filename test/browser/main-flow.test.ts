@@ -1,0 +1,120 @@
+// The main flow in a real Chromium against the built app: what the screen shows must be what
+// the core computes, formatted the way the screen formats it.
+import { afterEach, describe, expect, inject, test } from 'vitest';
+import { mkdirSync } from 'node:fs';
+import {
+  apparentMotion,
+  blurDegrees,
+  blurPitches,
+  exposureFromShutterAngle,
+  flickerRisk,
+  rollingSkewDegrees,
+} from '../../src/core';
+import { formatNumber, formatRpmWithDirection } from '../../src/lib/format';
+import { openApp, openBrowser, typeInto, type Session } from './browser';
+
+let session: Session | undefined;
+
+afterEach(async () => {
+  await session?.close();
+  session = undefined;
+});
+
+const shots = 'test-output/screenshots';
+
+describe('the main flow', () => {
+  test('typed values give the verdict and speeds the core computes', async () => {
+    session = await openBrowser();
+    const { page } = session;
+    await openApp(page, inject('baseUrl'));
+    const verdict = page.getByTestId('verdict');
+
+    // Default: a 6-blade fan at 1770 rpm under 1770 fpm: one image per pitch, standing still.
+    await expect.poll(() => verdict.innerText()).toMatch(/^Looks still/);
+    await expect.poll(() => page.getByTestId('safety-notice').isVisible()).toBe(true);
+
+    // Wikipedia, "Stroboscopic effect": a disc at 60 rev/s lit at 61 flashes/s seems to turn backwards at 1 rev/s.
+    await typeInto(page, 'Speed', '3600');
+    await typeInto(page, 'Blades or marks', '1');
+    await typeInto(page, 'Flash rate', '3660');
+    const m = apparentMotion({ speedHz: 60, symmetry: 1 }, 61);
+    expect(m.look).toBe('backward');
+    await expect.poll(() => verdict.innerText()).toMatch(/^Turning backward/);
+    expect(await page.getByTestId('apparent-speed').innerText()).toBe(formatRpmWithDirection(m.apparentHz * 60, 1));
+    expect(await page.getByTestId('true-speed').innerText()).toBe('3,600 rpm');
+
+    // ... and at 59 flashes/s forwards at 1 rev/s.
+    await typeInto(page, 'Flash rate', '3540');
+    await expect.poll(() => verdict.innerText()).toMatch(/^Creeping forward/);
+    expect(await page.getByTestId('apparent-speed').innerText()).toBe('60 rpm forward');
+    expect(await page.getByTestId('safety-notice').count()).toBe(0);
+    expect(await page.getByTestId('photosensitivity-notice').isVisible()).toBe(true);
+
+    // Tapping the single-image lock-in rate freezes it.
+    await page.getByTestId('lock-list').getByRole('button', { name: /^3,600 fpm 1 image/ }).click();
+    await expect.poll(() => verdict.innerText()).toMatch(/^Looks still/);
+    expect(await page.getByLabel('Flash rate', { exact: true }).inputValue()).toBe('3600');
+    expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+  });
+
+  test('each keystroke updates the verdict within the same frame or the next', async () => {
+    session = await openBrowser();
+    const { page } = session;
+    await openApp(page, inject('baseUrl'));
+    const worstMs = await page.evaluate(async () => {
+      const input = document.getElementById('speed') as HTMLInputElement;
+      const shown = document.querySelector('[data-testid="true-speed"]')!;
+      let worst = 0;
+      for (const text of ['1', '17', '177', '1771', '1769', '17690', '176900']) {
+        const start = performance.now();
+        input.value = text;
+        input.dispatchEvent(new Event('input', { bubbles: true }));
+        await new Promise((r) => requestAnimationFrame(() => r(null)));
+        const elapsed = performance.now() - start;
+        const want = `${Number(text).toLocaleString('en-US')} rpm`;
+        if (shown.textContent !== want) throw new Error(`after "${text}" the screen shows "${shown.textContent}"`);
+        worst = Math.max(worst, elapsed);
+      }
+      return worst;
+    });
+    // One frame at 60 Hz is about 17 ms; allow for a slow shared test machine. "Common practice":
+    // about 100 ms is where a response stops feeling instant.
+    expect(worstMs).toBeLessThan(100);
+  });
+
+  test('a camera shows blur and rolling-shutter bend as the core computes them', async () => {
+    session = await openBrowser();
+    const { page } = session;
+    await openApp(page, inject('baseUrl'));
+    await page.getByRole('radio', { name: 'Camera' }).check();
+    await page.getByLabel('Frame rate preset').selectOption({ label: '25' });
+    await typeInto(page, 'Shutter angle', '90');
+    await typeInto(page, 'Rolling readout time', '30');
+    const f = 1770 / 60;
+    const t = exposureFromShutterAngle(90, 25);
+    await expect
+      .poll(() => page.getByTestId('blur').innerText())
+      .toBe(`${formatNumber(blurDegrees(f, t))}° of turn, ${formatNumber(blurPitches(f, 6, t))} pitches`);
+    expect(await page.getByTestId('skew').innerText()).toBe(
+      `${formatNumber(rollingSkewDegrees(f, 0.03))}° top to bottom, ${formatNumber((rollingSkewDegrees(f, 0.03) * 6) / 360)} pitches`,
+    );
+    // A camera's frames are not flashes: no photosensitivity caution.
+    expect(await page.getByTestId('photosensitivity-notice').count()).toBe(0);
+    mkdirSync(shots, { recursive: true });
+    await page.screenshot({ path: `${shots}/check-phone-camera-full.png`, fullPage: true });
+  });
+
+  test('lighting shows the flicker risk class the core gives', async () => {
+    session = await openBrowser({ width: 1280, height: 800 });
+    const { page } = session;
+    await openApp(page, inject('baseUrl'));
+    await page.getByRole('radio', { name: 'Lighting' }).check();
+    await page.getByRole('radio', { name: '60 Hz' }).check();
+    await typeInto(page, 'Modulation (percent flicker)', '8');
+    // IEEE Std 1789-2015 at 120 Hz: no-effect line 0.0333·120 = 4 %, low-risk line 0.08·120 = 9.6 %.
+    expect(flickerRisk(120, 8)).toBe('low-risk');
+    await expect.poll(() => page.getByTestId('flicker-risk').innerText()).toBe('Between the no-effect and low-risk lines');
+    mkdirSync(shots, { recursive: true });
+    await page.screenshot({ path: `${shots}/check-desktop-lighting-full.png`, fullPage: true });
+  });
+});
