@@ -111,6 +111,11 @@ export interface CameraPlanOptions extends Partial<LookOptions> {
 }
 
 const NEAR_MISSES = 5;
+/**
+ * Beyond this many features passing per frame the look hangs on the speed's 7th digit, which
+ * nobody knows; rateBands' work also grows with it.
+ */
+const MAX_PITCHES_PER_FRAME = 1e6;
 /** A creep within this factor of the one wanted counts as reaching it (a judgement). */
 const CREEP_FACTOR = 3;
 /** Creep clarity 1/(1 + 4·blur in pitches): half at a quarter pitch (a judgement). */
@@ -139,8 +144,8 @@ const CREEP_BLUR_WEIGHT = 4;
  *
  * Units: frames/s, seconds, degrees, rev/s; apparent speeds in rpm. Throws InputError for no
  * frame rates, a rate ≤ 0, no shutter angles or exposures, an angle outside (0, 360], an
- * exposure ≤ 0, none that fits in a frame, a negative readout, a bad part, an unknown goal or a
- * creep ≤ 0.
+ * exposure ≤ 0, none that fits in a frame, a negative readout, a bad part, an unknown goal, a
+ * creep ≤ 0, or a frame rate at which over a million features pass per frame.
  *
  * @example
  * // Wikipedia, "Stroboscopic effect": a 12-spoke wheel at 2 rev/s filmed at 24 frames/s looks still.
@@ -261,6 +266,15 @@ function evaluate(
   maxResidual: number,
 ): CameraSetting {
   const opts = { ...look, sampler: 'frames' as const };
+  const pitchesPerFrame =
+    (part.symmetry * Math.abs(part.speedHz) * (1 + part.tolerance)) / frameRate;
+  if (!(pitchesPerFrame <= MAX_PITCHES_PER_FRAME)) {
+    throw new InputError(
+      'frame rate',
+      `At ${plainNumber(frameRate)} frames/s the part passes over a million features per frame: ` +
+        'what it looks like then depends on digits nobody knows. Check the units of the speed and frame rates.',
+    );
+  }
   const m = apparentMotion(part, frameRate, opts);
   const apparentRpm = m.look === 'still' ? 0 : hzToRpm(m.apparentHz);
   const ends = [part.speedHz * (1 - part.tolerance), part.speedHz * (1 + part.tolerance)].map(
@@ -283,6 +297,12 @@ function evaluate(
     blurP === 0 ? 1 : Math.abs(Math.sin(Math.PI * blurP) / (Math.PI * blurP));
   const pitchDeg = 360 / part.symmetry;
   const smoothDisc = blurP >= 1 && residualContrast <= maxResidual;
+  if (![apparentRpm, ...ends, blurDeg, blurP, skewDeg, residualContrast].every(Number.isFinite)) {
+    throw new InputError(
+      'speed',
+      'The speed, frame rates or exposures are too large to plan with.',
+    );
+  }
 
   const sharp = 1 / (1 + blurDeg / sharpBlurDeg);
   // An even disc has no features left for the rolling shutter to bend.

@@ -242,6 +242,12 @@ function bandOf(p: ChainPart): Band {
 }
 
 function toPart(name: string, symmetry: number, b: Band): ChainPart {
+  if (!Number.isFinite(b.highHz) || !Number.isFinite(b.ratio) || !Number.isFinite(b.nominalHz)) {
+    throw new InputError(
+      `speed of ${name}`,
+      `The speed of ${name} comes out too large to work with: check the drives before it.`,
+    );
+  }
   const mid = (b.lowHz + b.highHz) / 2;
   const tolerance = mid === 0 ? 0 : (b.highHz - b.lowHz) / (2 * mid);
   if (tolerance > MAX_TOLERANCE) {

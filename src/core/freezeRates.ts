@@ -139,6 +139,9 @@ function checkAll(parts: Part[], range: Range, opts: StillRateOptions | undefine
   return { checked, minHz, maxHz, qMax, look };
 }
 
+/** More still spans than this for one part would take seconds to list and mean nothing on a chart. */
+const MAX_SPANS_PER_PART = 1_000_000;
+
 function addStillSpans(
   part: Required<Part>,
   index: number,
@@ -169,6 +172,15 @@ function addStillSpans(
   const queryMin = Math.max(minHz, floorHz) / (1 + w);
   const queryMax = maxHz / (1 - w);
   if (!(queryMin < queryMax)) return;
+  // Locks F·q/p in [queryMin, queryMax]: about F·(1/queryMin − 1/queryMax)·q per image count q.
+  const expected = F * (1 / queryMin - 1 / queryMax) * ((qMax * (qMax + 1)) / 2);
+  if (!(expected <= MAX_SPANS_PER_PART)) {
+    throw new InputError(
+      'rate range',
+      `Part ${index + 1} turns too fast for rates this low: it would stand still at millions of rates. ` +
+        'Raise the lowest rate, or count fewer images.',
+    );
+  }
   for (const lock of lockRates(part, { minHz: queryMin, maxHz: queryMax }, { maxImages: qMax })) {
     push(lock.rateHz * (1 - w), lock.rateHz * (1 + w), lock.q, lock.p, false);
   }

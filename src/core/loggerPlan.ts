@@ -220,11 +220,17 @@ export function niceSampleRateHz(hz: number): number {
   for (;;) {
     for (const m of NICE_MANTISSAS) {
       const candidate = exponent >= 0 ? m * 10 ** exponent : m / 10 ** -exponent;
+      if (!Number.isFinite(candidate)) {
+        throw new InputError('sample rate', `${f} Hz is too large a sample rate.`);
+      }
       if (candidate >= f * (1 - 1e-12)) return candidate;
     }
     exponent++;
   }
 }
+
+/** No proposal above this rate (1 THz): far beyond any data logger, and safe from overflow. */
+const MAX_PROPOSED_HZ = 1e12;
 
 function propose(
   fmax: number,
@@ -239,8 +245,11 @@ function propose(
   for (let m = 1; m <= maxOrder; m++) {
     const fcMin = fmax / Math.pow(passK, 1 / (2 * m));
     const stretch = Math.pow(stopK, 1 / (2 * m));
-    needs.push({ m, fcMin, stretch, fsMin: fmax + fcMin * stretch });
+    const fsMin = fmax + fcMin * stretch;
+    // Beyond any converter (and beyond the nice series' reach): not a proposal.
+    if (fsMin <= MAX_PROPOSED_HZ) needs.push({ m, fcMin, stretch, fsMin });
   }
+  if (needs.length === 0) return undefined;
   const best = Math.min(...needs.map((n) => niceSampleRateHz(n.fsMin)));
   if (!(best <= maxSampleHz)) return undefined;
   const chosen = needs.find((n) => n.fsMin <= best * (1 + 1e-12));
@@ -270,8 +279,9 @@ function componentsOf(tones: MachineTones): Array<{ label: string; hz: number }>
   const f = requirePositive(tones.shaftHz, 'shaft speed');
   const harmonics = requireWhole(tones.harmonics ?? 1, 'harmonics', 1, 200);
   const out: Array<{ label: string; hz: number }> = [];
-  for (let k = 1; k <= harmonics; k++)
+  for (let k = 1; k <= harmonics; k++) {
     out.push({ label: k === 1 ? '1× shaft' : `${k}× shaft`, hz: k * f });
+  }
   listOf(tones.blades, 'blade counts').forEach((b, i) => {
     const n = requireWhole(b, `blade count ${i + 1}`, 1, 1000);
     out.push({ label: `blade pass (${n} blades)`, hz: n * f });
@@ -286,6 +296,12 @@ function componentsOf(tones: MachineTones): Array<{ label: string; hz: number }>
       typeof t?.label === 'string' && t.label.trim() !== '' ? t.label.trim() : `tone ${i + 1}`;
     out.push({ label, hz });
   });
+  if (!out.every((c) => Number.isFinite(c.hz))) {
+    throw new InputError(
+      'shaft speed',
+      'The shaft speed times the blade or tooth count is too large to work with.',
+    );
+  }
   return out;
 }
 

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { cameraPlan, standardFrameRates, type CameraAbilities } from '../../src/core/cameraPlan';
-import { bad, expectInputError } from './expectInputError';
+import { anyFinite, bad, expectInputError, finiteOrInputError } from './expectInputError';
 
 const wheel = { speedHz: 2, symmetry: 12 }; // Wikipedia, "Stroboscopic effect": 12 spokes at 2 rev/s
 const fan = { speedHz: 1770 / 60, symmetry: 6 }; // Engineering ToolBox typical 4-pole 60 Hz full-load speed, 6 blades
@@ -222,6 +223,15 @@ describe('cameraPlan: bad input', () => {
     expectInputError(() => cameraPlan(camera, { speedHz: Infinity, symmetry: 1 }, goal), 'speed');
   });
 
+  it('refuses a frame rate at which over a million features pass per frame', () => {
+    // 100 teeth at 1000 rev/s filmed at 0.01 frames/s: 10⁷ teeth per frame.
+    expectInputError(
+      () => cameraPlan({ ...camera, frameRatesHz: [0.01] }, { speedHz: 1000, symmetry: 100 }, goal),
+      'frame rate',
+      'million features',
+    );
+  });
+
   it('rejects bad options', () => {
     expectInputError(
       () => cameraPlan(camera, wheel, goal, { sharpBlurDeg: 0 }),
@@ -232,5 +242,35 @@ describe('cameraPlan: bad input', () => {
       'smooth disc contrast',
     );
     expectInputError(() => cameraPlan(camera, wheel, goal, { unclearStep: 2 }), 'unclear step');
+  });
+});
+
+describe('cameraPlan: never NaN or Infinity', () => {
+  it('returns finite numbers or throws InputError for any camera, part and goal', () => {
+    fc.assert(
+      fc.property(
+        anyFinite(),
+        fc.integer({ min: 1, max: 1000 }),
+        fc.array(anyFinite(), { minLength: 1, maxLength: 3 }),
+        fc.array(anyFinite(), { maxLength: 2 }),
+        fc.array(anyFinite(), { maxLength: 2 }),
+        anyFinite(),
+        fc.oneof(
+          fc.constant({ kind: 'freeze' as const }),
+          fc.constant({ kind: 'natural' as const }),
+          fc.constant({ kind: 'honest' as const }),
+          anyFinite().map((creepHz) => ({ kind: 'creep' as const, creepHz })),
+        ),
+        (speedHz, symmetry, frameRatesHz, shutterAnglesDeg, exposuresS, readoutS, goal) =>
+          finiteOrInputError(() =>
+            cameraPlan(
+              { frameRatesHz, shutterAnglesDeg, exposuresS, readoutS },
+              { speedHz, symmetry },
+              goal,
+            ),
+          ),
+      ),
+      { seed: 1949, numRuns: 500 },
+    );
   });
 });

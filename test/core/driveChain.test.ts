@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { driveChain, type ChainSpec } from '../../src/core/driveChain';
 import { apparentMotion } from '../../src/core/apparentMotion';
-import { bad, expectInputError } from './expectInputError';
+import { anyFinite, bad, expectInputError, finiteOrInputError } from './expectInputError';
 
 // IEC 60034-1 / NEMA MG 1: a 4-pole motor on 50 Hz is 1500 rpm synchronous; Engineering ToolBox
 // gives 1450 rpm as its typical full-load speed, a slip of 1/30.
@@ -268,6 +269,49 @@ describe('driveChain: bad input', () => {
         }),
       'tolerance of fan',
       '50 %',
+    );
+  });
+});
+
+describe('driveChain: never NaN or Infinity', () => {
+  it('returns finite numbers or throws InputError for any numbers at all', () => {
+    fc.assert(
+      fc.property(
+        anyFinite(),
+        anyFinite(),
+        anyFinite(),
+        anyFinite(),
+        anyFinite(),
+        (speed, tol, d1, d2, slip) =>
+          finiteOrInputError(() =>
+            driveChain({
+              root: {
+                kind: 'fixed',
+                speedHz: speed,
+                tolerance: Math.abs(tol) < 1 ? Math.abs(tol) : tol,
+              },
+              parts: [
+                { name: 'a', symmetry: 1 },
+                {
+                  name: 'b',
+                  symmetry: 3,
+                  link: {
+                    kind: 'belt',
+                    driverDiameterM: d1,
+                    drivenDiameterM: d2,
+                    slipPercent: slip,
+                  },
+                },
+                {
+                  name: 'c',
+                  symmetry: 5,
+                  link: { kind: 'gear', driverTeeth: 100_000, drivenTeeth: 1 },
+                },
+              ],
+            }),
+          ),
+      ),
+      { seed: 1949, numRuns: 1000 },
     );
   });
 });

@@ -5,7 +5,13 @@ import { apparentMotion } from '../../src/core/apparentMotion';
 import { driveChain } from '../../src/core/driveChain';
 import { defaultLookOptions } from '../../src/core/lookOptions';
 import type { Part, Sampler } from '../../src/core/types';
-import { bad, expectInputError } from './expectInputError';
+import {
+  anyFinite,
+  anyPositive,
+  bad,
+  expectInputError,
+  finiteOrInputError,
+} from './expectInputError';
 
 const SEED = 1949; // fixed so that any failure reproduces
 const stillHz = defaultLookOptions.stillHz; // 0.25 rpm, the still threshold of lookOptions
@@ -287,5 +293,39 @@ describe('stillRates, freezeRates, noStillRates: bad input', () => {
     expectInputError(() => stillRates([wheel], { minHz: 10, maxHz: 1 }), 'rate range', 'empty');
     expectInputError(() => freezeRates([wheel], 0, range, { sampler: bad('video') }), 'sampler');
     expectInputError(() => noStillRates([wheel], range, { maxImages: 0 }), 'largest image count');
+  });
+});
+
+describe('stillRates, freezeRates, noStillRates: never NaN or Infinity, never a hang', () => {
+  it('returns finite bands or throws InputError for any speeds and ranges', () => {
+    fc.assert(
+      fc.property(
+        anyFinite(),
+        fc.integer({ min: 1, max: 1000 }),
+        anyPositive(),
+        anyPositive(),
+        (speedHz, symmetry, a, b) => {
+          const range = { minHz: Math.min(a, b), maxHz: Math.max(a, b) };
+          const parts = [
+            { speedHz, symmetry },
+            { speedHz: 25, symmetry: 6, tolerance: 0.01 },
+          ];
+          return (
+            finiteOrInputError(() => stillRates(parts, range)) &&
+            finiteOrInputError(() => freezeRates(parts, 0, range)) &&
+            finiteOrInputError(() => noStillRates(parts, range, { sampler: 'frames' }))
+          );
+        },
+      ),
+      { seed: SEED, numRuns: 300 },
+    );
+  });
+
+  it('refuses, with a message, a part so fast that it would stand still at millions of low rates', () => {
+    expectInputError(
+      () => stillRates([{ speedHz: 1e6, symmetry: 1 }], { minHz: 0.01, maxHz: 10 }),
+      'rate range',
+      'raise the lowest rate',
+    );
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { lightingCheck, type Lamp } from '../../src/core/lightingCheck';
-import { bad, expectInputError } from './expectInputError';
+import { anyFinite, bad, expectInputError, finiteOrInputError } from './expectInputError';
 
 /** CIE TN 006:2016 visibility threshold T(f) = 2.865e-5·f^1.543 + 0.225 (physics.md §6), written out. */
 const T = (f: number) => 2.865e-5 * Math.pow(f, 1.543) + 0.225;
@@ -172,5 +173,26 @@ describe('lightingCheck: bad input', () => {
       'features (blades, spokes)',
     );
     expectInputError(() => lightingCheck(lamp50, [chuck], { stillHz: -1 }), 'still threshold');
+  });
+});
+
+describe('lightingCheck: never NaN or Infinity', () => {
+  it('returns finite numbers or throws InputError for any part and flicker', () => {
+    fc.assert(
+      fc.property(
+        anyFinite(),
+        fc.integer({ min: 1, max: 100_000 }),
+        fc.double({ min: 0, max: 0.5, noNaN: true }),
+        fc.oneof(fc.constantFrom<'double' | 'mains'>('double', 'mains'), anyFinite()),
+        anyFinite(),
+        (speedHz, symmetry, tolerance, flicker, modulationPercent) =>
+          finiteOrInputError(() =>
+            lightingCheck({ mainsHz: 60, flicker, modulationPercent }, [
+              { speedHz, symmetry, tolerance },
+            ]),
+          ),
+      ),
+      { seed: 1949, numRuns: 500 },
+    );
   });
 });

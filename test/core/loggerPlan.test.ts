@@ -7,7 +7,7 @@ import {
   niceSampleRateHz,
 } from '../../src/core/loggerPlan';
 import { lowPassGainDb } from '../../src/core/logger';
-import { bad, expectInputError } from './expectInputError';
+import { anyFinite, bad, expectInputError, finiteOrInputError } from './expectInputError';
 
 const SEED = 1949;
 const none = { kind: 'none' as const };
@@ -288,6 +288,34 @@ describe('loggerPlan: bad input', () => {
     expectInputError(
       () => loggerPlan(tones, 1000, none, 16, { maxSampleHz: -1 }),
       'fastest sample rate',
+    );
+  });
+});
+
+describe('loggerPlan: never NaN or Infinity', () => {
+  it('returns finite numbers or throws InputError for any tones, rate, filter and bits', () => {
+    fc.assert(
+      fc.property(
+        anyFinite(),
+        fc.integer({ min: 1, max: 200 }),
+        fc.array(fc.integer({ min: 1, max: 1000 }), { maxLength: 2 }),
+        anyFinite(),
+        fc.oneof(
+          fc.constant({ kind: 'none' as const }),
+          anyFinite().map((cutoffHz) => ({ kind: 'rc' as const, cutoffHz })),
+          fc.record({
+            kind: fc.constant('butterworth' as const),
+            order: fc.integer({ min: 1, max: 20 }),
+            cutoffHz: anyFinite(),
+          }),
+        ),
+        fc.integer({ min: 1, max: 64 }),
+        (shaftHz, harmonics, blades, sampleHz, filter, bits) =>
+          finiteOrInputError(() =>
+            loggerPlan({ shaftHz, harmonics, blades }, sampleHz, filter, bits),
+          ),
+      ),
+      { seed: SEED, numRuns: 500 },
     );
   });
 });

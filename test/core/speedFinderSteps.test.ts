@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { motorExpectedRange, speedFinderSteps } from '../../src/core/speedFinderSteps';
-import { bad, expectInputError } from './expectInputError';
+import { bad, expectInputError, finiteOrInputError } from './expectInputError';
 
 // A strobe covering 30 to 12 000 flashes per minute (common practice for hand-held strobes).
 const strobe = { minHz: 0.5, maxHz: 200 };
@@ -314,5 +315,35 @@ describe('speedFinderSteps and motorExpectedRange: bad input', () => {
     expectInputError(() => motorExpectedRange(50, 4, { min: 0.04, max: 0.02 }), 'slip', 'empty');
     expectInputError(() => motorExpectedRange(50, 4, { min: 0, max: 0.6 }), 'largest slip');
     expectInputError(() => motorExpectedRange(50, 4, { min: NaN, max: 0.05 }), 'smallest slip');
+  });
+});
+
+describe('speedFinderSteps: never NaN or Infinity', () => {
+  it('returns finite numbers or throws InputError for any readings within a strobe’s reach', () => {
+    // Rates are kept to what strobes and findSpeed handle (0.01 Hz to 1 MHz); the step adds no limit of its own.
+    const rate = fc.double({ min: 0.01, max: 1e6, noNaN: true });
+    fc.assert(
+      fc.property(
+        fc.array(fc.record({ rateHz: rate, images: fc.integer({ min: 1, max: 8 }) }), {
+          maxLength: 3,
+        }),
+        fc.integer({ min: 1, max: 100 }),
+        rate,
+        rate,
+        fc.option(fc.tuple(rate, rate)),
+        (readings, symmetry, a, b, expected) =>
+          finiteOrInputError(() =>
+            speedFinderSteps({
+              readings,
+              symmetry,
+              strobeRange: { minHz: Math.min(a, b), maxHz: Math.max(a, b) },
+              ...(expected
+                ? { expect: { minHz: Math.min(...expected), maxHz: Math.max(...expected) } }
+                : {}),
+            }),
+          ),
+      ),
+      { seed: 1949, numRuns: 300 },
+    );
   });
 });
