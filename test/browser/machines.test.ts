@@ -35,6 +35,13 @@ describe('saved machines', () => {
     await expect.poll(() => list.innerText()).toContain('Sifter drive');
     // The first-run example is there too.
     expect(await list.innerText()).toContain('Example: cooler fan, pellet line 2');
+
+    // Closing the tab and opening the app again keeps them as well.
+    await page.close();
+    const again = await session.context.newPage();
+    await openApp(again, inject('baseUrl'));
+    await again.getByRole('button', { name: 'Machines' }).click();
+    await expect.poll(() => again.getByTestId('machine-list').innerText()).toContain('Sifter drive');
   });
 
   test('export to a file and import it back after deleting', async () => {

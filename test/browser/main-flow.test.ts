@@ -26,6 +26,8 @@ describe('the main flow', () => {
   test('typed values give the verdict and speeds the core computes', async () => {
     session = await openBrowser();
     const { page } = session;
+    const requests: string[] = [];
+    page.on('request', (r) => requests.push(r.url()));
     await openApp(page, inject('baseUrl'));
     const verdict = page.getByTestId('verdict');
 
@@ -55,6 +57,11 @@ describe('the main flow', () => {
     await expect.poll(() => verdict.innerText()).toMatch(/^Looks still/);
     expect(await page.getByLabel('Flash rate', { exact: true }).inputValue()).toBe('3600');
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+
+    // Nothing leaves the origin: no web fonts, analytics or CDNs.
+    const origin = new URL(inject('baseUrl')).origin;
+    expect(requests.length).toBeGreaterThan(2);
+    expect(requests.filter((u) => !u.startsWith(origin) && !u.startsWith('data:') && !u.startsWith('blob:'))).toEqual([]);
   });
 
   test('each keystroke updates the verdict within the same frame or the next', async () => {
