@@ -136,6 +136,10 @@ describe('the check screen', () => {
     const skew = rollingSkewDegrees(1770 / 60, 0.025);
     expect(screen.getByTestId('skew').textContent).toContain(`${formatNumber(skew)}° top to bottom`);
     expect(screen.queryByTestId('photosensitivity-notice')).toBeNull();
+    // 2.95 pitches of blur per frame: the verdict says the blades cannot be made out.
+    expect(screen.getByTestId('smear-note').textContent).toMatch(/even disc/);
+    type('Shutter angle', '1');
+    expect(screen.queryByTestId('smear-note')).toBeNull();
   });
 
   test('a camera preset sets the frame rate exactly', () => {

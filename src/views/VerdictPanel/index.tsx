@@ -43,6 +43,11 @@ export function VerdictPanel({ class: extra }: Props) {
           <dd data-testid="true-speed">{trueSpeed}</dd>
         </div>
       </dl>
+      {r.camera?.blurLook === 'smeared' && (
+        <p class={style.aside} data-testid="smear-note">
+          Each frame smears the features into an even disc: single blades cannot be made out.
+        </p>
+      )}
       <p class={style.context}>
         {partName && <span data-testid="part-name">{partName}: </span>}
         {features} · {SAMPLER_WORDS[r.samplerKind]} {formatRate(r.rateHz, r.samplerKind, flashUnit.value)}
