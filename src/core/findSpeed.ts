@@ -2,6 +2,7 @@ import { InputError, requirePositive, requireWhole, requireBetween } from './Inp
 import { checkRange, MAX_IMAGES_LIMIT, MAX_SYMMETRY, type Look, type Range } from './types';
 import { apparentMotion } from './apparentMotion';
 import { gcd } from './gcd';
+import { requireWorkable } from './workLimit';
 
 /** A strobe reading: at rateHz the technician saw `images` images standing still. */
 export interface StrobeReading {
@@ -94,6 +95,7 @@ export function findSpeed(
 
   const candidates: SpeedCandidate[] = [];
   const pLast = Math.floor((ceilingPatternHz * base.images) / base.rateHz);
+  requireWorkable(pLast, 'expected speed range', 'possible speeds to test', 'lower its top or add a faster reading');
   for (let p = 1; p <= pLast && candidates.length < MAX_CANDIDATES * 4; p++) {
     if (gcd(p, base.images) !== 1) continue;
     const guess = (p / base.images) * base.rateHz;

@@ -107,3 +107,4 @@ export {
   type LoggerPlanOptions,
 } from './loggerPlan';
 export { csv, csvField, csvTable, type CsvValue, type CsvColumn } from './csv';
+export { MAX_WORK_ITEMS } from './workLimit';

@@ -1,6 +1,7 @@
 import { requireWhole } from './InputError';
 import { checkPart, checkRange, MAX_IMAGES_LIMIT, type Part, type Range } from './types';
 import { gcd } from './gcd';
+import { requireWorkable } from './workLimit';
 
 export interface LockRate {
   /** The lock-in rate for the nominal speed, Hz. */
@@ -26,7 +27,8 @@ const EDGE = 1e-12;
  * has no lock-in rates (it looks still at every rate, and truly is).
  *
  * Units: rev/s for the speed, Hz for rates. Throws InputError for a bad part, an empty,
- * inverted or non-positive range, or maxImages not a whole number in 1…64.
+ * inverted or non-positive range, maxImages not a whole number in 1…64, or a range holding
+ * more than MAX_WORK_ITEMS locks.
  *
  * @example
  * // Wikipedia, "Stroboscopic effect": a 12-spoke wheel at 2 rev/s looks still at 24 frames/s.
@@ -58,6 +60,9 @@ export function lockRates(part: Part, range: Range, opts?: { maxImages?: number 
     nextP[q] = Math.floor((patternHz * q) / lo); // s ≥ lo
     advance(q);
   }
+  let count = 0;
+  for (let q = 1; q <= maxImages; q++) count += Math.max(0, nextP[q] - firstP[q] + 1);
+  requireWorkable(count, 'rate range', 'lock-in rates', 'raise the lowest rate or narrow the range');
   const out: LockRate[] = [];
   for (;;) {
     let q = 0;

@@ -2,6 +2,7 @@ import { InputError } from './InputError';
 import { checkPart, checkRange, checkSampler, type Part, type Range, type Sampler } from './types';
 import { checkLookOptions, type LookOptions } from './lookOptions';
 import { gcd } from './gcd';
+import { MAX_WORK_ITEMS, requireWorkable } from './workLimit';
 
 export interface RateBandCause {
   /** Index of the part in the list given. */
@@ -33,7 +34,7 @@ export type RateBandOptions = Partial<LookOptions> & { sampler?: Sampler };
  *   s ∈ ((F₋ − D)·q/p, (F₊ + D)·q/p), with F± = n|f|(1 ± u) and D = n·stillHz;
  * - single-image backward or unclear for s ∈ (F₋/k, F₊/c_k], c_1 = 0.5, c_k = k − 1 + unclearStep;
  * - a part slower than the still threshold (F₋ < D) misleads at every rate.
- * Below the rate where a part's backward spans start to touch (bin K with K·(F₊ − F₋) ≥ F₋·unclearStep)
+ * Below the rate where a part's spans start to touch (bin K with K·(F₊ − F₋ + D) ≥ (F₋ − D)·unclearStep)
  * every rate misleads for that part; there the reason names only its backward look.
  * Under 'frames' every rate above 2·n·|f|·(1+u) is therefore safe; under a flash the
  * multi-image locks stay misleading at any rate.
@@ -120,18 +121,27 @@ function addMisleadingSpans(
   // Single-image backward or unclear, bin k = round(n·f/s) ≥ 1: s ∈ (lo/k, hi/c_k].
   const U = look.unclearStep;
   const upper = (k: number) => hi / (k === 1 ? 0.5 : k - 1 + U);
-  // From bin K on, neighbouring spans touch (hi/c_{k+1} ≥ lo/k ⇔ k·(hi − lo) ≥ lo·U), so every
-  // rate up to upper(K) misleads: one span replaces thousands of slow-rate ones.
-  const K = hi > lo ? Math.max(2, Math.ceil((lo * U) / (hi - lo))) : Infinity;
-  const floorHz = K === Infinity ? 0 : upper(K);
+  // From bin K on, each bin's still-or-backward cover ((lo − D)/k, hi/c_k] reaches the next bin's
+  // (hi/c_{k+1} ≥ (lo − D)/k ⇔ k·(hi − lo + D) ≥ (lo − D)·U), so every rate up to upper(K)
+  // misleads: one span replaces thousands of slow-rate ones. D > 0 keeps K finite.
+  const K = Math.max(2, Math.ceil(((lo - D) * U) / (hi - lo + D)));
+  const floorHz = upper(K);
   if (floorHz > minHz) spans.push(minHz, floorHz, code(BACKWARD));
   const kFirst = Math.max(1, Math.floor(lo / maxHz));
   const kLast = Math.min(K, Math.ceil(hi / minHz + 1));
+  const qMax = sampler === 'flash' ? look.maxImages : 1;
+  const bottom = Math.max(minHz, floorHz);
+  // Spans are flat numbers, not objects, so ten times the list limit still runs in ~0.1 s.
+  requireWorkable(
+    kLast - kFirst + 1 + (((hi + D) / bottom) * qMax * (qMax + 1)) / 2,
+    'rate range',
+    'lock-in and backward spans',
+    'raise the lowest rate or narrow the range',
+    10 * MAX_WORK_ITEMS,
+  );
   for (let k = kFirst; k <= kLast; k++) spans.push(lo / k, upper(k), code(BACKWARD));
 
   // Locks p/q: still while (p/q)·s lies within D of some speed in [lo, hi].
-  const qMax = sampler === 'flash' ? look.maxImages : 1;
-  const bottom = Math.max(minHz, floorHz);
   for (let q = 1; q <= qMax; q++) {
     const pFirst = Math.max(1, Math.floor(((lo - D) * q) / maxHz));
     const pLast = Math.ceil(((hi + D) * q) / bottom);

@@ -1,5 +1,6 @@
 import { requireFinite } from './InputError';
 import { checkPart, checkRange, type Part, type Range } from './types';
+import { requireWorkable } from './workLimit';
 
 /**
  * Rates that show the part turning at a wanted signed apparent speed (physics.md §4):
@@ -28,6 +29,7 @@ export function ratesForApparent(part: Part, apparentHz: number, range: Range): 
   const kFirst = Math.max(1, Math.ceil(((n * gap) / maxHz) * (1 - 1e-12)));
   let kLast = Math.floor(((n * gap) / minHz) * (1 + 1e-12));
   if (a !== 0) kLast = Math.min(kLast, Math.ceil(gap / (2 * Math.abs(a))));
+  requireWorkable(kLast - kFirst + 1, 'rate range', 'rates', 'raise the lowest rate or narrow the range');
   const out: Array<{ rateHz: number; k: number }> = [];
   for (let k = kLast; k >= kFirst; k--) {
     if (Math.abs((k * a) / gap) >= 0.5) continue;
