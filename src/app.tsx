@@ -7,6 +7,7 @@ import { Banner } from './views/Banner';
 import { CheckScreen } from './views/CheckScreen';
 import { MachinesScreen } from './views/MachinesScreen';
 import './views/Theme/global.css';
+import './views/Theme/print.css';
 
 interface Props {
   /** The service-worker notice (main.tsx passes it; tests leave it out). */
