@@ -69,7 +69,8 @@ export const MAX_RATE_MAP_POINTS = 100_000;
  * // backwards at 1 rev/s (−60 rpm).
  * const map = rateMapSeries([{ speedHz: 60, symmetry: 1 }], { minHz: 61, maxHz: 200 }, { points: 2 });
  * map.rates[0] // 61
- * map.apparentRpm[0][0] // -60
+ * map.apparentRpm[0][0] // -60.000000000000064 (−60 rpm to rounding)
+ * map.apparentRpm[0][map.rates.length - 1] // 3600 (above 120 flashes/s the true speed)
  */
 export function rateMapSeries(parts: Part[], range: Range, opts?: RateMapOptions): RateMapSeries {
   const points = opts?.points ?? defaultRateMapPoints;

@@ -132,7 +132,7 @@ export function Preview({
     }
     a.lastMs = playing ? now : 0;
     draw();
-    return playing;
+    return playing && !problem;
   });
 
   // Canvases: one renderer each, backing store sized by devicePixelRatio as the layout changes.

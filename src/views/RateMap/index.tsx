@@ -62,6 +62,7 @@ export function RateMap(props: Props) {
   const [log, setLog] = useState(() => props.logAxis ?? range.maxHz / range.minHz > 20);
   const [chartModule, setChartModule] = useState<ChartModule | null>(null);
   const [loadFailed, setLoadFailed] = useState(false);
+  const scheme = useColourScheme();
   const rootRef = useRef<HTMLDivElement>(null);
   const holderRef = useRef<HTMLDivElement>(null);
   const chart = useRef<RateChart | null>(null);
@@ -136,7 +137,7 @@ export function RateMap(props: Props) {
       chart.current = null;
     };
     // Data and rate changes go through update() and setRate() below, without a rebuild.
-  }, [chartModule, log, samplerKind, flashUnit, hasSeries, range.minHz, range.maxHz]);
+  }, [chartModule, log, samplerKind, flashUnit, hasSeries, range.minHz, range.maxHz, scheme]);
 
   useEffect(() => {
     if (series && 'limit' in computed)
@@ -226,6 +227,20 @@ export function RateMap(props: Props) {
       {caution && <p class={style.caution}>{caution}</p>}
     </div>
   );
+}
+
+/** 'dark' or 'light' as the system sets it; the chart's colours are read again when it changes. */
+function useColourScheme(): 'dark' | 'light' {
+  const query =
+    typeof matchMedia === 'function' ? matchMedia('(prefers-color-scheme: dark)') : null;
+  const [dark, setDark] = useState(() => query?.matches ?? false);
+  useEffect(() => {
+    if (!query) return;
+    const onChange = () => setDark(query.matches);
+    query.addEventListener('change', onChange);
+    return () => query.removeEventListener('change', onChange);
+  }, []);
+  return dark ? 'dark' : 'light';
 }
 
 /** The chart's size for its box: full width; shorter on a phone. */
