@@ -11,11 +11,14 @@
  */
 import FFT from 'fft.js';
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { apparentMotion, foldedHz } from '../../src/core';
 
 const SEED = 1949; // fixed so that any failure reproduces
 const RUNS = 1000;
+// A thousand cases per property on a shared 2-core machine can pass Vitest's default 5 s per
+// test when the machine is busy; this only stops a hung run, it measures nothing.
+vi.setConfig({ testTimeout: 60_000 });
 const N = 4096;
 const fft = new FFT(N);
 /** One bin width, with room for rounding when a line sits exactly a bin from the peak. */

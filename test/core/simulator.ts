@@ -282,6 +282,15 @@ export interface ReplayView {
  * pitch), 'forward' (same sign as the speed) or 'backward'.
  */
 export function replay(scene: Scene, eye: Eye = documentedEye): ReplayView {
+  return read(scene, eye, true);
+}
+
+/** Only the look (no count of creeping images, which never changes the look): for long scans. */
+export function lookOf(scene: Scene, eye: Eye = documentedEye): Look {
+  return read(scene, eye, false).look;
+}
+
+function read(scene: Scene, eye: Eye, countCreepingImages: boolean): ReplayView {
   const film = new PatternReplay(scene);
   const { symmetry: n, rateHz: s, speedHz: f } = scene;
   const Q = film.Q;
@@ -310,7 +319,7 @@ export function replay(scene: Scene, eye: Eye = documentedEye): ReplayView {
   }
 
   let images = 1;
-  if (scene.sampler === 'flash' && !faithful) {
+  if (countCreepingImages && scene.sampler === 'flash' && !faithful) {
     for (let q = 2; q <= eye.maxImages; q++) {
       if (
         compare(film.groupCreepSpacingsPerS(q), eye.groupSpacingsPerS) < 0 &&
