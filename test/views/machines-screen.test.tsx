@@ -1,6 +1,6 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/preact';
+import { cleanup, configure, fireEvent, render, screen, waitFor, within } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
 import { App } from '../../src/app';
 import { currentScreen, openScreen } from '../../src/lib/navigation';
@@ -20,6 +20,9 @@ beforeEach(() => {
 });
 
 afterEach(cleanup);
+
+// Saving goes through (fake) IndexedDB; on a busy shared machine that can take over a second.
+configure({ asyncUtilTimeout: 5000 });
 
 function names(): string[] {
   return within(screen.getByTestId('machine-list'))

@@ -1,6 +1,6 @@
 // @vitest-environment happy-dom
 // No IndexedDB at all (as in some private windows): the app says so and keeps working in memory.
-import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/preact';
+import { cleanup, configure, fireEvent, render, screen, waitFor } from '@testing-library/preact';
 import { afterEach, beforeAll, describe, expect, test } from 'vitest';
 import { App } from '../../src/app';
 import { machines } from '../../src/state/machines';
@@ -12,6 +12,9 @@ beforeAll(async () => {
 });
 
 afterEach(cleanup);
+
+// Saving goes through (fake) IndexedDB; on a busy shared machine that can take over a second.
+configure({ asyncUtilTimeout: 5000 });
 
 describe('without storage', () => {
   test('a banner says saving is off and changes last only for this tab', () => {
