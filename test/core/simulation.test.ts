@@ -142,7 +142,34 @@ function discreteDifferences(core: ApparentMotion, view: ReplayView): string[] {
   if (core.faithful !== view.faithful) out.push(`faithful ${core.faithful} vs ${view.faithful}`);
   if (core.images !== view.images) out.push(`images ${core.images} vs ${view.images}`);
   if (core.look !== view.look) out.push(`look ${core.look} vs ${view.look}`);
+  // The group reported (still, creeping, or the single image): its lock p/q. A single image
+  // exactly half a pitch on has two nearest whole pitches, so p may be either.
+  const halfPitch = core.q === 1 && view.group.q === 1 && Math.abs(core.step) === 0.5;
+  const pOff = BigInt(core.p) - view.group.p;
+  const pAgrees = pOff === 0n || (halfPitch && (pOff === 1n || pOff === -1n));
+  if (out.length === 0 && (core.q !== view.group.q || !pAgrees)) {
+    out.push(`group ${core.p}/${core.q} vs ${view.group.p}/${view.group.q}`);
+  }
   return out;
+}
+
+/** The reported group's drift (rev/s) against the replay's, when both report the same group. */
+function driftDifference(
+  core: ApparentMotion,
+  view: ReplayView,
+  part: Part,
+  rateHz: number,
+): string[] {
+  if (core.q !== view.group.q) return [];
+  const drift = toNumber(view.group.driftHz);
+  // n·f − (p/q)·s cancels: allow a few units in the last place of its larger term, over n.
+  const scale = Math.max(Math.abs(part.speedHz), ((core.p / core.q) * rateHz) / part.symmetry);
+  const tolerance = 16 * Number.EPSILON * scale;
+  // A group half a pitch on drifts as well one way as the other: equal up to whole pitches per cycle.
+  const period = rateHz / (part.symmetry * core.q);
+  return sameModulo(core.driftHz, drift, period, tolerance)
+    ? []
+    : [`driftHz ${core.driftHz} vs ${drift}`];
 }
 
 /**
@@ -179,6 +206,7 @@ function expectAgreement(
         );
       }));
   if (!explained) problems.push(...discrete);
+  if (discrete.length === 0) problems.push(...driftDifference(core, exact, part, rateHz));
   expect(
     problems,
     `speed ${part.speedHz} rev/s, ${part.symmetry} features, ${sampler} at ${rateHz} Hz`,

@@ -246,6 +246,12 @@ export class PatternReplay {
     return true;
   }
 
+  /** The q-image group: whole pitches per cycle (|p|, from the replayed move) and its drift. */
+  group(q: number): { p: bigint; q: number; driftHz: Fraction } {
+    const p = (BigInt(q) * this.P - this.groupMove(q).move) / this.Q; // exact: whole pitches
+    return { p: p < 0n ? -p : p, q, driftHz: this.groupDriftHz(q) };
+  }
+
   /** Number of distinct places the pattern takes over the first `flashes` samples. */
   distinctPositions(flashes: number): number {
     const seen = new Set<bigint>();
@@ -271,8 +277,12 @@ export interface ReplayView {
   /** Images seen at once (flash: the still or creeping group; frames: always 1). */
   images: number;
   look: Look;
-  /** The still group found (q) and its drift, when the look is 'still'. */
-  stillGroup?: { q: number; driftHz: Fraction };
+  /**
+   * The group reported: the still or creeping group of q images, else the single image (q = 1).
+   * Its flashes land p whole pitches on per cycle of q (p/q is the lock), and it drifts at
+   * driftHz rev/s (the single image: its apparent speed).
+   */
+  group: { p: bigint; q: number; driftHz: Fraction };
 }
 
 /**
@@ -314,11 +324,12 @@ function read(scene: Scene, eye: Eye, countCreepingImages: boolean): ReplayView 
   for (let q = 1; q <= stillUpTo; q++) {
     const driftHz = film.groupDriftHz(q);
     if (compare(absolute(driftHz), eye.stillHz) < 0) {
-      return { ...base, images: q, look: 'still', stillGroup: { q, driftHz } };
+      return { ...base, images: q, look: 'still', group: film.group(q) };
     }
   }
 
   let images = 1;
+  let group = { p: wholePitches < 0n ? -wholePitches : wholePitches, q: 1, driftHz: apparentHz };
   if (countCreepingImages && scene.sampler === 'flash' && !faithful) {
     for (let q = 2; q <= eye.maxImages; q++) {
       if (
@@ -326,13 +337,16 @@ function read(scene: Scene, eye: Eye, countCreepingImages: boolean): ReplayView 
         film.groupIsDistinct(q)
       ) {
         images = q;
+        group = film.group(q);
         break;
       }
     }
   }
-  if (faithful) return { ...base, images, look: 'true' };
-  if (compare(absolute(step), eye.unclearStep) >= 0) return { ...base, images, look: 'unclear' };
-  return { ...base, images, look: signOf(step) === signOf(f) ? 'forward' : 'backward' };
+  if (faithful) return { ...base, images, group, look: 'true' };
+  if (compare(absolute(step), eye.unclearStep) >= 0) {
+    return { ...base, images, group, look: 'unclear' };
+  }
+  return { ...base, images, group, look: signOf(step) === signOf(f) ? 'forward' : 'backward' };
 }
 
 /** True for the looks that mislead (physics.md §4): still, backward, direction unclear. */
