@@ -90,7 +90,9 @@ export function rateMapSeries(parts: Part[], range: Range, opts?: RateMapOptions
   const bands = rateBands(parts, range, { ...look, sampler });
   const { minHz, maxHz } = range;
   const grid = rateGrid(minHz, maxHz, points, log);
-  const columns = new SeriesBuilder(parts, grid.length);
+  // Room for the grid and two more entries a step (an edge adds three, a lock one); the
+  // columns grow if a map needs more.
+  const columns = new SeriesBuilder(parts, grid.length * 3);
   for (let i = 0; i + 1 < grid.length; i++) {
     columns.gridPoint(grid[i]);
     columns.between(grid[i], grid[i + 1], log);
@@ -172,8 +174,8 @@ class SeriesBuilder {
     this.patternHz = Float64Array.from(parts, (p) => p.symmetry * Math.abs(p.speedHz));
     this.features = Float64Array.from(parts, (p) => p.symmetry);
     this.speedHz = Float64Array.from(parts, (p) => p.speedHz);
-    this.rates = new Float64Array(capacity * 2);
-    this.speeds = parts.map(() => new Float64Array(capacity * 2));
+    this.rates = new Float64Array(capacity);
+    this.speeds = parts.map(() => new Float64Array(capacity));
     this.stepState = new Uint8Array(parts.length);
     this.edgeBin = new Float64Array(parts.length);
     this.resolvedFromHz = parts.map(() => -Infinity);
