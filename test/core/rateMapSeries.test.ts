@@ -72,6 +72,18 @@ describe('rateMapSeries', () => {
     }
   });
 
+  it('grows its columns when a step holds more edges and locks than usual', () => {
+    // Six parts with one edge (F/1.5) and one single-image lock (F/2) each inside one 20–40 Hz step.
+    const crowd: Part[] = [44, 45, 46, 47, 48, 49].map((F) => ({ speedHz: F, symmetry: 1 }));
+    const map = rateMapSeries(crowd, { minHz: 20, maxHz: 40 }, { points: 2 });
+    expect(map.rates).toHaveLength(2 + crowd.length * 4);
+    crowd.forEach((part, j) => {
+      expect(edgeGaps(map, j)).toHaveLength(1);
+      const lock = map.rates.indexOf(part.speedHz / 2);
+      expect(Math.abs(map.apparentRpm[j][lock])).toBeLessThan(1e-9);
+    });
+  });
+
   it('agrees with apparentMotion at every rate it holds, bit for bit, edges aside', () => {
     for (const log of [false, true]) {
       const map = rateMapSeries(lineParts, { minHz: 2, maxHz: 400 }, { points: 900, log });
