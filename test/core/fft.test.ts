@@ -7,7 +7,8 @@
  * By the sampling theorem (Shannon, "Communication in the presence of noise", Proc. IRE 37,
  * 1949) a sampled signal only holds frequencies up to half the sampling rate; a pattern
  * frequency n·f above it shows up folded into [0, s/2]. That folded peak must sit where
- * foldedHz and apparentMotion put it, within one bin width (s/N).
+ * foldedHz and apparentMotion put it, within one bin width (s/N); within two next to 0 and
+ * s/2, where a real line and its mirror image share the window's main lobe.
  */
 import FFT from 'fft.js';
 import fc from 'fast-check';
@@ -34,7 +35,11 @@ function allowedHz(lineHz: number, rateHz: number): number {
 }
 const spectrum = fft.createComplexArray() as number[];
 
-/** Hann window: keeps the leakage of one line away from the others (any DSP text). */
+/**
+ * Hann window: keeps the leakage of one line away from the others; main lobe ±2 bins
+ * (F. J. Harris, "On the use of windows for harmonic analysis with the discrete Fourier
+ * transform", Proc. IEEE 66, 1978).
+ */
 const hann = Float64Array.from(
   { length: N },
   (_, j) => 0.5 - 0.5 * Math.cos((2 * Math.PI * j) / N),
@@ -78,9 +83,10 @@ function sampledTone(speedHz: number, symmetry: number, rateHz: number): number[
 
 /**
  * A sharper blade signal: each blade passing gives a pulse exp(κ(cos 2πφ − 1)) (a smooth
- * narrow bump per pitch) with its mean removed. Its harmonics m·n·f decrease with m
- * (I_m(κ)/I_0(κ), modified Bessel functions), so the fundamental stays the strongest line
- * even where harmonics fold on top of it.
+ * narrow bump per pitch) with its mean removed. Its harmonics m·n·f decrease with m, as
+ * I_m(κ) (the generating function e^(κ·cos θ) = I_0(κ) + 2·Σ I_m(κ)·cos mθ of the modified
+ * Bessel functions, Abramowitz & Stegun 9.6.34, cited from memory), so the fundamental stays
+ * the strongest line even where harmonics fold on top of it.
  */
 const KAPPA = 1.5;
 const bladePulse = (pitches: number) => Math.exp(KAPPA * (Math.cos(2 * Math.PI * pitches) - 1));
@@ -131,7 +137,7 @@ describe('the FFT of a sampled pattern', () => {
     );
   });
 
-  it('peaks where foldedHz and apparentMotion put the alias of a pure tone, within one bin', () => {
+  it('peaks where foldedHz and apparentMotion put the alias of a pure tone, within a bin (two beside 0 and s/2)', () => {
     fc.assert(
       fc.property(caseArb, ({ speedHz, symmetry, rateHz }) => {
         const peak = peakOfReal(sampledTone(speedHz, symmetry, rateHz), rateHz);
@@ -144,7 +150,7 @@ describe('the FFT of a sampled pattern', () => {
     );
   });
 
-  it('peaks at the folded fundamental of a blade signal with harmonics, within one bin', () => {
+  it('peaks at the folded fundamental of a blade signal with harmonics, within a bin (two beside 0 and s/2)', () => {
     fc.assert(
       fc.property(caseArb, ({ speedHz, symmetry, rateHz }) => {
         const peak = peakOfReal(sampledBlades(speedHz, symmetry, rateHz), rateHz);

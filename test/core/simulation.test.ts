@@ -6,7 +6,7 @@
  *
  * Floating point: the replay is exact for the doubles the core is given; the core rounds.
  * Numbers must agree to a few units in the last place. A discrete answer (faithful, images,
- * look) must agree with the exact replay at the given rate, or with the replay at a rate or a
+ * look, the lock p/q) must agree with the exact replay at the given rate, or with the replay at a rate or a
  * threshold at most 2^-40 (about 1e-12) relative away: only a decision boundary closer than
  * that may fall either way.
  */
