@@ -70,11 +70,13 @@ export function apparentMotion(part: Part, rateHz: number, opts?: ApparentMotion
 
   // Near-lock under a flash: the smallest q ≥ 2 whose group creeps by less than
   // groupSpacingsPerS of its own spacing (1/(n·q) rev) per second is seen as q images.
+  // This holds above the Nyquist rate too (one mark at 10 rev/s under 30.5 flashes/s shows
+  // three marks creeping); the look still follows §2's precedence.
   let images = 1;
   let p = Math.abs(k);
   let q = 1;
   let driftHz = apparentHz;
-  if (sampler === 'flash' && !faithful) {
+  if (sampler === 'flash') {
     for (let qq = 2; qq <= o.maxImages; qq++) {
       const pp = Math.round(ratio * qq);
       const drift = (n * f - (pp * s) / qq) / n;

@@ -172,6 +172,13 @@ export function verdictOf(motion: ApparentMotion, part: Required<Part>, steadyLi
   const images = motion.images;
   const apparentRpm = (images > 1 ? motion.driftHz : motion.apparentHz) * 60;
   const base = { images, apparentRpm, trueRpm };
+  // Several images that creep as a group: the eye follows the group, so its drift sets the
+  // direction seen, whatever the single-image step says (physics.md §3). Superimposed images
+  // never show the true motion, so they always carry the safety notice.
+  if (images > 1 && motion.look !== 'still') {
+    const dir = Math.sign(motion.driftHz) === Math.sign(part.speedHz) ? 'forward' : 'backward';
+    return { ...base, kind: 'images', headline: `${images} images, creeping ${dir}`, trust: 'danger' };
+  }
   switch (motion.look) {
     case 'true':
       return { ...base, kind: 'true', headline: 'True motion', trust: 'trust' };

@@ -14,6 +14,19 @@ import {
 const oneMark = (speedHz: number) => ({ speedHz, symmetry: 1 });
 
 describe('apparentMotion: published cases', () => {
+  it('counts three creeping images above the Nyquist rate, while the look stays true', () => {
+    // physics.md §3: near r = 1/3 the pattern occupies three positions; one mark at 10 rev/s
+    // under 30.5 flashes/s drifts as a group at 10 − 30.5/3 = −1/6 rev/s. §2's precedence
+    // still reads a faithful sampler as 'true'.
+    const m = apparentMotion(oneMark(10), 30.5);
+    expect(m.faithful).toBe(true);
+    expect(m.look).toBe('true');
+    expect(m.images).toBe(3);
+    expect(m.driftHz).toBeCloseTo(-1 / 6, 12);
+    // A camera holds one image per frame: no superimposed images.
+    expect(apparentMotion(oneMark(10), 30.5, { sampler: 'frames' }).images).toBe(1);
+  });
+
   it('shows a disc at 60 rev/s under 61 flashes/s turning backwards at 1 rev/s', () => {
     // Wikipedia, "Stroboscopic effect": 60 rev/s lit at 61 flashes/s seems to turn backwards at 1 rev/s.
     const m = apparentMotion(oneMark(60), 61);

@@ -330,7 +330,7 @@ function read(scene: Scene, eye: Eye, countCreepingImages: boolean): ReplayView 
 
   let images = 1;
   let group = { p: wholePitches < 0n ? -wholePitches : wholePitches, q: 1, driftHz: apparentHz };
-  if (countCreepingImages && scene.sampler === 'flash' && !faithful) {
+  if (countCreepingImages && scene.sampler === 'flash') {
     for (let q = 2; q <= eye.maxImages; q++) {
       if (
         compare(film.groupCreepSpacingsPerS(q), eye.groupSpacingsPerS) < 0 &&

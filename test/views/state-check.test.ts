@@ -89,11 +89,25 @@ describe('the verdict', () => {
       const m = apparentMotion(part, rateHz, { sampler: 'flash' });
       const v = verdictOf(m, part);
       const words = { true: 'true', forward: /creeping|forward/, backward: 'backward', still: /still|images/, unclear: 'unclear' };
-      const want = words[m.look];
+      // Creeping groups of images read as images whatever the single-image look (physics.md §3).
+      const want = m.images > 1 && m.look !== 'still' ? 'images' : words[m.look];
       if (typeof want === 'string') expect(v.kind).toBe(want);
       else expect(v.kind).toMatch(want);
       expect(v.images).toBe(m.images);
     }
+  });
+
+  test('three marks creeping under a strobe above the Nyquist rate read as images, with the safety notice', () => {
+    // One mark at 10 rev/s under 30.5 flashes/s: r = 0.328, near 1/3, the group of three drifts
+    // at 10 − 30.5/3 = −1/6 rev/s (physics.md §3).
+    const part = { speedHz: 10, symmetry: 1, tolerance: 0 };
+    const m = apparentMotion(part, 30.5, { sampler: 'flash' });
+    expect(m.look).toBe('true');
+    expect(m.images).toBe(3);
+    const v = verdictOf(m, part);
+    expect(v.headline).toBe('3 images, creeping backward');
+    expect(v.apparentRpm).toBeCloseTo(-10, 9);
+    expect(v.trust).toBe('danger');
   });
 
   test('steady light (0 % modulation) shows true motion', () => {
