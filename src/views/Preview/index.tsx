@@ -12,7 +12,7 @@ import { CanvasPreview } from '../../render/canvasPreview';
 import { checkScene, sampleIndexAt, sampleTimeS, type PreviewScene } from '../../render/scene';
 import { formatNumber } from '../../lib/format';
 import { lookFromCss } from './css-colour';
-import { useFrameLoop } from './frame-loop';
+import { useFrameLoop } from '../../lib/frameLoop';
 import style from './style.module.css';
 
 export interface Props {

@@ -1,4 +1,5 @@
-// One requestAnimationFrame loop per widget, asleep whenever nothing would be seen.
+// One requestAnimationFrame loop per widget, asleep whenever nothing would be seen. A general
+// helper for anything that animates on a canvas (the preview uses it).
 import type { RefObject } from 'preact';
 import { useCallback, useEffect, useRef } from 'preact/hooks';
 
