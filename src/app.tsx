@@ -1,11 +1,16 @@
 import type { ComponentChildren } from 'preact';
-import { currentScreen } from './lib/navigation';
+import { currentScreen, type ScreenId } from './lib/navigation';
 import { storageMessage, storageStatus } from './state/storage';
 import { sessionMessage, storageOpened } from './state/setup';
 import { AppFrame } from './views/AppFrame';
 import { Banner } from './views/Banner';
 import { CheckScreen } from './views/CheckScreen';
 import { MachinesScreen } from './views/MachinesScreen';
+import { LightingScreen } from './views/LightingScreen';
+import { CameraPlanScreen } from './views/CameraPlanScreen';
+import { LoggerScreen } from './views/LoggerScreen';
+import { SpeedFinderScreen } from './views/SpeedFinderScreen';
+import { MachineChainScreen } from './views/MachineChainScreen';
 import './views/Theme/global.css';
 import './views/Theme/print.css';
 
@@ -41,7 +46,27 @@ export function App({ updateNotice }: Props) {
   );
   return (
     <AppFrame notices={notices}>
-      {currentScreen.value === 'machines' ? <MachinesScreen /> : <CheckScreen />}
+      {screenFor(currentScreen.value)}
     </AppFrame>
   );
+}
+
+/** The screen for a tab; the check screen is the home screen. */
+function screenFor(id: ScreenId) {
+  switch (id) {
+    case 'machines':
+      return <MachinesScreen />;
+    case 'lighting':
+      return <LightingScreen />;
+    case 'camera-plan':
+      return <CameraPlanScreen />;
+    case 'logger':
+      return <LoggerScreen />;
+    case 'speed-finder':
+      return <SpeedFinderScreen />;
+    case 'machine-chain':
+      return <MachineChainScreen />;
+    default:
+      return <CheckScreen />;
+  }
 }

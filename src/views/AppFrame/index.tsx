@@ -11,6 +11,11 @@ interface Props {
 const TABS: ReadonlyArray<{ id: ScreenId; label: string }> = [
   { id: 'check', label: 'Check' },
   { id: 'machines', label: 'Machines' },
+  { id: 'lighting', label: 'Lighting' },
+  { id: 'camera-plan', label: 'Camera' },
+  { id: 'logger', label: 'Logger' },
+  { id: 'speed-finder', label: 'Speed finder' },
+  { id: 'machine-chain', label: 'Whole machine' },
 ];
 
 /** The page: our mark and name, the tab bar, notices, and the open screen. */

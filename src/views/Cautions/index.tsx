@@ -3,14 +3,16 @@ import style from './style.module.css';
 
 interface Props {
   class?: string;
+  /** Which cautions to show, for a screen other than the check (defaults to the check's). */
+  show?: { safety: boolean; photosensitivity: boolean };
 }
 
 /**
  * The cautions of physics.md §10. They show whenever they apply and cannot be dismissed:
  * stillness that is not real, and flashing that can trigger seizures.
  */
-export function Cautions({ class: extra }: Props) {
-  const r = check.value;
+export function Cautions({ class: extra, show }: Props) {
+  const r = show ? { showSafety: show.safety, showPhotosensitivity: show.photosensitivity } : check.value;
   if (!r.showSafety && !r.showPhotosensitivity) return null;
   return (
     <div class={`${style.cautions} ${extra ?? ''}`}>

@@ -5,6 +5,8 @@ import style from './style.module.css';
 
 interface Props {
   class?: string;
+  /** The light to describe, for a screen other than the check (defaults to the check's). */
+  lighting?: LightingResult;
 }
 
 const RISK_WORDS: Record<LightingResult['risk'], string> = {
@@ -14,8 +16,8 @@ const RISK_WORDS: Record<LightingResult['risk'], string> = {
 };
 
 /** For lighting: the flicker, its risk class by IEEE Std 1789-2015 and its visibility (CIE TN 006:2016). */
-export function LightingReadout({ class: extra }: Props) {
-  const l = check.value.lighting;
+export function LightingReadout({ class: extra, lighting }: Props) {
+  const l = lighting ?? check.value.lighting;
   if (!l) return null;
   const visible = l.svm >= 1;
   return (

@@ -209,7 +209,8 @@ function StrobeFields() {
   );
 }
 
-function LightingFields() {
+/** Mains, flicker and modulation of the set-up's lighting (also used by the lighting check). */
+export function LightingFields() {
   const lighting = setup.value.lighting;
   return (
     <div class={style.fields}>

@@ -1,0 +1,155 @@
+// Readers for the field tools' entries that fields.ts does not cover: lists of numbers, the
+// data logger's sample rate, filter and converter, and component values for an RC stage. Like
+// fields.ts, each takes the raw text and returns the value in the planner's units (Hz, s, Ω, F,
+// whole counts) or throws the core's InputError with a message fit to show beside the field.
+import { InputError, parseNumber, parseQuantity } from '../core';
+
+function capital(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+/** Text that stands for a plain number: digits with grouping or a decimal mark, nothing else. */
+const BARE_NUMBER = /^[+]?\d[\d\s.,'\u00a0\u202f]*$/;
+
+/** A whole number from min to max; trailing words (such as "blades") are allowed only when `words` matches them. */
+export function readWhole(text: string, what: string, min: number, max: number, words?: RegExp): number {
+  const trimmed = typeof text === 'string' ? text.trim() : '';
+  const bare = words ? trimmed.replace(words, '').trim() : trimmed;
+  if (trimmed !== '' && !BARE_NUMBER.test(bare)) {
+    throw new InputError(what, `"${trimmed.slice(0, 24)}" is not a whole number.`);
+  }
+  const n = parseNumber(bare === '' ? trimmed : bare, what);
+  if (!Number.isInteger(n) || n < min || n > max) {
+    throw new InputError(what, `${capital(what)} must be a whole number from ${min} to ${max}.`);
+  }
+  return n;
+}
+
+/** Highest frequency the logger tools accept, Hz: far above any data logger or vibration sensor. */
+export const MAX_LOGGER_HZ = 1e9;
+
+function frequency(text: string, what: string): number {
+  const hz = parseQuantity(text, 'rate', 'hz', what);
+  if (!(hz > 0) || hz > MAX_LOGGER_HZ) {
+    throw new InputError(what, `${capital(what)} must be above 0 Hz and at most 1,000,000,000 Hz.`);
+  }
+  return hz;
+}
+
+/** A data logger's sample rate, samples per second (Hz; "2 kHz" works). */
+export const readSampleRateHz = (text: string): number => frequency(text, 'sample rate');
+
+/** A filter cutoff, Hz. */
+export const readCutoffHz = (text: string): number => frequency(text, 'cutoff frequency');
+
+/** A tone the user adds, Hz. */
+export const readToneHz = (text: string): number => frequency(text, 'tone');
+
+/** Shaft harmonics to include: 1× … N×. */
+export const readHarmonics = (text: string): number => readWhole(text, 'harmonics', 1, 200, /\s*[×x]$/i);
+
+/** Blade count of a fan or impeller. */
+export const readBladeCount = (text: string): number => readWhole(text, 'blade count', 1, 1000, /\s*blades?$/i);
+
+/** Tooth count of a gear. */
+export const readTeeth = (text: string): number => readWhole(text, 'tooth count', 1, 100_000, /\s*(teeth|tooth)$/i);
+
+/** Butterworth filter order (poles). */
+export const readFilterOrder = (text: string): number => readWhole(text, 'filter order', 1, 20);
+
+/** Converter resolution, bits. */
+export const readBits = (text: string): number => readWhole(text, 'converter bits', 1, 64, /\s*bits?$/i);
+
+/** A number with an optional SI-prefixed unit after it, read with `units` (lower-case keys, "" = the bare number's unit). */
+function withUnit(
+  text: string,
+  what: string,
+  units: Record<string, number>,
+  min: number,
+  max: number,
+  say: string,
+  span: string,
+): number {
+  if (typeof text !== 'string' || text.trim() === '') throw new InputError(what, `${capital(what)} is empty: type a number.`);
+  const m = /^(.*?\d)\s*([^\d\s.,]*)\s*$/u.exec(text.trim());
+  const unit = (m?.[2] ?? '').toLowerCase();
+  const factor = units[unit];
+  if (!m || factor === undefined) {
+    throw new InputError(what, `"${text.trim().slice(0, 24)}" is not a ${what}; type it as ${say}.`);
+  }
+  const value = parseNumber(m[1], what) * factor;
+  if (!(value >= min && value <= max)) {
+    throw new InputError(what, `${capital(what)} must lie between ${span}.`);
+  }
+  return value;
+}
+
+const OHMS: Record<string, number> = { '': 1, 'ω': 1, ohm: 1, ohms: 1, k: 1e3, 'kω': 1e3, kohm: 1e3, m: 1e6, 'mω': 1e6, mohm: 1e6 };
+
+/** Resistance in ohms: "10000", "10k", "10 kΩ", "2.2M". */
+export function readResistanceOhm(text: string): number {
+  return withUnit(text, 'resistance', OHMS, 1e-3, 1e12, '10k or 2200 Ω', '1 mΩ and 1,000 GΩ');
+}
+
+const FARADS: Record<string, number> = {
+  '': 1e-9,
+  nf: 1e-9,
+  n: 1e-9,
+  pf: 1e-12,
+  p: 1e-12,
+  'µf': 1e-6,
+  'μf': 1e-6,
+  uf: 1e-6,
+  'µ': 1e-6,
+  'μ': 1e-6,
+  u: 1e-6,
+  mf: 1e-3,
+  f: 1,
+};
+
+/** Capacitance in farads; a bare number is in nF ("100" = 100 nF); "4.7 µF", "470p" work too. */
+export function readCapacitanceF(text: string): number {
+  return withUnit(text, 'capacitance', FARADS, 1e-15, 1, '100 nF, 4.7 µF or 470 pF', '0.001 pF and 1 F');
+}
+
+/**
+ * Splits a typed list into its items: spaces or semicolons separate them, and so does a comma
+ * followed by a space ("48, 100"); a comma inside a number stays part of it ("29,97").
+ * @example splitList('24; 29,97  60, 120') // ['24', '29,97', '60', '120']
+ */
+export function splitList(text: string): string[] {
+  if (typeof text !== 'string') return [];
+  return text
+    .trim()
+    .split(/\s*;\s*|,\s+|\s+/)
+    .filter((item) => item !== '');
+}
+
+/**
+ * Reads every item of a list with `readOne`; a bad item is named by its place in the list.
+ * An empty list is allowed when `min` is 0. Throws InputError for more than `max` items.
+ * @example readList('500 1000', readExposureSeconds, 'shutter speeds', 0, 12) // [0.002, 0.001]
+ */
+export function readList(
+  text: string,
+  readOne: (item: string) => number,
+  what: string,
+  min: number,
+  max: number,
+): number[] {
+  const items = splitList(text);
+  if (items.length < min) {
+    throw new InputError(what, min === 1 ? `Give at least one value for ${what}.` : `Give at least ${min} values for ${what}.`);
+  }
+  if (items.length > max) throw new InputError(what, `At most ${max} values for ${what}.`);
+  return items.map((item, i) => {
+    try {
+      return readOne(item);
+    } catch (error) {
+      if (error instanceof InputError) {
+        throw new InputError(what, `Item ${i + 1} ("${item.slice(0, 16)}"): ${error.message}`);
+      }
+      throw error;
+    }
+  });
+}

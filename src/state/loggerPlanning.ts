@@ -1,0 +1,123 @@
+// The data-logger planner's entries (the machine's tones, sample rate, anti-alias filter,
+// converter bits) and its plan, from the core's loggerPlan (physics.md §9). The shaft speed is
+// the set-up's chosen part; the rest lives here for the session.
+import { batch, computed, signal } from '@preact/signals';
+import {
+  loggerPlan,
+  type AntiAliasFilter,
+  type LoggerPlan,
+  type LoggerProposal,
+  type MachineTones,
+} from '../core';
+import type { PartSpec } from './model';
+import { keepLastGood } from './outcome';
+import { activePart } from './setup';
+
+export type FilterKind = AntiAliasFilter['kind'];
+
+/** What the planner starts with (judgements for a first look, not recommendations). */
+export const defaultLoggerEntries = {
+  /** Shaft harmonics 1× … 4×: looseness and misalignment show up to about there (common practice). */
+  harmonics: 4,
+  /** null: the chosen part's blade count (when it has more than one feature). */
+  blades: null as number[] | null,
+  gearTeeth: [] as number[],
+  extraTonesHz: [] as number[],
+  /** A round rate many loggers offer, Hz. */
+  sampleHz: 1000,
+  filterKind: 'none' as FilterKind,
+  /** How an RC stage is given: its cutoff, or R and C. */
+  rcGiven: 'cutoff' as 'cutoff' | 'parts',
+  rcCutoffHz: 200,
+  /** 10 kΩ and 100 nF: fc = 1/(2π·10e3·100e-9) = 159.15 Hz. */
+  resistanceOhm: 10_000,
+  capacitanceF: 100e-9,
+  order: 4,
+  cutoffHz: 200,
+  /** A common converter width. */
+  bits: 16,
+};
+
+export const harmonics = signal(defaultLoggerEntries.harmonics);
+export const bladeCounts = signal<number[] | null>(defaultLoggerEntries.blades);
+export const gearTeeth = signal<number[]>([...defaultLoggerEntries.gearTeeth]);
+export const extraTonesHz = signal<number[]>([...defaultLoggerEntries.extraTonesHz]);
+export const sampleHz = signal(defaultLoggerEntries.sampleHz);
+export const filterKind = signal<FilterKind>(defaultLoggerEntries.filterKind);
+export const rcGiven = signal<'cutoff' | 'parts'>(defaultLoggerEntries.rcGiven);
+export const rcCutoffHz = signal(defaultLoggerEntries.rcCutoffHz);
+export const resistanceOhm = signal(defaultLoggerEntries.resistanceOhm);
+export const capacitanceF = signal(defaultLoggerEntries.capacitanceF);
+export const filterOrder = signal(defaultLoggerEntries.order);
+export const filterCutoffHz = signal(defaultLoggerEntries.cutoffHz);
+export const converterBits = signal(defaultLoggerEntries.bits);
+
+/** Puts the planner back to its starting entries. */
+export function resetLoggerEntries(): void {
+  const d = defaultLoggerEntries;
+  batch(() => {
+    harmonics.value = d.harmonics;
+    bladeCounts.value = d.blades;
+    gearTeeth.value = [...d.gearTeeth];
+    extraTonesHz.value = [...d.extraTonesHz];
+    sampleHz.value = d.sampleHz;
+    filterKind.value = d.filterKind;
+    rcGiven.value = d.rcGiven;
+    rcCutoffHz.value = d.rcCutoffHz;
+    resistanceOhm.value = d.resistanceOhm;
+    capacitanceF.value = d.capacitanceF;
+    filterOrder.value = d.order;
+    filterCutoffHz.value = d.cutoffHz;
+    converterBits.value = d.bits;
+  });
+}
+
+/** The blade counts in use: the ones typed, else the part's own features when it has several. */
+export function bladesFor(part: PartSpec, typed: number[] | null): number[] {
+  if (typed !== null) return typed;
+  return part.features > 1 ? [part.features] : [];
+}
+
+/** The machine's tones for the core; the shaft runs at the part's speed, either way round. */
+export function tonesOf(part: PartSpec, typed: number[] | null, n: number, teeth: number[], tones: number[]): MachineTones {
+  return {
+    shaftHz: Math.abs(part.speedRpm) / 60,
+    harmonics: n,
+    blades: bladesFor(part, typed),
+    gearTeeth: teeth,
+    extraTones: tones.map((hz, i) => ({ label: `added tone ${i + 1}`, hz })),
+  };
+}
+
+export const filter = computed<AntiAliasFilter>(() => {
+  switch (filterKind.value) {
+    case 'rc':
+      return rcGiven.value === 'cutoff'
+        ? { kind: 'rc', cutoffHz: rcCutoffHz.value }
+        : { kind: 'rc', resistanceOhm: resistanceOhm.value, capacitanceF: capacitanceF.value };
+    case 'butterworth':
+      return { kind: 'butterworth', order: filterOrder.value, cutoffHz: filterCutoffHz.value };
+    default:
+      return { kind: 'none' };
+  }
+});
+
+/** The plan for the current entries, kept at the last good plan when the core refuses one. */
+export const loggerPlanning = keepLastGood<LoggerPlan>(() =>
+  loggerPlan(
+    tonesOf(activePart.value, bladeCounts.value, harmonics.value, gearTeeth.value, extraTonesHz.value),
+    sampleHz.value,
+    filter.value,
+    converterBits.value,
+  ),
+);
+
+/** Takes the proposal: its sample rate and a Butterworth filter of its order and cutoff. */
+export function applyProposal(p: LoggerProposal): void {
+  batch(() => {
+    sampleHz.value = p.sampleHz;
+    filterKind.value = 'butterworth';
+    filterOrder.value = p.order;
+    filterCutoffHz.value = p.cutoffHz;
+  });
+}

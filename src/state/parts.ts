@@ -1,0 +1,96 @@
+// The parts of the current set-up as a list: choose which one the screens work on, add one,
+// remove one, rename one. The per-field setters of the chosen part live in setup.ts; these
+// only change the list, and every change goes through the same checks as a saved file.
+import type { PartSpec } from './model';
+import { setup } from './setup';
+import { DataError, MAX_NAME_CHARS, MAX_PARTS, validateSetup } from './validate';
+
+/** Makes part `index` the one the screens work on. Ignores an index outside the list. */
+export function selectPart(index: number): void {
+  const s = setup.value;
+  if (!Number.isInteger(index) || index < 0 || index >= s.parts.length || index === s.activePart) return;
+  setup.value = { ...s, activePart: index };
+}
+
+/**
+ * Adds a part after the others and chooses it. It starts as a single mark on the same shaft
+ * speed and tolerance as the chosen part, which the user then edits.
+ * Throws DataError, changing nothing, when the set-up already holds MAX_PARTS parts.
+ */
+export function addPart(): void {
+  const s = setup.value;
+  if (s.parts.length >= MAX_PARTS) {
+    throw new DataError('parts', `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`);
+  }
+  const like = s.parts[s.activePart] ?? s.parts[0];
+  const part: PartSpec = {
+    name: freeName(s.parts),
+    speedRpm: like.speedRpm,
+    features: 1,
+    tolerancePercent: like.tolerancePercent,
+  };
+  setup.value = { ...s, parts: [...s.parts, part], activePart: s.parts.length };
+}
+
+function freeName(parts: readonly PartSpec[]): string {
+  const taken = new Set(parts.map((p) => p.name.trim().toLowerCase()));
+  for (let n = parts.length + 1; ; n++) {
+    const name = `Part ${n}`;
+    if (!taken.has(name.toLowerCase())) return name;
+  }
+}
+
+/** A part that may be driven by an earlier part, counted from 0 (the whole-machine screen's drives). */
+type MaybeDriven = PartSpec & { drive?: { from: number } };
+
+/**
+ * Removes part `index`; the chosen part stays chosen (or its neighbour, when it was the one
+ * removed). A part driven by the removed one keeps the speed it had, now as a typed speed; drives
+ * from later parts follow their driver's new place in the list. Throws DataError, changing
+ * nothing, for the last remaining part or an unknown index.
+ */
+export function removePart(index: number): void {
+  const s = setup.value;
+  if (s.parts.length <= 1) throw new DataError('parts', 'A set-up needs at least one part.');
+  if (!Number.isInteger(index) || index < 0 || index >= s.parts.length) {
+    throw new DataError('parts', 'That part is no longer in the list.');
+  }
+  const parts = s.parts
+    .filter((_, i) => i !== index)
+    .map((part): PartSpec => {
+      const p = part as MaybeDriven;
+      if (!p.drive) return part;
+      if (p.drive.from === index) {
+        const { drive: _drive, ...rest } = p;
+        return rest;
+      }
+      return p.drive.from > index ? { ...p, drive: { ...p.drive, from: p.drive.from - 1 } } : part;
+    });
+  const activePart = s.activePart > index ? s.activePart - 1 : Math.min(s.activePart, parts.length - 1);
+  const next = { ...s, parts, activePart };
+  validateSetup(next);
+  setup.value = next;
+}
+
+/**
+ * Renames part `index`. Throws DataError, changing nothing, for a name a saved file would
+ * refuse (too long, control or direction characters) or an unknown index.
+ */
+export function renamePart(index: number, name: string): void {
+  const s = setup.value;
+  if (!Number.isInteger(index) || index < 0 || index >= s.parts.length) {
+    throw new DataError('parts', 'That part is no longer in the list.');
+  }
+  const chars = [...name].length;
+  if (chars > MAX_NAME_CHARS) {
+    throw new DataError('name', `A part's name holds at most ${MAX_NAME_CHARS} characters (this one has ${chars}).`);
+  }
+  const next = { ...s, parts: s.parts.map((p, i) => (i === index ? { ...p, name } : p)) };
+  try {
+    validateSetup(next);
+  } catch (error) {
+    if (!(error instanceof DataError)) throw error;
+    throw new DataError('name', "A part's name must be plain text on one line, without control or direction characters.");
+  }
+  setup.value = next;
+}
