@@ -114,15 +114,21 @@ export function readCapacitanceF(text: string): number {
 
 /**
  * Splits a typed list into its items: spaces or semicolons separate them, and so does a comma
- * followed by a space ("48, 100"); a comma inside a number stays part of it ("29,97").
+ * followed by a space ("48, 100"); a comma inside a number stays part of it ("29,97"). A word
+ * after a number is its unit and stays with it ("50 Hz 2 kHz" is two items).
  * @example splitList('24; 29,97  60, 120') // ['24', '29,97', '60', '120']
+ * @example splitList('50 Hz 2 kHz') // ['50 Hz', '2 kHz']
  */
 export function splitList(text: string): string[] {
   if (typeof text !== 'string') return [];
-  return text
-    .trim()
-    .split(/\s*;\s*|,\s+|\s+/)
-    .filter((item) => item !== '');
+  const out: string[] = [];
+  for (const token of text.trim().split(/\s*;\s*|,\s+|\s+/)) {
+    if (token === '') continue;
+    const isUnit = /^[^\d+\-−.,]/u.test(token);
+    if (isUnit && out.length > 0) out[out.length - 1] += ` ${token}`;
+    else out.push(token);
+  }
+  return out;
 }
 
 /**

@@ -1,0 +1,182 @@
+// @vitest-environment happy-dom
+import 'fake-indexeddb/auto';
+import { act, cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
+import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
+import { cameraPlan, exposureFromShutterAngle } from '../../src/core';
+import { formatExposure, formatPrecise } from '../../src/lib/format';
+import { currentScreen, openScreen } from '../../src/lib/navigation';
+import {
+  abilities,
+  cameraPlanning,
+  exposuresS,
+  frameRatesOf,
+  goalKind,
+  otherRatesHz,
+  resetCameraEntries,
+  shutterAnglesDeg,
+  standardLabelsOn,
+} from '../../src/state/cameraPlanning';
+import { corePart } from '../../src/state/check';
+import { defaultSetup, type Setup } from '../../src/state/model';
+import { replaceSetup, setup, startSession } from '../../src/state/setup';
+import { CameraPlanScreen, cameraCsv } from '../../src/views/CameraPlanScreen';
+
+beforeAll(async () => {
+  await startSession();
+});
+
+beforeEach(() => {
+  replaceSetup(defaultSetup);
+  resetCameraEntries();
+  openScreen('camera-plan');
+  render(<CameraPlanScreen />);
+});
+
+afterEach(cleanup);
+
+function field(label: string): HTMLInputElement {
+  return screen.getByLabelText(label, { exact: true }) as HTMLInputElement;
+}
+
+function type(label: string, text: string) {
+  fireEvent.input(field(label), { target: { value: text } });
+}
+
+function rows(): HTMLElement[] {
+  return within(screen.getByTestId('plan-table')).getAllByRole('row').slice(1);
+}
+
+/** Wikipedia, "Stroboscopic effect": a 12-spoke wheel at 2 rev/s filmed at 24 frames/s seems still. */
+function wheel(): Setup {
+  return { ...structuredClone(defaultSetup), parts: [{ name: 'Wheel', speedRpm: 120, features: 12, tolerancePercent: 0 }], activePart: 0 };
+}
+
+describe('the camera plan screen', () => {
+  test('a 12-spoke wheel at 2 rev/s freezes at 24 frames/s, and 24 fps heads the table', () => {
+    act(() => replaceSetup(wheel()));
+    const plan = cameraPlan(abilities.value, corePart(setup.value), { kind: 'freeze' });
+    expect(plan.settings.length).toBeGreaterThan(0);
+    expect(plan.settings.every((s) => s.frameRate === 24)).toBe(true);
+    expect(screen.getByTestId('plan-headline').textContent).toBe(`${plan.settings.length} settings reach the goal`);
+    const first = rows()[0];
+    expect(first.textContent).toContain('24 fps');
+    expect(first.textContent).toContain('Looks still');
+    expect(first.textContent).toContain(formatExposure(plan.settings[0].exposureS));
+    expect(rows()).toHaveLength(plan.settings.length);
+    // Freezing always brings the caution that the part still turns (physics.md §10).
+    expect(screen.getByTestId('safety-notice')).toBeTruthy();
+  });
+
+  test('"Open in check" sets the camera of the set-up and switches to the check screen', () => {
+    act(() => replaceSetup(wheel()));
+    const best = cameraPlanning.result.value!.settings[0];
+    fireEvent.click(within(rows()[0]).getByRole('button', { name: 'Open in check' }));
+    expect(currentScreen.value).toBe('check');
+    expect(setup.value.samplerKind).toBe('camera');
+    expect(setup.value.camera.frameRate).toBe(24);
+    expect(setup.value.camera.readoutMs).toBe(25);
+    // The best freeze is the shortest exposure on offer, 1/4000 s, kept as a time.
+    expect(best.exposureS).toBe(1 / 4000);
+    expect(setup.value.camera.exposure).toEqual({ mode: 'time', seconds: 1 / 4000 });
+  });
+
+  test('a setting offered as a shutter angle opens as that angle', () => {
+    act(() => replaceSetup(wheel()));
+    act(() => {
+      exposuresS.value = [];
+    });
+    fireEvent.click(within(rows()[0]).getByRole('button', { name: 'Open in check' }));
+    expect(setup.value.camera.exposure).toEqual({ mode: 'angle', angleDeg: 180 });
+  });
+
+  test('when nothing freezes the default fan, the screen says which rates would and lists the near misses', () => {
+    // 6 blades at 1770 rpm pass 177 times a second; 177/k fps would freeze it (physics.md §3), none is a camera rate.
+    expect(screen.getByTestId('plan-headline').textContent).toBe('No setting of this camera reaches the goal');
+    const why = screen.getByTestId('plan-none').textContent!;
+    expect(why).toContain('177 passes a second');
+    expect(why).toContain(`${formatPrecise(177)} fps, ${formatPrecise(88.5)} fps, ${formatPrecise(59)} fps`);
+    const plan = cameraPlanning.result.value!;
+    expect(plan.settings).toHaveLength(0);
+    expect(rows()).toHaveLength(plan.nearMisses.length);
+    expect(rows().length).toBeGreaterThan(0);
+  });
+
+  test('a custom frame rate that freezes the fan makes it reach the goal', () => {
+    type('Other frame rates', '59 88.5');
+    expect(otherRatesHz.value).toEqual([59, 88.5]);
+    expect(screen.getByTestId('plan-headline').textContent).toMatch(/reach(es)? the goal$/);
+    expect(rows()[0].textContent).toContain('88.5 fps');
+    expect(rows()[0].textContent).toContain('Looks still');
+  });
+
+  test('the natural-blur goal finds the 180° settings that smear the blades into an even disc', () => {
+    fireEvent.click(screen.getByLabelText('Natural blur'));
+    expect(goalKind.value).toBe('natural');
+    const plan = cameraPlanning.result.value!;
+    expect(plan.settings.length).toBeGreaterThan(0);
+    // At 24 fps 180° is 1/48 s (cinema rule): 177/48 = 3.7 blade pitches of blur.
+    expect(exposureFromShutterAngle(180, 24)).toBeCloseTo(1 / 48, 15);
+    expect(plan.settings.every((s) => s.shutterAngle === 180)).toBe(true);
+    expect(rows()[0].textContent).toMatch(/even disc/);
+  });
+
+  test('the slow-turn goal asks for the wanted speed, shares it with the check screen, and finds a rate that shows it', () => {
+    act(() => replaceSetup(wheel()));
+    fireEvent.click(screen.getByLabelText('Slow forward turn'));
+    type('Slow turn wanted', '2');
+    expect(setup.value.creepRpm).toBe(2);
+    expect(screen.getByTestId('plan-headline').textContent).toBe('No setting of this camera reaches the goal');
+    // physics.md §4: s = n·|f − a|/k = 12 · (2 − 1/30) / 1 = 23.6 frames/s shows a 2 rpm forward turn.
+    expect(screen.getByTestId('plan-none').textContent).toContain('23.6 fps');
+    type('Other frame rates', '23.6');
+    expect(screen.getByTestId('plan-headline').textContent).toMatch(/reach(es)? the goal$/);
+    expect(rows()[0].textContent).toContain('23.6 fps');
+    expect(rows()[0].textContent).toContain('Turns forward, slower (2 rpm)');
+  });
+
+  test('ticking and unticking the standard frame rates changes the rates offered', () => {
+    fireEvent.click(screen.getByLabelText('29.97'));
+    expect(frameRatesOf(standardLabelsOn.value, [])).toContain(30000 / 1001);
+    fireEvent.click(screen.getByLabelText('29.97'));
+    expect(frameRatesOf(standardLabelsOn.value, [])).not.toContain(30000 / 1001);
+  });
+
+  test('with no frame rate at all the core says so and the last table stays', () => {
+    for (const label of ['24', '25', '30', '60', '120']) fireEvent.click(screen.getByLabelText(label));
+    const before = cameraPlanning.result.value;
+    expect(before?.nearMisses.every((s) => s.frameRate === 240)).toBe(true);
+    fireEvent.click(screen.getByLabelText('240'));
+    expect(screen.getByTestId('plan-problem').textContent).toMatch(/at least one frame rate/);
+    expect(cameraPlanning.result.value).toBe(before);
+    expect(rows().length).toBeGreaterThan(0);
+  });
+
+  test('garbage in a list field gets a message naming the item, and the list stays', () => {
+    type('Shutter angles', '180 400');
+    expect(field('Shutter angles').getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getAllByRole('alert').some((a) => /Item 2 \("400"\)/.test(a.textContent ?? ''))).toBe(true);
+    expect(shutterAnglesDeg.value).toEqual([180]);
+    expect(field('Shutter angles').value).toBe('180 400');
+    type('Shutter speeds', '500 fast');
+    expect(exposuresS.value).toEqual([1 / 500, 1 / 1000, 1 / 2000, 1 / 4000]);
+    type('Rolling readout time', '-3');
+    expect(field('Rolling readout time').getAttribute('aria-invalid')).toBe('true');
+  });
+
+  test('nothing on screen says NaN or Infinity, whatever is typed', () => {
+    for (const text of ['', 'abc', 'NaN', '1e999', '-', '0', '-0', '1e-320', '99999999999', '1/0']) {
+      for (const label of ['Other frame rates', 'Shutter angles', 'Shutter speeds', 'Rolling readout time']) type(label, text);
+      const shown = document.body.textContent!.replace(/"[^"]*"/g, '');
+      expect(shown, text).not.toMatch(/NaN|Infinity/);
+    }
+  });
+
+  test('the CSV lists the near misses when nothing reaches the goal, best first', () => {
+    const plan = cameraPlanning.result.value!;
+    const lines = cameraCsv(plan).split('\r\n');
+    expect(lines[0]).toMatch(/^rank,frame rate \(fps\),exposure \(s\),shutter angle/);
+    expect(lines).toHaveLength(plan.nearMisses.length + 2);
+    expect(lines[1].startsWith(`1,${plan.nearMisses[0].frameRate},`)).toBe(true);
+    expect(lines[1]).toContain(',false,');
+  });
+});
