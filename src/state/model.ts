@@ -17,6 +17,31 @@ export interface PartSpec {
   tolerancePercent: number;
   /** When set, the speed comes from an induction motor's mains, poles and slip. */
   motor?: { mainsHz: number; poles: number; slipPercent: number };
+  /**
+   * When set, the part is driven by an earlier part of the same set-up (the whole-machine
+   * screen), and speedRpm and tolerancePercent hold what the drive gives.
+   */
+  drive?: PartDrive;
+  /** When set, the part is a wheel rolling on the ground, and speedRpm holds what that gives. */
+  wheel?: WheelSpec;
+}
+
+/**
+ * How a part is driven by parts[from] (an earlier part, counted from 0).
+ * Belt: driven speed = driver speed × driverMm ÷ drivenMm, up to slipPercent slower.
+ * Gear (an external mesh, which reverses the direction): driven speed = driver speed × driverTeeth ÷ drivenTeeth.
+ * Shaft: on the same shaft, the same speed.
+ */
+export type PartDrive =
+  | { from: number; kind: 'belt'; driverMm: number; drivenMm: number; slipPercent: number }
+  | { from: number; kind: 'gear'; driverTeeth: number; drivenTeeth: number }
+  | { from: number; kind: 'shaft' };
+
+/** A wheel rolling at a ground speed (signed, in its unit) on a tyre of an ISO metric size ("205/55R16"). */
+export interface WheelSpec {
+  groundSpeed: number;
+  unit: 'km/h' | 'mph';
+  tyreSize: string;
 }
 
 /** A camera: frame rate, exposure and rolling-shutter readout. */

@@ -39,10 +39,10 @@ function updatePart(change: (part: PartSpec) => PartSpec): void {
   setup.value = { ...s, parts };
 }
 
-/** Speed typed directly: the part no longer follows a motor's nameplate. */
+/** Speed typed directly: the part no longer follows a motor's nameplate, a drive or a wheel. */
 export function setSpeedRpm(rpm: number): void {
   updatePart((p) => {
-    const { motor: _motor, ...rest } = p;
+    const { motor: _motor, drive: _drive, wheel: _wheel, ...rest } = p;
     return { ...rest, speedRpm: rpm };
   });
 }
@@ -74,7 +74,9 @@ export function setMotor(motor: PartSpec['motor'] | undefined): void {
     }
     const sign = p.speedRpm < 0 ? -1 : 1;
     const rpm = motorSpeedHz(motor.mainsHz, motor.poles, motor.slipPercent / 100) * 60;
-    return { ...p, motor: { ...motor }, speedRpm: sign * rpm };
+    // A part takes its speed from one source only (src/state/validate.ts).
+    const { drive: _drive, wheel: _wheel, ...rest } = p;
+    return { ...rest, motor: { ...motor }, speedRpm: sign * rpm };
   });
 }
 

@@ -8,7 +8,7 @@
 // Results are always built from fresh object literals, never by spreading or assigning the
 // input, so nothing hidden in the input (prototype tricks, extra fields) survives the check.
 
-import type { CameraSpec, LightingSpec, Machine, PartSpec, Setup, StrobeSpec } from './model';
+import type { CameraSpec, LightingSpec, Machine, PartDrive, PartSpec, Setup, StrobeSpec, WheelSpec } from './model';
 
 /** Refused outside data. `path` says where ("machine 3 › parts › 1 › features"). */
 export class DataError extends Error {
@@ -204,8 +204,8 @@ export function validateIsoTime(x: unknown, path: string): string {
 
 const ID = /^[A-Za-z0-9_-]{1,100}$/;
 
-function partFrom(x: unknown, path: string): PartSpec {
-  const r = readRecord(x, path, ['name', 'speedRpm', 'features', 'tolerancePercent'], ['motor']);
+function partFrom(x: unknown, path: string, index: number): PartSpec {
+  const r = readRecord(x, path, ['name', 'speedRpm', 'features', 'tolerancePercent'], ['motor', 'drive', 'wheel']);
   const part: PartSpec = {
     name: plainText(r.name, pathTo(path, 'name'), 0, MAX_NAME_CHARS),
     speedRpm: between(r.speedRpm, pathTo(path, 'speedRpm'), -1e7, 1e7),
@@ -228,7 +228,60 @@ function partFrom(x: unknown, path: string): PartSpec {
       slipPercent: between(m.slipPercent, pathTo(mp, 'slipPercent'), 0, 100),
     };
   }
+  if ('drive' in r) part.drive = driveFrom(r.drive, pathTo(path, 'drive'), index);
+  if ('wheel' in r) part.wheel = wheelFrom(r.wheel, pathTo(path, 'wheel'));
+  const sources = ['motor', 'drive', 'wheel'].filter((key) => key in r);
+  if (sources.length > 1) {
+    throw new DataError(path, `${path} takes its speed from one source only, not from ${sources.join(' and ')}.`);
+  }
   return part;
+}
+
+/** A drive from an earlier part; `index` is the driven part's own place in the list, from 0. */
+function driveFrom(x: unknown, path: string, index: number): PartDrive {
+  const head = readRecord(x, path, ['from', 'kind'], ['driverMm', 'drivenMm', 'slipPercent', 'driverTeeth', 'drivenTeeth']);
+  const kind = oneOf(head.kind, pathTo(path, 'kind'), ['belt', 'gear', 'shaft'] as const);
+  const fromPath = pathTo(path, 'from');
+  const from = finite(head.from, fromPath);
+  if (!Number.isInteger(from) || from < 0 || from >= index) {
+    // Counted from 0 like activePart; a drive from a later part could loop back on itself.
+    throw new DataError(
+      fromPath,
+      index === 0
+        ? `${fromPath}: the first part cannot be driven by another part (got ${from}).`
+        : `${fromPath} must pick an earlier part: a whole number from 0 to ${index - 1} (got ${from}).`,
+    );
+  }
+  if (kind === 'belt') {
+    const b = readRecord(x, path, ['from', 'kind', 'driverMm', 'drivenMm', 'slipPercent']);
+    return {
+      from,
+      kind,
+      driverMm: aboveZero(b.driverMm, pathTo(path, 'driverMm'), 100_000),
+      drivenMm: aboveZero(b.drivenMm, pathTo(path, 'drivenMm'), 100_000),
+      slipPercent: between(b.slipPercent, pathTo(path, 'slipPercent'), 0, 20),
+    };
+  }
+  if (kind === 'gear') {
+    const g = readRecord(x, path, ['from', 'kind', 'driverTeeth', 'drivenTeeth']);
+    return {
+      from,
+      kind,
+      driverTeeth: whole(g.driverTeeth, pathTo(path, 'driverTeeth'), 1, 100_000),
+      drivenTeeth: whole(g.drivenTeeth, pathTo(path, 'drivenTeeth'), 1, 100_000),
+    };
+  }
+  readRecord(x, path, ['from', 'kind']);
+  return { from, kind };
+}
+
+function wheelFrom(x: unknown, path: string): WheelSpec {
+  const r = readRecord(x, path, ['groundSpeed', 'unit', 'tyreSize']);
+  return {
+    groundSpeed: between(r.groundSpeed, pathTo(path, 'groundSpeed'), -1000, 1000),
+    unit: oneOf(r.unit, pathTo(path, 'unit'), ['km/h', 'mph'] as const),
+    tyreSize: plainText(r.tyreSize, pathTo(path, 'tyreSize'), 1, 40),
+  };
 }
 
 function cameraFrom(x: unknown, path: string): CameraSpec {
@@ -296,7 +349,7 @@ function setupFrom(x: unknown, ownPath: string, fieldPath: string): Setup {
   const r = readRecord(x, ownPath, SETUP_KEYS);
   const partsPath = pathTo(fieldPath, 'parts');
   const parts = readList(r.parts, partsPath, 1, MAX_PARTS, 'parts').map((p, i) =>
-    partFrom(p, pathTo(partsPath, i)),
+    partFrom(p, pathTo(partsPath, i), i),
   );
   const activePath = pathTo(fieldPath, 'activePart');
   const activePart = finite(r.activePart, activePath);

@@ -1,0 +1,321 @@
+// The drive chains of a set-up (the whole-machine screen). A part without a drive starts a
+// chain: its speed is typed, or comes from a motor or a wheel. A part with a drive is turned by
+// an earlier part through a belt, a gear pair or a shared shaft. The core's driveChain carries
+// speeds and tolerances along (physics.md §8); this file turns set-ups into its input and
+// writes what it gives back into the parts, so the check screen and saved machines keep it.
+import {
+  driveChain,
+  freezeRates,
+  InputError,
+  noStillRates,
+  kmhToMps,
+  motorSpeedHz,
+  mphToMps,
+  type ChainLink,
+  type ChainPart,
+  type ChainPartSpec,
+  type ChainRoot,
+  type FreezeBand,
+  type Range,
+  type Sampler,
+} from '../core';
+import { check } from './check';
+import { MAX_SPEED_RPM } from '../lib/fields';
+import { formatNumber } from '../lib/format';
+import type { PartDrive, PartSpec, Setup, WheelSpec } from './model';
+import { keepLastGood } from './outcome';
+import { defaultMotor, setup } from './setup';
+import { DataError, MAX_PARTS } from './validate';
+
+/** Where a part's speed comes from. */
+export type SpeedSource = 'typed' | 'motor' | 'wheel' | 'drive';
+
+/** A part of the set-up with the speed band its chain gives it. */
+export interface DerivedPart extends ChainPart {
+  /** Its place in the set-up's parts, from 0. */
+  index: number;
+  source: SpeedSource;
+}
+
+/** A wheel when a part first becomes one: 50 km/h on a 205/55R16 tyre (an everyday car size; our choice). */
+export const defaultWheel: WheelSpec = { groundSpeed: 50, unit: 'km/h', tyreSize: '205/55R16' };
+
+export function speedSourceOf(part: PartSpec): SpeedSource {
+  if (part.drive) return 'drive';
+  if (part.wheel) return 'wheel';
+  if (part.motor) return 'motor';
+  return 'typed';
+}
+
+/** The core's chain start for a part without a drive. */
+export function chainRootOf(part: PartSpec): ChainRoot {
+  const tolerance = part.tolerancePercent / 100;
+  if (part.wheel) {
+    const { groundSpeed, unit, tyreSize } = part.wheel;
+    const groundSpeedMps = unit === 'mph' ? mphToMps(groundSpeed) : kmhToMps(groundSpeed);
+    return { kind: 'wheel', groundSpeedMps, tyreSize, tolerance };
+  }
+  if (part.motor) {
+    // As on the check screen: the motor gives the speed at its slip, the part's tolerance the band.
+    const { mainsHz, poles, slipPercent } = part.motor;
+    const sign = part.speedRpm < 0 ? -1 : 1;
+    return { kind: 'fixed', speedHz: sign * motorSpeedHz(mainsHz, poles, slipPercent / 100), tolerance };
+  }
+  return { kind: 'fixed', speedHz: part.speedRpm / 60, tolerance };
+}
+
+/** The core's link for a drive (pulley diameters in metres). */
+export function chainLinkOf(drive: PartDrive): ChainLink {
+  if (drive.kind === 'belt') {
+    return {
+      kind: 'belt',
+      driverDiameterM: drive.driverMm / 1000,
+      drivenDiameterM: drive.drivenMm / 1000,
+      slipPercent: drive.slipPercent,
+    };
+  }
+  if (drive.kind === 'gear') return { kind: 'gear', driverTeeth: drive.driverTeeth, drivenTeeth: drive.drivenTeeth };
+  return { kind: 'shaft' };
+}
+
+/** What the part is called on screen and in messages. */
+export function partLabel(s: Setup, index: number): string {
+  return s.parts[index]?.name.trim() || `Part ${index + 1}`;
+}
+
+/**
+ * Every part's speed band, in set-up order: each chain (a part without a drive and the parts
+ * it turns, directly or through others) goes through the core's driveChain.
+ * Throws the core's InputError for a chain it refuses (a tyre size it cannot read, a band
+ * wider than ±50 %, a drive from a part that is not an earlier one).
+ * @example deriveParts(defaultSetup)[0].speedHz // 29.5 (1770 rpm, typed)
+ */
+export function deriveParts(s: Setup): DerivedPart[] {
+  const rootOf: number[] = [];
+  s.parts.forEach((part, i) => {
+    const from = part.drive?.from;
+    if (from === undefined) {
+      rootOf.push(i);
+      return;
+    }
+    if (!Number.isInteger(from) || from < 0 || from >= i) {
+      throw new InputError(
+        `drive of ${partLabel(s, i)}`,
+        `${partLabel(s, i)} is driven by a part that is not before it in the list: choose its driver again.`,
+      );
+    }
+    rootOf.push(rootOf[from]);
+  });
+  const out: DerivedPart[] = new Array(s.parts.length);
+  for (const root of new Set(rootOf)) {
+    const members = rootOf.flatMap((r, i) => (r === root ? [i] : []));
+    const specs: ChainPartSpec[] = members.map((i, k) => {
+      const part = s.parts[i];
+      const spec: ChainPartSpec = { name: partLabel(s, i), symmetry: part.features };
+      if (k === 0 || !part.drive) return spec;
+      return { ...spec, link: chainLinkOf(part.drive), from: members.indexOf(part.drive.from) };
+    });
+    const parts = driveChain({ root: chainRootOf(s.parts[root]), parts: specs });
+    members.forEach((i, k) => {
+      out[i] = { ...parts[k], index: i, source: speedSourceOf(s.parts[i]) };
+    });
+  }
+  return out;
+}
+
+/**
+ * The set-up with every driven part's speed and tolerance, and every wheel's speed, as its
+ * chain gives them. Parts whose speed is typed or comes from a motor keep theirs.
+ * Throws InputError as deriveParts does, or when a part would turn faster than the app accepts.
+ */
+export function withChainSpeeds(s: Setup): Setup {
+  const derived = deriveParts(s);
+  const parts = s.parts.map((part, i) => {
+    if (!part.drive && !part.wheel) return part;
+    const rpm = derived[i].speedHz * 60;
+    if (!(Math.abs(rpm) <= MAX_SPEED_RPM)) {
+      throw new InputError(
+        `speed of ${partLabel(s, i)}`,
+        `${partLabel(s, i)} would turn at more than ${formatNumber(MAX_SPEED_RPM)} rpm: check the drives and sizes before it.`,
+      );
+    }
+    const tolerancePercent = part.drive ? derived[i].tolerance * 100 : part.tolerancePercent;
+    return { ...part, speedRpm: rpm, tolerancePercent };
+  });
+  return { ...s, parts };
+}
+
+function changePart(s: Setup, index: number, change: (part: PartSpec) => PartSpec): Setup {
+  if (!s.parts[index]) throw new DataError('parts', 'That part is no longer in the list.');
+  return { ...s, parts: s.parts.map((p, i) => (i === index ? change({ ...p }) : p)) };
+}
+
+/** A part with no speed source of its own: speed and tolerance stay as they are. */
+function bare(part: PartSpec): PartSpec {
+  const { motor: _motor, drive: _drive, wheel: _wheel, ...rest } = part;
+  return rest;
+}
+
+/**
+ * Changes where part `index` takes its speed from, keeping what it showed until now: a typed
+ * speed starts at its current speed; a motor starts at 4 poles on 50 Hz with 3 % slip (as on
+ * the check screen), a wheel at `defaultWheel`, a drive on the same shaft as the part before.
+ * Throws DataError for an unknown part, or a drive asked of the first part.
+ */
+export function withSpeedSource(s: Setup, index: number, source: SpeedSource): Setup {
+  return changePart(s, index, (part) => {
+    if (speedSourceOf(part) === source) return part;
+    const base = bare(part);
+    if (source === 'typed') return base;
+    if (source === 'motor') {
+      const sign = part.speedRpm < 0 ? -1 : 1;
+      const rpm = motorSpeedHz(defaultMotor.mainsHz, defaultMotor.poles, defaultMotor.slipPercent / 100) * 60;
+      return { ...base, motor: { ...defaultMotor }, speedRpm: sign * rpm };
+    }
+    if (source === 'wheel') return { ...base, wheel: { ...defaultWheel } };
+    if (index === 0) throw new DataError('drive', 'The first part cannot be driven by another part.');
+    return { ...base, drive: { from: index - 1, kind: 'shaft' } };
+  });
+}
+
+/** Replaces part `index`'s drive (the caller keeps `from` earlier than `index`). */
+export function withDrive(s: Setup, index: number, drive: PartDrive): Setup {
+  return changePart(s, index, (part) => ({ ...bare(part), drive: { ...drive } }));
+}
+
+/** Replaces part `index`'s motor; its speed follows (direction kept). */
+export function withMotor(s: Setup, index: number, motor: NonNullable<PartSpec['motor']>): Setup {
+  return changePart(s, index, (part) => {
+    const sign = part.speedRpm < 0 ? -1 : 1;
+    const rpm = motorSpeedHz(motor.mainsHz, motor.poles, motor.slipPercent / 100) * 60;
+    return { ...bare(part), motor: { ...motor }, speedRpm: sign * rpm };
+  });
+}
+
+/** Replaces part `index`'s wheel. */
+export function withWheel(s: Setup, index: number, wheel: WheelSpec): Setup {
+  return changePart(s, index, (part) => ({ ...bare(part), wheel: { ...wheel } }));
+}
+
+/** Changes plain fields of part `index` (name, features, typed speed, tolerance). */
+export function withPartFields(s: Setup, index: number, fields: Partial<Pick<PartSpec, 'name' | 'features' | 'speedRpm' | 'tolerancePercent'>>): Setup {
+  return changePart(s, index, (part) => ({ ...part, ...fields }));
+}
+
+function freeName(parts: readonly PartSpec[]): string {
+  const taken = new Set(parts.map((p) => p.name.trim().toLowerCase()));
+  for (let n = parts.length + 1; ; n++) {
+    if (!taken.has(`part ${n}`)) return `Part ${n}`;
+  }
+}
+
+/**
+ * Adds a part at the end, on the same shaft as part `from` (the user then picks the drive).
+ * Throws DataError, changing nothing, when the set-up is full or `from` is not a part.
+ */
+export function withDrivenPart(s: Setup, from: number): Setup {
+  if (s.parts.length >= MAX_PARTS) {
+    throw new DataError('parts', `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`);
+  }
+  const driver = s.parts[from];
+  if (!driver) throw new DataError('parts', 'That part is no longer in the list.');
+  const part: PartSpec = {
+    name: freeName(s.parts),
+    speedRpm: driver.speedRpm,
+    features: 1,
+    tolerancePercent: driver.tolerancePercent,
+    drive: { from, kind: 'shaft' },
+  };
+  return { ...s, parts: [...s.parts, part] };
+}
+
+/**
+ * Removes part `index`. Parts it drove keep the speed and tolerance they had and take them as
+ * typed values from now on, so nothing they showed is lost; later drives are renumbered. The
+ * chosen part stays chosen (or its neighbour, when it was the one removed).
+ * Throws DataError, changing nothing, for the last part or an unknown index.
+ */
+export function withoutPart(s: Setup, index: number): Setup {
+  if (s.parts.length <= 1) throw new DataError('parts', 'A set-up needs at least one part.');
+  if (!s.parts[index]) throw new DataError('parts', 'That part is no longer in the list.');
+  let current: readonly PartSpec[] = s.parts;
+  try {
+    current = withChainSpeeds(s).parts;
+  } catch {
+    // A chain the core refuses keeps the speeds last written.
+  }
+  const parts = current.flatMap((part, i): PartSpec[] => {
+    if (i === index) return [];
+    const drive = part.drive;
+    if (!drive || drive.from < index) return [part];
+    if (drive.from === index) return [bare(part)];
+    return [{ ...part, drive: { ...drive, from: drive.from - 1 } }];
+  });
+  const activePart = s.activePart > index ? s.activePart - 1 : Math.min(s.activePart, parts.length - 1);
+  return { ...s, parts, activePart };
+}
+
+/**
+ * Applies an edit to the current set-up and writes the chains' speeds into it. When the core
+ * refuses the chain, the edit is kept as typed (nothing lost) and the speeds stay as they were;
+ * `chain.problem` says why. Throws what the edit throws (DataError), changing nothing.
+ */
+export function editChain(edit: (s: Setup) => Setup): void {
+  const next = edit(setup.peek());
+  try {
+    setup.value = withChainSpeeds(next);
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    setup.value = next;
+  }
+}
+
+/** Writes the chains' speeds into the current set-up when they changed (a typed root speed, say). */
+export function syncChainSpeeds(): void {
+  const s = setup.peek();
+  try {
+    const next = withChainSpeeds(s);
+    if (next.parts.some((p, i) => p.speedRpm !== s.parts[i].speedRpm || p.tolerancePercent !== s.parts[i].tolerancePercent)) {
+      setup.value = next;
+    }
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+  }
+}
+
+/** The current set-up's parts with their speed bands, kept at the last good value when the core refuses a chain. */
+export const chain = keepLastGood(() => deriveParts(setup.value));
+
+/** What the whole-machine screen lists for a sampler's range (physics.md §4, several parts). */
+export interface MachineRates {
+  /** The part to freeze (its index in the set-up). */
+  target: number;
+  range: Range;
+  sampler: Sampler;
+  /** Bands that freeze the target as a single image while no other part looks still, ascending. */
+  freeze: FreezeBand[];
+  /** Bands where no part looks still, ascending. */
+  noStill: Array<{ fromHz: number; toHz: number }>;
+}
+
+/**
+ * Freeze bands for parts[target] and the bands where no part looks still, over the range.
+ * Throws the core's InputError for a target that is not a part, or a range too wide to list.
+ */
+export function machineRatesFor(parts: readonly DerivedPart[], target: number, range: Range, sampler: Sampler): MachineRates {
+  const list = [...parts];
+  return {
+    target,
+    range,
+    sampler,
+    freeze: freezeRates(list, target, range, { sampler }),
+    noStill: noStillRates(list, range, { sampler }),
+  };
+}
+
+/** The rate tables for the current set-up: its chosen part, its sampler and that sampler's range. */
+export const machineRates = keepLastGood(() => {
+  const s = setup.value;
+  const r = check.value;
+  return machineRatesFor(deriveParts(s), s.parts[s.activePart] ? s.activePart : 0, r.range, r.sampler);
+});

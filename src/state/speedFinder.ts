@@ -1,0 +1,176 @@
+// The speed finder: what the technician recorded at the strobe, what they expect, and the next
+// step of the usual procedure from the core's speedFinderSteps (physics.md §7). The readings
+// live here, outside the screen, so changing tabs loses none of them.
+import { computed, signal } from '@preact/signals';
+import { InputError, motorExpectedRange, speedFinderSteps, type Range, type SpeedFinderStep } from '../core';
+import { formatNumber } from '../lib/format';
+import { deriveParts, partLabel, speedSourceOf, withChainSpeeds, withPartFields, withSpeedSource } from './chain';
+import { saveMachine, updateMachine } from './machines';
+import type { Machine, Setup } from './model';
+import { keepLastGood } from './outcome';
+import { activePart, openMachineId, setSamplerKind, setStrobeRateFpm, setup } from './setup';
+
+/** A reading: at rateFpm flashes per minute, `images` images stood still (1 = a single image). */
+export interface RecordedReading {
+  /** Stable key for the table row. */
+  id: number;
+  rateFpm: number;
+  images: number;
+}
+
+/** Most images a technician is asked to count: beyond about eight nobody counts them reliably (a judgement). */
+export const MAX_IMAGES_SEEN = 8;
+
+/** What the technician expects of the speed: nothing, a range in rpm, or a motor's nameplate. */
+export interface Expectation {
+  mode: 'none' | 'rpm' | 'motor';
+  fromRpm: number;
+  toRpm: number;
+  mainsHz: 50 | 60;
+  poles: number;
+  /** Slip range of the motor, percent of synchronous speed (loaded to unloaded). */
+  minSlipPercent: number;
+  maxSlipPercent: number;
+}
+
+/**
+ * Until the technician types one: a motor slips between 0 % (unloaded) and 5 % (full load),
+ * motorExpectedRange's default (common practice; Engineering ToolBox's typical speeds are 1.7–4 %).
+ */
+export const defaultExpectation: Expectation = {
+  mode: 'none',
+  fromRpm: 1000,
+  toRpm: 2000,
+  mainsHz: 50,
+  poles: 4,
+  minSlipPercent: 0,
+  maxSlipPercent: 5,
+};
+
+export const readings = signal<RecordedReading[]>([]);
+/** Features counted on the part; null follows the chosen part of the set-up. */
+export const finderFeatures = signal<number | null>(null);
+export const expectation = signal<Expectation>({ ...defaultExpectation });
+
+let nextId = 1;
+
+export function addReading(rateFpm: number, images: number): void {
+  readings.value = [...readings.value, { id: nextId++, rateFpm, images }];
+}
+
+export function changeReading(id: number, change: Partial<Omit<RecordedReading, 'id'>>): void {
+  readings.value = readings.value.map((r) => (r.id === id ? { ...r, ...change } : r));
+}
+
+export function removeReading(id: number): void {
+  readings.value = readings.value.filter((r) => r.id !== id);
+}
+
+export function clearReadings(): void {
+  readings.value = [];
+}
+
+/** The features the finder works with. */
+export const featuresInUse = computed(() => finderFeatures.value ?? activePart.value.features);
+
+/** The strobe's own range from the set-up, Hz. */
+export const strobeRangeHz = computed<Range>(() => {
+  const { minFpm, maxFpm } = setup.value.strobe;
+  return { minHz: minFpm / 60, maxHz: maxFpm / 60 };
+});
+
+/**
+ * The expected speed range in rev/s, or undefined for none. Throws the core's InputError for a
+ * motor it refuses or an empty range.
+ * @example expectedRange({ ...defaultExpectation, mode: 'motor', mainsHz: 60, poles: 4 }) // { minHz: 28.5, maxHz: 30 }
+ */
+export function expectedRange(e: Expectation): Range | undefined {
+  if (e.mode === 'none') return undefined;
+  if (e.mode === 'motor') {
+    return motorExpectedRange(e.mainsHz, e.poles, { min: e.minSlipPercent / 100, max: e.maxSlipPercent / 100 });
+  }
+  if (!(e.fromRpm < e.toRpm)) {
+    throw new InputError('expected speed', 'The expected speed range is empty: the lowest speed must be below the highest.');
+  }
+  return { minHz: e.fromRpm / 60, maxHz: e.toRpm / 60 };
+}
+
+/** The procedure's next step for what is recorded now; the last good one while the core refuses the input. */
+export const finderStep = keepLastGood<SpeedFinderStep>(() =>
+  speedFinderSteps({
+    readings: readings.value.map((r) => ({ rateHz: r.rateFpm / 60, images: r.images })),
+    symmetry: featuresInUse.value,
+    strobeRange: strobeRangeHz.value,
+    expect: expectedRange(expectation.value),
+  }),
+);
+
+/** Sets the check screen's sampler to the strobe, flashing at rateHz. */
+export function applyRateToStrobe(rateHz: number): void {
+  if (!(Number.isFinite(rateHz) && rateHz > 0)) return;
+  setSamplerKind('strobe');
+  setStrobeRateFpm(rateHz * 60);
+}
+
+const rpmText = (rpm: number) => `${formatNumber(rpm)} rpm`;
+
+/**
+ * The set-up with the chosen part turning at the speed found, and what changed, in words. A
+ * strobe cannot tell direction, so the part keeps its own; the speed is now a measured (typed)
+ * one, no longer taken from a motor, a drive or a wheel; parts it drives follow it.
+ * @example withMeasuredSpeed(defaultSetup, 29.5, 6).changes // ['Fan: speed 1,770 rpm → 1,770 rpm.']
+ */
+export function withMeasuredSpeed(s: Setup, speedHz: number, features: number): { setup: Setup; changes: string[] } {
+  const index = s.parts[s.activePart] ? s.activePart : 0;
+  const before = s.parts[index];
+  const name = partLabel(s, index);
+  const sign = before.speedRpm < 0 ? -1 : 1;
+  const rpm = sign * speedHz * 60;
+  const changes = [`${name}: speed ${rpmText(before.speedRpm)} → ${rpmText(rpm)}.`];
+  const source = speedSourceOf(before);
+  if (source === 'motor') changes.push(`${name} no longer takes its speed from the motor nameplate.`);
+  if (source === 'wheel') changes.push(`${name} no longer takes its speed from the ground speed and tyre size.`);
+  if (source === 'drive' && before.drive) {
+    changes.push(`${name} is no longer worked out from the drive from ${partLabel(s, before.drive.from)}.`);
+  }
+  if (features !== before.features) changes.push(`${name}: features ${before.features} → ${features}.`);
+  let next = withPartFields(withSpeedSource(s, index, 'typed'), index, { speedRpm: rpm, features });
+  try {
+    next = withChainSpeeds(next);
+    const beforeParts = deriveParts(s);
+    next.parts.forEach((p, i) => {
+      const was = beforeParts[i].speedHz * 60;
+      if (i !== index && p.drive && Math.abs(p.speedRpm - was) > 1e-9 * Math.abs(was)) {
+        changes.push(`${partLabel(next, i)}, driven from it: speed ${rpmText(was)} → ${rpmText(p.speedRpm)}.`);
+      }
+    });
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    // A chain the core refuses keeps the speeds it last had; the whole-machine screen says why.
+  }
+  return { setup: next, changes };
+}
+
+/** Where to keep the speed found: the machine open now, a new machine, or only the set-up on screen. */
+export type SaveTarget = { kind: 'open' } | { kind: 'new'; name: string } | { kind: 'setup' };
+
+/**
+ * Puts the speed found into the set-up on screen and keeps it as asked. Resolves to the
+ * sentences to show. Throws DataError, changing nothing, for a machine name or set-up the
+ * saved list refuses, or an open machine that was deleted meanwhile.
+ */
+export async function saveFoundSpeed(speedHz: number, features: number, target: SaveTarget): Promise<string[]> {
+  const { setup: next, changes } = withMeasuredSpeed(setup.peek(), speedHz, features);
+  let machine: Machine | null = null;
+  if (target.kind === 'open') {
+    const id = openMachineId.peek();
+    if (id === null) throw new InputError('machine', 'No saved machine is open: give a name to save a new one.');
+    machine = await updateMachine(id, next);
+  } else if (target.kind === 'new') {
+    machine = await saveMachine(target.name, next);
+    openMachineId.value = machine.id;
+  }
+  setup.value = next;
+  const where = machine ? `Saved to "${machine.name}".` : 'Changed in the set-up on the Check screen only (no machine saved).';
+  return [...changes, where];
+}
