@@ -89,7 +89,11 @@ describe('the data logger screen', () => {
     expect(screen.getByTestId('logger-proposal-text').textContent).toBe(plan.proposal!.why);
     // Nothing aliases at 1000 samples/s, but nothing stops higher content from folding in.
     expect(rows().every((r) => r.textContent?.includes('No'))).toBe(true);
+    // fs − fmax = 1000 − 250 = 750 Hz folds onto the band: said once, in the guard line.
+    expect(screen.getByTestId('logger-guard').textContent).toContain('750 Hz or above');
     expect(screen.getByTestId('logger-guard').textContent).toContain('not enough');
+    expect(plan.notes.some((n) => n.startsWith('Content at 750 Hz and above folds'))).toBe(true);
+    expect(screen.getByTestId('logger-notes').textContent).not.toContain('Content at 750 Hz');
     fireEvent.click(screen.getByRole('button', { name: 'Use this sample rate and filter' }));
     expect(sampleHz.value).toBe(1600);
     expect(filterKind.value).toBe('butterworth');

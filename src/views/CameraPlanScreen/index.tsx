@@ -209,7 +209,7 @@ export function CameraPlanScreen() {
             testId="plan-table"
           />
         ) : (
-          <p>No settings to list.</p>
+          <p class={style.plain}>No settings to list.</p>
         )}
       </Panel>
       <ReportBar
@@ -232,7 +232,7 @@ function columnsFor(open: (s: CameraSetting) => void): ReadonlyArray<ResultColum
     { label: 'Looks', cell: (r) => lookWords(r.look, 1, r.apparentRpm) },
     { label: 'Blur', numeric: true, cell: (r) => `${formatNumber(r.blurDegrees)}°, ${formatNumber(r.blurPitches)} pitch` },
     { label: 'Bend', numeric: true, cell: (r) => `${formatNumber(r.skewDegrees)}°` },
-    { label: 'Score', numeric: true, cell: (r) => formatNumber(r.score, 0) },
+    { label: 'Score', numeric: true, cell: (r) => formatNumber(r.score, r.score < 10 ? 1 : 0) },
     { label: 'What it looks like', cell: (r) => r.why },
     {
       label: 'Try it',

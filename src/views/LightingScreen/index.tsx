@@ -69,7 +69,7 @@ export function LightingScreen() {
           <p data-testid="lighting-summary">{result.summary}</p>
         </div>
       ) : (
-        <p>Nothing to show yet: {problem}</p>
+        <p class={style.plain}>Nothing to show yet: {problem}</p>
       )}
       {hazards.length > 0 && (
         <div class={style.hazard} role="alert" data-testid="lighting-hazard">
@@ -136,7 +136,7 @@ export function LightingScreen() {
             ))}
           </ul>
         ) : (
-          <p>Nothing needs changing for these parts under this light.</p>
+          <p class={style.plain}>Nothing needs changing for these parts under this light.</p>
         )}
         <p class={style.rules} data-testid="local-rules">
           {LOCAL_RULES_NOTE}

@@ -3,6 +3,7 @@ import {
   converterRangeDb,
   rcCutoffHz as rcCutoffOf,
   csvTable,
+  plainNumber,
   safetyCautions,
   type CsvColumn,
   type LoggerComponent,
@@ -82,7 +83,8 @@ export function LoggerScreen() {
   const problem = loggerPlanning.problem.value;
   const part = activePart.value;
   const kind = filterKind.value;
-  const otherNotes = plan ? plan.notes.filter((n) => n !== ALIAS_AFTER_CONVERTER_NOTE) : [];
+  // The alias statement has a box of its own and the guard a line of its own (see below).
+  const otherNotes = plan ? plan.notes.filter((n) => n !== ALIAS_AFTER_CONVERTER_NOTE && !isGuardNote(n, plan)) : [];
   const failing = plan ? plan.components.filter((c) => !c.pass) : [];
 
   const summary = (
@@ -98,7 +100,7 @@ export function LoggerScreen() {
           </p>
         </div>
       ) : (
-        <p>Nothing to show yet: {problem}</p>
+        <p class={style.plain}>Nothing to show yet: {problem}</p>
       )}
     </Panel>
   );
@@ -253,7 +255,9 @@ export function LoggerScreen() {
       <Panel title="A set-up that works" id="logger-proposal">
         {plan?.proposal ? (
           <>
-            <p data-testid="logger-proposal-text">{plan.proposal.why}</p>
+            <p class={style.plain} data-testid="logger-proposal-text">
+              {plan.proposal.why}
+            </p>
             <div>
               <button type="button" class={style.apply} onClick={() => plan.proposal && applyProposal(plan.proposal)}>
                 Use this sample rate and filter
@@ -261,7 +265,7 @@ export function LoggerScreen() {
             </div>
           </>
         ) : (
-          <p>{plan ? 'No proposal within the limits: see the notes above.' : 'Nothing to propose yet.'}</p>
+          <p class={style.plain}>{plan ? 'No proposal within the limits: see the notes above.' : 'Nothing to propose yet.'}</p>
         )}
       </Panel>
       <p class={style.note}>{safetyCautions()[0]}</p>
@@ -270,6 +274,11 @@ export function LoggerScreen() {
   );
 
   return <ToolLayout testId="logger-screen" summary={summary} warnings={warnings} entries={entries} results={results} />;
+}
+
+/** The core's note about content folding onto the band, which the guard line already says. */
+function isGuardNote(note: string, plan: LoggerPlan): boolean {
+  return note.startsWith(`Content at ${plainNumber(plan.guard.hz)} Hz and above folds`);
 }
 
 /** The plan's own sample rate (twice its Nyquist frequency), so a refused entry never mixes with a kept plan. */
