@@ -23,16 +23,16 @@ export function machineCsv(
   flashUnit: FlashUnit,
 ): string {
   const unit = rateUnit(kind, flashUnit);
-  const r = (hz: number) => rateNumber(hz, kind, flashUnit);
+  const r = (hz: number) => tidy(rateNumber(hz, kind, flashUnit));
   const partTable = csvTable(
     [
       { label: 'part', value: (p: DerivedPart) => p.name },
       { label: 'blades or marks', value: (p: DerivedPart) => p.symmetry },
       { label: 'speed from', value: (p: DerivedPart) => SOURCE_WORDS[p.source] },
-      { label: 'speed (rpm)', value: (p: DerivedPart) => p.speedHz * 60 },
-      { label: 'tolerance (± %)', value: (p: DerivedPart) => p.tolerance * 100 },
-      { label: 'lowest (rpm)', value: (p: DerivedPart) => p.lowHz * 60 },
-      { label: 'highest (rpm)', value: (p: DerivedPart) => p.highHz * 60 },
+      { label: 'speed (rpm)', value: (p: DerivedPart) => tidy(p.speedHz * 60) },
+      { label: 'tolerance (± %)', value: (p: DerivedPart) => tidy(p.tolerance * 100) },
+      { label: 'lowest (rpm)', value: (p: DerivedPart) => tidy(p.lowHz * 60) },
+      { label: 'highest (rpm)', value: (p: DerivedPart) => tidy(p.highHz * 60) },
     ],
     [...parts],
   );
@@ -56,4 +56,9 @@ export function machineCsv(
     rates.noStill,
   );
   return `${partTable}\r\n${freezeTable}\r\n${noStillTable}`;
+}
+
+/** Twelve significant figures: unit conversions leave no 0.9999999999 in a spreadsheet. */
+function tidy(value: number): number {
+  return Number(value.toPrecision(12));
 }

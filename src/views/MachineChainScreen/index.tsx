@@ -25,7 +25,7 @@ import style from './style.module.css';
 interface Props {}
 
 /** Bands listed per table; the CSV holds them all. */
-const SHOWN_BANDS = 10;
+const SHOWN_BANDS = 6;
 
 const SAMPLERS: ReadonlyArray<{ value: SamplerKind; label: string }> = [
   { value: 'strobe', label: 'Strobe' },
@@ -80,11 +80,12 @@ export function MachineChainScreen(_props: Props) {
   const partColumns: ReadonlyArray<ResultColumn<DerivedPart>> = [
     {
       label: 'Part',
+      // One element: on a phone each child of a cell takes a grid cell of its own.
       cell: (p) => (
-        <>
+        <span>
           <strong>{p.name}</strong> ({p.symmetry === 1 ? '1 mark' : `${formatNumber(p.symmetry)} features`})
-          {p.index === target && <span class={style.tag}> to freeze</span>}
-        </>
+          {p.index === target && <span class={style.tag}> · to freeze</span>}
+        </span>
       ),
     },
     { label: 'Speed', cell: (p) => speedWords(p) },
@@ -106,7 +107,7 @@ export function MachineChainScreen(_props: Props) {
   const warnings = (
     <>
       <Cautions show={cautionFlags(cautions)} />
-      {[chainProblem, ratesProblem, editProblem].filter(Boolean).map((message) => (
+      {[...new Set([chainProblem, ratesProblem, editProblem])].filter(Boolean).map((message) => (
         <p key={message} class={style.problem} role="alert" data-testid="chain-problem">
           {message} {message === editProblem ? 'Nothing was changed.' : 'The results shown are for the last entries that could be worked out.'}
         </p>

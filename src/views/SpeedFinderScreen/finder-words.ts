@@ -13,9 +13,9 @@ export const STAGE_TITLES: Record<SpeedFinderStage, string> = {
   conflict: 'The readings disagree',
 };
 
-/** "1 (single image)", "2 images", … for the image-count choice. */
+/** "1 image", "2 images", … in words, for the table and the report. */
 export function imagesLabel(images: number): string {
-  return images === 1 ? '1 (single image)' : `${images} images`;
+  return images === 1 ? '1 image' : `${images} images`;
 }
 
 /** What the table says about a candidate's place: likeliest, in the expected range, ruled out. */

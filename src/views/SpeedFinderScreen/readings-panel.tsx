@@ -109,8 +109,8 @@ function ImagesChoice({ id, label, value, onChange }: ImagesProps) {
         onChange={(e) => onChange(Number((e.currentTarget as HTMLSelectElement).value))}
       >
         {IMAGE_CHOICES.map((n) => (
-          <option key={n} value={String(n)}>
-            {imagesLabel(n)}
+          <option key={n} value={String(n)} aria-label={imagesLabel(n)}>
+            {n}
           </option>
         ))}
       </select>
