@@ -27,11 +27,16 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
   const chosen = s.parts[active];
   const [name, setName] = useState(chosen.name);
   const [problem, setProblem] = useState<string | null>(null);
-
-  // Another part chosen, or the name changed elsewhere: the field follows.
+  // Another part chosen, or its name changed elsewhere: the field follows. The text of this
+  // render is compared, as in NumberField, so the set-up echoing a keystroke back never
+  // overwrites keys typed since.
   useEffect(() => {
-    setName(chosen.name);
-    setProblem(null);
+    if (name !== chosen.name) {
+      setName(chosen.name);
+      setProblem(null);
+    }
+    // Only the chosen part or its stored name rewrite the text, never a keystroke.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [active, chosen.name]);
 
   const act = (action: () => void) => {

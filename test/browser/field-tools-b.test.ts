@@ -1,0 +1,270 @@
+// The lighting check, camera plan and data logger screens in a real Chromium at phone size,
+// against the built app: what the screens show must be what the core computes; typed garbage
+// gets a message and loses nothing; the table saves as CSV; the printed page carries the
+// machine, the date and the cautions. Screenshots go to test-output/screenshots/.
+import { afterEach, describe, expect, inject, test } from 'vitest';
+import type { Page } from 'playwright-core';
+import { mkdirSync, readFileSync } from 'node:fs';
+import {
+  ALIAS_AFTER_CONVERTER_NOTE,
+  cameraPlan,
+  lightingCheck,
+  loggerPlan,
+  lockRates,
+  safetyCautions,
+} from '../../src/core';
+import { formatPrecise, numberForField } from '../../src/lib/format';
+import { lookWords } from '../../src/lib/lookWords';
+import { defaultCameraEntries, frameRatesOf } from '../../src/state/cameraPlanning';
+import { corePart } from '../../src/state/check';
+import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';
+import { lampOf, lightingCautions, litPartsOf } from '../../src/state/lighting';
+import type { Setup } from '../../src/state/model';
+import { defaultLoggerEntries, tonesOf } from '../../src/state/loggerPlanning';
+import { openApp, openBrowser, typeInto, type Session } from './browser';
+
+let session: Session | undefined;
+
+afterEach(async () => {
+  await session?.close();
+  session = undefined;
+});
+
+const shots = 'test-output/screenshots';
+const GARBAGE = ['abc', 'NaN', '-Infinity', '1e999', '<script>alert(1)</script>', '1/0', '0x10', '12abc', '--5', '1..2'];
+
+/** The visible text of the page without what the user typed back in quotes. */
+async function shownText(page: Page): Promise<string> {
+  return (await page.locator('body').innerText()).replace(/"[^"]*"/g, '');
+}
+
+/** Opens the first-run example machine (a fictional plant) and then the tab `tab`. */
+async function openExampleOn(page: Page, tab: string): Promise<void> {
+  await openApp(page, inject('baseUrl'));
+  await page.getByRole('button', { name: 'Machines', exact: true }).click();
+  const row = page.locator('article', { has: page.getByRole('heading', { name: EXAMPLE_MACHINE_NAME }) });
+  await row.getByRole('button', { name: 'Open' }).click();
+  await page.getByTestId('verdict').waitFor();
+  await page.getByRole('button', { name: tab, exact: true }).click();
+}
+
+/**
+ * Types each garbage text into each field: the field is marked, a message stands beside it,
+ * the watched result stays as it was, and nothing reads NaN or Infinity. Then the good text goes back.
+ */
+async function refuseGarbage(page: Page, labels: string[], watched: string) {
+  const before = await page.getByTestId(watched).innerText();
+  for (const label of labels) {
+    const field = page.getByLabel(label, { exact: true });
+    const good = await field.inputValue();
+    for (const text of GARBAGE) {
+      await field.fill(text);
+      expect(await field.getAttribute('aria-invalid'), `${label}: "${text}"`).toBe('true');
+      const messageId = (await field.getAttribute('aria-describedby'))!.split(' ')[0];
+      expect((await page.locator(`[id="${messageId}"]`).innerText()).length, `${label}: "${text}"`).toBeGreaterThan(5);
+      expect(await field.inputValue(), 'the typed text stays').toBe(text);
+      expect(await page.getByTestId(watched).innerText(), `${label}: "${text}"`).toBe(before);
+      expect(await shownText(page), `${label}: "${text}"`).not.toMatch(/NaN|Infinity/);
+    }
+    await field.fill(good);
+    expect(await field.getAttribute('aria-invalid'), label).toBeNull();
+  }
+}
+
+/** Clicks "Save table (CSV)" and returns the file's name and text. */
+async function saveCsv(page: Page): Promise<{ name: string; text: string }> {
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save table (CSV)' }).click()]);
+  return { name: download.suggestedFilename(), text: readFileSync(await download.path(), 'utf8') };
+}
+
+/**
+ * Print emulation: the tab bar and buttons go, the report header shows the tool, the machine,
+ * today's date and every caution that applies. Writes a screenshot of the printed page.
+ */
+async function checkPrint(page: Page, title: string, cautions: string[], file: string) {
+  await page.emulateMedia({ media: 'print' });
+  expect(await page.getByText(`Trueturn · ${title}`).isVisible()).toBe(true);
+  const header = page.locator('header', { hasText: `Trueturn · ${title}` });
+  const text = await header.innerText();
+  expect(text).toContain(`Machine: ${EXAMPLE_MACHINE_NAME}`);
+  expect(text).toMatch(/Printed /);
+  expect(text).toContain(String(new Date().getFullYear()));
+  const items = header.locator('li');
+  expect(await items.allInnerTexts()).toEqual(cautions);
+  for (let i = 0; i < cautions.length; i++) expect(await items.nth(i).isVisible()).toBe(true);
+  expect(await page.getByRole('navigation', { name: 'Screens' }).isVisible()).toBe(false);
+  expect(await page.getByRole('button', { name: 'Print report' }).isVisible()).toBe(false);
+  await page.screenshot({ path: `${shots}/${file}`, fullPage: true });
+  await page.emulateMedia({ media: 'screen' });
+}
+
+/** The example set-up after the lighting flow adds a chuck (a new part starts with the chosen part's tolerance). */
+function withChuck(s: Setup): Setup {
+  const tolerancePercent = s.parts[s.activePart].tolerancePercent;
+  return { ...structuredClone(s), parts: [...s.parts, { name: 'Chuck', speedRpm: 3000, features: 2, tolerancePercent }], activePart: s.parts.length };
+}
+
+describe('the field tools in a real browser, at phone size', () => {
+  test('lighting check: each part under the lamps as the core finds it, a hazard shouted, garbage refused, CSV and print', async () => {
+    mkdirSync(shots, { recursive: true });
+    session = await openBrowser({ width: 390, height: 844 });
+    const { page } = session;
+    await openExampleOn(page, 'Lighting');
+
+    // The fictional cooler fan under 100 Hz flicker at 30 %: the core's own verdict and words.
+    const first = lightingCheck(lampOf(exampleSetup), litPartsOf(exampleSetup));
+    await expect.poll(() => page.getByTestId('lighting-summary').innerText()).toBe(first.summary);
+    const table = page.getByTestId('lighting-table');
+    const rows = table.locator('tbody tr');
+    expect(await rows.count()).toBe(exampleSetup.parts.length);
+    for (let i = 0; i < first.parts.length; i++) {
+      const p = first.parts[i];
+      const text = await rows.nth(i).innerText();
+      expect(text).toContain(p.name);
+      expect(text).toContain(lookWords(p.look, p.look === 'still' ? p.images : 1, p.apparentRpm));
+    }
+    expect(await page.getByTestId('flicker-risk').innerText()).toBe('Above the low-risk line');
+
+    // A two-jaw chuck at 3000 rpm (a 2-pole motor on 50 Hz, IEC 60034-1) added here looks still: a hazard.
+    await page.getByRole('button', { name: 'Add a part' }).click();
+    await typeInto(page, 'Name of the chosen part', 'Chuck');
+    await typeInto(page, 'Speed', '3000');
+    await typeInto(page, 'Blades or marks', '2');
+    const second = lightingCheck(lampOf(withChuck(exampleSetup)), litPartsOf(withChuck(exampleSetup)));
+    expect(second.parts[2].worstLook).toBe('still');
+    await expect.poll(() => page.getByTestId('lighting-summary').innerText()).toBe(second.summary);
+    expect(await page.getByTestId('lighting-hazard').isVisible()).toBe(true);
+    expect(await rows.nth(2).getByTestId('hazard-flag').innerText()).toBe('HAZARD');
+    expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+    await page.screenshot({ path: `${shots}/field-tools-b-lighting-phone.png` });
+
+    await refuseGarbage(page, ['Modulation (percent flicker)', 'Speed', 'Blades or marks', 'Tolerance'], 'lighting-summary');
+    await page.screenshot({ path: `${shots}/field-tools-b-lighting-phone-full.png`, fullPage: true });
+    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+
+    const csv = await saveCsv(page);
+    expect(csv.name).toMatch(/^lighting-check-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/);
+    const lines = csv.text.split('\r\n');
+    expect(lines).toHaveLength(second.parts.length + 2);
+    expect(lines[0].startsWith('part,speed (rpm),blades or marks,tolerance (± %),flicker (Hz),modulation (%),IEEE 1789 class')).toBe(true);
+    const chuck = withChuck(exampleSetup).parts[2];
+    expect(lines[3].startsWith(`Chuck,3000,2,${chuck.tolerancePercent},100,30,elevated,`)).toBe(true);
+    expect(lines[3]).toContain(',still,');
+    expect(lines[3]).toContain(',hazard,');
+
+    await checkPrint(page, 'Lighting check', safetyCautions(lightingCautions(second, 30)), 'field-tools-b-lighting-print.png');
+  });
+
+  test('camera plan: near misses when nothing freezes, a typed rate that does, "Open in check", garbage refused, CSV and print', async () => {
+    mkdirSync(shots, { recursive: true });
+    session = await openBrowser({ width: 390, height: 844 });
+    const { page } = session;
+    await openExampleOn(page, 'Camera');
+
+    // The fictional cooler fan: 8 blades at 1015 rpm. No phone frame rate freezes it.
+    const camera = {
+      frameRatesHz: frameRatesOf(defaultCameraEntries.standardLabels, []),
+      shutterAnglesDeg: defaultCameraEntries.shutterAnglesDeg,
+      exposuresS: defaultCameraEntries.exposuresS,
+      readoutS: defaultCameraEntries.readoutMs / 1000,
+    };
+    const part = corePart(exampleSetup);
+    const none = cameraPlan(camera, part, { kind: 'freeze' });
+    expect(none.settings).toHaveLength(0);
+    await expect.poll(() => page.getByTestId('plan-headline').innerText()).toBe('No setting of this camera reaches the goal');
+    const rows = page.getByTestId('plan-table').locator('tbody tr');
+    expect(await rows.count()).toBe(none.nearMisses.length);
+    expect(await rows.first().innerText()).toContain(`${formatPrecise(none.nearMisses[0].frameRate)} fps`);
+    // The single-image rates of physics.md §3, n·|f|/p, are named as the way out.
+    const freezing = lockRates({ ...part, tolerance: 0 }, { minHz: 1, maxHz: 1000 }, { maxImages: 1 }).map((l) => l.rateHz);
+    const top = Math.max(...freezing);
+    expect(await page.getByTestId('plan-none').innerText()).toContain(`${formatPrecise(top)} fps`);
+    await page.screenshot({ path: `${shots}/field-tools-b-camera-none-phone.png` });
+
+    // A camera that offers that rate freezes the fan.
+    await typeInto(page, 'Other frame rates', numberForField(top));
+    const typed = Number(numberForField(top));
+    const reached = cameraPlan({ ...camera, frameRatesHz: [...camera.frameRatesHz, typed] }, part, { kind: 'freeze' });
+    expect(reached.settings.length).toBeGreaterThan(0);
+    await expect.poll(() => page.getByTestId('plan-headline').innerText()).toMatch(/reach(es)? the goal$/);
+    expect(await rows.count()).toBe(reached.settings.length);
+    const best = await rows.first().innerText();
+    expect(best).toContain(`${formatPrecise(reached.settings[0].frameRate)} fps`);
+    expect(best).toContain('Looks still');
+    expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
+    await page.screenshot({ path: `${shots}/field-tools-b-camera-phone.png` });
+
+    await refuseGarbage(page, ['Other frame rates', 'Shutter angles', 'Shutter speeds', 'Rolling readout time'], 'plan-headline');
+    await page.screenshot({ path: `${shots}/field-tools-b-camera-phone-full.png`, fullPage: true });
+    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+
+    const csv = await saveCsv(page);
+    expect(csv.name).toMatch(/^camera-plan-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/);
+    const lines = csv.text.split('\r\n');
+    expect(lines).toHaveLength(reached.settings.length + 2);
+    expect(lines[1].startsWith(`1,${reached.settings[0].frameRate},${reached.settings[0].exposureS},`)).toBe(true);
+
+    await checkPrint(page, 'Camera plan', safetyCautions({ apparentStillness: true }), 'field-tools-b-camera-print.png');
+
+    // "Open in check" puts that setting on the check screen, where the camera view is.
+    await rows.first().getByRole('button', { name: 'Open in check' }).click();
+    await page.getByTestId('verdict').waitFor();
+    expect(await page.getByRole('radio', { name: 'Camera' }).isChecked()).toBe(true);
+    expect(await page.getByLabel('Frame rate', { exact: true }).inputValue()).toBe(numberForField(reached.settings[0].frameRate));
+    await expect.poll(() => page.getByTestId('verdict').innerText()).toMatch(/^Looks still/);
+  });
+
+  test('data logger: where each component lands as the core finds it, the alias statement, the proposal applied, garbage refused, CSV and print', async () => {
+    mkdirSync(shots, { recursive: true });
+    session = await openBrowser({ width: 390, height: 844 });
+    const { page } = session;
+    await openExampleOn(page, 'Logger');
+
+    const fan = exampleSetup.parts[exampleSetup.activePart];
+    const tones = (harmonicsCount: number) => tonesOf(fan, null, harmonicsCount, [], []);
+    const atFirst = loggerPlan(tones(defaultLoggerEntries.harmonics), 1000, { kind: 'none' }, 16);
+    const rows = page.getByTestId('logger-table').locator('tbody tr');
+    await expect.poll(() => rows.count()).toBe(atFirst.components.length);
+    for (let i = 0; i < atFirst.components.length; i++) {
+      const c = atFirst.components[i];
+      const text = await rows.nth(i).innerText();
+      expect(text).toContain(c.label);
+      expect(text).toContain(`${formatPrecise(c.foldedHz)} Hz`);
+    }
+    expect(await page.getByTestId('alias-note').innerText()).toBe(ALIAS_AFTER_CONVERTER_NOTE);
+
+    // At 200 samples/s the 8-blade pass (135.3 Hz) is above 100 Hz and folds to 200 − 135.3 = 64.7 Hz.
+    await typeInto(page, 'Sample rate', '200');
+    const slow = loggerPlan(tones(defaultLoggerEntries.harmonics), 200, { kind: 'none' }, 16);
+    const pass = slow.components.find((c) => c.label.startsWith('blade pass'))!;
+    expect(pass.foldedHz).toBeCloseTo(200 - (8 * fan.speedRpm) / 60, 9);
+    const bladeRow = rows.filter({ hasText: 'blade pass (8 blades)' });
+    await expect.poll(() => bladeRow.innerText()).toContain(`${formatPrecise(pass.foldedHz)} Hz`);
+    expect(await bladeRow.innerText()).toContain('Yes: a false tone');
+    expect(await bladeRow.getByTestId('component-result').innerText()).toBe('Fail');
+    expect(await page.getByTestId('logger-headline').innerText()).toBe('False tones will reach the record');
+    await page.screenshot({ path: `${shots}/field-tools-b-logger-alias-phone.png` });
+
+    // The proposal, taken with one tap, makes the record clean.
+    expect(slow.proposal).toBeDefined();
+    await page.getByRole('button', { name: 'Use this sample rate and filter' }).click();
+    await expect.poll(() => page.getByTestId('logger-headline').innerText()).toBe('The record is clean');
+    expect(await page.getByLabel('Sample rate', { exact: true }).inputValue()).toBe(numberForField(slow.proposal!.sampleHz));
+    expect(await page.getByLabel('Order', { exact: true }).inputValue()).toBe(String(slow.proposal!.order));
+    const clean = loggerPlan(tones(defaultLoggerEntries.harmonics), slow.proposal!.sampleHz, { kind: 'butterworth', order: slow.proposal!.order, cutoffHz: slow.proposal!.cutoffHz }, 16);
+    expect(clean.allPass).toBe(true);
+    await page.screenshot({ path: `${shots}/field-tools-b-logger-phone.png` });
+
+    await refuseGarbage(page, ['Sample rate', 'Converter bits', 'Shaft harmonics', 'Blade counts', 'Gear teeth', 'Other tones', 'Order', 'Cutoff'], 'logger-table');
+    await page.screenshot({ path: `${shots}/field-tools-b-logger-phone-full.png`, fullPage: true });
+    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+
+    const csv = await saveCsv(page);
+    expect(csv.name).toMatch(/^data-logger-plan-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/);
+    const lines = csv.text.split('\r\n');
+    expect(lines).toHaveLength(clean.components.length + 2);
+    expect(lines[1].startsWith(`1× shaft,${clean.components[0].hz},${slow.proposal!.sampleHz},`)).toBe(true);
+
+    await checkPrint(page, 'Data logger plan', safetyCautions({}), 'field-tools-b-logger-print.png');
+  });
+});
