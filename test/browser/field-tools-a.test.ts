@@ -42,6 +42,22 @@ async function shootPage(page: Page, name: string): Promise<void> {
   }
 }
 
+/** The page as printed: the report header names the tool and machine and carries the cautions; no buttons. */
+async function checkPrinted(page: Page, title: string, machine: string | null, name: string): Promise<void> {
+  await page.emulateMedia({ media: 'print' });
+  const header = page.locator('header[data-print="only"]');
+  expect(await header.isVisible()).toBe(true);
+  const text = await header.innerText();
+  expect(text).toContain(`Trueturn · ${title}`);
+  if (machine) expect(text).toContain(`Machine: ${machine}`);
+  expect(text).toMatch(/Printed /);
+  expect(text).toMatch(/still turning at full speed/);
+  expect(text).toMatch(/Flashing between about 3 and 60 times a second/);
+  expect(await page.getByRole('button', { name: 'Print report' }).isVisible()).toBe(false);
+  await shootPage(page, name);
+  await page.emulateMedia({ media: 'screen' });
+}
+
 async function noSidewaysScroll(page: Page): Promise<number> {
   return page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
 }
@@ -122,6 +138,7 @@ describe('the speed finder at phone size', () => {
     expect(await shownText(page)).not.toMatch(/NaN|Infinity/);
     expect(await noSidewaysScroll(page)).toBeLessThanOrEqual(0);
     await shootPage(page, 'speed-finder-done-phone');
+    await checkPrinted(page, 'Speed finder', 'Extract fan, kiln 3', 'speed-finder-print');
 
     // The Check screen now shows the speed found.
     await page.getByRole('button', { name: 'Check', exact: true }).click();
@@ -187,6 +204,7 @@ describe('the whole machine at phone size', () => {
     expect(await shownText(page)).not.toMatch(/NaN|Infinity/);
     expect(await noSidewaysScroll(page)).toBeLessThanOrEqual(0);
     await shootPage(page, 'whole-machine-phone');
+    await checkPrinted(page, 'Whole machine', null, 'whole-machine-print');
 
     // The Check screen shows the fan (the part chosen) at the chain's speed, standing still.
     await page.getByRole('button', { name: 'Check', exact: true }).click();

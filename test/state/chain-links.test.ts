@@ -13,6 +13,7 @@ import {
   withWheel,
 } from '../../src/state/chain';
 import { defaultSetup, type Setup } from '../../src/state/model';
+import { replaceSetup, setMotor, setSpeedRpm, setup } from '../../src/state/setup';
 import { DataError, MAX_PARTS, validateSetup } from '../../src/state/validate';
 import { bent } from './fixtures';
 
@@ -164,5 +165,28 @@ describe('editing the chain', () => {
     expect(t.parts[2].drive).toEqual({ from: 1, kind: 'shaft' });
     expect(() => withoutPart({ ...conveyor(), parts: [conveyor().parts[0]] }, 0)).toThrow(/at least one part/);
     expect(validateSetup(t)).toEqual(t);
+  });
+});
+
+describe('the check screen’s own speed fields', () => {
+  test('a speed typed for a driven part makes it a typed speed, so the set-up stays one source per part', () => {
+    replaceSetup({ ...conveyor(), activePart: 1 });
+    setSpeedRpm(600);
+    expect(setup.value.parts[1]).toEqual({ name: 'Gearbox input', speedRpm: 600, features: 1, tolerancePercent: 0 });
+    expect(validateSetup(setup.value)).toEqual(setup.value);
+    // The drum is still driven from it, now from 600 rpm: 600 · 20/60 = 200 rpm, reversed.
+    expect(deriveParts(setup.value)[2].speedHz * 60).toBeCloseTo(-200, 9);
+  });
+
+  test('a motor chosen for a driven part or a wheel replaces the drive or the wheel', () => {
+    replaceSetup({ ...conveyor(), activePart: 2 });
+    setMotor({ mainsHz: 60, poles: 6, slipPercent: 2 });
+    expect(setup.value.parts[2].drive).toBeUndefined();
+    // IEC 60034-1: 6 poles on 60 Hz = 1200 rpm synchronous; 2 % slip: 1176 rpm, the drum's direction kept.
+    expect(setup.value.parts[2].speedRpm).toBeCloseTo(1176, 9);
+    replaceSetup(withSpeedSource(conveyor(), 0, 'wheel'));
+    setMotor({ mainsHz: 50, poles: 4, slipPercent: 3 });
+    expect(setup.value.parts[0].wheel).toBeUndefined();
+    expect(validateSetup(setup.value)).toEqual(setup.value);
   });
 });

@@ -122,7 +122,7 @@ export function MachineChainScreen(_props: Props) {
           <PartCard key={i} setup={s} index={i} derived={parts[i]?.index === i ? parts[i] : undefined} onProblem={setEditProblem} />
         ))}
       </ol>
-      <div class={style.addRow}>
+      <div class={style.addRow} data-print="hide">
         <label class={style.label} for="chain-add-from">
           Add a part driven by
         </label>

@@ -152,7 +152,7 @@ function NewReading({ proposedFpm, proposedImages }: Props) {
   };
 
   return (
-    <form class={style.newReading} onSubmit={add} aria-label="Add a reading">
+    <form class={style.newReading} onSubmit={add} aria-label="Add a reading" data-print="hide">
       <NumberField
         id="new-reading-rate"
         label="Rate where it stood still"

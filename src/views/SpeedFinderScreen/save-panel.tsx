@@ -55,6 +55,7 @@ export function SavePanel({ speedHz }: Props) {
           ) : (
             <form
               class={style.saveNew}
+              data-print="hide"
               onSubmit={(e) => {
                 e.preventDefault();
                 void save({ kind: 'new', name });
