@@ -82,6 +82,9 @@ async function saveCsv(page: Page): Promise<{ name: string; text: string }> {
  * today's date and every caution that applies. Writes a screenshot of the printed page.
  */
 async function checkPrint(page: Page, title: string, cautions: string[], file: string) {
+  // A browser lays a printout out at the paper's width, whatever the screen: A4 is 794 CSS px wide at 96 dpi.
+  const screenSize = page.viewportSize()!;
+  await page.setViewportSize({ width: 794, height: 1123 });
   await page.emulateMedia({ media: 'print' });
   expect(await page.getByText(`Trueturn · ${title}`).isVisible()).toBe(true);
   const header = page.locator('header', { hasText: `Trueturn · ${title}` });
@@ -94,8 +97,20 @@ async function checkPrint(page: Page, title: string, cautions: string[], file: s
   for (let i = 0; i < cautions.length; i++) expect(await items.nth(i).isVisible()).toBe(true);
   expect(await page.getByRole('navigation', { name: 'Screens' }).isVisible()).toBe(false);
   expect(await page.getByRole('button', { name: 'Print report' }).isVisible()).toBe(false);
+  // The report header comes before the tool's answer on paper.
+  const headerTop = await header.evaluate((e) => e.getBoundingClientRect().top);
+  const answerTop = await page.locator('main section').first().evaluate((e) => e.getBoundingClientRect().top);
+  expect(headerTop).toBeLessThan(answerTop);
   await page.screenshot({ path: `${shots}/${file}`, fullPage: true });
   await page.emulateMedia({ media: 'screen' });
+  await page.setViewportSize(screenSize);
+}
+
+/** A phone screenshot from the top of the page, or with the element of `testId` at the top. */
+async function phoneShot(page: Page, file: string, testId?: string) {
+  if (testId) await page.getByTestId(testId).evaluate((e) => e.scrollIntoView({ block: 'start' }));
+  else await page.evaluate(() => window.scrollTo(0, 0));
+  await page.screenshot({ path: `${shots}/${file}` });
 }
 
 /** The example set-up after the lighting flow adds a chuck (a new part starts with the chosen part's tolerance). */
@@ -136,7 +151,8 @@ describe('the field tools in a real browser, at phone size', () => {
     expect(await page.getByTestId('lighting-hazard').isVisible()).toBe(true);
     expect(await rows.nth(2).getByTestId('hazard-flag').innerText()).toBe('HAZARD');
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
-    await page.screenshot({ path: `${shots}/field-tools-b-lighting-phone.png` });
+    await phoneShot(page, 'field-tools-b-lighting-phone.png');
+    await phoneShot(page, 'field-tools-b-lighting-table-phone.png', 'lighting-table');
 
     await refuseGarbage(page, ['Modulation (percent flicker)', 'Speed', 'Blades or marks', 'Tolerance'], 'lighting-summary');
     await page.screenshot({ path: `${shots}/field-tools-b-lighting-phone-full.png`, fullPage: true });
@@ -179,7 +195,7 @@ describe('the field tools in a real browser, at phone size', () => {
     const freezing = lockRates({ ...part, tolerance: 0 }, { minHz: 1, maxHz: 1000 }, { maxImages: 1 }).map((l) => l.rateHz);
     const top = Math.max(...freezing);
     expect(await page.getByTestId('plan-none').innerText()).toContain(`${formatPrecise(top)} fps`);
-    await page.screenshot({ path: `${shots}/field-tools-b-camera-none-phone.png` });
+    await phoneShot(page, 'field-tools-b-camera-none-phone.png');
 
     // A camera that offers that rate freezes the fan.
     await typeInto(page, 'Other frame rates', numberForField(top));
@@ -192,7 +208,8 @@ describe('the field tools in a real browser, at phone size', () => {
     expect(best).toContain(`${formatPrecise(reached.settings[0].frameRate)} fps`);
     expect(best).toContain('Looks still');
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
-    await page.screenshot({ path: `${shots}/field-tools-b-camera-phone.png` });
+    await phoneShot(page, 'field-tools-b-camera-phone.png');
+    await phoneShot(page, 'field-tools-b-camera-table-phone.png', 'plan-table');
 
     await refuseGarbage(page, ['Other frame rates', 'Shutter angles', 'Shutter speeds', 'Rolling readout time'], 'plan-headline');
     await page.screenshot({ path: `${shots}/field-tools-b-camera-phone-full.png`, fullPage: true });
@@ -243,7 +260,8 @@ describe('the field tools in a real browser, at phone size', () => {
     expect(await bladeRow.innerText()).toContain('Yes: a false tone');
     expect(await bladeRow.getByTestId('component-result').innerText()).toBe('Fail');
     expect(await page.getByTestId('logger-headline').innerText()).toBe('False tones will reach the record');
-    await page.screenshot({ path: `${shots}/field-tools-b-logger-alias-phone.png` });
+    await phoneShot(page, 'field-tools-b-logger-alias-phone.png');
+    await phoneShot(page, 'field-tools-b-logger-table-phone.png', 'logger-table');
 
     // The proposal, taken with one tap, makes the record clean.
     expect(slow.proposal).toBeDefined();
@@ -253,7 +271,7 @@ describe('the field tools in a real browser, at phone size', () => {
     expect(await page.getByLabel('Order', { exact: true }).inputValue()).toBe(String(slow.proposal!.order));
     const clean = loggerPlan(tones(defaultLoggerEntries.harmonics), slow.proposal!.sampleHz, { kind: 'butterworth', order: slow.proposal!.order, cutoffHz: slow.proposal!.cutoffHz }, 16);
     expect(clean.allPass).toBe(true);
-    await page.screenshot({ path: `${shots}/field-tools-b-logger-phone.png` });
+    await phoneShot(page, 'field-tools-b-logger-phone.png');
 
     await refuseGarbage(page, ['Sample rate', 'Converter bits', 'Shaft harmonics', 'Blade counts', 'Gear teeth', 'Other tones', 'Order', 'Cutoff'], 'logger-table');
     await page.screenshot({ path: `${shots}/field-tools-b-logger-phone-full.png`, fullPage: true });

@@ -99,6 +99,8 @@ describe('the lighting check screen', () => {
     expect(remedies).toMatch(/different phases of a three-phase/);
     expect(remedies).toMatch(/task lamp on a steady source/);
     expect(remedies).toMatch(/Local lighting rules and machinery-safety rules/);
+    // Said once: the separate deferral shows only when there are no remedies.
+    expect(screen.queryByTestId('local-rules')).toBeNull();
   });
 
   test('lamps flickering at the 50 Hz mains itself bring the seizure caution', () => {

@@ -212,16 +212,19 @@ export function CameraPlanScreen() {
           <p class={style.plain}>No settings to list.</p>
         )}
       </Panel>
-      <ReportBar
-        title="Camera plan"
-        machineName={openMachineName.value}
-        cautions={cautions}
-        csv={plan ? () => cameraCsv(plan) : undefined}
-      />
     </>
   );
 
-  return <ToolLayout testId="camera-plan-screen" summary={summary} warnings={warnings} entries={entries} results={results} />;
+  const report = (
+    <ReportBar
+      title="Camera plan"
+      machineName={openMachineName.value}
+      cautions={cautions}
+      csv={plan ? () => cameraCsv(plan) : undefined}
+    />
+  );
+
+  return <ToolLayout testId="camera-plan-screen" summary={summary} warnings={warnings} entries={entries} results={results} report={report} />;
 }
 
 function columnsFor(open: (s: CameraSetting) => void): ReadonlyArray<ResultColumn<CameraSetting>> {
@@ -236,6 +239,7 @@ function columnsFor(open: (s: CameraSetting) => void): ReadonlyArray<ResultColum
     { label: 'What it looks like', cell: (r) => r.why },
     {
       label: 'Try it',
+      action: true,
       cell: (r) => (
         <button type="button" class={style.open} onClick={() => open(r)}>
           Open in check

@@ -99,8 +99,11 @@ export function LightingScreen() {
       <Panel title="The lamps" id="lamps">
         <LightingFields />
       </Panel>
-      <PartsList title="Parts of the machine" />
-      <PartForm />
+      {/* On paper the table lists every part; the editors would print as empty boxes. */}
+      <div class={style.screenOnly} data-print="hide">
+        <PartsList title="Parts of the machine" />
+        <PartForm />
+      </div>
     </>
   );
 
@@ -138,20 +141,26 @@ export function LightingScreen() {
         ) : (
           <p class={style.plain}>Nothing needs changing for these parts under this light.</p>
         )}
-        <p class={style.rules} data-testid="local-rules">
-          {LOCAL_RULES_NOTE}
-        </p>
+        {/* The core's remedies end with the same deferral; say it once. */}
+        {!(result && result.remedies.length > 0) && (
+          <p class={style.rules} data-testid="local-rules">
+            {LOCAL_RULES_NOTE}
+          </p>
+        )}
       </Panel>
-      <ReportBar
-        title="Lighting check"
-        machineName={openMachineName.value}
-        cautions={cautions}
-        csv={result ? () => lightingCsv(result, rows, modulation) : undefined}
-      />
     </>
   );
 
-  return <ToolLayout testId="lighting-screen" summary={summary} warnings={warnings} entries={entries} results={results} />;
+  const report = (
+    <ReportBar
+      title="Lighting check"
+      machineName={openMachineName.value}
+      cautions={cautions}
+      csv={result ? () => lightingCsv(result, rows, modulation) : undefined}
+    />
+  );
+
+  return <ToolLayout testId="lighting-screen" summary={summary} warnings={warnings} entries={entries} results={results} report={report} />;
 }
 
 const COLUMNS: ReadonlyArray<ResultColumn<PartRow>> = [

@@ -269,11 +269,14 @@ export function LoggerScreen() {
         )}
       </Panel>
       <p class={style.note}>{safetyCautions()[0]}</p>
-      <ReportBar title="Data logger plan" machineName={openMachineName.value} cautions={{}} csv={plan ? () => loggerCsv(plan, sampleHzOf(plan)) : undefined} />
     </>
   );
 
-  return <ToolLayout testId="logger-screen" summary={summary} warnings={warnings} entries={entries} results={results} />;
+  const report = (
+    <ReportBar title="Data logger plan" machineName={openMachineName.value} cautions={{}} csv={plan ? () => loggerCsv(plan, sampleHzOf(plan)) : undefined} />
+  );
+
+  return <ToolLayout testId="logger-screen" summary={summary} warnings={warnings} entries={entries} results={results} report={report} />;
 }
 
 /** The core's note about content folding onto the band, which the guard line already says. */

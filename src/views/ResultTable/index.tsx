@@ -7,6 +7,8 @@ export interface ResultColumn<T> {
   cell: (row: T, index: number) => ComponentChildren;
   /** Right-aligned, tabular figures. */
   numeric?: boolean;
+  /** Buttons only: left off the printed page. */
+  action?: boolean;
 }
 
 interface Props<T> {
@@ -31,7 +33,7 @@ export function ResultTable<T>({ caption, columns, rows, rowKey, rowState, testI
       <thead>
         <tr>
           {columns.map((c) => (
-            <th key={c.label} scope="col" class={c.numeric ? style.numeric : undefined}>
+            <th key={c.label} scope="col" class={c.numeric ? style.numeric : undefined} data-print={c.action ? 'hide' : undefined}>
               {c.label}
             </th>
           ))}
@@ -41,7 +43,12 @@ export function ResultTable<T>({ caption, columns, rows, rowKey, rowState, testI
         {rows.map((row, i) => (
           <tr key={rowKey(row, i)} data-state={rowState?.(row)}>
             {columns.map((c) => (
-              <td key={c.label} data-label={c.label} class={c.numeric ? style.numeric : undefined}>
+              <td
+                key={c.label}
+                data-label={c.label}
+                class={c.numeric ? style.numeric : undefined}
+                data-print={c.action ? 'hide' : undefined}
+              >
                 {c.cell(row, i)}
               </td>
             ))}

@@ -8,8 +8,10 @@ interface Props {
   warnings?: ComponentChildren;
   /** What the user enters. */
   entries: ComponentChildren;
-  /** Tables, remedies, proposals and the report bar. */
+  /** Tables, remedies and proposals. */
   results: ComponentChildren;
+  /** The report bar: last on screen, first on paper (its print header names the tool, machine, date and cautions). */
+  report?: ComponentChildren;
   testId?: string;
 }
 
@@ -17,13 +19,14 @@ interface Props {
  * The page of a field tool: on a phone one column (answer, warnings, entries, results); on a
  * desktop entries on the left and everything the tool found on the right.
  */
-export function ToolLayout({ summary, warnings, entries, results, testId }: Props) {
+export function ToolLayout({ summary, warnings, entries, results, report, testId }: Props) {
   return (
     <div class={style.screen} data-testid={testId}>
       <div class={style.summary}>{summary}</div>
       <div class={style.warnings}>{warnings}</div>
       <div class={style.entries}>{entries}</div>
       <div class={style.results}>{results}</div>
+      {report && <div class={style.report}>{report}</div>}
     </div>
   );
 }
