@@ -4,6 +4,7 @@
 // speeds and tolerances along (physics.md §8); this file turns set-ups into its input and
 // writes what it gives back into the parts, so the check screen and saved machines keep it.
 import {
+  defaultLookOptions,
   driveChain,
   freezeRates,
   InputError,
@@ -290,7 +291,10 @@ export const chain = keepLastGood(() => deriveParts(setup.value));
 export interface MachineRates {
   /** The part to freeze (its index in the set-up). */
   target: number;
+  /** The sampler's range. */
   range: Range;
+  /** The part of it the bands cover: its top, from where listing every still span stays quick. */
+  listed: Range | null;
   sampler: Sampler;
   /** Bands that freeze the target as a single image while no other part looks still, ascending. */
   freeze: FreezeBand[];
@@ -299,17 +303,47 @@ export interface MachineRates {
 }
 
 /**
- * Freeze bands for parts[target] and the bands where no part looks still, over the range.
- * Throws the core's InputError for a target that is not a part, or a range too wide to list.
+ * Still spans worked out per keystroke at most: enough for a dozen fast parts over a strobe's
+ * whole range, few enough to answer at once on a phone (a judgement).
+ */
+export const MAX_LISTED_SPANS = 100_000;
+
+/**
+ * The top of `range` in which listing every part's still spans stays within `budget`: a part of
+ * pattern rate F has about F·(1/min − 1/max)·q(q + 1)/2 locks with up to q images in [min, max]
+ * (physics.md §3), so the bottom is raised until their sum fits. Null when even the top rate
+ * is too costly.
+ * @example listedRange([{ speedHz: 29.5, symmetry: 6 }], { minHz: 0.5, maxHz: 200 }, 'frames', 1e5) // { minHz: 0.5, maxHz: 200 }
+ */
+export function listedRange(
+  parts: ReadonlyArray<{ speedHz: number; symmetry: number; tolerance?: number }>,
+  range: Range,
+  sampler: Sampler,
+  budget = MAX_LISTED_SPANS,
+): Range | null {
+  const q = sampler === 'flash' ? defaultLookOptions.maxImages : 1;
+  const perInverseHz = parts.reduce((sum, p) => sum + p.symmetry * Math.abs(p.speedHz) * (1 + (p.tolerance ?? 0)), 0) * ((q * (q + 1)) / 2);
+  if (perInverseHz === 0) return range;
+  const lowest = 1 / (budget / perInverseHz + 1 / range.maxHz);
+  const minHz = Math.max(range.minHz, lowest);
+  return minHz < range.maxHz ? { minHz, maxHz: range.maxHz } : null;
+}
+
+/**
+ * Freeze bands for parts[target] and the bands where no part looks still, over the top of the
+ * range that can be listed quickly (listedRange).
+ * Throws the core's InputError for a target that is not a part, or bad parts or range.
  */
 export function machineRatesFor(parts: readonly DerivedPart[], target: number, range: Range, sampler: Sampler): MachineRates {
   const list = [...parts];
+  const listed = listedRange(list, range, sampler);
   return {
     target,
     range,
+    listed,
     sampler,
-    freeze: freezeRates(list, target, range, { sampler }),
-    noStill: noStillRates(list, range, { sampler }),
+    freeze: listed ? freezeRates(list, target, listed, { sampler }) : [],
+    noStill: listed ? noStillRates(list, listed, { sampler }) : [],
   };
 }
 

@@ -12,7 +12,7 @@ import { App } from '../../src/app';
 import { formatNumber } from '../../src/lib/format';
 import { openScreen } from '../../src/lib/navigation';
 import { formatRate } from '../../src/lib/rates';
-import { deriveParts } from '../../src/state/chain';
+import { deriveParts, listedRange, MAX_LISTED_SPANS } from '../../src/state/chain';
 import { defaultSetup } from '../../src/state/model';
 import { flashUnit, replaceSetup, setup, startSession } from '../../src/state/setup';
 import { freezeBandsShown, freezeRateToSet, middleHz, noStillBandsShown } from '../../src/views/MachineChainScreen/band-lists';
@@ -195,12 +195,26 @@ describe('the whole machine', () => {
     expect(speedOf(0)).toBe('582 rpm ± 1 % (576.2 – 587.8 rpm)');
   });
 
+  test('a part that stands still at too many low rates gets its bands listed from a rate up, said plainly', () => {
+    // A 100-tooth gear at 30,000 rpm: pattern rate 50,000 Hz, about 50,000 · (1/min − 1/max) · 36 locks.
+    type(0, 'Speed', '30000');
+    type(0, 'Blades or marks', '100');
+    const listed = listedRange(deriveParts(setup.value), { minHz: 0.5, maxHz: 200 }, 'flash')!;
+    // 1 / (100,000 / (50,000 · 1.01 · 36) + 1/200) = 16.6 Hz.
+    expect(listed.minHz).toBeCloseTo(1 / (MAX_LISTED_SPANS / (50_000 * 1.01 * 36) + 1 / 200), 9);
+    expect(screen.getByTestId('listed-note').textContent).toBe(
+      `Bands are listed from ${formatRate(listed.minHz, 'strobe', 'fpm')} up: below it these parts stand still at too many rates to list.`,
+    );
+    // With ±1 % on 50,000 Hz its lock bands overlap everywhere up there: it can look still at any rate.
+    expect(screen.getByTestId('no-no-still').textContent).toBe('Some part can look still at every rate in the range listed.');
+  });
+
   test('the CSV holds the parts and every band', () => {
     buildMotorBeltFan();
     const parts = deriveParts(setup.value);
     const freeze = freezeRates(parts, 0, { minHz: 0.5, maxHz: 200 });
     const noStill = noStillRates(parts, { minHz: 0.5, maxHz: 200 });
-    const text = machineCsv(parts, { target: 0, range: { minHz: 0.5, maxHz: 200 }, sampler: 'flash', freeze, noStill }, 'strobe', 'fpm');
+    const text = machineCsv(parts, { target: 0, range: { minHz: 0.5, maxHz: 200 }, listed: { minHz: 0.5, maxHz: 200 }, sampler: 'flash', freeze, noStill }, 'strobe', 'fpm');
     const lines = text.split('\r\n');
     expect(lines[0]).toBe('part,blades or marks,speed from,speed (rpm),tolerance (± %),lowest (rpm),highest (rpm)');
     expect(lines[1]).toMatch(/^Motor,1,motor nameplate,1455,1,1440\.45,1469\.55$/);

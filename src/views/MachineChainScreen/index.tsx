@@ -183,6 +183,13 @@ export function MachineChainScreen(_props: Props) {
         <p class={style.quiet}>
           Over {formatRateSpan(r.range.minHz, r.range.maxHz, kind, unit)}; the Check screen's rate is {rate(r.rateHz)}. Tap a rate to use it there.
         </p>
+        {rates && rates.listed?.minHz !== rates.range.minHz && (
+          <p class={style.problem} data-testid="listed-note">
+            {rates.listed
+              ? `Bands are listed from ${rate(rates.listed.minHz)} up: below it these parts stand still at too many rates to list.`
+              : 'These parts stand still at too many rates in this range to list them: choose a faster sampler range.'}
+          </p>
+        )}
         {applied !== null && (
           <p class={style.applied} role="status" data-testid="chain-applied">
             The Check screen now uses {rate(applied)}.{' '}
@@ -194,7 +201,7 @@ export function MachineChainScreen(_props: Props) {
         <h3 class={style.subtitle}>Freeze {partLabel(s, target)}, no other part still</h3>
         {freezeShown.length === 0 ? (
           <p class={style.quiet} data-testid="no-freeze">
-            {rates ? `No rate in this range freezes ${partLabel(s, target)} without another part looking still too.` : 'Not worked out yet.'}
+            {rates ? `No rate in the range listed freezes ${partLabel(s, target)} without another part looking still too.` : 'Not worked out yet.'}
           </p>
         ) : (
           <ResultTable
@@ -208,7 +215,7 @@ export function MachineChainScreen(_props: Props) {
         <h3 class={style.subtitle}>No part looks still</h3>
         {noStillShown.length === 0 ? (
           <p class={style.quiet} data-testid="no-no-still">
-            {rates ? 'Some part looks still at every rate in this range.' : 'Not worked out yet.'}
+            {rates ? 'Some part can look still at every rate in the range listed.' : 'Not worked out yet.'}
           </p>
         ) : (
           <ResultTable
