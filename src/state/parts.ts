@@ -1,6 +1,7 @@
 // The parts of the current set-up as a list: choose which one the screens work on, add one,
 // remove one, rename one. The per-field setters of the chosen part live in setup.ts; these
 // only change the list, and every change goes through the same checks as a saved file.
+import { editChain, withoutPart } from './chain';
 import type { PartSpec } from './model';
 import { setup } from './setup';
 import { DataError, MAX_NAME_CHARS, MAX_PARTS, validateSetup } from './validate';
@@ -40,36 +41,14 @@ function freeName(parts: readonly PartSpec[]): string {
   }
 }
 
-/** A part that may be driven by an earlier part, counted from 0 (the whole-machine screen's drives). */
-type MaybeDriven = PartSpec & { drive?: { from: number } };
-
 /**
- * Removes part `index`; the chosen part stays chosen (or its neighbour, when it was the one
- * removed). A part driven by the removed one keeps the speed it had, now as a typed speed; drives
- * from later parts follow their driver's new place in the list. Throws DataError, changing
- * nothing, for the last remaining part or an unknown index.
+ * Removes part `index`, as the whole-machine screen does (chain.ts withoutPart): parts it drove
+ * keep the speed they had as a typed speed, later drives follow their driver's new place, and
+ * the chosen part stays chosen (or its neighbour, when it was the one removed).
+ * Throws DataError, changing nothing, for the last remaining part or an unknown index.
  */
 export function removePart(index: number): void {
-  const s = setup.value;
-  if (s.parts.length <= 1) throw new DataError('parts', 'A set-up needs at least one part.');
-  if (!Number.isInteger(index) || index < 0 || index >= s.parts.length) {
-    throw new DataError('parts', 'That part is no longer in the list.');
-  }
-  const parts = s.parts
-    .filter((_, i) => i !== index)
-    .map((part): PartSpec => {
-      const p = part as MaybeDriven;
-      if (!p.drive) return part;
-      if (p.drive.from === index) {
-        const { drive: _drive, ...rest } = p;
-        return rest;
-      }
-      return p.drive.from > index ? { ...p, drive: { ...p.drive, from: p.drive.from - 1 } } : part;
-    });
-  const activePart = s.activePart > index ? s.activePart - 1 : Math.min(s.activePart, parts.length - 1);
-  const next = { ...s, parts, activePart };
-  validateSetup(next);
-  setup.value = next;
+  editChain((s) => withoutPart(s, index));
 }
 
 /**

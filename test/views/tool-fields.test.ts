@@ -106,14 +106,15 @@ describe('the parts list of the set-up', () => {
   });
 
   test('a part driven by the removed one keeps its speed as a typed speed; later drives follow their driver', () => {
-    const driven = (from: number): PartSpec => ({ name: `driven by ${from}`, speedRpm: 900, features: 4, tolerancePercent: 2, drive: { from, kind: 'shaft' } } as PartSpec);
+    // On the same shaft as its driver: the driver's speed and tolerance (1770 rpm, ±1 %).
+    const driven = (from: number): PartSpec => ({ name: `driven by ${from}`, speedRpm: 1770, features: 4, tolerancePercent: 1, drive: { from, kind: 'shaft' } });
     const s: Setup = { ...structuredClone(defaultSetup), parts: [defaultSetup.parts[0], { ...defaultSetup.parts[0], name: 'Motor' }, driven(1), driven(0)], activePart: 3 };
     replaceSetup(s);
     removePart(1);
     const parts = setup.value.parts as Array<PartSpec & { drive?: { from: number } }>;
     expect(parts.map((p) => p.name)).toEqual(['Fan', 'driven by 1', 'driven by 0']);
     expect(parts[1].drive).toBeUndefined();
-    expect(parts[1].speedRpm).toBe(900);
+    expect(parts[1].speedRpm).toBe(1770);
     expect(parts[2].drive?.from).toBe(0);
     expect(setup.value.activePart).toBe(2);
   });
