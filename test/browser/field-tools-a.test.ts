@@ -139,6 +139,11 @@ describe('the speed finder at phone size', () => {
     expect(await noSidewaysScroll(page)).toBeLessThanOrEqual(0);
     await shootPage(page, 'speed-finder-done-phone');
     await checkPrinted(page, 'Speed finder', 'Extract fan, kiln 3', 'speed-finder-print');
+    // On a desktop: entries on the left, the step and results on the right, nothing sideways.
+    await page.setViewportSize({ width: 1280, height: 800 });
+    expect(await noSidewaysScroll(page)).toBeLessThanOrEqual(0);
+    await page.screenshot({ path: `${shots}/speed-finder-desktop.png` });
+    await page.setViewportSize({ width: 390, height: 844 });
 
     // The Check screen now shows the speed found.
     await page.getByRole('button', { name: 'Check', exact: true }).click();
@@ -205,6 +210,10 @@ describe('the whole machine at phone size', () => {
     expect(await noSidewaysScroll(page)).toBeLessThanOrEqual(0);
     await shootPage(page, 'whole-machine-phone');
     await checkPrinted(page, 'Whole machine', null, 'whole-machine-print');
+    await page.setViewportSize({ width: 1280, height: 800 });
+    expect(await noSidewaysScroll(page)).toBeLessThanOrEqual(0);
+    await page.screenshot({ path: `${shots}/whole-machine-desktop.png` });
+    await page.setViewportSize({ width: 390, height: 844 });
 
     // The Check screen shows the fan (the part chosen) at the chain's speed, standing still.
     await page.getByRole('button', { name: 'Check', exact: true }).click();
