@@ -67,6 +67,15 @@ describe('Preview', () => {
     expect(screen.queryByText(/still turning at full speed/)).toBeNull();
   });
 
+  it('leaves the stillness caution to the screen when told, but always warns of its own flashing', () => {
+    render(<Preview part={fan} sampler="flash" rateHz={30} exposureS={0} showCautions={false} />);
+    // 6 blades at 29.67 rev/s under 30 flashes a second do not look true: the screen says so beside.
+    expect(screen.queryByText(/still turning at full speed/)).toBeNull();
+    fireEvent.click(screen.getByRole('button', { name: 'Play' }));
+    // Played in real time the preview flashes 30 times a second: only the preview knows it.
+    expect(screen.getByText(/photosensitive epilepsy/)).toBeTruthy();
+  });
+
   it('says what is wrong instead of drawing when a setting cannot be drawn', () => {
     render(
       <Preview part={{ speedHz: 10, symmetry: 2.5 }} sampler="flash" rateHz={50} exposureS={0} />,

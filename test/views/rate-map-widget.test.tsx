@@ -13,6 +13,8 @@ interface Made {
   chart: RateChart & { rates: number[]; updates: number; destroyed: boolean };
 }
 const made: Made[] = [];
+/** When set, the next chart fails as it would in a browser with no 2D canvas. */
+let noCanvas = false;
 
 vi.mock('../../src/views/RateMap/chart', () => ({
   createRateChart: (
@@ -21,6 +23,7 @@ vi.mock('../../src/views/RateMap/chart', () => ({
     series: RateMapSeries,
     rateHz: number,
   ) => {
+    if (noCanvas) throw new Error('This browser gives no 2D canvas to draw the rate map on.');
     const chart = {
       rates: [] as number[],
       updates: 0,
@@ -52,6 +55,7 @@ const range = { minHz: 1, maxHz: 1000 };
 
 beforeEach(() => {
   made.length = 0;
+  noCanvas = false;
 });
 afterEach(cleanup);
 
@@ -137,6 +141,24 @@ describe('RateMap', () => {
     expect(slider.getAttribute('aria-valuetext')).toBe('30 fps');
     fireEvent.keyDown(slider, { key: 'ArrowRight' });
     expect(picked[0]).toBeCloseTo(31, 12); // 1 % of the 100 fps span, linear for a 6:1 range
+  });
+
+  it('says so, and keeps the legend, where the browser cannot draw the chart', async () => {
+    noCanvas = true;
+    render(
+      <RateMap
+        parts={parts}
+        range={range}
+        rateHz={88}
+        onRateChange={() => {}}
+        samplerKind="strobe"
+      />,
+    );
+    await waitFor(() =>
+      expect(screen.getByText('This browser cannot draw the rate map.')).toBeTruthy(),
+    );
+    expect(made).toHaveLength(0);
+    expect(screen.getByText('Cooling fan')).toBeTruthy();
   });
 
   it('says what is wrong with an empty range instead of drawing', () => {

@@ -9,24 +9,29 @@ import { RateSuggestions } from '../RateSuggestions';
 import { SafeBands } from '../SafeBands';
 import { SamplerForm } from '../SamplerForm';
 import { VerdictPanel } from '../VerdictPanel';
+import { CheckPreview, CheckRateMap } from './connected-widgets';
 import style from './style.module.css';
 
 interface Props {
   /**
-   * Slot under the verdict for a moving picture of what the viewer sees. Another tool fills
-   * it; the screen works without it.
+   * Slot under the cautions for a moving picture of what the viewer sees: by default the
+   * preview of the set-up; null leaves it out.
    */
   preview?: ComponentChildren;
-  /** Slot after the suggestions for a chart of the rate range. */
+  /**
+   * Slot under the entries for a chart of the rate range: by default the rate map, which sets
+   * the rate when tapped; null leaves it out.
+   */
   chart?: ComponentChildren;
 }
 
 /**
  * The check screen: enter the part and what looks at it, and see at once what the viewer
  * will see, which rates to use and which to avoid. On a phone one column, verdict first and
- * pinned to the top; on a desktop, entries on the left and results on the right.
+ * pinned to the top; on a desktop, entries on the left and results on the right. The rate map
+ * sits under the rate it sets; the preview sits under the cautions that go with it.
  */
-export function CheckScreen({ preview, chart }: Props) {
+export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap /> }: Props) {
   const problem = checkProblem.value;
   const notes = check.value.notes;
   return (
@@ -48,6 +53,7 @@ export function CheckScreen({ preview, chart }: Props) {
       <div class={style.entries}>
         <PartForm />
         <SamplerForm />
+        {chart && <div class={style.slot}>{chart}</div>}
       </div>
       <div class={style.results}>
         {preview && <div class={style.slot}>{preview}</div>}
@@ -55,7 +61,6 @@ export function CheckScreen({ preview, chart }: Props) {
         <SafeBands />
         <CameraReadout />
         <LightingReadout />
-        {chart && <div class={style.slot}>{chart}</div>}
         <KeepShare />
       </div>
     </div>

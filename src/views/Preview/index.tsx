@@ -27,8 +27,9 @@ export interface Props {
   /** Camera rolling-shutter readout, top to bottom, seconds (0 = global shutter). */
   readoutS?: number;
   /**
-   * Show the cautions of physics.md §10 that apply to what is drawn (default true). Pass false
-   * only where the screen shows the same cautions right beside the preview.
+   * Show the stillness caution of physics.md §10 when what is drawn can mislead (default true).
+   * Pass false only where the screen shows it right beside the preview. The caution about the
+   * playback's own flashing shows either way: only the preview knows how fast it flashes.
    */
   showCautions?: boolean;
   class?: string;
@@ -185,12 +186,10 @@ export function Preview({
   const samplerView = sampler === 'flash' ? 'As the flashes show it' : 'As the camera shows it';
   // Stillness that is not real, and a playback that flashes at 3–60 a second. The closing
   // planning-aid line, which always applies, is the screen's to show once.
-  const cautions = showCautions
-    ? safetyCautions({
-        apparentStillness: motion !== null && motion.look !== 'true',
-        flashRatesHz: sampler === 'flash' && playing ? [rateHz / slow] : [],
-      }).slice(0, -1)
-    : [];
+  const cautions = safetyCautions({
+    apparentStillness: showCautions && motion !== null && motion.look !== 'true',
+    flashRatesHz: sampler === 'flash' && playing ? [rateHz / slow] : [],
+  }).slice(0, -1);
 
   return (
     <section

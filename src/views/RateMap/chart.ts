@@ -3,7 +3,14 @@
 import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
 import type { Range, RateMapSeries } from '../../core';
-import { placeMarkers, toChartColumns } from './chart-data';
+import {
+  misleadingSpansPx,
+  placeMarkers,
+  rateTicksHz,
+  speedLinearWithinRpm,
+  speedTicksRpm,
+  toChartColumns,
+} from './chart-data';
 
 export interface ChartColours {
   parts: string[];
@@ -27,6 +34,8 @@ export interface RateChartOptions {
   rateTitle: string;
   /** Tick label for a rate in Hz, in the sampler's own unit. */
   rateTick: (rateHz: number) => string;
+  /** How many of that unit make one Hz (60 for flashes per minute, else 1): ticks fall on round numbers of it. */
+  unitPerHz: number;
   /** Tick label for a speed in rpm. */
   speedTick: (rpm: number) => string;
   /** Called with the rate under a tap or drag, Hz, already inside the range. */
@@ -46,14 +55,23 @@ export interface RateChart {
 const SNAP_PX = 6;
 /** Markers of one part closer than this (CSS pixels) are drawn as one. */
 const MARKER_GAP_PX = 5;
+/** Axis text, CSS pixels: large enough to read at arm's length on a phone. */
+const TICK_FONT = '13px system-ui, sans-serif';
+const LABEL_FONT = '600 14px system-ui, sans-serif';
+/** Width of the speed axis, CSS pixels: its title and "-1,000". */
+const Y_AXIS_PX = 64;
 
-/** Builds the chart inside `holder`. */
+/** Builds the chart inside `holder`. Throws where the browser has no 2D canvas. */
 export function createRateChart(
   holder: HTMLElement,
   options: RateChartOptions,
   series: RateMapSeries,
   rateHz: number,
 ): RateChart {
+  // uPlot draws on a 2D canvas and fails later, out of reach of the caller, without one.
+  if (!document.createElement('canvas').getContext('2d')) {
+    throw new Error('This browser gives no 2D canvas to draw the rate map on.');
+  }
   const { colours, range } = options;
   let current = { series, rateHz, speedLimitRpm: options.speedLimitRpm };
   const dpr = () => window.devicePixelRatio || 1;
@@ -72,7 +90,12 @@ export function createRateChart(
         log: 10,
         range: () => [range.minHz, range.maxHz],
       },
-      y: { range: () => [-current.speedLimitRpm, current.speedLimitRpm] },
+      // asinh: linear near zero, logarithmic beyond (speedLinearWithinRpm says why).
+      y: {
+        distr: 4,
+        asinh: speedLinearWithinRpm(options.speedLimitRpm),
+        range: () => [-current.speedLimitRpm, current.speedLimitRpm],
+      },
     },
     axes: [
       {
@@ -80,9 +103,12 @@ export function createRateChart(
         grid: { stroke: colours.grid, width: 1 },
         ticks: { stroke: colours.grid },
         label: options.rateTitle,
-        labelFont: '600 13px system-ui, sans-serif',
-        font: '12px system-ui, sans-serif',
-        // A log axis hides some ticks by passing null for them.
+        labelFont: LABEL_FONT,
+        font: TICK_FONT,
+        // Round numbers in the unit shown, every one labelled: uPlot's own log ticks start from
+        // the range's low end (25, 35, … 105 for lighting) and its filter drops some labels.
+        splits: (u) => rateTicksHz(range, options.log, options.unitPerHz, u.width - Y_AXIS_PX),
+        filter: (_u, splits) => splits,
         values: (_u, splits) =>
           splits.map((v) => (v === null || v === undefined ? '' : options.rateTick(v))),
       },
@@ -91,9 +117,13 @@ export function createRateChart(
         grid: { stroke: colours.grid, width: 1 },
         ticks: { stroke: colours.grid },
         label: 'Apparent speed, rpm',
-        labelFont: '600 13px system-ui, sans-serif',
-        font: '12px system-ui, sans-serif',
-        size: 64,
+        labelFont: LABEL_FONT,
+        font: TICK_FONT,
+        size: Y_AXIS_PX,
+        // Every tick labelled: uPlot's own filter for asinh axes drops some of these few.
+        filter: (_u, splits) => splits,
+        splits: (u) =>
+          speedTicksRpm(current.speedLimitRpm, u.scales.y.asinh ?? speedLinearWithinRpm(1)),
         values: (_u, splits) =>
           splits.map((v) => (v === null || v === undefined ? '' : options.speedTick(v))),
       },
@@ -108,7 +138,8 @@ export function createRateChart(
       })),
     ],
     hooks: {
-      drawClear: [(u: uPlot) => shadeMisleading(u, current.series, colours)],
+      // Over the grid, under the lines: the shading tints the grid instead of being cut by it.
+      drawAxes: [(u: uPlot) => shadeMisleading(u, current.series, colours)],
       draw: [(u: uPlot) => drawOverlay(u, current.series, current.rateHz, colours, font)],
     },
   };
@@ -149,6 +180,7 @@ export function createRateChart(
   return {
     update(next, nextRate, speedLimitRpm) {
       current = { series: next, rateHz: nextRate, speedLimitRpm };
+      plot.scales.y.asinh = speedLinearWithinRpm(speedLimitRpm);
       plot.setData(toChartColumns(next) as uPlot.AlignedData);
     },
     setRate(nextRate) {
@@ -205,20 +237,18 @@ function brokenLine(u: uPlot, seriesIdx: number, idx0: number, idx1: number): uP
   return { stroke, fill: null, clip: null, band: null, flags: 0 };
 }
 
-/** Misleading bands shaded behind everything, the full height of the plot. */
+/** Misleading bands shaded the full height of the plot, behind the lines and markers. */
 function shadeMisleading(u: uPlot, series: RateMapSeries, colours: ChartColours): void {
   const { ctx, bbox } = u;
   ctx.save();
   ctx.fillStyle = colours.misleading;
-  for (const band of series.bands) {
-    if (band.safe) continue;
-    const x0 = u.valToPos(band.fromHz, 'x', true);
-    const x1 = u.valToPos(band.toHz, 'x', true);
-    const left = Math.max(bbox.left, Math.min(x0, x1));
-    const right = Math.min(bbox.left + bbox.width, Math.max(x0, x1));
-    if (right < left) continue;
-    ctx.fillRect(left, bbox.top, Math.max(1, right - left), bbox.height);
-  }
+  const spans = misleadingSpansPx(
+    series.bands,
+    (r) => u.valToPos(r, 'x', true),
+    bbox.left,
+    bbox.left + bbox.width,
+  );
+  for (const [left, right] of spans) ctx.fillRect(left, bbox.top, right - left, bbox.height);
   ctx.restore();
 }
 
@@ -252,7 +282,7 @@ function drawOverlay(
     bbox.left + bbox.width,
     MARKER_GAP_PX * dpr,
   );
-  ctx.font = font(11);
+  ctx.font = font(12);
   ctx.textAlign = 'center';
   ctx.textBaseline = 'bottom';
   let lastLabelX = -Infinity;

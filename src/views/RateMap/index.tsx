@@ -10,7 +10,7 @@ import {
 import type { SamplerKind } from '../../state/model';
 import { formatNumber } from '../../lib/format';
 import { formatRate, rateNumber, rateUnit, type FlashUnit } from '../../lib/rates';
-import { partsKey, rateForKey, speedAxisLimitRpm } from './chart-data';
+import { partsKey, rateForKey, speedAxisLimitRpm, unresolvedShare } from './chart-data';
 import type { ChartColours, RateChart } from './chart';
 import style from './style.module.css';
 
@@ -39,6 +39,8 @@ export interface Props {
 
 /** Grid rates across the range: more than the widest chart has pixels. */
 const MAP_POINTS = 2000;
+/** The crowded low end is worth a note once it takes more than this share of the axis (a few pixels). */
+const NOTE_SHARE = 0.01;
 
 type ChartModule = typeof import('./chart');
 
@@ -62,6 +64,7 @@ export function RateMap(props: Props) {
   const [log, setLog] = useState(() => props.logAxis ?? range.maxHz / range.minHz > 20);
   const [chartModule, setChartModule] = useState<ChartModule | null>(null);
   const [loadFailed, setLoadFailed] = useState(false);
+  const [drawFailed, setDrawFailed] = useState(false);
   const scheme = useColourScheme();
   const rootRef = useRef<HTMLDivElement>(null);
   const holderRef = useRef<HTMLDivElement>(null);
@@ -109,22 +112,30 @@ export function RateMap(props: Props) {
     if (!chartModule || !holder || !root || !series || !('limit' in computed)) return;
     const unit = rateUnit(samplerKind, flashUnit);
     const size = chartSize(holder);
-    const made = chartModule.createRateChart(
-      holder,
-      {
-        ...size,
-        log,
-        range,
-        speedLimitRpm: computed.limit,
-        colours: readColours(root),
-        rateTitle: `${samplerKind === 'camera' ? 'Frame rate' : samplerKind === 'strobe' ? 'Flash rate' : 'Flicker'}, ${unit}`,
-        rateTick: (hz) => formatNumber(rateNumber(hz, samplerKind, flashUnit)),
-        speedTick: (rpm) => formatNumber(rpm),
-        onPick: (hz) => latest.current.onRateChange(hz),
-      },
-      series,
-      latest.current.rateHz,
-    );
+    let made: RateChart;
+    try {
+      made = chartModule.createRateChart(
+        holder,
+        {
+          ...size,
+          log,
+          range,
+          speedLimitRpm: computed.limit,
+          colours: readColours(root),
+          rateTitle: `${samplerKind === 'camera' ? 'Frame rate' : samplerKind === 'strobe' ? 'Flash rate' : 'Flicker'}, ${unit}`,
+          rateTick: (hz) => formatNumber(rateNumber(hz, samplerKind, flashUnit)),
+          unitPerHz: rateNumber(1, samplerKind, flashUnit),
+          speedTick: (rpm) => formatNumber(rpm),
+          onPick: (hz) => latest.current.onRateChange(hz),
+        },
+        series,
+        latest.current.rateHz,
+      );
+    } catch {
+      setDrawFailed(true);
+      return;
+    }
+    setDrawFailed(false);
     chart.current = made;
     const observer =
       typeof ResizeObserver === 'function'
@@ -190,9 +201,13 @@ export function RateMap(props: Props) {
           data-testid="rate-map"
         >
           <div ref={holderRef} class={style.plot} />
-          {!chartModule && (
+          {(!chartModule || drawFailed) && (
             <p class={style.loading}>
-              {loadFailed ? 'The rate map could not be loaded.' : 'Drawing the rate map…'}
+              {drawFailed
+                ? 'This browser cannot draw the rate map.'
+                : loadFailed
+                  ? 'The rate map could not be loaded: reload the page to try again.'
+                  : 'Drawing the rate map…'}
             </p>
           )}
         </div>
@@ -217,11 +232,11 @@ export function RateMap(props: Props) {
           Looks still (a number: images standing still)
         </li>
       </ul>
-      {series && series.resolvedFromHz.some((r) => r > range.minHz) && (
+      {series && unresolvedShare(series.resolvedFromHz, range, log) > NOTE_SHARE && (
         <p class={style.note}>
-          Below {formatRate(Math.max(...series.resolvedFromHz), samplerKind, flashUnit)} some parts
-          alias faster than the map can draw: their speeds show as scattered dots, and lock markers
-          are left out there.
+          Below {formatRate(Math.max(...series.resolvedFromHz), samplerKind, flashUnit)} the
+          sawtooth has more teeth than the map has room for: speeds there show as scattered dots,
+          and lock markers are left out.
         </p>
       )}
       {caution && <p class={style.caution}>{caution}</p>}
@@ -246,7 +261,8 @@ function useColourScheme(): 'dark' | 'light' {
 /** The chart's size for its box: full width; shorter on a phone. */
 function chartSize(holder: HTMLElement): { width: number; height: number } {
   const width = Math.max(240, Math.floor(holder.clientWidth));
-  const height = Math.round(Math.min(360, Math.max(240, width * 0.55)));
+  // Keep in step with .plot in style.module.css, which holds this size before the chart loads.
+  const height = Math.round(Math.min(380, Math.max(260, width * 0.62)));
   return { width, height };
 }
 
