@@ -5,7 +5,10 @@ import { SEIZURE_RISK_HIGH_HZ, SEIZURE_RISK_LOW_HZ, type CautionContext } from '
 /**
  * @example cautionFlags({ apparentStillness: true, flashRatesHz: [100] }) // { safety: true, photosensitivity: false }
  */
-export function cautionFlags(context: CautionContext): { safety: boolean; photosensitivity: boolean } {
+export function cautionFlags(context: CautionContext): {
+  safety: boolean;
+  photosensitivity: boolean;
+} {
   const rates = context.flashRatesHz ?? [];
   const sweep = context.flashSweepHz;
   const inRange = (hz: number) => hz >= SEIZURE_RISK_LOW_HZ && hz <= SEIZURE_RISK_HIGH_HZ;
@@ -13,6 +16,8 @@ export function cautionFlags(context: CautionContext): { safety: boolean; photos
     safety: context.apparentStillness === true,
     photosensitivity:
       rates.some(inRange) ||
-      (sweep !== undefined && sweep.minHz <= SEIZURE_RISK_HIGH_HZ && sweep.maxHz >= SEIZURE_RISK_LOW_HZ),
+      (sweep !== undefined &&
+        sweep.minHz <= SEIZURE_RISK_HIGH_HZ &&
+        sweep.maxHz >= SEIZURE_RISK_LOW_HZ),
   };
 }

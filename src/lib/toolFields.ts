@@ -12,7 +12,13 @@ function capital(text: string): string {
 const BARE_NUMBER = /^[+]?\d[\d\s.,'\u00a0\u202f]*$/;
 
 /** A whole number from min to max; trailing words (such as "blades") are allowed only when `words` matches them. */
-export function readWhole(text: string, what: string, min: number, max: number, words?: RegExp): number {
+export function readWhole(
+  text: string,
+  what: string,
+  min: number,
+  max: number,
+  words?: RegExp,
+): number {
   const trimmed = typeof text === 'string' ? text.trim() : '';
   const bare = words ? trimmed.replace(words, '').trim() : trimmed;
   if (trimmed !== '' && !BARE_NUMBER.test(bare)) {
@@ -46,19 +52,23 @@ export const readCutoffHz = (text: string): number => frequency(text, 'cutoff fr
 export const readToneHz = (text: string): number => frequency(text, 'tone');
 
 /** Shaft harmonics to include: 1× … N×. */
-export const readHarmonics = (text: string): number => readWhole(text, 'harmonics', 1, 200, /\s*[×x]$/i);
+export const readHarmonics = (text: string): number =>
+  readWhole(text, 'harmonics', 1, 200, /\s*[×x]$/i);
 
 /** Blade count of a fan or impeller. */
-export const readBladeCount = (text: string): number => readWhole(text, 'blade count', 1, 1000, /\s*blades?$/i);
+export const readBladeCount = (text: string): number =>
+  readWhole(text, 'blade count', 1, 1000, /\s*blades?$/i);
 
 /** Tooth count of a gear. */
-export const readTeeth = (text: string): number => readWhole(text, 'tooth count', 1, 100_000, /\s*(teeth|tooth)$/i);
+export const readTeeth = (text: string): number =>
+  readWhole(text, 'tooth count', 1, 100_000, /\s*(teeth|tooth)$/i);
 
 /** Butterworth filter order (poles). */
 export const readFilterOrder = (text: string): number => readWhole(text, 'filter order', 1, 20);
 
 /** Converter resolution, bits. */
-export const readBits = (text: string): number => readWhole(text, 'converter bits', 1, 64, /\s*bits?$/i);
+export const readBits = (text: string): number =>
+  readWhole(text, 'converter bits', 1, 64, /\s*bits?$/i);
 
 /** A number with an optional SI-prefixed unit after it, read with `units` (lower-case keys, "" = the bare number's unit). */
 function withUnit(
@@ -70,12 +80,16 @@ function withUnit(
   say: string,
   span: string,
 ): number {
-  if (typeof text !== 'string' || text.trim() === '') throw new InputError(what, `${capital(what)} is empty: type a number.`);
+  if (typeof text !== 'string' || text.trim() === '')
+    throw new InputError(what, `${capital(what)} is empty: type a number.`);
   const m = /^(.*?\d)\s*([^\d\s.,]*)\s*$/u.exec(text.trim());
   const unit = (m?.[2] ?? '').toLowerCase();
   const factor = units[unit];
   if (!m || factor === undefined) {
-    throw new InputError(what, `"${text.trim().slice(0, 24)}" is not a ${what}; type it as ${say}.`);
+    throw new InputError(
+      what,
+      `"${text.trim().slice(0, 24)}" is not a ${what}; type it as ${say}.`,
+    );
   }
   const value = parseNumber(m[1], what) * factor;
   if (!(value >= min && value <= max)) {
@@ -84,7 +98,18 @@ function withUnit(
   return value;
 }
 
-const OHMS: Record<string, number> = { '': 1, 'ω': 1, ohm: 1, ohms: 1, k: 1e3, 'kω': 1e3, kohm: 1e3, m: 1e6, 'mω': 1e6, mohm: 1e6 };
+const OHMS: Record<string, number> = {
+  '': 1,
+  ω: 1,
+  ohm: 1,
+  ohms: 1,
+  k: 1e3,
+  kω: 1e3,
+  kohm: 1e3,
+  m: 1e6,
+  mω: 1e6,
+  mohm: 1e6,
+};
 
 /** Resistance in ohms: "10000", "10k", "10 kΩ", "2.2M". */
 export function readResistanceOhm(text: string): number {
@@ -97,11 +122,11 @@ const FARADS: Record<string, number> = {
   n: 1e-9,
   pf: 1e-12,
   p: 1e-12,
-  'µf': 1e-6,
-  'μf': 1e-6,
+  µf: 1e-6,
+  μf: 1e-6,
   uf: 1e-6,
-  'µ': 1e-6,
-  'μ': 1e-6,
+  µ: 1e-6,
+  μ: 1e-6,
   u: 1e-6,
   mf: 1e-3,
   f: 1,
@@ -109,7 +134,15 @@ const FARADS: Record<string, number> = {
 
 /** Capacitance in farads; a bare number is in nF ("100" = 100 nF); "4.7 µF", "470p" work too. */
 export function readCapacitanceF(text: string): number {
-  return withUnit(text, 'capacitance', FARADS, 1e-15, 1, '100 nF, 4.7 µF or 470 pF', '0.001 pF and 1 F');
+  return withUnit(
+    text,
+    'capacitance',
+    FARADS,
+    1e-15,
+    1,
+    '100 nF, 4.7 µF or 470 pF',
+    '0.001 pF and 1 F',
+  );
 }
 
 /**
@@ -145,7 +178,12 @@ export function readList(
 ): number[] {
   const items = splitList(text);
   if (items.length < min) {
-    throw new InputError(what, min === 1 ? `Give at least one value for ${what}.` : `Give at least ${min} values for ${what}.`);
+    throw new InputError(
+      what,
+      min === 1
+        ? `Give at least one value for ${what}.`
+        : `Give at least ${min} values for ${what}.`,
+    );
   }
   if (items.length > max) throw new InputError(what, `At most ${max} values for ${what}.`);
   return items.map((item, i) => {

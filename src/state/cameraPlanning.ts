@@ -96,7 +96,9 @@ export const cameraPlanning = keepLastGood<CameraPlan>(() =>
 /** Cautions of a plan (physics.md §10): freezing, or any setting that can mislead. */
 export function cameraCautions(plan: CameraPlan, kind: GoalKind): CautionContext {
   const all = [...plan.settings, ...plan.nearMisses];
-  return { apparentStillness: kind === 'freeze' || all.some((s) => s.misleading || s.look === 'still') };
+  return {
+    apparentStillness: kind === 'freeze' || all.some((s) => s.misleading || s.look === 'still'),
+  };
 }
 
 /**
@@ -104,7 +106,11 @@ export function cameraCautions(plan: CameraPlan, kind: GoalKind): CautionContext
  * part with the camera. The exposure keeps the form it was offered in: a shutter angle from the
  * angle list, else a time.
  */
-export function applyCameraSetting(setting: CameraSetting, anglesDeg: readonly number[], readoutMs: number): void {
+export function applyCameraSetting(
+  setting: CameraSetting,
+  anglesDeg: readonly number[],
+  readoutMs: number,
+): void {
   const fromAngle = anglesDeg.some((a) => Math.abs(a - setting.shutterAngle) <= 1e-9 * a);
   batch(() => {
     setFrameRate(setting.frameRate);

@@ -1,6 +1,12 @@
 // The lighting check of the current set-up: its lamp (mains, flicker, modulation) against every
 // part, by the core's lightingCheck (physics.md §6).
-import { lightingCheck, type CautionContext, type Lamp, type LightingCheck, type LitPart } from '../core';
+import {
+  lightingCheck,
+  type CautionContext,
+  type Lamp,
+  type LightingCheck,
+  type LitPart,
+} from '../core';
 import type { Setup } from './model';
 import { keepLastGood } from './outcome';
 import { setup } from './setup';
@@ -37,4 +43,6 @@ export function lightingCautions(result: LightingCheck, modulationPercent: numbe
 }
 
 /** The check of the current set-up, kept at its last good value when the core refuses one. */
-export const lighting = keepLastGood(() => lightingCheck(lampOf(setup.value), litPartsOf(setup.value)));
+export const lighting = keepLastGood(() =>
+  lightingCheck(lampOf(setup.value), litPartsOf(setup.value)),
+);

@@ -79,7 +79,13 @@ export function bladesFor(part: PartSpec, typed: number[] | null): number[] {
 }
 
 /** The machine's tones for the core; the shaft runs at the part's speed, either way round. */
-export function tonesOf(part: PartSpec, typed: number[] | null, n: number, teeth: number[], tones: number[]): MachineTones {
+export function tonesOf(
+  part: PartSpec,
+  typed: number[] | null,
+  n: number,
+  teeth: number[],
+  tones: number[],
+): MachineTones {
   return {
     shaftHz: Math.abs(part.speedRpm) / 60,
     harmonics: n,
@@ -105,7 +111,13 @@ export const filter = computed<AntiAliasFilter>(() => {
 /** The plan for the current entries, kept at the last good plan when the core refuses one. */
 export const loggerPlanning = keepLastGood<LoggerPlan>(() =>
   loggerPlan(
-    tonesOf(activePart.value, bladeCounts.value, harmonics.value, gearTeeth.value, extraTonesHz.value),
+    tonesOf(
+      activePart.value,
+      bladeCounts.value,
+      harmonics.value,
+      gearTeeth.value,
+      extraTonesHz.value,
+    ),
     sampleHz.value,
     filter.value,
     converterBits.value,

@@ -9,7 +9,8 @@ import { DataError, MAX_NAME_CHARS, MAX_PARTS, validateSetup } from './validate'
 /** Makes part `index` the one the screens work on. Ignores an index outside the list. */
 export function selectPart(index: number): void {
   const s = setup.value;
-  if (!Number.isInteger(index) || index < 0 || index >= s.parts.length || index === s.activePart) return;
+  if (!Number.isInteger(index) || index < 0 || index >= s.parts.length || index === s.activePart)
+    return;
   setup.value = { ...s, activePart: index };
 }
 
@@ -21,7 +22,10 @@ export function selectPart(index: number): void {
 export function addPart(): void {
   const s = setup.value;
   if (s.parts.length >= MAX_PARTS) {
-    throw new DataError('parts', `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`);
+    throw new DataError(
+      'parts',
+      `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`,
+    );
   }
   const like = s.parts[s.activePart] ?? s.parts[0];
   const part: PartSpec = {
@@ -62,14 +66,20 @@ export function renamePart(index: number, name: string): void {
   }
   const chars = [...name].length;
   if (chars > MAX_NAME_CHARS) {
-    throw new DataError('name', `A part's name holds at most ${MAX_NAME_CHARS} characters (this one has ${chars}).`);
+    throw new DataError(
+      'name',
+      `A part's name holds at most ${MAX_NAME_CHARS} characters (this one has ${chars}).`,
+    );
   }
   const next = { ...s, parts: s.parts.map((p, i) => (i === index ? { ...p, name } : p)) };
   try {
     validateSetup(next);
   } catch (error) {
     if (!(error instanceof DataError)) throw error;
-    throw new DataError('name', "A part's name must be plain text on one line, without control or direction characters.");
+    throw new DataError(
+      'name',
+      "A part's name must be plain text on one line, without control or direction characters.",
+    );
   }
   setup.value = next;
 }

@@ -31,7 +31,18 @@ afterEach(async () => {
 });
 
 const shots = 'test-output/screenshots';
-const GARBAGE = ['abc', 'NaN', '-Infinity', '1e999', '<script>alert(1)</script>', '1/0', '0x10', '12abc', '--5', '1..2'];
+const GARBAGE = [
+  'abc',
+  'NaN',
+  '-Infinity',
+  '1e999',
+  '<script>alert(1)</script>',
+  '1/0',
+  '0x10',
+  '12abc',
+  '--5',
+  '1..2',
+];
 
 /** The visible text of the page without what the user typed back in quotes. */
 async function shownText(page: Page): Promise<string> {
@@ -42,7 +53,9 @@ async function shownText(page: Page): Promise<string> {
 async function openExampleOn(page: Page, tab: string): Promise<void> {
   await openApp(page, inject('baseUrl'));
   await page.getByRole('button', { name: 'Machines', exact: true }).click();
-  const row = page.locator('article', { has: page.getByRole('heading', { name: EXAMPLE_MACHINE_NAME }) });
+  const row = page.locator('article', {
+    has: page.getByRole('heading', { name: EXAMPLE_MACHINE_NAME }),
+  });
   await row.getByRole('button', { name: 'Open' }).click();
   await page.getByTestId('verdict').waitFor();
   await page.getByRole('button', { name: tab, exact: true }).click();
@@ -61,7 +74,10 @@ async function refuseGarbage(page: Page, labels: string[], watched: string) {
       await field.fill(text);
       expect(await field.getAttribute('aria-invalid'), `${label}: "${text}"`).toBe('true');
       const messageId = (await field.getAttribute('aria-describedby'))!.split(' ')[0];
-      expect((await page.locator(`[id="${messageId}"]`).innerText()).length, `${label}: "${text}"`).toBeGreaterThan(5);
+      expect(
+        (await page.locator(`[id="${messageId}"]`).innerText()).length,
+        `${label}: "${text}"`,
+      ).toBeGreaterThan(5);
       expect(await field.inputValue(), 'the typed text stays').toBe(text);
       expect(await page.getByTestId(watched).innerText(), `${label}: "${text}"`).toBe(before);
       expect(await shownText(page), `${label}: "${text}"`).not.toMatch(/NaN|Infinity/);
@@ -73,7 +89,10 @@ async function refuseGarbage(page: Page, labels: string[], watched: string) {
 
 /** Clicks "Save table (CSV)" and returns the file's name and text. */
 async function saveCsv(page: Page): Promise<{ name: string; text: string }> {
-  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save table (CSV)' }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'Save table (CSV)' }).click(),
+  ]);
   return { name: download.suggestedFilename(), text: readFileSync(await download.path(), 'utf8') };
 }
 
@@ -99,7 +118,10 @@ async function checkPrint(page: Page, title: string, cautions: string[], file: s
   expect(await page.getByRole('button', { name: 'Print report' }).isVisible()).toBe(false);
   // The report header comes before the tool's answer on paper.
   const headerTop = await header.evaluate((e) => e.getBoundingClientRect().top);
-  const answerTop = await page.locator('main section').first().evaluate((e) => e.getBoundingClientRect().top);
+  const answerTop = await page
+    .locator('main section')
+    .first()
+    .evaluate((e) => e.getBoundingClientRect().top);
   expect(headerTop).toBeLessThan(answerTop);
   await page.screenshot({ path: `${shots}/${file}`, fullPage: true });
   await page.emulateMedia({ media: 'screen' });
@@ -116,7 +138,11 @@ async function phoneShot(page: Page, file: string, testId?: string) {
 /** The example set-up after the lighting flow adds a chuck (a new part starts with the chosen part's tolerance). */
 function withChuck(s: Setup): Setup {
   const tolerancePercent = s.parts[s.activePart].tolerancePercent;
-  return { ...structuredClone(s), parts: [...s.parts, { name: 'Chuck', speedRpm: 3000, features: 2, tolerancePercent }], activePart: s.parts.length };
+  return {
+    ...structuredClone(s),
+    parts: [...s.parts, { name: 'Chuck', speedRpm: 3000, features: 2, tolerancePercent }],
+    activePart: s.parts.length,
+  };
 }
 
 describe('the field tools in a real browser, at phone size', () => {
@@ -145,7 +171,10 @@ describe('the field tools in a real browser, at phone size', () => {
     await typeInto(page, 'Name of the chosen part', 'Chuck');
     await typeInto(page, 'Speed', '3000');
     await typeInto(page, 'Blades or marks', '2');
-    const second = lightingCheck(lampOf(withChuck(exampleSetup)), litPartsOf(withChuck(exampleSetup)));
+    const second = lightingCheck(
+      lampOf(withChuck(exampleSetup)),
+      litPartsOf(withChuck(exampleSetup)),
+    );
     expect(second.parts[2].worstLook).toBe('still');
     await expect.poll(() => page.getByTestId('lighting-summary').innerText()).toBe(second.summary);
     expect(await page.getByTestId('lighting-hazard').isVisible()).toBe(true);
@@ -154,21 +183,43 @@ describe('the field tools in a real browser, at phone size', () => {
     await phoneShot(page, 'field-tools-b-lighting-phone.png');
     await phoneShot(page, 'field-tools-b-lighting-table-phone.png', 'lighting-table');
 
-    await refuseGarbage(page, ['Modulation (percent flicker)', 'Speed', 'Blades or marks', 'Tolerance'], 'lighting-summary');
-    await page.screenshot({ path: `${shots}/field-tools-b-lighting-phone-full.png`, fullPage: true });
-    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+    await refuseGarbage(
+      page,
+      ['Modulation (percent flicker)', 'Speed', 'Blades or marks', 'Tolerance'],
+      'lighting-summary',
+    );
+    await page.screenshot({
+      path: `${shots}/field-tools-b-lighting-phone-full.png`,
+      fullPage: true,
+    });
+    expect(
+      await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth),
+    ).toBeLessThanOrEqual(0);
 
     const csv = await saveCsv(page);
-    expect(csv.name).toMatch(/^lighting-check-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/);
+    expect(csv.name).toMatch(
+      /^lighting-check-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/,
+    );
     const lines = csv.text.split('\r\n');
     expect(lines).toHaveLength(second.parts.length + 2);
-    expect(lines[0].startsWith('part,speed (rpm),blades or marks,tolerance (± %),flicker (Hz),modulation (%),IEEE 1789 class')).toBe(true);
+    expect(
+      lines[0].startsWith(
+        'part,speed (rpm),blades or marks,tolerance (± %),flicker (Hz),modulation (%),IEEE 1789 class',
+      ),
+    ).toBe(true);
     const chuck = withChuck(exampleSetup).parts[2];
-    expect(lines[3].startsWith(`Chuck,3000,2,${chuck.tolerancePercent},100,30,elevated,`)).toBe(true);
+    expect(lines[3].startsWith(`Chuck,3000,2,${chuck.tolerancePercent},100,30,elevated,`)).toBe(
+      true,
+    );
     expect(lines[3]).toContain(',still,');
     expect(lines[3]).toContain(',hazard,');
 
-    await checkPrint(page, 'Lighting check', safetyCautions(lightingCautions(second, 30)), 'field-tools-b-lighting-print.png');
+    await checkPrint(
+      page,
+      'Lighting check',
+      safetyCautions(lightingCautions(second, 30)),
+      'field-tools-b-lighting-print.png',
+    );
   });
 
   test('camera plan: near misses when nothing freezes, a typed rate that does, "Open in check", garbage refused, CSV and print', async () => {
@@ -187,12 +238,20 @@ describe('the field tools in a real browser, at phone size', () => {
     const part = corePart(exampleSetup);
     const none = cameraPlan(camera, part, { kind: 'freeze' });
     expect(none.settings).toHaveLength(0);
-    await expect.poll(() => page.getByTestId('plan-headline').innerText()).toBe('No setting of this camera reaches the goal');
+    await expect
+      .poll(() => page.getByTestId('plan-headline').innerText())
+      .toBe('No setting of this camera reaches the goal');
     const rows = page.getByTestId('plan-table').locator('tbody tr');
     expect(await rows.count()).toBe(none.nearMisses.length);
-    expect(await rows.first().innerText()).toContain(`${formatPrecise(none.nearMisses[0].frameRate)} fps`);
+    expect(await rows.first().innerText()).toContain(
+      `${formatPrecise(none.nearMisses[0].frameRate)} fps`,
+    );
     // The single-image rates of physics.md §3, n·|f|/p, are named as the way out.
-    const freezing = lockRates({ ...part, tolerance: 0 }, { minHz: 1, maxHz: 1000 }, { maxImages: 1 }).map((l) => l.rateHz);
+    const freezing = lockRates(
+      { ...part, tolerance: 0 },
+      { minHz: 1, maxHz: 1000 },
+      { maxImages: 1 },
+    ).map((l) => l.rateHz);
     const top = Math.max(...freezing);
     expect(await page.getByTestId('plan-none').innerText()).toContain(`${formatPrecise(top)} fps`);
     await phoneShot(page, 'field-tools-b-camera-none-phone.png');
@@ -200,9 +259,13 @@ describe('the field tools in a real browser, at phone size', () => {
     // A camera that offers that rate freezes the fan.
     await typeInto(page, 'Other frame rates', numberForField(top));
     const typed = Number(numberForField(top));
-    const reached = cameraPlan({ ...camera, frameRatesHz: [...camera.frameRatesHz, typed] }, part, { kind: 'freeze' });
+    const reached = cameraPlan({ ...camera, frameRatesHz: [...camera.frameRatesHz, typed] }, part, {
+      kind: 'freeze',
+    });
     expect(reached.settings.length).toBeGreaterThan(0);
-    await expect.poll(() => page.getByTestId('plan-headline').innerText()).toMatch(/reach(es)? the goal$/);
+    await expect
+      .poll(() => page.getByTestId('plan-headline').innerText())
+      .toMatch(/reach(es)? the goal$/);
     expect(await rows.count()).toBe(reached.settings.length);
     const best = await rows.first().innerText();
     expect(best).toContain(`${formatPrecise(reached.settings[0].frameRate)} fps`);
@@ -211,23 +274,40 @@ describe('the field tools in a real browser, at phone size', () => {
     await phoneShot(page, 'field-tools-b-camera-phone.png');
     await phoneShot(page, 'field-tools-b-camera-table-phone.png', 'plan-table');
 
-    await refuseGarbage(page, ['Other frame rates', 'Shutter angles', 'Shutter speeds', 'Rolling readout time'], 'plan-headline');
+    await refuseGarbage(
+      page,
+      ['Other frame rates', 'Shutter angles', 'Shutter speeds', 'Rolling readout time'],
+      'plan-headline',
+    );
     await page.screenshot({ path: `${shots}/field-tools-b-camera-phone-full.png`, fullPage: true });
-    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+    expect(
+      await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth),
+    ).toBeLessThanOrEqual(0);
 
     const csv = await saveCsv(page);
-    expect(csv.name).toMatch(/^camera-plan-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/);
+    expect(csv.name).toMatch(
+      /^camera-plan-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/,
+    );
     const lines = csv.text.split('\r\n');
     expect(lines).toHaveLength(reached.settings.length + 2);
-    expect(lines[1].startsWith(`1,${reached.settings[0].frameRate},${reached.settings[0].exposureS},`)).toBe(true);
+    expect(
+      lines[1].startsWith(`1,${reached.settings[0].frameRate},${reached.settings[0].exposureS},`),
+    ).toBe(true);
 
-    await checkPrint(page, 'Camera plan', safetyCautions({ apparentStillness: true }), 'field-tools-b-camera-print.png');
+    await checkPrint(
+      page,
+      'Camera plan',
+      safetyCautions({ apparentStillness: true }),
+      'field-tools-b-camera-print.png',
+    );
 
     // "Open in check" puts that setting on the check screen, where the camera view is.
     await rows.first().getByRole('button', { name: 'Open in check' }).click();
     await page.getByTestId('verdict').waitFor();
     expect(await page.getByRole('radio', { name: 'Camera' }).isChecked()).toBe(true);
-    expect(await page.getByLabel('Frame rate', { exact: true }).inputValue()).toBe(numberForField(reached.settings[0].frameRate));
+    expect(await page.getByLabel('Frame rate', { exact: true }).inputValue()).toBe(
+      numberForField(reached.settings[0].frameRate),
+    );
     await expect.poll(() => page.getByTestId('verdict').innerText()).toMatch(/^Looks still/);
   });
 
@@ -259,30 +339,67 @@ describe('the field tools in a real browser, at phone size', () => {
     await expect.poll(() => bladeRow.innerText()).toContain(`${formatPrecise(pass.foldedHz)} Hz`);
     expect(await bladeRow.innerText()).toContain('Yes: a false tone');
     expect(await bladeRow.getByTestId('component-result').innerText()).toBe('Fail');
-    expect(await page.getByTestId('logger-headline').innerText()).toBe('False tones will reach the record');
+    expect(await page.getByTestId('logger-headline').innerText()).toBe(
+      'False tones will reach the record',
+    );
     await phoneShot(page, 'field-tools-b-logger-alias-phone.png');
     await phoneShot(page, 'field-tools-b-logger-table-phone.png', 'logger-table');
 
     // The proposal, taken with one tap, makes the record clean.
     expect(slow.proposal).toBeDefined();
     await page.getByRole('button', { name: 'Use this sample rate and filter' }).click();
-    await expect.poll(() => page.getByTestId('logger-headline').innerText()).toBe('The record is clean');
-    expect(await page.getByLabel('Sample rate', { exact: true }).inputValue()).toBe(numberForField(slow.proposal!.sampleHz));
-    expect(await page.getByLabel('Order', { exact: true }).inputValue()).toBe(String(slow.proposal!.order));
-    const clean = loggerPlan(tones(defaultLoggerEntries.harmonics), slow.proposal!.sampleHz, { kind: 'butterworth', order: slow.proposal!.order, cutoffHz: slow.proposal!.cutoffHz }, 16);
+    await expect
+      .poll(() => page.getByTestId('logger-headline').innerText())
+      .toBe('The record is clean');
+    expect(await page.getByLabel('Sample rate', { exact: true }).inputValue()).toBe(
+      numberForField(slow.proposal!.sampleHz),
+    );
+    expect(await page.getByLabel('Order', { exact: true }).inputValue()).toBe(
+      String(slow.proposal!.order),
+    );
+    const clean = loggerPlan(
+      tones(defaultLoggerEntries.harmonics),
+      slow.proposal!.sampleHz,
+      { kind: 'butterworth', order: slow.proposal!.order, cutoffHz: slow.proposal!.cutoffHz },
+      16,
+    );
     expect(clean.allPass).toBe(true);
     await phoneShot(page, 'field-tools-b-logger-phone.png');
 
-    await refuseGarbage(page, ['Sample rate', 'Converter bits', 'Shaft harmonics', 'Blade counts', 'Gear teeth', 'Other tones', 'Order', 'Cutoff'], 'logger-table');
+    await refuseGarbage(
+      page,
+      [
+        'Sample rate',
+        'Converter bits',
+        'Shaft harmonics',
+        'Blade counts',
+        'Gear teeth',
+        'Other tones',
+        'Order',
+        'Cutoff',
+      ],
+      'logger-table',
+    );
     await page.screenshot({ path: `${shots}/field-tools-b-logger-phone-full.png`, fullPage: true });
-    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+    expect(
+      await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth),
+    ).toBeLessThanOrEqual(0);
 
     const csv = await saveCsv(page);
-    expect(csv.name).toMatch(/^data-logger-plan-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/);
+    expect(csv.name).toMatch(
+      /^data-logger-plan-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/,
+    );
     const lines = csv.text.split('\r\n');
     expect(lines).toHaveLength(clean.components.length + 2);
-    expect(lines[1].startsWith(`1× shaft,${clean.components[0].hz},${slow.proposal!.sampleHz},`)).toBe(true);
+    expect(
+      lines[1].startsWith(`1× shaft,${clean.components[0].hz},${slow.proposal!.sampleHz},`),
+    ).toBe(true);
 
-    await checkPrint(page, 'Data logger plan', safetyCautions({}), 'field-tools-b-logger-print.png');
+    await checkPrint(
+      page,
+      'Data logger plan',
+      safetyCautions({}),
+      'field-tools-b-logger-print.png',
+    );
   });
 });

@@ -48,7 +48,11 @@ function rows(): HTMLElement[] {
 
 /** Wikipedia, "Stroboscopic effect": a 12-spoke wheel at 2 rev/s filmed at 24 frames/s seems still. */
 function wheel(): Setup {
-  return { ...structuredClone(defaultSetup), parts: [{ name: 'Wheel', speedRpm: 120, features: 12, tolerancePercent: 0 }], activePart: 0 };
+  return {
+    ...structuredClone(defaultSetup),
+    parts: [{ name: 'Wheel', speedRpm: 120, features: 12, tolerancePercent: 0 }],
+    activePart: 0,
+  };
 }
 
 describe('the camera plan screen', () => {
@@ -57,7 +61,9 @@ describe('the camera plan screen', () => {
     const plan = cameraPlan(abilities.value, corePart(setup.value), { kind: 'freeze' });
     expect(plan.settings.length).toBeGreaterThan(0);
     expect(plan.settings.every((s) => s.frameRate === 24)).toBe(true);
-    expect(screen.getByTestId('plan-headline').textContent).toBe(`${plan.settings.length} settings reach the goal`);
+    expect(screen.getByTestId('plan-headline').textContent).toBe(
+      `${plan.settings.length} settings reach the goal`,
+    );
     const first = rows()[0];
     expect(first.textContent).toContain('24 fps');
     expect(first.textContent).toContain('Looks still');
@@ -91,10 +97,14 @@ describe('the camera plan screen', () => {
 
   test('when nothing freezes the default fan, the screen says which rates would and lists the near misses', () => {
     // 6 blades at 1770 rpm pass 177 times a second; 177/k fps would freeze it (physics.md §3), none is a camera rate.
-    expect(screen.getByTestId('plan-headline').textContent).toBe('No setting of this camera reaches the goal');
+    expect(screen.getByTestId('plan-headline').textContent).toBe(
+      'No setting of this camera reaches the goal',
+    );
     const why = screen.getByTestId('plan-none').textContent!;
     expect(why).toContain('177 passes a second');
-    expect(why).toContain(`${formatPrecise(177)} fps, ${formatPrecise(88.5)} fps, ${formatPrecise(59)} fps`);
+    expect(why).toContain(
+      `${formatPrecise(177)} fps, ${formatPrecise(88.5)} fps, ${formatPrecise(59)} fps`,
+    );
     const plan = cameraPlanning.result.value!;
     expect(plan.settings).toHaveLength(0);
     expect(rows()).toHaveLength(plan.nearMisses.length);
@@ -125,7 +135,9 @@ describe('the camera plan screen', () => {
     fireEvent.click(screen.getByLabelText('Slow forward turn'));
     type('Slow turn wanted', '2');
     expect(setup.value.creepRpm).toBe(2);
-    expect(screen.getByTestId('plan-headline').textContent).toBe('No setting of this camera reaches the goal');
+    expect(screen.getByTestId('plan-headline').textContent).toBe(
+      'No setting of this camera reaches the goal',
+    );
     // physics.md §4: s = n·|f − a|/k = 12 · (2 − 1/30) / 1 = 23.6 frames/s shows a 2 rpm forward turn.
     expect(screen.getByTestId('plan-none').textContent).toContain('23.6 fps');
     type('Other frame rates', '23.6');
@@ -142,7 +154,8 @@ describe('the camera plan screen', () => {
   });
 
   test('with no frame rate at all the core says so and the last table stays', () => {
-    for (const label of ['24', '25', '30', '60', '120']) fireEvent.click(screen.getByLabelText(label));
+    for (const label of ['24', '25', '30', '60', '120'])
+      fireEvent.click(screen.getByLabelText(label));
     const before = cameraPlanning.result.value;
     expect(before?.nearMisses.every((s) => s.frameRate === 240)).toBe(true);
     fireEvent.click(screen.getByLabelText('240'));
@@ -154,7 +167,9 @@ describe('the camera plan screen', () => {
   test('garbage in a list field gets a message naming the item, and the list stays', () => {
     type('Shutter angles', '180 400');
     expect(field('Shutter angles').getAttribute('aria-invalid')).toBe('true');
-    expect(screen.getAllByRole('alert').some((a) => /Item 2 \("400"\)/.test(a.textContent ?? ''))).toBe(true);
+    expect(
+      screen.getAllByRole('alert').some((a) => /Item 2 \("400"\)/.test(a.textContent ?? '')),
+    ).toBe(true);
     expect(shutterAnglesDeg.value).toEqual([180]);
     expect(field('Shutter angles').value).toBe('180 400');
     type('Shutter speeds', '500 fast');
@@ -164,8 +179,25 @@ describe('the camera plan screen', () => {
   });
 
   test('nothing on screen says NaN or Infinity, whatever is typed', () => {
-    for (const text of ['', 'abc', 'NaN', '1e999', '-', '0', '-0', '1e-320', '99999999999', '1/0']) {
-      for (const label of ['Other frame rates', 'Shutter angles', 'Shutter speeds', 'Rolling readout time']) type(label, text);
+    for (const text of [
+      '',
+      'abc',
+      'NaN',
+      '1e999',
+      '-',
+      '0',
+      '-0',
+      '1e-320',
+      '99999999999',
+      '1/0',
+    ]) {
+      for (const label of [
+        'Other frame rates',
+        'Shutter angles',
+        'Shutter speeds',
+        'Rolling readout time',
+      ])
+        type(label, text);
       const shown = document.body.textContent!.replace(/"[^"]*"/g, '');
       expect(shown, text).not.toMatch(/NaN|Infinity/);
     }

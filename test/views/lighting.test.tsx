@@ -35,7 +35,11 @@ function rows(): HTMLElement[] {
 
 /** A set-up with one part and the default lamps (50 Hz mains, flicker at 100 Hz, 30 %). */
 function onePart(name: string, speedRpm: number, features: number, tolerancePercent = 0): Setup {
-  return { ...structuredClone(defaultSetup), parts: [{ name, speedRpm, features, tolerancePercent }], activePart: 0 };
+  return {
+    ...structuredClone(defaultSetup),
+    parts: [{ name, speedRpm, features, tolerancePercent }],
+    activePart: 0,
+  };
 }
 
 describe('the lighting check screen', () => {
@@ -44,7 +48,9 @@ describe('the lighting check screen', () => {
     const expected = lightingCheck(lampOf(setup.value), litPartsOf(setup.value));
     expect(expected.parts[0].look).toBe('backward');
     expect(expected.parts[0].apparentRpm).toBeCloseTo(-230, 9);
-    expect(screen.getByTestId('lighting-headline').textContent).toBe('Hazard: a part can look still or backward');
+    expect(screen.getByTestId('lighting-headline').textContent).toBe(
+      'Hazard: a part can look still or backward',
+    );
     expect(screen.getByTestId('lighting-summary').textContent).toBe(expected.summary);
     const shout = screen.getByTestId('lighting-hazard');
     expect(shout.getAttribute('role')).toBe('alert');
@@ -86,10 +92,14 @@ describe('the lighting check screen', () => {
   test('a steady light (0 % modulation) is fine: no hazard, no remedies, and the deferral to local rules still shows', () => {
     type('Modulation (percent flicker)', '0');
     expect(setup.value.lighting.modulationPercent).toBe(0);
-    expect(screen.getByTestId('lighting-headline').textContent).toBe('No part looks still or backward');
+    expect(screen.getByTestId('lighting-headline').textContent).toBe(
+      'No part looks still or backward',
+    );
     expect(screen.queryByTestId('lighting-hazard')).toBeNull();
     expect(screen.queryByTestId('lighting-remedies')).toBeNull();
-    expect(screen.getByTestId('local-rules').textContent).toMatch(/lighting rules and machinery-safety rules come first/);
+    expect(screen.getByTestId('local-rules').textContent).toMatch(
+      /lighting rules and machinery-safety rules come first/,
+    );
     expect(screen.queryByTestId('safety-notice')).toBeNull();
   });
 
@@ -113,7 +123,9 @@ describe('the lighting check screen', () => {
     fireEvent.click(screen.getByLabelText('Other'));
     type('Flicker frequency', '1000');
     // IEEE Std 1789-2015 at 1000 Hz: no observable effect up to 0.0333·1000 = 33.3 %, so 30 % lies below that line.
-    expect(screen.getByTestId('flicker-risk').textContent).toBe('Below the no-observable-effect line');
+    expect(screen.getByTestId('flicker-risk').textContent).toBe(
+      'Below the no-observable-effect line',
+    );
   });
 
   test('parts are added, renamed, edited and removed here, in the shared set-up', () => {
@@ -123,14 +135,21 @@ describe('the lighting check screen', () => {
     type('Name of the chosen part', 'Drive pulley');
     type('Speed', '3000');
     type('Blades or marks', '2');
-    expect(setup.value.parts[1]).toMatchObject({ name: 'Drive pulley', speedRpm: 3000, features: 2 });
+    expect(setup.value.parts[1]).toMatchObject({
+      name: 'Drive pulley',
+      speedRpm: 3000,
+      features: 2,
+    });
     expect(rows()).toHaveLength(2);
     expect(rows()[1].textContent).toContain('Drive pulley');
     expect(rows()[1].textContent).toContain('Looks still');
     fireEvent.click(screen.getByRole('button', { name: 'Remove the chosen part' }));
     expect(setup.value.parts.map((p) => p.name)).toEqual(['Fan']);
     expect(rows()).toHaveLength(1);
-    expect((screen.getByRole('button', { name: 'Remove the chosen part' }) as HTMLButtonElement).disabled).toBe(true);
+    expect(
+      (screen.getByRole('button', { name: 'Remove the chosen part' }) as HTMLButtonElement)
+        .disabled,
+    ).toBe(true);
   });
 
   test('choosing a part in the list makes the part form edit it', () => {
@@ -146,7 +165,9 @@ describe('the lighting check screen', () => {
     const before = lighting.result.value;
     type('Modulation (percent flicker)', '140');
     expect(field('Modulation (percent flicker)').getAttribute('aria-invalid')).toBe('true');
-    expect(screen.getAllByRole('alert').some((a) => /from 0 % to 100 %/.test(a.textContent ?? ''))).toBe(true);
+    expect(
+      screen.getAllByRole('alert').some((a) => /from 0 % to 100 %/.test(a.textContent ?? '')),
+    ).toBe(true);
     expect(setup.value.lighting.modulationPercent).toBe(30);
     expect(lighting.result.value).toBe(before);
     expect(field('Modulation (percent flicker)').value).toBe('140');
@@ -156,14 +177,17 @@ describe('the lighting check screen', () => {
     // U+202E turns the following text right to left: a known way to disguise text.
     type('Name of the chosen part', 'Fan\u202eblade');
     expect(field('Name of the chosen part').getAttribute('aria-invalid')).toBe('true');
-    expect(screen.getAllByRole('alert').some((a) => /plain text on one line/.test(a.textContent ?? ''))).toBe(true);
+    expect(
+      screen.getAllByRole('alert').some((a) => /plain text on one line/.test(a.textContent ?? '')),
+    ).toBe(true);
     expect(setup.value.parts[0].name).toBe('Fan');
     expect(field('Name of the chosen part').value).toBe('Fan\u202eblade');
   });
 
   test('nothing on screen says NaN or Infinity, whatever is typed', () => {
     for (const text of ['', 'abc', 'NaN', '1e999', '-', '0', '-0', '1e-320', '99999999999']) {
-      for (const label of ['Speed', 'Blades or marks', 'Tolerance', 'Modulation (percent flicker)']) type(label, text);
+      for (const label of ['Speed', 'Blades or marks', 'Tolerance', 'Modulation (percent flicker)'])
+        type(label, text);
       const shown = document.body.textContent!.replace(/"[^"]*"/g, '');
       expect(shown, text).not.toMatch(/NaN|Infinity/);
     }
@@ -175,7 +199,12 @@ describe('the lighting check screen', () => {
     const result = lighting.result.value!;
     const text = lightingCsv(
       result,
-      result.parts.map((part, i) => ({ part, speedRpm: setup.value.parts[i].speedRpm, features: setup.value.parts[i].features, tolerancePercent: setup.value.parts[i].tolerancePercent })),
+      result.parts.map((part, i) => ({
+        part,
+        speedRpm: setup.value.parts[i].speedRpm,
+        features: setup.value.parts[i].features,
+        tolerancePercent: setup.value.parts[i].tolerancePercent,
+      })),
       30,
     );
     const lines = text.split('\r\n');

@@ -49,7 +49,11 @@ function rowOf(label: string): HTMLElement {
 
 /** A shaft with a single mark (no blade pass) at `rpm`. */
 function shaft(rpm: number): Setup {
-  return { ...structuredClone(defaultSetup), parts: [{ name: 'Shaft', speedRpm: rpm, features: 1, tolerancePercent: 0 }], activePart: 0 };
+  return {
+    ...structuredClone(defaultSetup),
+    parts: [{ name: 'Shaft', speedRpm: rpm, features: 1, tolerancePercent: 0 }],
+    activePart: 0,
+  };
 }
 
 describe('the data logger screen', () => {
@@ -64,12 +68,16 @@ describe('the data logger screen', () => {
     expect(row.textContent).toContain('Yes: a false tone');
     expect(row.getAttribute('data-state')).toBe('fail');
     expect(within(row).getByTestId('component-result').textContent).toBe('Fail');
-    expect(screen.getByTestId('logger-headline').textContent).toBe('False tones will reach the record');
+    expect(screen.getByTestId('logger-headline').textContent).toBe(
+      'False tones will reach the record',
+    );
   });
 
   test('says plainly that filtering after the converter cannot remove an alias', () => {
     expect(screen.getByTestId('alias-note').textContent).toBe(ALIAS_AFTER_CONVERTER_NOTE);
-    expect(ALIAS_AFTER_CONVERTER_NOTE).toMatch(/^Filtering after the converter cannot remove an alias/);
+    expect(ALIAS_AFTER_CONVERTER_NOTE).toMatch(
+      /^Filtering after the converter cannot remove an alias/,
+    );
   });
 
   test('16 bits resolve 98.08 dB, the attenuation an alias needs', () => {
@@ -114,10 +122,14 @@ describe('the data logger screen', () => {
     type('Capacitance', '1 µF');
     // fc = 1/(2π · 1000 Ω · 1 µF) = 159.15 Hz (first-order RC).
     expect(rcCutoffHz(1000, 1e-6)).toBeCloseTo(159.15494309189535, 12);
-    expect(screen.getByTestId('logger-rc-result').textContent).toContain(`${formatNumber(159.15494309189535)} Hz`);
+    expect(screen.getByTestId('logger-rc-result').textContent).toContain(
+      `${formatNumber(159.15494309189535)} Hz`,
+    );
     type('Shaft harmonics', '4');
     const row = rowOf('4× shaft');
-    expect(row.textContent).toContain(`${formatNumber(-lowPassGainDb(100, 159.15494309189535, 1))} dB`);
+    expect(row.textContent).toContain(
+      `${formatNumber(-lowPassGainDb(100, 159.15494309189535, 1))} dB`,
+    );
   });
 
   test('a Butterworth filter is given by order and cutoff; 40 dB a decade for order 2', () => {
@@ -161,7 +173,10 @@ describe('the data logger screen', () => {
     ] as const) {
       type(label, text);
       expect(field(label).getAttribute('aria-invalid'), label).toBe('true');
-      expect(screen.getAllByRole('alert').some((a) => message.test(a.textContent ?? '')), label).toBe(true);
+      expect(
+        screen.getAllByRole('alert').some((a) => message.test(a.textContent ?? '')),
+        label,
+      ).toBe(true);
       expect(field(label).value).toBe(text);
     }
     expect(loggerPlanning.result.value).toBe(before);
@@ -178,7 +193,17 @@ describe('the data logger screen', () => {
   test('nothing on screen says NaN or Infinity, whatever is typed', () => {
     fireEvent.click(screen.getByLabelText('Butterworth'));
     for (const text of ['', 'abc', 'NaN', '1e999', '-', '0', '-0', '1e-320', '99999999999']) {
-      for (const label of ['Shaft speed', 'Shaft harmonics', 'Blade counts', 'Gear teeth', 'Other tones', 'Sample rate', 'Converter bits', 'Order', 'Cutoff']) {
+      for (const label of [
+        'Shaft speed',
+        'Shaft harmonics',
+        'Blade counts',
+        'Gear teeth',
+        'Other tones',
+        'Sample rate',
+        'Converter bits',
+        'Order',
+        'Cutoff',
+      ]) {
         type(label, text);
       }
       const shown = document.body.textContent!.replace(/"[^"]*"/g, '');

@@ -1,6 +1,18 @@
-import { csvTable, standardFrameRates, type CameraPlan, type CameraSetting, type CsvColumn } from '../../core';
+import {
+  csvTable,
+  standardFrameRates,
+  type CameraPlan,
+  type CameraSetting,
+  type CsvColumn,
+} from '../../core';
 import { cautionFlags } from '../../lib/cautionFlags';
-import { readCreepRpm, readExposureSeconds, readFrameRate, readReadoutMs, readShutterAngle } from '../../lib/fields';
+import {
+  readCreepRpm,
+  readExposureSeconds,
+  readFrameRate,
+  readReadoutMs,
+  readShutterAngle,
+} from '../../lib/fields';
 import { formatExposure, formatNumber, formatPrecise, numberForField } from '../../lib/format';
 import { openScreen } from '../../lib/navigation';
 import { readList } from '../../lib/toolFields';
@@ -52,9 +64,12 @@ const GOAL_WORDS: Record<GoalKind, string> = {
 /** Most values in one list field: enough for any camera's menu. */
 const MAX_LIST = 12;
 
-const readOtherRates = (text: string) => readList(text, readFrameRate, 'other frame rates', 0, MAX_LIST);
-const readAngles = (text: string) => readList(text, readShutterAngle, 'shutter angles', 0, MAX_LIST);
-const readSpeeds = (text: string) => readList(text, readExposureSeconds, 'shutter speeds', 0, MAX_LIST);
+const readOtherRates = (text: string) =>
+  readList(text, readFrameRate, 'other frame rates', 0, MAX_LIST);
+const readAngles = (text: string) =>
+  readList(text, readShutterAngle, 'shutter angles', 0, MAX_LIST);
+const readSpeeds = (text: string) =>
+  readList(text, readExposureSeconds, 'shutter speeds', 0, MAX_LIST);
 /** A shutter speed as cameras show it: 500 for 1/500 s. */
 const speedText = (s: number) => (s < 1 ? numberForField(1 / s) : numberForField(s));
 
@@ -91,11 +106,14 @@ export function CameraPlanScreen() {
         <p>Goal: {GOAL_WORDS[kind]}.</p>
         {best && (
           <p data-testid="plan-best">
-            Best: {formatPrecise(best.frameRate)} fps at {formatExposure(best.exposureS)}. {best.why}
+            Best: {formatPrecise(best.frameRate)} fps at {formatExposure(best.exposureS)}.{' '}
+            {best.why}
           </p>
         )}
         {plan && reached.length === 0 && (
-          <p data-testid="plan-none">{noneReachText(corePart(s), goalOf(kind, s.creepRpm), abilities.value)}</p>
+          <p data-testid="plan-none">
+            {noneReachText(corePart(s), goalOf(kind, s.creepRpm), abilities.value)}
+          </p>
         )}
       </div>
     </Panel>
@@ -123,7 +141,9 @@ export function CameraPlanScreen() {
                 <input
                   type="checkbox"
                   checked={standardLabelsOn.value.includes(r.label)}
-                  onChange={(e) => toggleStandardRate(r.label, (e.currentTarget as HTMLInputElement).checked)}
+                  onChange={(e) =>
+                    toggleStandardRate(r.label, (e.currentTarget as HTMLInputElement).checked)
+                  }
                 />
                 <span>{r.label}</span>
               </label>
@@ -172,7 +192,13 @@ export function CameraPlanScreen() {
         />
       </Panel>
       <Panel title="The goal" id="plan-goal">
-        <ChoiceGroup legend="What the video should show" name="plan-goal" options={GOALS} value={kind} onChange={(g) => (goalKind.value = g)} />
+        <ChoiceGroup
+          legend="What the video should show"
+          name="plan-goal"
+          options={GOALS}
+          value={kind}
+          onChange={(g) => (goalKind.value = g)}
+        />
         {kind === 'creep' && (
           <NumberField
             id="plan-creep"
@@ -187,14 +213,21 @@ export function CameraPlanScreen() {
         )}
       </Panel>
       <Panel title="The part" id="plan-part">
-        <PartChoice id="plan-part-choice" label="Part to film" editHint="Change it on the Check or Lighting screen." />
+        <PartChoice
+          id="plan-part-choice"
+          label="Part to film"
+          editHint="Change it on the Check or Lighting screen."
+        />
       </Panel>
     </>
   );
 
   const results = (
     <>
-      <Panel title={reached.length > 0 ? 'Settings that reach the goal' : 'Closest settings'} id="plan-settings">
+      <Panel
+        title={reached.length > 0 ? 'Settings that reach the goal' : 'Closest settings'}
+        id="plan-settings"
+      >
         {shown.length > 0 ? (
           <ResultTable
             caption={
@@ -224,16 +257,33 @@ export function CameraPlanScreen() {
     />
   );
 
-  return <ToolLayout testId="camera-plan-screen" summary={summary} warnings={warnings} entries={entries} results={results} report={report} />;
+  return (
+    <ToolLayout
+      testId="camera-plan-screen"
+      summary={summary}
+      warnings={warnings}
+      entries={entries}
+      results={results}
+      report={report}
+    />
+  );
 }
 
 function columnsFor(open: (s: CameraSetting) => void): ReadonlyArray<ResultColumn<CameraSetting>> {
   return [
     { label: 'Rank', numeric: true, cell: (_, i) => String(i + 1) },
     { label: 'Frame rate', numeric: true, cell: (r) => `${formatPrecise(r.frameRate)} fps` },
-    { label: 'Exposure', numeric: true, cell: (r) => `${formatExposure(r.exposureS)} (${formatNumber(r.shutterAngle)}°)` },
+    {
+      label: 'Exposure',
+      numeric: true,
+      cell: (r) => `${formatExposure(r.exposureS)} (${formatNumber(r.shutterAngle)}°)`,
+    },
     { label: 'Looks', cell: (r) => lookWords(r.look, 1, r.apparentRpm) },
-    { label: 'Blur', numeric: true, cell: (r) => `${formatNumber(r.blurDegrees)}°, ${formatNumber(r.blurPitches)} pitch` },
+    {
+      label: 'Blur',
+      numeric: true,
+      cell: (r) => `${formatNumber(r.blurDegrees)}°, ${formatNumber(r.blurPitches)} pitch`,
+    },
     { label: 'Bend', numeric: true, cell: (r) => `${formatNumber(r.skewDegrees)}°` },
     { label: 'Score', numeric: true, cell: (r) => formatNumber(r.score, r.score < 10 ? 1 : 0) },
     { label: 'What it looks like', cell: (r) => r.why },

@@ -13,7 +13,11 @@ function rateList(ratesHz: number[]): string {
  * @example noneReachText({ speedHz: 29.5, symmetry: 6, tolerance: 0.01 }, { kind: 'freeze' }, camera)
  * // "To freeze it, a frame rate must go into the pattern's 177 passes a second a whole number of times: 177 fps, 88.5 fps, 59 fps, 44.25 fps. None of the camera's rates is one of them."
  */
-export function noneReachText(part: Required<Part>, goal: CameraGoal, camera: CameraAbilities): string {
+export function noneReachText(
+  part: Required<Part>,
+  goal: CameraGoal,
+  camera: CameraAbilities,
+): string {
   const found = attempt(() => whyNoneReach(part, goal));
   if (!found.ok) return found.message;
   const w = found.result;

@@ -22,7 +22,11 @@ const HEADLINES: Record<LightingCheck['verdict'], string> = {
   fine: 'No part looks still or backward',
 };
 
-const VERDICT_WORDS: Record<PartUnderLight['verdict'], string> = { hazard: 'HAZARD', caution: 'Caution', fine: 'Fine' };
+const VERDICT_WORDS: Record<PartUnderLight['verdict'], string> = {
+  hazard: 'HAZARD',
+  caution: 'Caution',
+  fine: 'Fine',
+};
 
 /** The deferral the issue asks for, shown whatever the verdict. */
 export const LOCAL_RULES_NOTE =
@@ -75,8 +79,9 @@ export function LightingScreen() {
         <div class={style.hazard} role="alert" data-testid="lighting-hazard">
           <p class={style.shout}>HAZARD: DO NOT TRUST WHAT YOU SEE</p>
           <p>
-            {hazards.map((p) => p.name).join(', ')} can look still or turn backward under this light while{' '}
-            {hazards.length === 1 ? 'it turns' : 'they turn'} at full speed, and people will see it.
+            {hazards.map((p) => p.name).join(', ')} can look still or turn backward under this light
+            while {hazards.length === 1 ? 'it turns' : 'they turn'} at full speed, and people will
+            see it.
           </p>
         </div>
       )}
@@ -160,7 +165,16 @@ export function LightingScreen() {
     />
   );
 
-  return <ToolLayout testId="lighting-screen" summary={summary} warnings={warnings} entries={entries} results={results} report={report} />;
+  return (
+    <ToolLayout
+      testId="lighting-screen"
+      summary={summary}
+      warnings={warnings}
+      entries={entries}
+      results={results}
+      report={report}
+    />
+  );
 }
 
 const COLUMNS: ReadonlyArray<ResultColumn<PartRow>> = [
@@ -168,7 +182,8 @@ const COLUMNS: ReadonlyArray<ResultColumn<PartRow>> = [
   { label: 'True speed', numeric: true, cell: (r) => `${formatNumber(r.speedRpm)} rpm` },
   {
     label: 'At its nominal speed',
-    cell: (r) => lookWords(r.part.look, r.part.look === 'still' ? r.part.images : 1, r.part.apparentRpm),
+    cell: (r) =>
+      lookWords(r.part.look, r.part.look === 'still' ? r.part.images : 1, r.part.apparentRpm),
   },
   { label: `Worst within ± tolerance`, cell: (r) => lookWords(r.part.worstLook, r.part.images) },
   {
@@ -186,7 +201,11 @@ const COLUMNS: ReadonlyArray<ResultColumn<PartRow>> = [
 ];
 
 /** The table as CSV: one row per part, with the light's figures on every row so each row stands alone. */
-export function lightingCsv(result: LightingCheck, rows: readonly PartRow[], modulationPercent: number): string {
+export function lightingCsv(
+  result: LightingCheck,
+  rows: readonly PartRow[],
+  modulationPercent: number,
+): string {
   const columns: CsvColumn<PartRow>[] = [
     { label: 'part', value: (r) => r.part.name },
     { label: 'speed (rpm)', value: (r) => r.speedRpm },

@@ -84,7 +84,9 @@ export function LoggerScreen() {
   const part = activePart.value;
   const kind = filterKind.value;
   // The alias statement has a box of its own and the guard a line of its own (see below).
-  const otherNotes = plan ? plan.notes.filter((n) => n !== ALIAS_AFTER_CONVERTER_NOTE && !isGuardNote(n, plan)) : [];
+  const otherNotes = plan
+    ? plan.notes.filter((n) => n !== ALIAS_AFTER_CONVERTER_NOTE && !isGuardNote(n, plan))
+    : [];
   const failing = plan ? plan.components.filter((c) => !c.pass) : [];
 
   const summary = (
@@ -92,11 +94,17 @@ export function LoggerScreen() {
       {plan ? (
         <div class={style.answer} data-pass={plan.allPass ? 'yes' : 'no'}>
           <p class={style.headline} data-testid="logger-headline">
-            {plan.allPass ? 'The record is clean' : failing.length > 0 ? 'False tones will reach the record' : 'Aliases can reach the record'}
+            {plan.allPass
+              ? 'The record is clean'
+              : failing.length > 0
+                ? 'False tones will reach the record'
+                : 'Aliases can reach the record'}
           </p>
           <p data-testid="logger-facts">
-            Sampling at {formatPrecise(sampleHzOf(plan))} Hz records up to {formatPrecise(plan.nyquistHz)} Hz (half the sample rate). The
-            converter resolves {formatNumber(plan.rangeDb)} dB (6.02 × bits + 1.76): an alias must be cut at least that much.
+            Sampling at {formatPrecise(sampleHzOf(plan))} Hz records up to{' '}
+            {formatPrecise(plan.nyquistHz)} Hz (half the sample rate). The converter resolves{' '}
+            {formatNumber(plan.rangeDb)} dB (6.02 × bits + 1.76): an alias must be cut at least that
+            much.
           </p>
         </div>
       ) : (
@@ -195,7 +203,14 @@ export function LoggerScreen() {
       </Panel>
       <Panel title="Anti-alias filter" id="logger-filter">
         <p class={style.note}>The analog low-pass between the sensor and the converter.</p>
-        <ChoiceGroup legend="Filter" quietLegend name="logger-filter-kind" options={FILTERS} value={kind} onChange={(k) => (filterKind.value = k)} />
+        <ChoiceGroup
+          legend="Filter"
+          quietLegend
+          name="logger-filter-kind"
+          options={FILTERS}
+          value={kind}
+          onChange={(k) => (filterKind.value = k)}
+        />
         {kind === 'rc' && <RcFields />}
         {kind === 'butterworth' && (
           <div class={style.pair}>
@@ -237,10 +252,15 @@ export function LoggerScreen() {
               rowState={(c) => (c.pass ? undefined : 'fail')}
               testId="logger-table"
             />
-            <p class={style.guard} data-pass={plan.guard.enough ? 'yes' : 'no'} data-testid="logger-guard">
-              Anything in the signal at {formatPrecise(plan.guard.hz)} Hz or above folds onto the band of these components; the filter
-              takes off {formatNumber(plan.guard.attenuationDb)} dB there of the {formatNumber(plan.rangeDb)} dB needed:{' '}
-              <strong>{plan.guard.enough ? 'enough' : 'not enough'}</strong>.
+            <p
+              class={style.guard}
+              data-pass={plan.guard.enough ? 'yes' : 'no'}
+              data-testid="logger-guard"
+            >
+              Anything in the signal at {formatPrecise(plan.guard.hz)} Hz or above folds onto the
+              band of these components; the filter takes off{' '}
+              {formatNumber(plan.guard.attenuationDb)} dB there of the {formatNumber(plan.rangeDb)}{' '}
+              dB needed: <strong>{plan.guard.enough ? 'enough' : 'not enough'}</strong>.
             </p>
             {otherNotes.length > 0 && (
               <ul class={style.notes} data-testid="logger-notes">
@@ -259,13 +279,21 @@ export function LoggerScreen() {
               {plan.proposal.why}
             </p>
             <div>
-              <button type="button" class={style.apply} onClick={() => plan.proposal && applyProposal(plan.proposal)}>
+              <button
+                type="button"
+                class={style.apply}
+                onClick={() => plan.proposal && applyProposal(plan.proposal)}
+              >
                 Use this sample rate and filter
               </button>
             </div>
           </>
         ) : (
-          <p class={style.plain}>{plan ? 'No proposal within the limits: see the notes above.' : 'Nothing to propose yet.'}</p>
+          <p class={style.plain}>
+            {plan
+              ? 'No proposal within the limits: see the notes above.'
+              : 'Nothing to propose yet.'}
+          </p>
         )}
       </Panel>
       <p class={style.note}>{safetyCautions()[0]}</p>
@@ -273,10 +301,24 @@ export function LoggerScreen() {
   );
 
   const report = (
-    <ReportBar title="Data logger plan" machineName={openMachineName.value} cautions={{}} csv={plan ? () => loggerCsv(plan, sampleHzOf(plan)) : undefined} />
+    <ReportBar
+      title="Data logger plan"
+      machineName={openMachineName.value}
+      cautions={{}}
+      csv={plan ? () => loggerCsv(plan, sampleHzOf(plan)) : undefined}
+    />
   );
 
-  return <ToolLayout testId="logger-screen" summary={summary} warnings={warnings} entries={entries} results={results} report={report} />;
+  return (
+    <ToolLayout
+      testId="logger-screen"
+      summary={summary}
+      warnings={warnings}
+      entries={entries}
+      results={results}
+      report={report}
+    />
+  );
 }
 
 /** The core's note about content folding onto the band, which the guard line already says. */
@@ -352,7 +394,11 @@ const COLUMNS: ReadonlyArray<ResultColumn<LoggerComponent>> = [
   { label: 'Lands at', numeric: true, cell: (c) => `${formatPrecise(c.foldedHz)} Hz` },
   { label: 'Aliased', cell: (c) => (c.aliases ? 'Yes: a false tone' : 'No') },
   { label: 'Filter takes off', numeric: true, cell: (c) => `${formatNumber(-c.gainDb)} dB` },
-  { label: 'Needed', numeric: true, cell: (c) => (c.aliases ? `${formatNumber(c.neededDb)} dB` : 'at most 3 dB loss') },
+  {
+    label: 'Needed',
+    numeric: true,
+    cell: (c) => (c.aliases ? `${formatNumber(c.neededDb)} dB` : 'at most 3 dB loss'),
+  },
   {
     label: 'Result',
     cell: (c) => (

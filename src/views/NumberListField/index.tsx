@@ -21,7 +21,12 @@ interface Props {
 }
 
 function sameList(a: readonly number[], b: readonly number[]): boolean {
-  return a.length === b.length && a.every((x, i) => x === b[i] || Math.abs(x - b[i]) <= 1e-9 * Math.max(Math.abs(x), Math.abs(b[i])));
+  return (
+    a.length === b.length &&
+    a.every(
+      (x, i) => x === b[i] || Math.abs(x - b[i]) <= 1e-9 * Math.max(Math.abs(x), Math.abs(b[i])),
+    )
+  );
 }
 
 type Reading = { ok: true; values: number[] } | { ok: false; message: string };
@@ -29,10 +34,12 @@ type Reading = { ok: true; values: number[] } | { ok: false; message: string };
 function readText(text: string, read: (text: string) => number[]): Reading {
   try {
     const values = read(text);
-    if (!values.every(Number.isFinite)) return { ok: false, message: 'This gives no usable number.' };
+    if (!values.every(Number.isFinite))
+      return { ok: false, message: 'This gives no usable number.' };
     return { ok: true, values };
   } catch (error) {
-    if (error instanceof InputError) return { ok: false, message: error.message.charAt(0).toUpperCase() + error.message.slice(1) };
+    if (error instanceof InputError)
+      return { ok: false, message: error.message.charAt(0).toUpperCase() + error.message.slice(1) };
     throw error;
   }
 }
@@ -71,7 +78,8 @@ export function NumberListField({ id, label, values, toText, read, onValues, uni
 
   const messageId = `${id}-message`;
   const hintId = `${id}-hint`;
-  const describedBy = [message ? messageId : '', hint ? hintId : ''].filter(Boolean).join(' ') || undefined;
+  const describedBy =
+    [message ? messageId : '', hint ? hintId : ''].filter(Boolean).join(' ') || undefined;
   return (
     <div class={style.field}>
       <label class={style.label} for={id}>

@@ -33,8 +33,9 @@ export function PartChoice({ id, label, editHint }: Props) {
         ))}
       </select>
       <p class={style.note} data-testid={`${id}-facts`}>
-        {formatNumber(part.speedRpm)} rpm, {part.features} {part.features === 1 ? 'mark' : 'blades or marks'}, ±
-        {formatNumber(part.tolerancePercent)} %.{editHint ? ` ${editHint}` : ''}
+        {formatNumber(part.speedRpm)} rpm, {part.features}{' '}
+        {part.features === 1 ? 'mark' : 'blades or marks'}, ±{formatNumber(part.tolerancePercent)}{' '}
+        %.{editHint ? ` ${editHint}` : ''}
       </p>
     </div>
   );

@@ -67,7 +67,8 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
             >
               <span class={style.name}>{p.name.trim() || `Part ${i + 1}`}</span>
               <span class={style.facts}>
-                {formatNumber(p.speedRpm)} rpm · {p.features} {p.features === 1 ? 'mark' : 'blades or marks'} · ±
+                {formatNumber(p.speedRpm)} rpm · {p.features}{' '}
+                {p.features === 1 ? 'mark' : 'blades or marks'} · ±
                 {formatNumber(p.tolerancePercent)} %
               </span>
             </button>
@@ -93,7 +94,12 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
         <button type="button" class={style.button} onClick={() => act(addPart)}>
           Add a part
         </button>
-        <button type="button" class={style.button} onClick={() => act(() => removePart(active))} disabled={s.parts.length <= 1}>
+        <button
+          type="button"
+          class={style.button}
+          onClick={() => act(() => removePart(active))}
+          disabled={s.parts.length <= 1}
+        >
           Remove the chosen part
         </button>
       </div>

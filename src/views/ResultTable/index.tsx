@@ -33,7 +33,12 @@ export function ResultTable<T>({ caption, columns, rows, rowKey, rowState, testI
       <thead>
         <tr>
           {columns.map((c) => (
-            <th key={c.label} scope="col" class={c.numeric ? style.numeric : undefined} data-print={c.action ? 'hide' : undefined}>
+            <th
+              key={c.label}
+              scope="col"
+              class={c.numeric ? style.numeric : undefined}
+              data-print={c.action ? 'hide' : undefined}
+            >
               {c.label}
             </th>
           ))}
