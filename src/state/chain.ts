@@ -60,7 +60,11 @@ export function chainRootOf(part: PartSpec): ChainRoot {
     // As on the check screen: the motor gives the speed at its slip, the part's tolerance the band.
     const { mainsHz, poles, slipPercent } = part.motor;
     const sign = part.speedRpm < 0 ? -1 : 1;
-    return { kind: 'fixed', speedHz: sign * motorSpeedHz(mainsHz, poles, slipPercent / 100), tolerance };
+    return {
+      kind: 'fixed',
+      speedHz: sign * motorSpeedHz(mainsHz, poles, slipPercent / 100),
+      tolerance,
+    };
   }
   return { kind: 'fixed', speedHz: part.speedRpm / 60, tolerance };
 }
@@ -75,7 +79,8 @@ export function chainLinkOf(drive: PartDrive): ChainLink {
       slipPercent: drive.slipPercent,
     };
   }
-  if (drive.kind === 'gear') return { kind: 'gear', driverTeeth: drive.driverTeeth, drivenTeeth: drive.drivenTeeth };
+  if (drive.kind === 'gear')
+    return { kind: 'gear', driverTeeth: drive.driverTeeth, drivenTeeth: drive.drivenTeeth };
   return { kind: 'shaft' };
 }
 
@@ -170,11 +175,13 @@ export function withSpeedSource(s: Setup, index: number, source: SpeedSource): S
     if (source === 'typed') return base;
     if (source === 'motor') {
       const sign = part.speedRpm < 0 ? -1 : 1;
-      const rpm = motorSpeedHz(defaultMotor.mainsHz, defaultMotor.poles, defaultMotor.slipPercent / 100) * 60;
+      const rpm =
+        motorSpeedHz(defaultMotor.mainsHz, defaultMotor.poles, defaultMotor.slipPercent / 100) * 60;
       return { ...base, motor: { ...defaultMotor }, speedRpm: sign * rpm };
     }
     if (source === 'wheel') return { ...base, wheel: { ...defaultWheel } };
-    if (index === 0) throw new DataError('drive', 'The first part cannot be driven by another part.');
+    if (index === 0)
+      throw new DataError('drive', 'The first part cannot be driven by another part.');
     return { ...base, drive: { from: index - 1, kind: 'shaft' } };
   });
 }
@@ -199,7 +206,11 @@ export function withWheel(s: Setup, index: number, wheel: WheelSpec): Setup {
 }
 
 /** Changes plain fields of part `index` (name, features, typed speed, tolerance). */
-export function withPartFields(s: Setup, index: number, fields: Partial<Pick<PartSpec, 'name' | 'features' | 'speedRpm' | 'tolerancePercent'>>): Setup {
+export function withPartFields(
+  s: Setup,
+  index: number,
+  fields: Partial<Pick<PartSpec, 'name' | 'features' | 'speedRpm' | 'tolerancePercent'>>,
+): Setup {
   return changePart(s, index, (part) => ({ ...part, ...fields }));
 }
 
@@ -216,7 +227,10 @@ function freeName(parts: readonly PartSpec[]): string {
  */
 export function withDrivenPart(s: Setup, from: number): Setup {
   if (s.parts.length >= MAX_PARTS) {
-    throw new DataError('parts', `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`);
+    throw new DataError(
+      'parts',
+      `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`,
+    );
   }
   const driver = s.parts[from];
   if (!driver) throw new DataError('parts', 'That part is no longer in the list.');
@@ -252,7 +266,8 @@ export function withoutPart(s: Setup, index: number): Setup {
     if (drive.from === index) return [bare(part)];
     return [{ ...part, drive: { ...drive, from: drive.from - 1 } }];
   });
-  const activePart = s.activePart > index ? s.activePart - 1 : Math.min(s.activePart, parts.length - 1);
+  const activePart =
+    s.activePart > index ? s.activePart - 1 : Math.min(s.activePart, parts.length - 1);
   return { ...s, parts, activePart };
 }
 
@@ -276,7 +291,12 @@ export function syncChainSpeeds(): void {
   const s = setup.peek();
   try {
     const next = withChainSpeeds(s);
-    if (next.parts.some((p, i) => p.speedRpm !== s.parts[i].speedRpm || p.tolerancePercent !== s.parts[i].tolerancePercent)) {
+    if (
+      next.parts.some(
+        (p, i) =>
+          p.speedRpm !== s.parts[i].speedRpm || p.tolerancePercent !== s.parts[i].tolerancePercent,
+      )
+    ) {
       setup.value = next;
     }
   } catch (error) {
@@ -322,7 +342,9 @@ export function listedRange(
   budget = MAX_LISTED_SPANS,
 ): Range | null {
   const q = sampler === 'flash' ? defaultLookOptions.maxImages : 1;
-  const perInverseHz = parts.reduce((sum, p) => sum + p.symmetry * Math.abs(p.speedHz) * (1 + (p.tolerance ?? 0)), 0) * ((q * (q + 1)) / 2);
+  const perInverseHz =
+    parts.reduce((sum, p) => sum + p.symmetry * Math.abs(p.speedHz) * (1 + (p.tolerance ?? 0)), 0) *
+    ((q * (q + 1)) / 2);
   if (perInverseHz === 0) return range;
   const lowest = 1 / (budget / perInverseHz + 1 / range.maxHz);
   const minHz = Math.max(range.minHz, lowest);
@@ -334,7 +356,12 @@ export function listedRange(
  * range that can be listed quickly (listedRange).
  * Throws the core's InputError for a target that is not a part, or bad parts or range.
  */
-export function machineRatesFor(parts: readonly DerivedPart[], target: number, range: Range, sampler: Sampler): MachineRates {
+export function machineRatesFor(
+  parts: readonly DerivedPart[],
+  target: number,
+  range: Range,
+  sampler: Sampler,
+): MachineRates {
   const list = [...parts];
   const listed = listedRange(list, range, sampler);
   return {
@@ -351,5 +378,10 @@ export function machineRatesFor(parts: readonly DerivedPart[], target: number, r
 export const machineRates = keepLastGood(() => {
   const s = setup.value;
   const r = check.value;
-  return machineRatesFor(deriveParts(s), s.parts[s.activePart] ? s.activePart : 0, r.range, r.sampler);
+  return machineRatesFor(
+    deriveParts(s),
+    s.parts[s.activePart] ? s.activePart : 0,
+    r.range,
+    r.sampler,
+  );
 });

@@ -2,9 +2,22 @@
 // step of the usual procedure from the core's speedFinderSteps (physics.md §7). The readings
 // live here, outside the screen, so changing tabs loses none of them.
 import { computed, signal } from '@preact/signals';
-import { InputError, motorExpectedRange, speedFinderSteps, type Range, type SpeedFinderStep } from '../core';
+import {
+  InputError,
+  motorExpectedRange,
+  speedFinderSteps,
+  type Range,
+  type SpeedFinderStep,
+} from '../core';
 import { formatNumber } from '../lib/format';
-import { deriveParts, partLabel, speedSourceOf, withChainSpeeds, withPartFields, withSpeedSource } from './chain';
+import {
+  deriveParts,
+  partLabel,
+  speedSourceOf,
+  withChainSpeeds,
+  withPartFields,
+  withSpeedSource,
+} from './chain';
 import { saveMachine, updateMachine } from './machines';
 import type { Machine, Setup } from './model';
 import { keepLastGood } from './outcome';
@@ -87,10 +100,16 @@ export const strobeRangeHz = computed<Range>(() => {
 export function expectedRange(e: Expectation): Range | undefined {
   if (e.mode === 'none') return undefined;
   if (e.mode === 'motor') {
-    return motorExpectedRange(e.mainsHz, e.poles, { min: e.minSlipPercent / 100, max: e.maxSlipPercent / 100 });
+    return motorExpectedRange(e.mainsHz, e.poles, {
+      min: e.minSlipPercent / 100,
+      max: e.maxSlipPercent / 100,
+    });
   }
   if (!(e.fromRpm < e.toRpm)) {
-    throw new InputError('expected speed', 'The expected speed range is empty: the lowest speed must be below the highest.');
+    throw new InputError(
+      'expected speed',
+      'The expected speed range is empty: the lowest speed must be below the highest.',
+    );
   }
   return { minHz: e.fromRpm / 60, maxHz: e.toRpm / 60 };
 }
@@ -120,7 +139,11 @@ const rpmText = (rpm: number) => `${formatNumber(rpm)} rpm`;
  * one, no longer taken from a motor, a drive or a wheel; parts it drives follow it.
  * @example withMeasuredSpeed(defaultSetup, 29.5, 6).changes // ['Fan: speed 1,770 rpm → 1,770 rpm.']
  */
-export function withMeasuredSpeed(s: Setup, speedHz: number, features: number): { setup: Setup; changes: string[] } {
+export function withMeasuredSpeed(
+  s: Setup,
+  speedHz: number,
+  features: number,
+): { setup: Setup; changes: string[] } {
   const index = s.parts[s.activePart] ? s.activePart : 0;
   const before = s.parts[index];
   const name = partLabel(s, index);
@@ -128,12 +151,17 @@ export function withMeasuredSpeed(s: Setup, speedHz: number, features: number): 
   const rpm = sign * speedHz * 60;
   const changes = [`${name}: speed ${rpmText(before.speedRpm)} → ${rpmText(rpm)}.`];
   const source = speedSourceOf(before);
-  if (source === 'motor') changes.push(`${name} no longer takes its speed from the motor nameplate.`);
-  if (source === 'wheel') changes.push(`${name} no longer takes its speed from the ground speed and tyre size.`);
+  if (source === 'motor')
+    changes.push(`${name} no longer takes its speed from the motor nameplate.`);
+  if (source === 'wheel')
+    changes.push(`${name} no longer takes its speed from the ground speed and tyre size.`);
   if (source === 'drive' && before.drive) {
-    changes.push(`${name} is no longer worked out from the drive from ${partLabel(s, before.drive.from)}.`);
+    changes.push(
+      `${name} is no longer worked out from the drive from ${partLabel(s, before.drive.from)}.`,
+    );
   }
-  if (features !== before.features) changes.push(`${name}: features ${before.features} → ${features}.`);
+  if (features !== before.features)
+    changes.push(`${name}: features ${before.features} → ${features}.`);
   let next = withPartFields(withSpeedSource(s, index, 'typed'), index, { speedRpm: rpm, features });
   try {
     next = withChainSpeeds(next);
@@ -141,7 +169,9 @@ export function withMeasuredSpeed(s: Setup, speedHz: number, features: number): 
     next.parts.forEach((p, i) => {
       const was = beforeParts[i].speedHz * 60;
       if (i !== index && p.drive && Math.abs(p.speedRpm - was) > 1e-9 * Math.abs(was)) {
-        changes.push(`${partLabel(next, i)}, driven from it: speed ${rpmText(was)} → ${rpmText(p.speedRpm)}.`);
+        changes.push(
+          `${partLabel(next, i)}, driven from it: speed ${rpmText(was)} → ${rpmText(p.speedRpm)}.`,
+        );
       }
     });
   } catch (error) {
@@ -159,18 +189,25 @@ export type SaveTarget = { kind: 'open' } | { kind: 'new'; name: string } | { ki
  * sentences to show. Throws DataError, changing nothing, for a machine name or set-up the
  * saved list refuses, or an open machine that was deleted meanwhile.
  */
-export async function saveFoundSpeed(speedHz: number, features: number, target: SaveTarget): Promise<string[]> {
+export async function saveFoundSpeed(
+  speedHz: number,
+  features: number,
+  target: SaveTarget,
+): Promise<string[]> {
   const { setup: next, changes } = withMeasuredSpeed(setup.peek(), speedHz, features);
   let machine: Machine | null = null;
   if (target.kind === 'open') {
     const id = openMachineId.peek();
-    if (id === null) throw new InputError('machine', 'No saved machine is open: give a name to save a new one.');
+    if (id === null)
+      throw new InputError('machine', 'No saved machine is open: give a name to save a new one.');
     machine = await updateMachine(id, next);
   } else if (target.kind === 'new') {
     machine = await saveMachine(target.name, next);
     openMachineId.value = machine.id;
   }
   setup.value = next;
-  const where = machine ? `Saved to "${machine.name}".` : 'Changed in the set-up on the Check screen only (no machine saved).';
+  const where = machine
+    ? `Saved to "${machine.name}".`
+    : 'Changed in the set-up on the Check screen only (no machine saved).';
   return [...changes, where];
 }

@@ -8,7 +8,16 @@
 // Results are always built from fresh object literals, never by spreading or assigning the
 // input, so nothing hidden in the input (prototype tricks, extra fields) survives the check.
 
-import type { CameraSpec, LightingSpec, Machine, PartDrive, PartSpec, Setup, StrobeSpec, WheelSpec } from './model';
+import type {
+  CameraSpec,
+  LightingSpec,
+  Machine,
+  PartDrive,
+  PartSpec,
+  Setup,
+  StrobeSpec,
+  WheelSpec,
+} from './model';
 
 /** Refused outside data. `path` says where ("machine 3 › parts › 1 › features"). */
 export class DataError extends Error {
@@ -205,7 +214,12 @@ export function validateIsoTime(x: unknown, path: string): string {
 const ID = /^[A-Za-z0-9_-]{1,100}$/;
 
 function partFrom(x: unknown, path: string, index: number): PartSpec {
-  const r = readRecord(x, path, ['name', 'speedRpm', 'features', 'tolerancePercent'], ['motor', 'drive', 'wheel']);
+  const r = readRecord(
+    x,
+    path,
+    ['name', 'speedRpm', 'features', 'tolerancePercent'],
+    ['motor', 'drive', 'wheel'],
+  );
   const part: PartSpec = {
     name: plainText(r.name, pathTo(path, 'name'), 0, MAX_NAME_CHARS),
     speedRpm: between(r.speedRpm, pathTo(path, 'speedRpm'), -1e7, 1e7),
@@ -232,14 +246,22 @@ function partFrom(x: unknown, path: string, index: number): PartSpec {
   if ('wheel' in r) part.wheel = wheelFrom(r.wheel, pathTo(path, 'wheel'));
   const sources = ['motor', 'drive', 'wheel'].filter((key) => key in r);
   if (sources.length > 1) {
-    throw new DataError(path, `${path} takes its speed from one source only, not from ${sources.join(' and ')}.`);
+    throw new DataError(
+      path,
+      `${path} takes its speed from one source only, not from ${sources.join(' and ')}.`,
+    );
   }
   return part;
 }
 
 /** A drive from an earlier part; `index` is the driven part's own place in the list, from 0. */
 function driveFrom(x: unknown, path: string, index: number): PartDrive {
-  const head = readRecord(x, path, ['from', 'kind'], ['driverMm', 'drivenMm', 'slipPercent', 'driverTeeth', 'drivenTeeth']);
+  const head = readRecord(
+    x,
+    path,
+    ['from', 'kind'],
+    ['driverMm', 'drivenMm', 'slipPercent', 'driverTeeth', 'drivenTeeth'],
+  );
   const kind = oneOf(head.kind, pathTo(path, 'kind'), ['belt', 'gear', 'shaft'] as const);
   const fromPath = pathTo(path, 'from');
   const from = finite(head.from, fromPath);

@@ -43,7 +43,12 @@ async function shootPage(page: Page, name: string): Promise<void> {
 }
 
 /** The page as printed: the report header names the tool and machine and carries the cautions; no buttons. */
-async function checkPrinted(page: Page, title: string, machine: string | null, name: string): Promise<void> {
+async function checkPrinted(
+  page: Page,
+  title: string,
+  machine: string | null,
+  name: string,
+): Promise<void> {
   await page.emulateMedia({ media: 'print' });
   const header = page.locator('header[data-print="only"]');
   expect(await header.isVisible()).toBe(true);
@@ -63,14 +68,21 @@ async function noSidewaysScroll(page: Page): Promise<number> {
 }
 
 /** Types each garbage text into the field: a message beside it, `unchanged` keeps its text, nothing reads NaN. */
-async function refusesGarbage(page: Page, field: ReturnType<Page['getByLabel']>, unchanged: ReturnType<Page['getByTestId']>) {
+async function refusesGarbage(
+  page: Page,
+  field: ReturnType<Page['getByLabel']>,
+  unchanged: ReturnType<Page['getByTestId']>,
+) {
   const good = await field.inputValue();
   const before = await unchanged.innerText();
   for (const text of GARBAGE) {
     await field.fill(text);
     expect(await field.getAttribute('aria-invalid'), `"${text}"`).toBe('true');
     const messageId = (await field.getAttribute('aria-describedby'))!.split(' ')[0];
-    expect((await page.locator(`[id="${messageId}"]`).innerText()).length, `"${text}"`).toBeGreaterThan(5);
+    expect(
+      (await page.locator(`[id="${messageId}"]`).innerText()).length,
+      `"${text}"`,
+    ).toBeGreaterThan(5);
     expect(await unchanged.innerText(), `"${text}"`).toBe(before);
     expect(await shownText(page), `"${text}"`).not.toMatch(/NaN|Infinity/);
   }
@@ -88,7 +100,9 @@ describe('the speed finder at phone size', () => {
     const instruction = page.getByTestId('finder-instruction');
 
     // Before any reading: start at the top of the strobe's range (12,000 fpm by default).
-    await expect.poll(() => instruction.innerText()).toMatch(/^Set the strobe to 12000 flashes\/min/);
+    await expect
+      .poll(() => instruction.innerText())
+      .toMatch(/^Set the strobe to 12000 flashes\/min/);
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
     expect(await page.getByTestId('photosensitivity-notice').isVisible()).toBe(true);
     await page.screenshot({ path: `${shots}/speed-finder-start-phone.png` });
@@ -99,11 +113,15 @@ describe('the speed finder at phone size', () => {
     // Coming down from 12,000 fpm, the first single image stands at 1780 fpm.
     await typeInto(page, 'Rate where it stood still', '1780');
     await page.getByRole('button', { name: 'Add reading' }).click();
-    await expect.poll(() => instruction.innerText()).toMatch(/^Now set 3560 flashes\/min \(twice the single-image rate 1780/);
+    await expect
+      .poll(() => instruction.innerText())
+      .toMatch(/^Now set 3560 flashes\/min \(twice the single-image rate 1780/);
     expect(await page.getByTestId('finder-rate').innerText()).toBe('3,560 fpm');
     // 1780 fpm / 6 blades = 296.7 rpm, the likeliest; faster speeds would have stood still higher up.
     const table = page.getByTestId('candidate-table');
-    expect(await table.locator('tbody tr').first().innerText()).toMatch(/296\.7 rpm[\s\S]*Likeliest[\s\S]*2 images stand still/);
+    expect(await table.locator('tbody tr').first().innerText()).toMatch(
+      /296\.7 rpm[\s\S]*Likeliest[\s\S]*2 images stand still/,
+    );
     await shootPage(page, 'speed-finder-confirm-phone');
 
     // Garbage in the next reading's rate adds nothing and says why.
@@ -112,29 +130,45 @@ describe('the speed finder at phone size', () => {
     expect(await page.getByTestId('reading-refused').isVisible()).toBe(true);
     expect(await page.getByTestId('reading-list').locator('li').count()).toBe(1);
     // Garbage in a recorded reading keeps the step as it was.
-    await refusesGarbage(page, page.getByLabel('Reading 1: rate', { exact: true }), page.getByTestId('finder-instruction'));
+    await refusesGarbage(
+      page,
+      page.getByLabel('Reading 1: rate', { exact: true }),
+      page.getByTestId('finder-instruction'),
+    );
 
     // The proposed rate goes to the Check screen's strobe.
     await page.getByRole('button', { name: /^Use 3,560 fpm on the Check screen's strobe/ }).click();
-    await expect.poll(() => page.getByRole('status').filter({ hasText: 'now flashes at 3,560 fpm' }).count()).toBe(1);
+    await expect
+      .poll(() => page.getByRole('status').filter({ hasText: 'now flashes at 3,560 fpm' }).count())
+      .toBe(1);
 
     // At 3560 fpm the technician sees two images standing still: confirmed.
     await typeInto(page, 'Rate where it stood still', '3560');
     await page.getByLabel('Images standing still', { exact: true }).selectOption('2');
     await page.getByRole('button', { name: 'Add reading' }).click();
-    await expect.poll(() => instruction.innerText()).toMatch(/^The part turns at 297 rpm \(single image at 1780 flashes\/min, confirmed by the two images\)/);
+    await expect
+      .poll(() => instruction.innerText())
+      .toMatch(
+        /^The part turns at 297 rpm \(single image at 1780 flashes\/min, confirmed by the two images\)/,
+      );
     expect(await page.getByTestId('found-speed').innerText()).toBe(`${formatNumber(1780 / 6)} rpm`);
 
     // An expected range typed as garbage is refused beside its field.
     await page.getByRole('radio', { name: 'A range in rpm' }).check();
-    await refusesGarbage(page, page.getByLabel('From', { exact: true }), page.getByTestId('finder-instruction'));
+    await refusesGarbage(
+      page,
+      page.getByLabel('From', { exact: true }),
+      page.getByTestId('finder-instruction'),
+    );
     await page.getByRole('radio', { name: 'Not known' }).check();
 
     // Saved to a new machine, in words.
     await page.getByLabel("New machine's name").fill('Extract fan, kiln 3');
     await page.getByRole('button', { name: 'Save speed to a new machine' }).click();
     const outcome = page.getByTestId('save-outcome');
-    await expect.poll(() => outcome.innerText()).toMatch(/Fan: speed 1,770 rpm → 296\.7 rpm\.[\s\S]*Saved to "Extract fan, kiln 3"\./);
+    await expect
+      .poll(() => outcome.innerText())
+      .toMatch(/Fan: speed 1,770 rpm → 296\.7 rpm\.[\s\S]*Saved to "Extract fan, kiln 3"\./);
     expect(await shownText(page)).not.toMatch(/NaN|Infinity/);
     expect(await noSidewaysScroll(page)).toBeLessThanOrEqual(0);
     await shootPage(page, 'speed-finder-done-phone');
@@ -165,7 +199,9 @@ describe('the whole machine at phone size', () => {
     await typeInto(page, 'Blades or marks', '1');
     await first.getByRole('radio', { name: 'Motor' }).check();
     const motorRpm = motorSpeedHz(50, 4, 0.03) * 60;
-    await expect.poll(() => page.getByTestId('chain-speed-0').innerText()).toMatch(new RegExp(`^${formatNumber(motorRpm)} rpm`));
+    await expect
+      .poll(() => page.getByTestId('chain-speed-0').innerText())
+      .toMatch(new RegExp(`^${formatNumber(motorRpm)} rpm`));
 
     // Part 2: the fan on a 100 mm → 250 mm belt.
     await page.getByRole('button', { name: 'Add part' }).click();
@@ -177,7 +213,9 @@ describe('the whole machine at phone size', () => {
     await second.getByLabel('Driven pulley', { exact: true }).fill('250');
     const fanHz = beltSpeedHz(motorSpeedHz(50, 4, 0.03), 0.1, 0.25);
     const speeds = page.getByTestId('chain-speed-1');
-    await expect.poll(() => speeds.innerText()).toMatch(new RegExp(`^${formatNumber(fanHz * 60)} rpm ± 1 %`));
+    await expect
+      .poll(() => speeds.innerText())
+      .toMatch(new RegExp(`^${formatNumber(fanHz * 60)} rpm ± 1 %`));
 
     // Garbage in a pulley leaves the fan's speed as it was.
     await refusesGarbage(page, second.getByLabel('Driver pulley', { exact: true }), speeds);
@@ -190,7 +228,11 @@ describe('the whole machine at phone size', () => {
       root: { kind: 'fixed', speedHz: motorSpeedHz(50, 4, 0.03), tolerance: 0.01 },
       parts: [
         { name: 'Motor', symmetry: 1 },
-        { name: 'Fan', symmetry: 6, link: { kind: 'belt', driverDiameterM: 0.1, drivenDiameterM: 0.25 } },
+        {
+          name: 'Fan',
+          symmetry: 6,
+          link: { kind: 'belt', driverDiameterM: 0.1, drivenDiameterM: 0.25 },
+        },
       ],
     });
     const bands = freezeRates(parts, 1, { minHz: 0.5, maxHz: 200 });
@@ -198,10 +240,16 @@ describe('the whole machine at phone size', () => {
     const top = bands.reduce((a, b) => (b.fromHz > a.fromHz ? b : a));
     const firstRow = freeze.locator('tbody tr').first();
     expect(await firstRow.innerText()).toContain('one pitch between flashes');
-    expect(await firstRow.getByRole('button').innerText()).toBe(formatRate(freezeRateToSet(top), 'strobe', 'fpm'));
+    expect(await firstRow.getByRole('button').innerText()).toBe(
+      formatRate(freezeRateToSet(top), 'strobe', 'fpm'),
+    );
     await firstRow.getByRole('button').click();
-    await expect.poll(() => page.getByTestId('chain-applied').innerText()).toMatch(/^The Check screen now uses/);
-    expect(await page.getByTestId('chain-speed-table').innerText()).toMatch(/Fan[\s\S]*Looks still/);
+    await expect
+      .poll(() => page.getByTestId('chain-applied').innerText())
+      .toMatch(/^The Check screen now uses/);
+    expect(await page.getByTestId('chain-speed-table').innerText()).toMatch(
+      /Fan[\s\S]*Looks still/,
+    );
 
     // The rate map draws every part.
     await page.getByTestId('rate-map').locator('canvas').first().waitFor();
@@ -218,6 +266,8 @@ describe('the whole machine at phone size', () => {
     // The Check screen shows the fan (the part chosen) at the chain's speed, standing still.
     await page.getByRole('button', { name: 'Check', exact: true }).click();
     await expect.poll(() => page.getByTestId('verdict').innerText()).toMatch(/^Looks still/);
-    expect(await page.getByTestId('true-speed').innerText()).toBe(`${formatNumber(fanHz * 60)} rpm`);
+    expect(await page.getByTestId('true-speed').innerText()).toBe(
+      `${formatNumber(fanHz * 60)} rpm`,
+    );
   });
 });

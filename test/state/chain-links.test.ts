@@ -2,7 +2,15 @@
 // and how the whole-machine screen turns them into speeds (state/chain.ts).
 // Invented test data: the conveyor of a fictional sawmill, a motor, a belt, a gearbox, a drum.
 import { describe, expect, test } from 'vitest';
-import { beltSpeedHz, driveChain, gearSpeedHz, InputError, motorSpeedHz, tyreDiameterM, wheelSpeedHz } from '../../src/core';
+import {
+  beltSpeedHz,
+  driveChain,
+  gearSpeedHz,
+  InputError,
+  motorSpeedHz,
+  tyreDiameterM,
+  wheelSpeedHz,
+} from '../../src/core';
 import {
   deriveParts,
   withChainSpeeds,
@@ -21,9 +29,27 @@ import { bent } from './fixtures';
 function conveyor(): Setup {
   const s = structuredClone(defaultSetup);
   s.parts = [
-    { name: 'Motor', speedRpm: 1455, features: 1, tolerancePercent: 1, motor: { mainsHz: 50, poles: 4, slipPercent: 3 } },
-    { name: 'Gearbox input', speedRpm: 0, features: 1, tolerancePercent: 0, drive: { from: 0, kind: 'belt', driverMm: 100, drivenMm: 250, slipPercent: 2 } },
-    { name: 'Drum', speedRpm: 0, features: 8, tolerancePercent: 0, drive: { from: 1, kind: 'gear', driverTeeth: 20, drivenTeeth: 60 } },
+    {
+      name: 'Motor',
+      speedRpm: 1455,
+      features: 1,
+      tolerancePercent: 1,
+      motor: { mainsHz: 50, poles: 4, slipPercent: 3 },
+    },
+    {
+      name: 'Gearbox input',
+      speedRpm: 0,
+      features: 1,
+      tolerancePercent: 0,
+      drive: { from: 0, kind: 'belt', driverMm: 100, drivenMm: 250, slipPercent: 2 },
+    },
+    {
+      name: 'Drum',
+      speedRpm: 0,
+      features: 8,
+      tolerancePercent: 0,
+      drive: { from: 1, kind: 'gear', driverTeeth: 20, drivenTeeth: 60 },
+    },
   ];
   return s;
 }
@@ -31,41 +57,92 @@ function conveyor(): Setup {
 describe('saved set-ups carry drives and wheels', () => {
   test('a set-up with a belt, a gear pair, a shaft and a wheel passes the checks unchanged', () => {
     const s = conveyor();
-    s.parts.push({ name: 'Drum bolts', speedRpm: 0, features: 12, tolerancePercent: 0, drive: { from: 2, kind: 'shaft' } });
-    s.parts.push({ name: 'Cart wheel', speedRpm: 0, features: 5, tolerancePercent: 2, wheel: { groundSpeed: 12, unit: 'mph', tyreSize: '185/65R15' } });
+    s.parts.push({
+      name: 'Drum bolts',
+      speedRpm: 0,
+      features: 12,
+      tolerancePercent: 0,
+      drive: { from: 2, kind: 'shaft' },
+    });
+    s.parts.push({
+      name: 'Cart wheel',
+      speedRpm: 0,
+      features: 5,
+      tolerancePercent: 2,
+      wheel: { groundSpeed: 12, unit: 'mph', tyreSize: '185/65R15' },
+    });
     expect(validateSetup(s)).toEqual(s);
   });
 
   test('a drive must come from an earlier part, counted from 0', () => {
     const later = bent(conveyor(), (c) => (c.parts[1].drive.from = 1));
-    expect(() => validateSetup(later)).toThrow(/set-up › parts › 2 › drive › from must pick an earlier part: a whole number from 0 to 0 \(got 1\)/);
-    const first = bent(conveyor(), (c) => (c.parts[0] = { ...c.parts[1], drive: { from: 0, kind: 'shaft' } }));
+    expect(() => validateSetup(later)).toThrow(
+      /set-up › parts › 2 › drive › from must pick an earlier part: a whole number from 0 to 0 \(got 1\)/,
+    );
+    const first = bent(
+      conveyor(),
+      (c) => (c.parts[0] = { ...c.parts[1], drive: { from: 0, kind: 'shaft' } }),
+    );
     expect(() => validateSetup(first)).toThrow(/the first part cannot be driven by another part/);
     const fraction = bent(conveyor(), (c) => (c.parts[2].drive.from = 0.5));
     expect(() => validateSetup(fraction)).toThrow(DataError);
   });
 
   test('each drive kind has exactly its own fields, within their ranges', () => {
-    expect(() => validateSetup(bent(conveyor(), (c) => (c.parts[1].drive.kind = 'chain')))).toThrow(/kind must be one of "belt", "gear", "shaft"/);
-    expect(() => validateSetup(bent(conveyor(), (c) => (c.parts[1].drive.driverTeeth = 20)))).toThrow(/does not know: "driverTeeth"/);
-    expect(() => validateSetup(bent(conveyor(), (c) => delete c.parts[1].drive.drivenMm))).toThrow(/drivenMm is missing/);
-    expect(() => validateSetup(bent(conveyor(), (c) => (c.parts[1].drive.driverMm = 0)))).toThrow(/driverMm must be a number above 0/);
-    expect(() => validateSetup(bent(conveyor(), (c) => (c.parts[1].drive.slipPercent = 25)))).toThrow(/slipPercent must be a number from 0 to 20/);
-    expect(() => validateSetup(bent(conveyor(), (c) => (c.parts[2].drive.drivenTeeth = 2.5)))).toThrow(/drivenTeeth must be a whole number/);
-    expect(() => validateSetup(bent(conveyor(), (c) => (c.parts[2].drive = { from: 1, kind: 'shaft', driverMm: 1 })))).toThrow(/does not know: "driverMm"/);
+    expect(() => validateSetup(bent(conveyor(), (c) => (c.parts[1].drive.kind = 'chain')))).toThrow(
+      /kind must be one of "belt", "gear", "shaft"/,
+    );
+    expect(() =>
+      validateSetup(bent(conveyor(), (c) => (c.parts[1].drive.driverTeeth = 20))),
+    ).toThrow(/does not know: "driverTeeth"/);
+    expect(() => validateSetup(bent(conveyor(), (c) => delete c.parts[1].drive.drivenMm))).toThrow(
+      /drivenMm is missing/,
+    );
+    expect(() => validateSetup(bent(conveyor(), (c) => (c.parts[1].drive.driverMm = 0)))).toThrow(
+      /driverMm must be a number above 0/,
+    );
+    expect(() =>
+      validateSetup(bent(conveyor(), (c) => (c.parts[1].drive.slipPercent = 25))),
+    ).toThrow(/slipPercent must be a number from 0 to 20/);
+    expect(() =>
+      validateSetup(bent(conveyor(), (c) => (c.parts[2].drive.drivenTeeth = 2.5))),
+    ).toThrow(/drivenTeeth must be a whole number/);
+    expect(() =>
+      validateSetup(
+        bent(conveyor(), (c) => (c.parts[2].drive = { from: 1, kind: 'shaft', driverMm: 1 })),
+      ),
+    ).toThrow(/does not know: "driverMm"/);
   });
 
   test('a wheel needs a ground speed in km/h or mph and a tyre size as text', () => {
-    const wheel = (w: unknown) => bent(conveyor(), (c) => (c.parts[0] = { name: 'Wheel', speedRpm: 0, features: 5, tolerancePercent: 0, wheel: w }));
-    expect(() => validateSetup(wheel({ groundSpeed: 50, unit: 'm/s', tyreSize: '205/55R16' }))).toThrow(/unit must be one of "km\/h", "mph"/);
-    expect(() => validateSetup(wheel({ groundSpeed: 5000, unit: 'km/h', tyreSize: '205/55R16' }))).toThrow(/groundSpeed must be a number from -1000 to 1000/);
-    expect(() => validateSetup(wheel({ groundSpeed: 50, unit: 'km/h', tyreSize: '' }))).toThrow(/tyreSize must not be blank/);
-    expect(() => validateSetup(wheel({ groundSpeed: 50, unit: 'km/h', tyreSize: 1 }))).toThrow(/tyreSize must be text/);
+    const wheel = (w: unknown) =>
+      bent(
+        conveyor(),
+        (c) =>
+          (c.parts[0] = { name: 'Wheel', speedRpm: 0, features: 5, tolerancePercent: 0, wheel: w }),
+      );
+    expect(() =>
+      validateSetup(wheel({ groundSpeed: 50, unit: 'm/s', tyreSize: '205/55R16' })),
+    ).toThrow(/unit must be one of "km\/h", "mph"/);
+    expect(() =>
+      validateSetup(wheel({ groundSpeed: 5000, unit: 'km/h', tyreSize: '205/55R16' })),
+    ).toThrow(/groundSpeed must be a number from -1000 to 1000/);
+    expect(() => validateSetup(wheel({ groundSpeed: 50, unit: 'km/h', tyreSize: '' }))).toThrow(
+      /tyreSize must not be blank/,
+    );
+    expect(() => validateSetup(wheel({ groundSpeed: 50, unit: 'km/h', tyreSize: 1 }))).toThrow(
+      /tyreSize must be text/,
+    );
   });
 
   test('a part takes its speed from one source only', () => {
-    const both = bent(conveyor(), (c) => (c.parts[1].motor = { mainsHz: 50, poles: 4, slipPercent: 3 }));
-    expect(() => validateSetup(both)).toThrow(/takes its speed from one source only, not from motor and drive/);
+    const both = bent(
+      conveyor(),
+      (c) => (c.parts[1].motor = { mainsHz: 50, poles: 4, slipPercent: 3 }),
+    );
+    expect(() => validateSetup(both)).toThrow(
+      /takes its speed from one source only, not from motor and drive/,
+    );
   });
 });
 
@@ -77,7 +154,11 @@ describe('speeds along the drives', () => {
       root: { kind: 'fixed', speedHz: motorSpeedHz(50, 4, 0.03), tolerance: 0.01 },
       parts: [
         { name: 'Motor', symmetry: 1 },
-        { name: 'Gearbox input', symmetry: 1, link: { kind: 'belt', driverDiameterM: 0.1, drivenDiameterM: 0.25, slipPercent: 2 } },
+        {
+          name: 'Gearbox input',
+          symmetry: 1,
+          link: { kind: 'belt', driverDiameterM: 0.1, drivenDiameterM: 0.25, slipPercent: 2 },
+        },
         { name: 'Drum', symmetry: 8, link: { kind: 'gear', driverTeeth: 20, drivenTeeth: 60 } },
       ],
     });
@@ -105,8 +186,20 @@ describe('speeds along the drives', () => {
 
   test('separate chains in one set-up are worked out separately', () => {
     const s = conveyor();
-    s.parts.push({ name: 'Cart wheel', speedRpm: 0, features: 5, tolerancePercent: 0, wheel: { groundSpeed: 100, unit: 'km/h', tyreSize: '205/55R16' } });
-    s.parts.push({ name: 'Hub bolts', speedRpm: 0, features: 5, tolerancePercent: 0, drive: { from: 3, kind: 'shaft' } });
+    s.parts.push({
+      name: 'Cart wheel',
+      speedRpm: 0,
+      features: 5,
+      tolerancePercent: 0,
+      wheel: { groundSpeed: 100, unit: 'km/h', tyreSize: '205/55R16' },
+    });
+    s.parts.push({
+      name: 'Hub bolts',
+      speedRpm: 0,
+      features: 5,
+      tolerancePercent: 0,
+      drive: { from: 3, kind: 'shaft' },
+    });
     const parts = deriveParts(s);
     // Core doc example: 100 km/h on a 205/55R16 (ISO 4000-1 diameter 0.6319 m) = 13.9926 rev/s.
     expect(tyreDiameterM('205/55R16')).toBeCloseTo(0.6319, 9);
@@ -117,17 +210,30 @@ describe('speeds along the drives', () => {
   });
 
   test('a chain the core refuses throws its InputError, naming the part', () => {
-    const s = withDrive(conveyor(), 1, { from: 0, kind: 'belt', driverMm: 100, drivenMm: 250, slipPercent: 20 });
+    const s = withDrive(conveyor(), 1, {
+      from: 0,
+      kind: 'belt',
+      driverMm: 100,
+      drivenMm: 250,
+      slipPercent: 20,
+    });
     s.parts[0].tolerancePercent = 45;
     expect(() => deriveParts(s)).toThrow(InputError);
     expect(() => deriveParts(s)).toThrow(/Gearbox input is uncertain by more than ±50 %/);
     const broken = conveyor();
     broken.parts[1] = { ...broken.parts[1], drive: { from: 5, kind: 'shaft' } };
-    expect(() => deriveParts(broken)).toThrow(/Gearbox input is driven by a part that is not before it/);
+    expect(() => deriveParts(broken)).toThrow(
+      /Gearbox input is driven by a part that is not before it/,
+    );
   });
 
   test('a part geared up beyond a million rpm is refused rather than written', () => {
-    const s = withDrive(conveyor(), 2, { from: 1, kind: 'gear', driverTeeth: 100_000, drivenTeeth: 1 });
+    const s = withDrive(conveyor(), 2, {
+      from: 1,
+      kind: 'gear',
+      driverTeeth: 100_000,
+      drivenTeeth: 1,
+    });
     expect(() => withChainSpeeds(s)).toThrow(/Drum would turn at more than 1,000,000 rpm/);
   });
 });
@@ -135,7 +241,11 @@ describe('speeds along the drives', () => {
 describe('editing the chain', () => {
   test('a new part starts on the same shaft as its driver; the set-up holds at most MAX_PARTS', () => {
     const s = withDrivenPart(conveyor(), 2);
-    expect(s.parts[3]).toMatchObject({ name: 'Part 4', features: 1, drive: { from: 2, kind: 'shaft' } });
+    expect(s.parts[3]).toMatchObject({
+      name: 'Part 4',
+      features: 1,
+      drive: { from: 2, kind: 'shaft' },
+    });
     let full = conveyor();
     while (full.parts.length < MAX_PARTS) full = withDrivenPart(full, 0);
     expect(() => withDrivenPart(full, 0)).toThrow(`A set-up holds at most ${MAX_PARTS} parts`);
@@ -151,7 +261,10 @@ describe('editing the chain', () => {
     const motor = withSpeedSource(withSpeedSource(conveyor(), 2, 'typed'), 2, 'motor');
     // Default motor: 4 poles on 50 Hz at 3 % slip = 1455 rpm (IEC 60034-1 synchronous 1500 rpm).
     expect(motor.parts[2].speedRpm).toBeCloseTo(1455, 9);
-    expect(withWheel(conveyor(), 1, { groundSpeed: 3, unit: 'km/h', tyreSize: '155/80R13' }).parts[1].drive).toBeUndefined();
+    expect(
+      withWheel(conveyor(), 1, { groundSpeed: 3, unit: 'km/h', tyreSize: '155/80R13' }).parts[1]
+        .drive,
+    ).toBeUndefined();
   });
 
   test('removing a driver leaves the parts it drove at the speed they had, and renumbers later drives', () => {
@@ -163,7 +276,9 @@ describe('editing the chain', () => {
     expect(s.parts[1].tolerancePercent).toBeCloseTo(before.parts[2].tolerancePercent, 9);
     const t = withoutPart(withDrivenPart(conveyor(), 2), 0);
     expect(t.parts[2].drive).toEqual({ from: 1, kind: 'shaft' });
-    expect(() => withoutPart({ ...conveyor(), parts: [conveyor().parts[0]] }, 0)).toThrow(/at least one part/);
+    expect(() => withoutPart({ ...conveyor(), parts: [conveyor().parts[0]] }, 0)).toThrow(
+      /at least one part/,
+    );
     expect(validateSetup(t)).toEqual(t);
   });
 });
@@ -172,7 +287,12 @@ describe('the check screen’s own speed fields', () => {
   test('a speed typed for a driven part makes it a typed speed, so the set-up stays one source per part', () => {
     replaceSetup({ ...conveyor(), activePart: 1 });
     setSpeedRpm(600);
-    expect(setup.value.parts[1]).toEqual({ name: 'Gearbox input', speedRpm: 600, features: 1, tolerancePercent: 0 });
+    expect(setup.value.parts[1]).toEqual({
+      name: 'Gearbox input',
+      speedRpm: 600,
+      features: 1,
+      tolerancePercent: 0,
+    });
     expect(validateSetup(setup.value)).toEqual(setup.value);
     // The drum is still driven from it, now from 600 rpm: 600 · 20/60 = 200 rpm, reversed.
     expect(deriveParts(setup.value)[2].speedHz * 60).toBeCloseTo(-200, 9);

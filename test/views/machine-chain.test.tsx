@@ -7,7 +7,14 @@
 import 'fake-indexeddb/auto';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test, vi } from 'vitest';
-import { beltSpeedHz, freezeRates, gearSpeedHz, motorSpeedHz, noStillRates, wheelSpeedHz } from '../../src/core';
+import {
+  beltSpeedHz,
+  freezeRates,
+  gearSpeedHz,
+  motorSpeedHz,
+  noStillRates,
+  wheelSpeedHz,
+} from '../../src/core';
 import { App } from '../../src/app';
 import { formatNumber } from '../../src/lib/format';
 import { openScreen } from '../../src/lib/navigation';
@@ -15,12 +22,21 @@ import { formatRate } from '../../src/lib/rates';
 import { deriveParts, listedRange, MAX_LISTED_SPANS } from '../../src/state/chain';
 import { defaultSetup } from '../../src/state/model';
 import { flashUnit, replaceSetup, setup, startSession } from '../../src/state/setup';
-import { freezeBandsShown, freezeRateToSet, middleHz, noStillBandsShown } from '../../src/views/MachineChainScreen/band-lists';
+import {
+  freezeBandsShown,
+  freezeRateToSet,
+  middleHz,
+  noStillBandsShown,
+} from '../../src/views/MachineChainScreen/band-lists';
 import { machineCsv } from '../../src/views/MachineChainScreen/chain-csv';
 
 const charts: Array<{ parts: number }> = [];
 vi.mock('../../src/views/RateMap/chart', () => ({
-  createRateChart: (_holder: HTMLElement, _options: unknown, series: { apparentRpm: unknown[] }) => {
+  createRateChart: (
+    _holder: HTMLElement,
+    _options: unknown,
+    series: { apparentRpm: unknown[] },
+  ) => {
     charts.push({ parts: series.apparentRpm.length });
     return { update() {}, setRate() {}, resize() {}, destroy() {} };
   },
@@ -81,7 +97,9 @@ describe('the whole machine', () => {
       drive: { from: 0, kind: 'belt', driverMm: 100, drivenMm: 250, slipPercent: 0 },
     });
     expect(setup.value.parts[1].speedRpm).toBeCloseTo(582, 9);
-    expect(screen.getByTestId('chain-speed-table').textContent).toMatch(/Motor \(1 mark\).*Fan \(6 features\)/);
+    expect(screen.getByTestId('chain-speed-table').textContent).toMatch(
+      /Motor \(1 mark\).*Fan \(6 features\)/,
+    );
   });
 
   test('belt slip lowers the bottom of the driven band only', () => {
@@ -100,7 +118,9 @@ describe('the whole machine', () => {
     type(1, 'Driven teeth', '60');
     // Core doc example: gearSpeedHz(30, 20, 60) = −10 rev/s (an external mesh reverses).
     expect(gearSpeedHz(30, 20, 60)).toBe(-10);
-    expect(speedOf(1)).toBe('600 rpm ± 1 % (594 – 606 rpm), turning the other way to the start of its chain');
+    expect(speedOf(1)).toBe(
+      '600 rpm ± 1 % (594 – 606 rpm), turning the other way to the start of its chain',
+    );
     expect(setup.value.parts[1].speedRpm).toBeCloseTo(-600, 9);
   });
 
@@ -112,7 +132,9 @@ describe('the whole machine', () => {
     expect(speedOf(0)).toMatch(new RegExp(`^${formatNumber(rpm).replace('.', '\\.')} rpm ± 1 %`));
     fireEvent.change(card(0).getByLabelText('Ground speed unit'), { target: { value: 'mph' } });
     // The same speed in mph: 100 / 1.609344 = 62.14 mph.
-    expect((card(0).getByLabelText('Ground speed', { exact: true }) as HTMLInputElement).value).toBe('62.13712');
+    expect(
+      (card(0).getByLabelText('Ground speed', { exact: true }) as HTMLInputElement).value,
+    ).toBe('62.13712');
     expect(setup.value.parts[0].speedRpm).toBeCloseTo(rpm, 6);
   });
 
@@ -124,14 +146,20 @@ describe('the whole machine', () => {
     const bands = freezeRates(parts, 1, { minHz: 0.5, maxHz: 200 });
     const shown = freezeBandsShown(bands, 6);
     const table = screen.getByTestId('freeze-table');
-    expect(table.querySelector('caption')!.textContent).toBe(`${bands.length} bands; 6 shown (highest first), all in the CSV`);
+    expect(table.querySelector('caption')!.textContent).toBe(
+      `${bands.length} bands; 6 shown (highest first), all in the CSV`,
+    );
     const rows = within(table).getAllByRole('row').slice(1);
-    expect(rows.map((r) => within(r).getByRole('button').textContent)).toEqual(shown.map((b) => formatRate(freezeRateToSet(b), 'strobe', 'fpm')));
+    expect(rows.map((r) => within(r).getByRole('button').textContent)).toEqual(
+      shown.map((b) => formatRate(freezeRateToSet(b), 'strobe', 'fpm')),
+    );
     // The highest is the fan's plain single image near 6 · 582 = 3492 flashes/min.
     expect(freezeRateToSet(shown[0]) * 60).toBeCloseTo(3492, 6);
     fireEvent.click(within(rows[0]).getByRole('button'));
     expect(setup.value.strobe.rateFpm).toBeCloseTo(3492, 6);
-    expect(screen.getByTestId('chain-applied').textContent).toMatch(/^The Check screen now uses 3,492 fpm\./);
+    expect(screen.getByTestId('chain-applied').textContent).toMatch(
+      /^The Check screen now uses 3,492 fpm\./,
+    );
     expect(screen.getByTestId('chain-speed-table').textContent).toMatch(/Fan.*Looks still/);
   });
 
@@ -140,7 +168,9 @@ describe('the whole machine', () => {
     const bands = noStillRates(deriveParts(setup.value), { minHz: 0.5, maxHz: 200 });
     const shown = noStillBandsShown(bands, 6);
     const rows = within(screen.getByTestId('no-still-table')).getAllByRole('row').slice(1);
-    expect(rows.map((r) => within(r).getByRole('button').textContent)).toEqual(shown.map((b) => formatRate(middleHz(b), 'strobe', 'fpm')));
+    expect(rows.map((r) => within(r).getByRole('button').textContent)).toEqual(
+      shown.map((b) => formatRate(middleHz(b), 'strobe', 'fpm')),
+    );
     fireEvent.click(within(rows[0]).getByRole('button'));
     expect(setup.value.strobe.rateFpm).toBeCloseTo(middleHz(shown[0]) * 60, 6);
   });
@@ -180,7 +210,9 @@ describe('the whole machine', () => {
     buildMotorBeltFan();
     type(0, 'Tolerance', '45');
     type(1, 'Belt slip', '20');
-    expect(screen.getByTestId('chain-problem').textContent).toMatch(/uncertain by more than ±50 %.*last entries that could be worked out/);
+    expect(screen.getByTestId('chain-problem').textContent).toMatch(
+      /uncertain by more than ±50 %.*last entries that could be worked out/,
+    );
     expect((setup.value.parts[1].drive as { slipPercent: number }).slipPercent).toBe(20);
     // The last good speeds stay on screen.
     expect(speedOf(1)).toMatch(/^582 rpm ± 45 %/);
@@ -206,7 +238,9 @@ describe('the whole machine', () => {
       `Bands are listed from ${formatRate(listed.minHz, 'strobe', 'fpm')} up: below it these parts stand still at too many rates to list.`,
     );
     // With ±1 % on 50,000 Hz its lock bands overlap everywhere up there: it can look still at any rate.
-    expect(screen.getByTestId('no-no-still').textContent).toBe('Some part can look still at every rate in the range listed.');
+    expect(screen.getByTestId('no-no-still').textContent).toBe(
+      'Some part can look still at every rate in the range listed.',
+    );
   });
 
   test('the CSV holds the parts and every band', () => {
@@ -214,9 +248,23 @@ describe('the whole machine', () => {
     const parts = deriveParts(setup.value);
     const freeze = freezeRates(parts, 0, { minHz: 0.5, maxHz: 200 });
     const noStill = noStillRates(parts, { minHz: 0.5, maxHz: 200 });
-    const text = machineCsv(parts, { target: 0, range: { minHz: 0.5, maxHz: 200 }, listed: { minHz: 0.5, maxHz: 200 }, sampler: 'flash', freeze, noStill }, 'strobe', 'fpm');
+    const text = machineCsv(
+      parts,
+      {
+        target: 0,
+        range: { minHz: 0.5, maxHz: 200 },
+        listed: { minHz: 0.5, maxHz: 200 },
+        sampler: 'flash',
+        freeze,
+        noStill,
+      },
+      'strobe',
+      'fpm',
+    );
     const lines = text.split('\r\n');
-    expect(lines[0]).toBe('part,blades or marks,speed from,speed (rpm),tolerance (± %),lowest (rpm),highest (rpm)');
+    expect(lines[0]).toBe(
+      'part,blades or marks,speed from,speed (rpm),tolerance (± %),lowest (rpm),highest (rpm)',
+    );
     expect(lines[1]).toMatch(/^Motor,1,motor nameplate,1455,1,1440\.45,1469\.55$/);
     expect(lines[4]).toBe(
       'freezes Motor: from (fpm),to (fpm),single image at nominal speed (fpm),turns between flashes (pitches),exact rate depends on actual speed',

@@ -3,7 +3,15 @@
 // candidate table, the proposed rate, saving the speed found, and bad input.
 // Invented scenario: a 6-blade extract fan at the (fictional) Harrowgate Tile Works.
 import 'fake-indexeddb/auto';
-import { cleanup, configure, fireEvent, render, screen, waitFor, within } from '@testing-library/preact';
+import {
+  cleanup,
+  configure,
+  fireEvent,
+  render,
+  screen,
+  waitFor,
+  within,
+} from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
 import { speedFinderSteps } from '../../src/core';
 import { App } from '../../src/app';
@@ -59,7 +67,9 @@ function instruction(): string {
 /** Records a reading through the add row, as a technician would. */
 function record(rateText: string, images: number) {
   type('Rate where it stood still', rateText);
-  fireEvent.change(screen.getByLabelText('Images standing still'), { target: { value: String(images) } });
+  fireEvent.change(screen.getByLabelText('Images standing still'), {
+    target: { value: String(images) },
+  });
   fireEvent.click(screen.getByRole('button', { name: 'Add reading' }));
 }
 
@@ -74,7 +84,9 @@ describe('the speed finder', () => {
   test('before any reading it says to start at the top of the strobe, and both cautions always show', () => {
     const step = speedFinderSteps({ readings: [], symmetry: 6, strobeRange: STROBE });
     expect(instruction()).toBe(step.instruction);
-    expect(instruction()).toMatch(/^Set the strobe to 12000 flashes\/min \(the top of the strobe's range\)/);
+    expect(instruction()).toMatch(
+      /^Set the strobe to 12000 flashes\/min \(the top of the strobe's range\)/,
+    );
     expect(screen.getByTestId('finder-rate').textContent).toBe('12,000 fpm');
     expect(screen.getByTestId('safety-notice')).toBeTruthy();
     expect(screen.getByTestId('photosensitivity-notice')).toBeTruthy();
@@ -84,13 +96,17 @@ describe('the speed finder', () => {
     record('1780', 1);
     expect(readings.value).toEqual([{ id: expect.any(Number), rateFpm: 1780, images: 1 }]);
     // physics.md §7: coming down from the top, the first single image is at n·f; twice it shows two images.
-    expect(instruction()).toMatch(/^Now set 3560 flashes\/min \(twice the single-image rate 1780 flashes\/min\)/);
+    expect(instruction()).toMatch(
+      /^Now set 3560 flashes\/min \(twice the single-image rate 1780 flashes\/min\)/,
+    );
     expect(screen.getByTestId('finder-rate').textContent).toBe('3,560 fpm');
     const [first, second] = rows();
     // 1780 flashes/min ÷ 6 blades = 296.7 rpm; at 3560 fpm it would show two images.
     expect(first).toBe('296.7 rpmLikeliestFits every reading.2 images stand still');
     // 593.3 rpm would have stood still as a single image at 3560 fpm on the way down.
-    expect(second).toMatch(/593\.3 rpm.*Ruled out.*3560 flashes\/min on the way down.*a single image stands still/);
+    expect(second).toMatch(
+      /593\.3 rpm.*Ruled out.*3560 flashes\/min on the way down.*a single image stands still/,
+    );
     // The next reading's row starts at the proposed rate and the image count the likeliest speed gives there.
     expect(field('Rate where it stood still').value).toBe('3560');
     expect((screen.getByLabelText('Images standing still') as HTMLSelectElement).value).toBe('2');
@@ -100,7 +116,9 @@ describe('the speed finder', () => {
     record('1780', 1);
     record('3560', 2);
     expect(screen.getByTestId('finder-step').dataset.stage).toBe('done');
-    expect(instruction()).toMatch(/^The part turns at 297 rpm \(single image at 1780 flashes\/min, confirmed by the two images\)\./);
+    expect(instruction()).toMatch(
+      /^The part turns at 297 rpm \(single image at 1780 flashes\/min, confirmed by the two images\)\./,
+    );
     expect(screen.getByTestId('found-speed').textContent).toBe('296.7 rpm');
     expect(screen.queryByTestId('finder-rate')).toBeNull();
   });
@@ -118,13 +136,19 @@ describe('the speed finder', () => {
     fireEvent.click(screen.getByLabelText('Motor nameplate'));
     fireEvent.click(screen.getByLabelText('60 Hz'));
     // IEC 60034-1: 4 poles on 60 Hz = 1800 rpm synchronous; slip 0–5 % gives 1710–1800 rpm.
-    expect(screen.getByTestId('expected-range').textContent).toBe('Expected 1,710 – 1,800 rpm: speeds inside it rank first.');
+    expect(screen.getByTestId('expected-range').textContent).toBe(
+      'Expected 1,710 – 1,800 rpm: speeds inside it rank first.',
+    );
     // It starts just above the expected speed: 1800 · 1.1 = 1980 flashes/min.
-    expect(instruction()).toMatch(/^Set the strobe to 1980 flashes\/min \(just above the expected speed\)/);
+    expect(instruction()).toMatch(
+      /^Set the strobe to 1980 flashes\/min \(just above the expected speed\)/,
+    );
     record('1770', 1);
     // A single image at 1770 fpm: 1770 rpm, or 3540 rpm seen every second turn; only 1770 lies in 1710–1800.
     const [first, second] = rows();
-    expect(first).toMatch(/^1,770 rpmLikeliest \(in the expected range\)Fits every reading and the expected range\./);
+    expect(first).toMatch(
+      /^1,770 rpmLikeliest \(in the expected range\)Fits every reading and the expected range\./,
+    );
     expect(second).toMatch(/^3,540 rpmFitsFits every reading\./);
   });
 
@@ -184,7 +208,9 @@ describe('the speed finder', () => {
   test('the proposed rate goes to the Check screen’s strobe', () => {
     setup.value = { ...setup.value, samplerKind: 'camera' };
     record('1780', 1);
-    fireEvent.click(screen.getByRole('button', { name: "Use 3,560 fpm on the Check screen's strobe" }));
+    fireEvent.click(
+      screen.getByRole('button', { name: "Use 3,560 fpm on the Check screen's strobe" }),
+    );
     expect(setup.value.samplerKind).toBe('strobe');
     expect(setup.value.strobe.rateFpm).toBe(3560);
     expect(screen.getByRole('status').textContent).toMatch(/now flashes at 3,560 fpm/);
@@ -196,8 +222,14 @@ describe('the speed finder', () => {
     record('1780', 1);
     record('3560', 2);
     fireEvent.click(screen.getByRole('button', { name: 'Save speed to “Extract fan, kiln 3”' }));
-    await waitFor(() => expect(screen.getByTestId('save-outcome').textContent).toMatch(/Saved to "Extract fan, kiln 3"\./));
-    expect(screen.getByTestId('save-outcome').textContent).toMatch(/^Fan: speed 1,770 rpm → 296\.7 rpm\./);
+    await waitFor(() =>
+      expect(screen.getByTestId('save-outcome').textContent).toMatch(
+        /Saved to "Extract fan, kiln 3"\./,
+      ),
+    );
+    expect(screen.getByTestId('save-outcome').textContent).toMatch(
+      /^Fan: speed 1,770 rpm → 296\.7 rpm\./,
+    );
     const saved = machines.value.find((m) => m.id === machine.id)!;
     expect(saved.setup.parts[0].speedRpm).toBeCloseTo(1780 / 6, 9);
     expect(setup.value.parts[0].speedRpm).toBeCloseTo(1780 / 6, 9);
@@ -213,13 +245,21 @@ describe('the speed finder', () => {
     expect(machines.value.length).toBe(count);
     expect(setup.value.parts[0].speedRpm).toBe(1770);
     fireEvent.click(screen.getByRole('button', { name: 'Use it on the Check screen only' }));
-    await waitFor(() => expect(screen.getByTestId('save-outcome').textContent).toMatch(/Check screen only \(no machine saved\)/));
+    await waitFor(() =>
+      expect(screen.getByTestId('save-outcome').textContent).toMatch(
+        /Check screen only \(no machine saved\)/,
+      ),
+    );
     expect(setup.value.parts[0].speedRpm).toBeCloseTo(1780 / 6, 9);
   });
 
   test('the CSV holds every candidate and the readings behind them', () => {
     record('1780', 1);
-    const step = speedFinderSteps({ readings: [{ rateHz: 1780 / 60, images: 1 }], symmetry: 6, strobeRange: STROBE });
+    const step = speedFinderSteps({
+      readings: [{ rateHz: 1780 / 60, images: 1 }],
+      symmetry: 6,
+      strobeRange: STROBE,
+    });
     const text = finderCsv(step.candidates, readings.value, step.rateFpm);
     const lines = text.split('\r\n');
     expect(lines[0]).toBe('speed (rpm),status,why,at 3560 flashes/min');
@@ -235,15 +275,32 @@ describe('keeping the speed found', () => {
   function beltDrive(): Setup {
     const s = structuredClone(defaultSetup);
     s.parts = [
-      { name: 'Motor', speedRpm: 1455, features: 1, tolerancePercent: 1, motor: { mainsHz: 50, poles: 4, slipPercent: 3 } },
-      { name: 'Fan', speedRpm: 582, features: 6, tolerancePercent: 1, drive: { from: 0, kind: 'belt', driverMm: 100, drivenMm: 250, slipPercent: 0 } },
+      {
+        name: 'Motor',
+        speedRpm: 1455,
+        features: 1,
+        tolerancePercent: 1,
+        motor: { mainsHz: 50, poles: 4, slipPercent: 3 },
+      },
+      {
+        name: 'Fan',
+        speedRpm: 582,
+        features: 6,
+        tolerancePercent: 1,
+        drive: { from: 0, kind: 'belt', driverMm: 100, drivenMm: 250, slipPercent: 0 },
+      },
     ];
     return s;
   }
 
   test('a measured motor speed replaces the nameplate, and the fan it drives follows', () => {
     const { setup: next, changes } = withMeasuredSpeed(beltDrive(), 1470 / 60, 1);
-    expect(next.parts[0]).toEqual({ name: 'Motor', speedRpm: 1470, features: 1, tolerancePercent: 1 });
+    expect(next.parts[0]).toEqual({
+      name: 'Motor',
+      speedRpm: 1470,
+      features: 1,
+      tolerancePercent: 1,
+    });
     // Belt: f2 = f1 · D1/D2 (physics.md §8): 1470 · 100/250 = 588 rpm.
     expect(next.parts[1].speedRpm).toBeCloseTo(588, 9);
     expect(changes).toEqual([
@@ -258,7 +315,12 @@ describe('keeping the speed found', () => {
     s.activePart = 1;
     s.parts[1].speedRpm = -582;
     const { setup: next, changes } = withMeasuredSpeed(s, 9.9, 3);
-    expect(next.parts[1]).toEqual({ name: 'Fan', speedRpm: -594, features: 3, tolerancePercent: 1 });
+    expect(next.parts[1]).toEqual({
+      name: 'Fan',
+      speedRpm: -594,
+      features: 3,
+      tolerancePercent: 1,
+    });
     expect(changes).toContain('Fan is no longer worked out from the drive from Motor.');
     expect(changes).toContain('Fan: features 6 → 3.');
   });

@@ -19,7 +19,9 @@ export function middleHz(band: RateSpan): number {
  * @example freezeRateToSet({ fromHz: 23.95, toHz: 24.05, p: 1, lockRateHz: 24, dense: false }) // 24
  */
 export function freezeRateToSet(band: FreezeBand): number {
-  return band.lockRateHz >= band.fromHz && band.lockRateHz <= band.toHz ? band.lockRateHz : middleHz(band);
+  return band.lockRateHz >= band.fromHz && band.lockRateHz <= band.toHz
+    ? band.lockRateHz
+    : middleHz(band);
 }
 
 /**

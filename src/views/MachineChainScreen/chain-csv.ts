@@ -40,11 +40,23 @@ export function machineCsv(
   const target = parts[rates.target]?.name ?? `part ${rates.target + 1}`;
   const freezeTable = csvTable(
     [
-      { label: `freezes ${target}: from (${unit})`, value: (b: MachineRates['freeze'][number]) => r(b.fromHz) },
+      {
+        label: `freezes ${target}: from (${unit})`,
+        value: (b: MachineRates['freeze'][number]) => r(b.fromHz),
+      },
       { label: `to (${unit})`, value: (b: MachineRates['freeze'][number]) => r(b.toHz) },
-      { label: `single image at nominal speed (${unit})`, value: (b: MachineRates['freeze'][number]) => (b.p === 0 ? '' : r(b.lockRateHz)) },
-      { label: 'turns between flashes (pitches)', value: (b: MachineRates['freeze'][number]) => b.p },
-      { label: 'exact rate depends on actual speed', value: (b: MachineRates['freeze'][number]) => (b.dense ? 'yes' : 'no') },
+      {
+        label: `single image at nominal speed (${unit})`,
+        value: (b: MachineRates['freeze'][number]) => (b.p === 0 ? '' : r(b.lockRateHz)),
+      },
+      {
+        label: 'turns between flashes (pitches)',
+        value: (b: MachineRates['freeze'][number]) => b.p,
+      },
+      {
+        label: 'exact rate depends on actual speed',
+        value: (b: MachineRates['freeze'][number]) => (b.dense ? 'yes' : 'no'),
+      },
     ],
     rates.freeze,
   );

@@ -14,7 +14,10 @@ export const MAX_GROUND_SPEED = 1000;
 export function readPulleyMm(text: string, what: string): number {
   const mm = parseQuantity(text, 'length', 'mm', what) * 1000;
   if (!(mm > 0) || mm > MAX_PULLEY_MM) {
-    throw new InputError(what, `${capital(what)} must be above 0 mm and at most ${MAX_PULLEY_MM.toLocaleString('en-US')} mm.`);
+    throw new InputError(
+      what,
+      `${capital(what)} must be above 0 mm and at most ${MAX_PULLEY_MM.toLocaleString('en-US')} mm.`,
+    );
   }
   return mm;
 }
@@ -22,7 +25,8 @@ export function readPulleyMm(text: string, what: string): number {
 /** Belt slip, percent: the driven pulley runs up to this much slower (the core allows 0–20 %). */
 export function readBeltSlipPercent(text: string): number {
   const percent = parseQuantity(text, 'percent', '%', 'belt slip');
-  if (!(percent >= 0 && percent <= 20)) throw new InputError('belt slip', 'Belt slip must be from 0 % to 20 %.');
+  if (!(percent >= 0 && percent <= 20))
+    throw new InputError('belt slip', 'Belt slip must be from 0 % to 20 %.');
   return percent;
 }
 
@@ -31,7 +35,10 @@ export function readGroundSpeed(text: string, unit: WheelSpec['unit']): number {
   const mps = parseQuantity(text, 'groundSpeed', unit, 'ground speed');
   const value = unit === 'mph' ? mpsToMph(mps) : mpsToKmh(mps);
   if (!(Math.abs(value) <= MAX_GROUND_SPEED)) {
-    throw new InputError('ground speed', `Ground speed must be between −${MAX_GROUND_SPEED} and ${MAX_GROUND_SPEED} ${unit}.`);
+    throw new InputError(
+      'ground speed',
+      `Ground speed must be between −${MAX_GROUND_SPEED} and ${MAX_GROUND_SPEED} ${unit}.`,
+    );
   }
   return value;
 }
@@ -39,8 +46,10 @@ export function readGroundSpeed(text: string, unit: WheelSpec['unit']): number {
 /** An ISO metric tyre size such as 205/55R16, checked by the core; returns it without surrounding spaces. */
 export function readTyreSize(text: string): string {
   const size = typeof text === 'string' ? text.trim() : '';
-  if (size === '') throw new InputError('tyre size', 'Type the tyre size as on its sidewall, e.g. 205/55R16.');
-  if ([...size].length > 40) throw new InputError('tyre size', 'A tyre size is at most 40 characters, e.g. 205/55R16.');
+  if (size === '')
+    throw new InputError('tyre size', 'Type the tyre size as on its sidewall, e.g. 205/55R16.');
+  if ([...size].length > 40)
+    throw new InputError('tyre size', 'A tyre size is at most 40 characters, e.g. 205/55R16.');
   tyreDiameterM(size);
   return size;
 }

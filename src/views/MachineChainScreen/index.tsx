@@ -4,7 +4,15 @@ import { cautionFlags } from '../../lib/cautionFlags';
 import { formatNumber } from '../../lib/format';
 import { openScreen } from '../../lib/navigation';
 import { formatRate, formatRateSpan } from '../../lib/rates';
-import { chain, editChain, machineRates, partLabel, syncChainSpeeds, withDrivenPart, type DerivedPart } from '../../state/chain';
+import {
+  chain,
+  editChain,
+  machineRates,
+  partLabel,
+  syncChainSpeeds,
+  withDrivenPart,
+  type DerivedPart,
+} from '../../state/chain';
 import { check, verdictOf } from '../../state/check';
 import type { SamplerKind } from '../../state/model';
 import { openMachineName } from '../../state/openMachine';
@@ -17,7 +25,13 @@ import { RateMap } from '../RateMap';
 import { ReportBar } from '../ReportBar';
 import { ResultTable, type ResultColumn } from '../ResultTable';
 import { ToolLayout } from '../ToolLayout';
-import { freezeBandsShown, freezeRateToSet, middleHz, noStillBandsShown, type RateSpan } from './band-lists';
+import {
+  freezeBandsShown,
+  freezeRateToSet,
+  middleHz,
+  noStillBandsShown,
+  type RateSpan,
+} from './band-lists';
 import { machineCsv } from './chain-csv';
 import { PartCard, speedWords } from './part-card';
 import style from './style.module.css';
@@ -83,7 +97,8 @@ export function MachineChainScreen(_props: Props) {
       // One element: on a phone each child of a cell takes a grid cell of its own.
       cell: (p) => (
         <span>
-          <strong>{p.name}</strong> ({p.symmetry === 1 ? '1 mark' : `${formatNumber(p.symmetry)} features`})
+          <strong>{p.name}</strong> (
+          {p.symmetry === 1 ? '1 mark' : `${formatNumber(p.symmetry)} features`})
           {p.index === target && <span class={style.tag}> · to freeze</span>}
         </span>
       ),
@@ -109,7 +124,10 @@ export function MachineChainScreen(_props: Props) {
       <Cautions show={cautionFlags(cautions)} />
       {[...new Set([chainProblem, ratesProblem, editProblem])].filter(Boolean).map((message) => (
         <p key={message} class={style.problem} role="alert" data-testid="chain-problem">
-          {message} {message === editProblem ? 'Nothing was changed.' : 'The results shown are for the last entries that could be worked out.'}
+          {message}{' '}
+          {message === editProblem
+            ? 'Nothing was changed.'
+            : 'The results shown are for the last entries that could be worked out.'}
         </p>
       ))}
     </>
@@ -119,7 +137,13 @@ export function MachineChainScreen(_props: Props) {
     <Panel title="Parts and drives" id="chain-parts">
       <ol class={style.cards}>
         {s.parts.map((_, i) => (
-          <PartCard key={i} setup={s} index={i} derived={parts[i]?.index === i ? parts[i] : undefined} onProblem={setEditProblem} />
+          <PartCard
+            key={i}
+            setup={s}
+            index={i}
+            derived={parts[i]?.index === i ? parts[i] : undefined}
+            onProblem={setEditProblem}
+          />
         ))}
       </ol>
       <div class={style.addRow} data-print="hide">
@@ -139,7 +163,12 @@ export function MachineChainScreen(_props: Props) {
               </option>
             ))}
           </select>
-          <button type="button" class={style.primary} onClick={addPart} disabled={s.parts.length >= MAX_PARTS}>
+          <button
+            type="button"
+            class={style.primary}
+            onClick={addPart}
+            disabled={s.parts.length >= MAX_PARTS}
+          >
             Add part
           </button>
         </div>
@@ -151,12 +180,23 @@ export function MachineChainScreen(_props: Props) {
   const noStillShown = rates ? noStillBandsShown(rates.noStill, SHOWN_BANDS) : [];
   const freezeColumns: ReadonlyArray<ResultColumn<FreezeBand>> = [
     { label: 'Rates', cell: (b) => span(b) },
-    { label: 'Single image', cell: (b) => freezeWords(b, r.sampler === 'flash' ? 'flashes' : 'frames') },
-    { label: 'Use', cell: (b) => <RateButton hz={freezeRateToSet(b)} label={rate(freezeRateToSet(b))} onUse={useRate} /> },
+    {
+      label: 'Single image',
+      cell: (b) => freezeWords(b, r.sampler === 'flash' ? 'flashes' : 'frames'),
+    },
+    {
+      label: 'Use',
+      cell: (b) => (
+        <RateButton hz={freezeRateToSet(b)} label={rate(freezeRateToSet(b))} onUse={useRate} />
+      ),
+    },
   ];
   const noStillColumns: ReadonlyArray<ResultColumn<RateSpan>> = [
     { label: 'Rates', cell: (b) => span(b) },
-    { label: 'Use', cell: (b) => <RateButton hz={middleHz(b)} label={rate(middleHz(b))} onUse={useRate} /> },
+    {
+      label: 'Use',
+      cell: (b) => <RateButton hz={middleHz(b)} label={rate(middleHz(b))} onUse={useRate} />,
+    },
   ];
 
   const results = (
@@ -179,9 +219,16 @@ export function MachineChainScreen(_props: Props) {
             ))}
           </select>
         </div>
-        <ChoiceGroup legend="Seen by" name="chain-sampler" options={SAMPLERS} value={kind} onChange={setSamplerKind} />
+        <ChoiceGroup
+          legend="Seen by"
+          name="chain-sampler"
+          options={SAMPLERS}
+          value={kind}
+          onChange={setSamplerKind}
+        />
         <p class={style.quiet}>
-          Over {formatRateSpan(r.range.minHz, r.range.maxHz, kind, unit)}; the Check screen's rate is {rate(r.rateHz)}. Tap a rate to use it there.
+          Over {formatRateSpan(r.range.minHz, r.range.maxHz, kind, unit)}; the Check screen's rate
+          is {rate(r.rateHz)}. Tap a rate to use it there.
         </p>
         {rates && rates.listed?.minHz !== rates.range.minHz && (
           <p class={style.problem} data-testid="listed-note">
@@ -201,7 +248,9 @@ export function MachineChainScreen(_props: Props) {
         <h3 class={style.subtitle}>Freeze {partLabel(s, target)}, no other part still</h3>
         {freezeShown.length === 0 ? (
           <p class={style.quiet} data-testid="no-freeze">
-            {rates ? `No rate in the range listed freezes ${partLabel(s, target)} without another part looking still too.` : 'Not worked out yet.'}
+            {rates
+              ? `No rate in the range listed freezes ${partLabel(s, target)} without another part looking still too.`
+              : 'Not worked out yet.'}
           </p>
         ) : (
           <ResultTable
@@ -215,11 +264,17 @@ export function MachineChainScreen(_props: Props) {
         <h3 class={style.subtitle}>No part looks still</h3>
         {noStillShown.length === 0 ? (
           <p class={style.quiet} data-testid="no-no-still">
-            {rates ? 'Some part can look still at every rate in the range listed.' : 'Not worked out yet.'}
+            {rates
+              ? 'Some part can look still at every rate in the range listed.'
+              : 'Not worked out yet.'}
           </p>
         ) : (
           <ResultTable
-            caption={bandCaption(rates?.noStill.length ?? 0, noStillShown.length, 'widest shown, highest first')}
+            caption={bandCaption(
+              rates?.noStill.length ?? 0,
+              noStillShown.length,
+              'widest shown, highest first',
+            )}
             columns={noStillColumns}
             rows={noStillShown}
             rowKey={(b) => `${b.fromHz}-${b.toHz}`}
@@ -227,12 +282,18 @@ export function MachineChainScreen(_props: Props) {
           />
         )}
         <p class={style.quiet}>
-          Parts may still look slow or backward in these bands: the Check screen and the rate map show how each looks.
+          Parts may still look slow or backward in these bands: the Check screen and the rate map
+          show how each looks.
         </p>
       </Panel>
       <Panel title="Rate map" id="chain-map">
         <RateMap
-          parts={parts.map((p) => ({ name: p.name, speedHz: p.speedHz, symmetry: p.symmetry, tolerance: p.tolerance }))}
+          parts={parts.map((p) => ({
+            name: p.name,
+            speedHz: p.speedHz,
+            symmetry: p.symmetry,
+            tolerance: p.tolerance,
+          }))}
           range={r.range}
           rateHz={r.rateHz}
           onRateChange={useRate}
@@ -250,10 +311,26 @@ export function MachineChainScreen(_props: Props) {
     </>
   );
 
-  return <ToolLayout testId="machine-chain-screen" summary={summary} warnings={warnings} entries={entries} results={results} />;
+  return (
+    <ToolLayout
+      testId="machine-chain-screen"
+      summary={summary}
+      warnings={warnings}
+      entries={entries}
+      results={results}
+    />
+  );
 }
 
-function RateButton({ hz, label, onUse }: { hz: number; label: string; onUse: (hz: number) => void }) {
+function RateButton({
+  hz,
+  label,
+  onUse,
+}: {
+  hz: number;
+  label: string;
+  onUse: (hz: number) => void;
+}) {
   return (
     <button type="button" class={style.rateButton} onClick={() => onUse(hz)}>
       {label}
@@ -275,5 +352,7 @@ function freezeWords(b: FreezeBand, samples: 'flashes' | 'frames'): string {
 
 function bandCaption(total: number, shown: number, order: string): string {
   const all = `${total} ${total === 1 ? 'band' : 'bands'}`;
-  return shown < total ? `${all}; ${shown} shown (${order}), all in the CSV` : `${all} (${order.replace(/^widest shown, /, '')})`;
+  return shown < total
+    ? `${all}; ${shown} shown (${order}), all in the CSV`
+    : `${all} (${order.replace(/^widest shown, /, '')})`;
 }

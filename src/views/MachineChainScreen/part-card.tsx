@@ -1,6 +1,13 @@
 import { useEffect, useState } from 'preact/hooks';
 import { kmhToMps, mpsToKmh, mpsToMph, mphToMps } from '../../core';
-import { readFeatures, readField, readPoles, readSlipPercent, readSpeedRpm, readTolerancePercent } from '../../lib/fields';
+import {
+  readFeatures,
+  readField,
+  readPoles,
+  readSlipPercent,
+  readSpeedRpm,
+  readTolerancePercent,
+} from '../../lib/fields';
 import { formatNumber, numberForField } from '../../lib/format';
 import { readTeeth } from '../../lib/toolFields';
 import {
@@ -65,7 +72,11 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
     <li class={style.card} data-testid={`chain-part-${index}`}>
       <div class={style.cardHead}>
         <span class={style.number}>{index + 1}</span>
-        <NameField id={id('name')} name={part.name} onName={(name) => act((s) => withPartFields(s, index, { name }))} />
+        <NameField
+          id={id('name')}
+          name={part.name}
+          onName={(name) => act((s) => withPartFields(s, index, { name }))}
+        />
       </div>
       <NumberField
         id={id('features')}
@@ -93,10 +104,28 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
           unit="rpm"
         />
       )}
-      {source === 'motor' && part.motor && <MotorFields id={id} motor={part.motor} onMotor={(m) => act((s) => withMotor(s, index, m))} />}
-      {source === 'wheel' && part.wheel && <WheelFields id={id} wheel={part.wheel} onWheel={(w) => act((s) => withWheel(s, index, w))} />}
+      {source === 'motor' && part.motor && (
+        <MotorFields
+          id={id}
+          motor={part.motor}
+          onMotor={(m) => act((s) => withMotor(s, index, m))}
+        />
+      )}
+      {source === 'wheel' && part.wheel && (
+        <WheelFields
+          id={id}
+          wheel={part.wheel}
+          onWheel={(w) => act((s) => withWheel(s, index, w))}
+        />
+      )}
       {source === 'drive' && part.drive && (
-        <DriveFields id={id} setup={setup} index={index} drive={part.drive} onDrive={(d) => act((s) => withDrive(s, index, d))} />
+        <DriveFields
+          id={id}
+          setup={setup}
+          index={index}
+          drive={part.drive}
+          onDrive={(d) => act((s) => withDrive(s, index, d))}
+        />
       )}
       {source !== 'drive' && (
         <NumberField
@@ -129,12 +158,23 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
 /** "1,015 rpm ± 2 % (995 – 1,035 rpm), the other way to the first part". */
 export function speedWords(p: DerivedPart): string {
   const rpm = formatNumber(Math.abs(p.speedHz * 60));
-  const band = p.tolerance > 0 ? ` ± ${formatNumber(p.tolerance * 100)} % (${formatNumber(p.lowHz * 60)} – ${formatNumber(p.highHz * 60)} rpm)` : '';
+  const band =
+    p.tolerance > 0
+      ? ` ± ${formatNumber(p.tolerance * 100)} % (${formatNumber(p.lowHz * 60)} – ${formatNumber(p.highHz * 60)} rpm)`
+      : '';
   const way = p.ratioToRoot < 0 ? ', turning the other way to the start of its chain' : '';
   return `${rpm} rpm${band}${way}`;
 }
 
-function NameField({ id, name, onName }: { id: string; name: string; onName: (name: string) => void }) {
+function NameField({
+  id,
+  name,
+  onName,
+}: {
+  id: string;
+  name: string;
+  onName: (name: string) => void;
+}) {
   return (
     <div class={style.nameField}>
       <label class={style.label} for={id}>
@@ -172,7 +212,14 @@ function MotorFields({ id, motor, onMotor }: MotorProps) {
         onChange={(v) => onMotor({ ...motor, mainsHz: v === '60' ? 60 : 50 })}
       />
       <div class={style.pair}>
-        <NumberField id={id('poles')} label="Poles" value={motor.poles} toText={numberForField} read={readPoles} onValue={(poles) => onMotor({ ...motor, poles })} />
+        <NumberField
+          id={id('poles')}
+          label="Poles"
+          value={motor.poles}
+          toText={numberForField}
+          read={readPoles}
+          onValue={(poles) => onMotor({ ...motor, poles })}
+        />
         <NumberField
           id={id('slip')}
           label="Slip"
@@ -215,20 +262,34 @@ function WheelFields({ id, wheel, onWheel }: WheelProps) {
             class={style.select}
             aria-label="Ground speed unit"
             value={wheel.unit}
-            onChange={(e) => changeUnit((e.currentTarget as HTMLSelectElement).value as WheelSpec['unit'])}
+            onChange={(e) =>
+              changeUnit((e.currentTarget as HTMLSelectElement).value as WheelSpec['unit'])
+            }
           >
             <option value="km/h">km/h</option>
             <option value="mph">mph</option>
           </select>
         }
       />
-      <TyreField id={id('tyre')} size={wheel.tyreSize} onSize={(tyreSize) => onWheel({ ...wheel, tyreSize })} />
+      <TyreField
+        id={id('tyre')}
+        size={wheel.tyreSize}
+        onSize={(tyreSize) => onWheel({ ...wheel, tyreSize })}
+      />
     </div>
   );
 }
 
 /** A tyre size, checked at each keystroke like a number field: bad text keeps the last good size. */
-function TyreField({ id, size, onSize }: { id: string; size: string; onSize: (size: string) => void }) {
+function TyreField({
+  id,
+  size,
+  onSize,
+}: {
+  id: string;
+  size: string;
+  onSize: (size: string) => void;
+}) {
   const [text, setText] = useState(size);
   const [message, setMessage] = useState<string | null>(null);
   useEffect(() => {
@@ -299,7 +360,9 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
   ];
   const changeKind = (kind: PartDrive['kind']) => {
     if (kind === drive.kind) return;
-    onDrive(kind === 'shaft' ? { from: drive.from, kind } : { ...NEW_DRIVE[kind], from: drive.from });
+    onDrive(
+      kind === 'shaft' ? { from: drive.from, kind } : { ...NEW_DRIVE[kind], from: drive.from },
+    );
   };
   return (
     <div class={style.group}>
@@ -311,7 +374,9 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
           id={id('from')}
           class={style.select}
           value={String(drive.from)}
-          onChange={(e) => onDrive({ ...drive, from: Number((e.currentTarget as HTMLSelectElement).value) })}
+          onChange={(e) =>
+            onDrive({ ...drive, from: Number((e.currentTarget as HTMLSelectElement).value) })
+          }
         >
           {setup.parts.slice(0, index).map((_, i) => (
             <option key={i} value={String(i)}>
@@ -320,7 +385,13 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
           ))}
         </select>
       </div>
-      <ChoiceGroup legend="Drive" name={id('kind')} options={kinds} value={drive.kind} onChange={changeKind} />
+      <ChoiceGroup
+        legend="Drive"
+        name={id('kind')}
+        options={kinds}
+        value={drive.kind}
+        onChange={changeKind}
+      />
       {drive.kind === 'belt' && (
         <>
           <div class={style.pair}>

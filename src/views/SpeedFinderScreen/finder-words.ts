@@ -35,7 +35,10 @@ export function finderCsv(
   readings: readonly RecordedReading[],
   nextRateFpm: number | undefined,
 ): string {
-  const at = nextRateFpm === undefined ? 'at next rate' : `at ${Math.round(nextRateFpm * 100) / 100} flashes/min`;
+  const at =
+    nextRateFpm === undefined
+      ? 'at next rate'
+      : `at ${Math.round(nextRateFpm * 100) / 100} flashes/min`;
   const table = csvTable(
     [
       { label: 'speed (rpm)', value: (c: StepCandidate) => c.rpm },

@@ -113,7 +113,12 @@ export function SpeedFinderScreen(_props: Props) {
     { label: 'Speed', numeric: true, cell: (c) => <strong>{formatNumber(c.rpm)} rpm</strong> },
     {
       label: 'Standing',
-      cell: (c) => (c.likeliest ? <strong class={style.likeliest}>{candidateStatus(c)}</strong> : candidateStatus(c)),
+      cell: (c) =>
+        c.likeliest ? (
+          <strong class={style.likeliest}>{candidateStatus(c)}</strong>
+        ) : (
+          candidateStatus(c)
+        ),
     },
     { label: 'Why', cell: (c) => c.note },
     ...(nextRate === undefined
@@ -142,14 +147,15 @@ export function SpeedFinderScreen(_props: Props) {
             />
             {candidates.length > SHOWN_CANDIDATES && (
               <p class={style.quiet}>
-                {candidates.length - SHOWN_CANDIDATES} slower-ranked speeds are left out here; the CSV holds them all.
+                {candidates.length - SHOWN_CANDIDATES} slower-ranked speeds are left out here; the
+                CSV holds them all.
               </p>
             )}
           </>
         )}
         <p class={style.quiet}>
-          A strobe cannot tell the direction of turning; speeds are given without it. Speeds found with several blades are
-          the single-image rate divided by the blade count.
+          A strobe cannot tell the direction of turning; speeds are given without it. Speeds found
+          with several blades are the single-image rate divided by the blade count.
         </p>
       </Panel>
       <SavePanel speedHz={step?.stage === 'done' ? step.speedHz : undefined} />
@@ -162,7 +168,15 @@ export function SpeedFinderScreen(_props: Props) {
     </>
   );
 
-  return <ToolLayout testId="speed-finder-screen" summary={summary} warnings={warnings} entries={entries} results={results} />;
+  return (
+    <ToolLayout
+      testId="speed-finder-screen"
+      summary={summary}
+      warnings={warnings}
+      entries={entries}
+      results={results}
+    />
+  );
 }
 
 /** The expected range in rpm for the hint under it, or nothing when there is none or it is refused. */

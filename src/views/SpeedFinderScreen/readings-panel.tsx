@@ -46,7 +46,9 @@ export function ReadingsPanel({ proposedFpm, proposedImages }: Props) {
         onChange={(u) => (flashUnit.value = u)}
       />
       {list.length === 0 ? (
-        <p class={style.quiet}>No readings yet. Follow the step above and record each rate where the image stood still.</p>
+        <p class={style.quiet}>
+          No readings yet. Follow the step above and record each rate where the image stood still.
+        </p>
       ) : (
         <ol class={style.readings} data-testid="reading-list">
           {list.map((r, i) => (
@@ -141,7 +143,9 @@ function NewReading({ proposedFpm, proposedImages }: Props) {
   // text would otherwise add the last good one.
   const add = (event: Event) => {
     event.preventDefault();
-    const input = (event.currentTarget as HTMLFormElement).querySelector<HTMLInputElement>('#new-reading-rate');
+    const input = (event.currentTarget as HTMLFormElement).querySelector<HTMLInputElement>(
+      '#new-reading-rate',
+    );
     const reading = readField(input?.value ?? '', read);
     if (!reading.ok) {
       setRefused(true);
@@ -166,7 +170,12 @@ function NewReading({ proposedFpm, proposedImages }: Props) {
         }}
         unit={unit === 'fpm' ? 'fpm' : 'Hz'}
       />
-      <ImagesChoice id="new-reading-images" label="Images standing still" value={images} onChange={setImages} />
+      <ImagesChoice
+        id="new-reading-images"
+        label="Images standing still"
+        value={images}
+        onChange={setImages}
+      />
       <button type="submit" class={style.primary}>
         Add reading
       </button>

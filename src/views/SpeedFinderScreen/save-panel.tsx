@@ -30,10 +30,16 @@ export function SavePanel({ speedHz }: Props) {
     if (speedHz === undefined) return;
     setBusy(true);
     try {
-      setOutcome({ kind: 'done', lines: await saveFoundSpeed(speedHz, featuresInUse.peek(), target) });
+      setOutcome({
+        kind: 'done',
+        lines: await saveFoundSpeed(speedHz, featuresInUse.peek(), target),
+      });
       if (target.kind === 'new') setName('');
     } catch (error) {
-      setOutcome({ kind: 'problem', lines: [error instanceof Error ? error.message : String(error)] });
+      setOutcome({
+        kind: 'problem',
+        lines: [error instanceof Error ? error.message : String(error)],
+      });
     } finally {
       setBusy(false);
     }
@@ -42,14 +48,22 @@ export function SavePanel({ speedHz }: Props) {
   return (
     <Panel title="Save speed to a machine" id="finder-save">
       {speedHz === undefined ? (
-        <p class={style.quiet}>When the steps end with one speed, it can be saved here as the speed of {part}.</p>
+        <p class={style.quiet}>
+          When the steps end with one speed, it can be saved here as the speed of {part}.
+        </p>
       ) : (
         <>
           <p>
-            Found: <strong data-testid="found-speed">{formatNumber(speedHz * 60)} rpm</strong>, for {part} on the Check screen.
+            Found: <strong data-testid="found-speed">{formatNumber(speedHz * 60)} rpm</strong>, for{' '}
+            {part} on the Check screen.
           </p>
           {machineName ? (
-            <button type="button" class={style.primary} disabled={busy} onClick={() => void save({ kind: 'open' })}>
+            <button
+              type="button"
+              class={style.primary}
+              disabled={busy}
+              onClick={() => void save({ kind: 'open' })}
+            >
               Save speed to “{machineName}”
             </button>
           ) : (
@@ -79,13 +93,23 @@ export function SavePanel({ speedHz }: Props) {
               </div>
             </form>
           )}
-          <button type="button" class={style.quietButton} disabled={busy} onClick={() => void save({ kind: 'setup' })}>
+          <button
+            type="button"
+            class={style.quietButton}
+            disabled={busy}
+            onClick={() => void save({ kind: 'setup' })}
+          >
             Use it on the Check screen only
           </button>
         </>
       )}
       {outcome && (
-        <ul class={style.outcome} data-kind={outcome.kind} role={outcome.kind === 'problem' ? 'alert' : 'status'} data-testid="save-outcome">
+        <ul
+          class={style.outcome}
+          data-kind={outcome.kind}
+          role={outcome.kind === 'problem' ? 'alert' : 'status'}
+          data-testid="save-outcome"
+        >
           {outcome.lines.map((line) => (
             <li key={line}>{line}</li>
           ))}

@@ -1,8 +1,19 @@
 import { InputError } from '../../core';
-import { readFeatures, readFlashRateFpm, readPoles, readSlipPercent, readSpeedRpm } from '../../lib/fields';
+import {
+  readFeatures,
+  readFlashRateFpm,
+  readPoles,
+  readSlipPercent,
+  readSpeedRpm,
+} from '../../lib/fields';
 import { formatNumber, numberForField } from '../../lib/format';
 import { activePart, flashUnit, setStrobeRange, setup } from '../../state/setup';
-import { expectation, featuresInUse, finderFeatures, type Expectation } from '../../state/speedFinder';
+import {
+  expectation,
+  featuresInUse,
+  finderFeatures,
+  type Expectation,
+} from '../../state/speedFinder';
 import { ChoiceGroup } from '../ChoiceGroup';
 import { NumberField } from '../NumberField';
 import { Panel } from '../Panel';
@@ -59,7 +70,8 @@ export function FinderSetupPanel({ expectedRpm }: Props) {
           toText={rateText}
           read={(text) => {
             const v = readFlashRateFpm(text, unit, 'lowest rate');
-            if (v >= setup.peek().strobe.maxFpm) throw new InputError('lowest rate', 'The lowest rate must be below the highest.');
+            if (v >= setup.peek().strobe.maxFpm)
+              throw new InputError('lowest rate', 'The lowest rate must be below the highest.');
             return v;
           }}
           onValue={(v) => setStrobeRange(v, setup.peek().strobe.maxFpm)}
@@ -73,7 +85,8 @@ export function FinderSetupPanel({ expectedRpm }: Props) {
           toText={rateText}
           read={(text) => {
             const v = readFlashRateFpm(text, unit, 'highest rate');
-            if (v <= setup.peek().strobe.minFpm) throw new InputError('highest rate', 'The highest rate must be above the lowest.');
+            if (v <= setup.peek().strobe.minFpm)
+              throw new InputError('highest rate', 'The highest rate must be above the lowest.');
             return v;
           }}
           onValue={(v) => setStrobeRange(setup.peek().strobe.minFpm, v)}
@@ -91,14 +104,18 @@ export function FinderSetupPanel({ expectedRpm }: Props) {
         value={e.mode}
         onChange={(mode) => {
           if (mode === e.mode) return;
-          change({ mode, ...(mode === 'rpm' ? startRpmRange() : mode === 'motor' ? startMotor() : {}) });
+          change({
+            mode,
+            ...(mode === 'rpm' ? startRpmRange() : mode === 'motor' ? startMotor() : {}),
+          });
         }}
       />
       {e.mode === 'rpm' && <RpmRange e={e} />}
       {e.mode === 'motor' && <MotorRange e={e} />}
       {expectedRpm && (
         <p class={style.quiet} data-testid="expected-range">
-          Expected {formatNumber(expectedRpm.from)} – {formatNumber(expectedRpm.to)} rpm: speeds inside it rank first.
+          Expected {formatNumber(expectedRpm.from)} – {formatNumber(expectedRpm.to)} rpm: speeds
+          inside it rank first.
         </p>
       )}
     </Panel>
@@ -115,8 +132,10 @@ function RpmRange({ e }: { e: Expectation }) {
         toText={numberForField}
         read={(text) => {
           const v = Math.abs(readSpeedRpm(text, 'rpm'));
-          if (!(v > 0)) throw new InputError('from', 'The lowest expected speed must be above 0 rpm.');
-          if (v >= expectation.peek().toRpm) throw new InputError('from', 'The lowest speed must be below the highest.');
+          if (!(v > 0))
+            throw new InputError('from', 'The lowest expected speed must be above 0 rpm.');
+          if (v >= expectation.peek().toRpm)
+            throw new InputError('from', 'The lowest speed must be below the highest.');
           return v;
         }}
         onValue={(fromRpm) => change({ fromRpm })}
@@ -129,7 +148,8 @@ function RpmRange({ e }: { e: Expectation }) {
         toText={numberForField}
         read={(text) => {
           const v = Math.abs(readSpeedRpm(text, 'rpm'));
-          if (v <= expectation.peek().fromRpm) throw new InputError('to', 'The highest speed must be above the lowest.');
+          if (v <= expectation.peek().fromRpm)
+            throw new InputError('to', 'The highest speed must be above the lowest.');
           return v;
         }}
         onValue={(toRpm) => change({ toRpm })}
@@ -152,7 +172,14 @@ function MotorRange({ e }: { e: Expectation }) {
         value={e.mainsHz === 60 ? '60' : '50'}
         onChange={(v) => change({ mainsHz: v === '60' ? 60 : 50 })}
       />
-      <NumberField id="expect-poles" label="Poles" value={e.poles} toText={numberForField} read={readPoles} onValue={(poles) => change({ poles })} />
+      <NumberField
+        id="expect-poles"
+        label="Poles"
+        value={e.poles}
+        toText={numberForField}
+        read={readPoles}
+        onValue={(poles) => change({ poles })}
+      />
       <div class={style.pair}>
         <NumberField
           id="expect-slip-min"
@@ -161,7 +188,8 @@ function MotorRange({ e }: { e: Expectation }) {
           toText={numberForField}
           read={(text) => {
             const v = readSlipPercent(text);
-            if (v >= expectation.peek().maxSlipPercent) throw new InputError('slip', 'The smallest slip must be below the largest.');
+            if (v >= expectation.peek().maxSlipPercent)
+              throw new InputError('slip', 'The smallest slip must be below the largest.');
             return v;
           }}
           onValue={(minSlipPercent) => change({ minSlipPercent })}
@@ -174,14 +202,18 @@ function MotorRange({ e }: { e: Expectation }) {
           toText={numberForField}
           read={(text) => {
             const v = readSlipPercent(text);
-            if (v <= expectation.peek().minSlipPercent) throw new InputError('slip', 'The largest slip must be above the smallest.');
+            if (v <= expectation.peek().minSlipPercent)
+              throw new InputError('slip', 'The largest slip must be above the smallest.');
             return v;
           }}
           onValue={(maxSlipPercent) => change({ maxSlipPercent })}
           unit="%"
         />
       </div>
-      <p class={style.quiet}>Unloaded near 0 %, full load a few percent (typical full-load speeds are 1.7–4 % below synchronous).</p>
+      <p class={style.quiet}>
+        Unloaded near 0 %, full load a few percent (typical full-load speeds are 1.7–4 % below
+        synchronous).
+      </p>
     </div>
   );
 }
