@@ -50,7 +50,11 @@ export function AppFrame({ notices, children }: Props) {
           ))}
         </nav>
       </header>
-      {notices && <div class={style.notices}>{notices}</div>}
+      {notices && (
+        <div class={style.notices} data-print="hide">
+          {notices}
+        </div>
+      )}
       <main class={style.main}>{children}</main>
     </div>
   );
