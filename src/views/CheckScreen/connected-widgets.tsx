@@ -3,7 +3,7 @@
 import { check } from '../../state/check';
 import { flashUnit, setSamplerRateHz, setup } from '../../state/setup';
 import { Panel } from '../Panel';
-import { useWidgets } from './lazy-widgets';
+import { widgets as lazyWidgets } from './lazy-widgets';
 import { previewInputOf, rateMapInputOf } from './widget-inputs';
 import style from './style.module.css';
 
@@ -15,7 +15,7 @@ import style from './style.module.css';
 export function CheckPreview() {
   const result = check.value;
   const input = previewInputOf(result, setup.value);
-  const { widgets, failed } = useWidgets();
+  const { module: widgets, failed } = lazyWidgets.use();
   return (
     <Panel title="Preview" id="preview">
       {input === null ? (
@@ -44,7 +44,7 @@ export function CheckPreview() {
 export function CheckRateMap() {
   const result = check.value;
   const input = rateMapInputOf(result, setup.value);
-  const { widgets, failed } = useWidgets();
+  const { module: widgets, failed } = lazyWidgets.use();
   return (
     <Panel title="Rate map" id="rate-map">
       {widgets ? (

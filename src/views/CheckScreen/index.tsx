@@ -43,7 +43,9 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
         <Cautions />
         {(problem || notes.length > 0) && (
           <ul class={style.notes} data-testid="check-notes">
-            {problem && <li>{problem} The results shown are for the last set-up that could be worked out.</li>}
+            {problem && (
+              <li>{problem} The results shown are for the last set-up that could be worked out.</li>
+            )}
             {notes.map((n) => (
               <li key={n}>{n}</li>
             ))}
