@@ -47,6 +47,7 @@ export { gcd } from './gcd';
 export { plainNumber } from './plainNumber';
 export {
   safetyCautions,
+  cautionFlags,
   SEIZURE_RISK_LOW_HZ,
   SEIZURE_RISK_HIGH_HZ,
   type CautionContext,

@@ -14,6 +14,32 @@ export interface CautionContext {
 export const SEIZURE_RISK_LOW_HZ = 3;
 export const SEIZURE_RISK_HIGH_HZ = 60;
 
+/** A flash rate in the photosensitive-seizure range, ends included (physics.md §10). */
+function inSeizureRange(hz: number): boolean {
+  return hz >= SEIZURE_RISK_LOW_HZ && hz <= SEIZURE_RISK_HIGH_HZ;
+}
+
+/**
+ * Which of the two cautions of physics.md §10 a context calls for: the single rule behind
+ * safetyCautions and the on-screen caution boxes. A rate that is not a finite number counts
+ * as out of range here (safetyCautions refuses it before asking).
+ * @example cautionFlags({ apparentStillness: true, flashRatesHz: [100] }) // { safety: true, photosensitivity: false }
+ */
+export function cautionFlags(context: CautionContext): {
+  safety: boolean;
+  photosensitivity: boolean;
+} {
+  const sweep = context.flashSweepHz;
+  return {
+    safety: context.apparentStillness === true,
+    photosensitivity:
+      (context.flashRatesHz ?? []).some(inSeizureRange) ||
+      (sweep !== undefined &&
+        sweep.minHz <= SEIZURE_RISK_HIGH_HZ &&
+        sweep.maxHz >= SEIZURE_RISK_LOW_HZ),
+  };
+}
+
 /**
  * The safety cautions of physics.md §10 that apply to a result, in our own words, most
  * important first. The planning-aid caution always applies.
@@ -23,25 +49,21 @@ export const SEIZURE_RISK_HIGH_HZ = 60;
  * @example safetyCautions({ flashRatesHz: [100] }).length // 1 (only the planning-aid caution)
  */
 export function safetyCautions(context: CautionContext = {}): string[] {
+  (context.flashRatesHz ?? []).forEach((r, i) => requireFinite(r, `flash rate ${i + 1}`));
+  if (context.flashSweepHz !== undefined) {
+    requireFinite(context.flashSweepHz.minHz, 'lowest rate of the sweep');
+    requireFinite(context.flashSweepHz.maxHz, 'highest rate of the sweep');
+  }
+  const flags = cautionFlags(context);
   const out: string[] = [];
-  if (context.apparentStillness) {
+  if (flags.safety) {
     out.push(
       'A part that looks still, slow or backward is still turning at full speed. Never reach in, ' +
         'open a guard or touch it because of how it looks: stop it, isolate and lock out the machine ' +
         'first (local rules, e.g. OSHA 29 CFR 1910.147, ISO 14118).',
     );
   }
-  const rates = (context.flashRatesHz ?? []).map((r, i) => requireFinite(r, `flash rate ${i + 1}`));
-  const sweep = context.flashSweepHz;
-  const sweepLow =
-    sweep === undefined ? Infinity : requireFinite(sweep.minHz, 'lowest rate of the sweep');
-  const sweepHigh =
-    sweep === undefined ? -Infinity : requireFinite(sweep.maxHz, 'highest rate of the sweep');
-  const inRisk = (r: number) => r >= SEIZURE_RISK_LOW_HZ && r <= SEIZURE_RISK_HIGH_HZ;
-  if (
-    rates.some(inRisk) ||
-    (sweepLow <= SEIZURE_RISK_HIGH_HZ && sweepHigh >= SEIZURE_RISK_LOW_HZ)
-  ) {
+  if (flags.photosensitivity) {
     out.push(
       'Flashing between about 3 and 60 times a second can trigger seizures in people with ' +
         'photosensitive epilepsy (WCAG 2.x success criterion 2.3.1 uses three flashes a second). ' +

@@ -7,6 +7,7 @@ import {
   apparentMotion,
   blurDegrees,
   blurPitches,
+  cautionFlags,
   defaultLookOptions,
   exposureFromShutterAngle,
   flickerLimits,
@@ -133,8 +134,6 @@ export const CREEP_LIMIT_RPM = 60;
 export const SHARP_BLUR_DEG = 1;
 /** Rolling-shutter bend up to this looks straight, degrees (a judgement). */
 export const STRAIGHT_SKEW_DEG = 2;
-/** Flash rates between these, per second, can trigger seizures (physics.md §10, WCAG 2.x 2.3.1 uses 3). */
-export const PHOTOSENSITIVE_HZ = { low: 3, high: 60 } as const;
 /**
  * Safe bands narrower than this share of their rate are too narrow to hold a sampler in
  * (speed drift, dial steps); they are listed only when there is nothing wider (a judgement).
@@ -426,7 +425,7 @@ export function computeCheck(s: Setup): CheckResult {
     camera,
     lighting,
     showSafety: verdict.trust === 'danger',
-    showPhotosensitivity: flashes && rateHz >= PHOTOSENSITIVE_HZ.low && rateHz <= PHOTOSENSITIVE_HZ.high,
+    showPhotosensitivity: flashes && cautionFlags({ flashRatesHz: [rateHz] }).photosensitivity,
     notes,
   };
 }

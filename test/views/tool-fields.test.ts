@@ -1,6 +1,5 @@
 import { beforeEach, describe, expect, test } from 'vitest';
-import { InputError, safetyCautions } from '../../src/core';
-import { cautionFlags } from '../../src/lib/cautionFlags';
+import { cautionFlags, InputError, safetyCautions } from '../../src/core';
 import { readExposureSeconds } from '../../src/lib/fields';
 import {
   readBits,

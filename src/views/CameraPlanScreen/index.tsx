@@ -1,11 +1,11 @@
 import {
+  cautionFlags,
   csvTable,
   standardFrameRates,
   type CameraPlan,
   type CameraSetting,
   type CsvColumn,
 } from '../../core';
-import { cautionFlags } from '../../lib/cautionFlags';
 import {
   readCreepRpm,
   readExposureSeconds,

@@ -1,5 +1,10 @@
-import { csvTable, type CsvColumn, type LightingCheck, type PartUnderLight } from '../../core';
-import { cautionFlags } from '../../lib/cautionFlags';
+import {
+  cautionFlags,
+  csvTable,
+  type CsvColumn,
+  type LightingCheck,
+  type PartUnderLight,
+} from '../../core';
 import { formatNumber } from '../../lib/format';
 import { lighting, lightingCautions } from '../../state/lighting';
 import { openMachineName } from '../../state/openMachine';

@@ -1,6 +1,5 @@
 import { useState } from 'preact/hooks';
-import { apparentMotion, type CautionContext, type FreezeBand } from '../../core';
-import { cautionFlags } from '../../lib/cautionFlags';
+import { apparentMotion, cautionFlags, type CautionContext, type FreezeBand } from '../../core';
 import { formatNumber } from '../../lib/format';
 import { openScreen } from '../../lib/navigation';
 import { formatRate, formatRateSpan } from '../../lib/rates';
