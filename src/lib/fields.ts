@@ -20,7 +20,8 @@ export function readField(text: string, reader: (text: string) => number): Field
   }
 }
 
-function sentence(text: string): string {
+/** The text with its first letter in capitals, to open a message with a field's name. */
+export function sentence(text: string): string {
   return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
@@ -40,13 +41,6 @@ function above(value: number, min: number, max: number, what: string, unit = '')
   return value;
 }
 
-function whole(value: number, min: number, max: number, what: string): number {
-  if (!Number.isInteger(value) || value < min || value > max) {
-    throw new InputError(what, `${sentence(what)} must be a whole number from ${min} to ${max}.`);
-  }
-  return value;
-}
-
 /** Fastest speed accepted: beyond any machine part a person checks with a strobe or camera. */
 export const MAX_SPEED_RPM = 1_000_000;
 /** Fastest sampler accepted, Hz: strobes reach a few kHz, high-speed cameras far more. */
@@ -60,22 +54,32 @@ export function readSpeedRpm(text: string, unit: SpeedUnit): number {
   return within(hz * 60, -MAX_SPEED_RPM, MAX_SPEED_RPM, 'speed', 'rpm');
 }
 
+/** Text that stands for a plain number: an optional sign, digits with grouping or a decimal mark, nothing else. */
+const BARE_NUMBER = /^[+\-−]?[\d\s.,'\u00a0\u202f]+$/;
+
 /**
- * A count such as "6" or "6 blades". parseNumber ignores whatever follows the number, so
- * the words after it are checked here: "1/0" or "12abc" is not a count.
+ * A whole number from min to max, such as "6" or "6 blades": trailing words are allowed only
+ * when `words` matches them. parseNumber ignores whatever follows the number, so the rest is
+ * checked here: "1/0" or "12abc" is not a whole number.
+ * @example readWhole('6 blades', 'features', 1, 100, /\s*blades?$/i) // 6
  */
-function readCount(text: string, what: string, words: RegExp): number {
-  const bare = typeof text === 'string' ? text.trim().replace(words, '').trim() : text;
-  if (typeof bare === 'string' && bare !== '' && !/^[+\-−]?[\d\s.,'\u00a0\u202f]+$/.test(bare)) {
-    throw new InputError(what, `"${text.trim().slice(0, 24)}" is not a whole number.`);
+export function readWhole(text: string, what: string, min: number, max: number, words?: RegExp): number {
+  const trimmed = typeof text === 'string' ? text.trim() : '';
+  const bare = words ? trimmed.replace(words, '').trim() : trimmed;
+  if (bare !== '' && !BARE_NUMBER.test(bare)) {
+    throw new InputError(what, `"${trimmed.slice(0, 24)}" is not a whole number.`);
   }
-  return parseNumber(text, what);
+  const n = parseNumber(bare === '' ? text : bare, what);
+  if (!Number.isInteger(n) || n < min || n > max) {
+    throw new InputError(what, `${sentence(what)} must be a whole number from ${min} to ${max}.`);
+  }
+  return n;
 }
 
 /** Identical features on the part: blades, spokes, jaws, bolts. */
 export function readFeatures(text: string): number {
-  const n = readCount(text, 'features', /\s*(blades?|spokes?|jaws?|bolts?|marks?|features?|teeth|tooth)$/i);
-  return whole(n, 1, Math.min(MAX_SYMMETRY, 10_000), 'features');
+  const words = /\s*(blades?|spokes?|jaws?|bolts?|marks?|features?|teeth|tooth)$/i;
+  return readWhole(text, 'features', 1, Math.min(MAX_SYMMETRY, 10_000), words);
 }
 
 /** Speed tolerance, ± percent. */
@@ -85,7 +89,7 @@ export function readTolerancePercent(text: string): number {
 
 /** Motor poles: an even whole number. */
 export function readPoles(text: string): number {
-  const poles = whole(readCount(text, 'poles', /\s*poles?$/i), 2, 200, 'poles');
+  const poles = readWhole(text, 'poles', 2, 200, /\s*poles?$/i);
   if (poles % 2 !== 0) throw new InputError('poles', 'Poles come in pairs: give an even number such as 2, 4 or 6.');
   return poles;
 }

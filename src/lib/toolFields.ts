@@ -3,33 +3,9 @@
 // fields.ts, each takes the raw text and returns the value in the planner's units (Hz, s, Ω, F,
 // whole counts) or throws the core's InputError with a message fit to show beside the field.
 import { InputError, parseNumber, parseQuantity } from '../core';
+import { readWhole, sentence as capital } from './fields';
 
-function capital(text: string): string {
-  return text.charAt(0).toUpperCase() + text.slice(1);
-}
-
-/** Text that stands for a plain number: digits with grouping or a decimal mark, nothing else. */
-const BARE_NUMBER = /^[+]?\d[\d\s.,'\u00a0\u202f]*$/;
-
-/** A whole number from min to max; trailing words (such as "blades") are allowed only when `words` matches them. */
-export function readWhole(
-  text: string,
-  what: string,
-  min: number,
-  max: number,
-  words?: RegExp,
-): number {
-  const trimmed = typeof text === 'string' ? text.trim() : '';
-  const bare = words ? trimmed.replace(words, '').trim() : trimmed;
-  if (trimmed !== '' && !BARE_NUMBER.test(bare)) {
-    throw new InputError(what, `"${trimmed.slice(0, 24)}" is not a whole number.`);
-  }
-  const n = parseNumber(bare === '' ? trimmed : bare, what);
-  if (!Number.isInteger(n) || n < min || n > max) {
-    throw new InputError(what, `${capital(what)} must be a whole number from ${min} to ${max}.`);
-  }
-  return n;
-}
+export { readWhole };
 
 /** Highest frequency the logger tools accept, Hz: far above any data logger or vibration sensor. */
 export const MAX_LOGGER_HZ = 1e9;
