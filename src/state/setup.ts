@@ -55,10 +55,6 @@ export function setTolerancePercent(tolerancePercent: number): void {
   updatePart((p) => ({ ...p, tolerancePercent }));
 }
 
-export function setPartName(name: string): void {
-  updatePart((p) => ({ ...p, name }));
-}
-
 /** Motor defaults when the speed first comes from a motor: 4 poles on 50 Hz, 3 % slip (common practice). */
 export const defaultMotor = { mainsHz: 50, poles: 4, slipPercent: 3 } as const;
 
