@@ -6,13 +6,16 @@ import { AppFrame } from './views/AppFrame';
 import { Banner } from './views/Banner';
 import { CheckScreen } from './views/CheckScreen';
 import { MachinesScreen } from './views/MachinesScreen';
-import { LightingScreen } from './views/LightingScreen';
-import { CameraPlanScreen } from './views/CameraPlanScreen';
-import { LoggerScreen } from './views/LoggerScreen';
-import { SpeedFinderScreen } from './views/SpeedFinderScreen';
-import { MachineChainScreen } from './views/MachineChainScreen';
+import { lazyModule } from './lib/lazyModule';
 import './views/Theme/global.css';
 import './views/Theme/print.css';
+
+/**
+ * The five field tools load after the first paint, keeping the first screen's JavaScript small;
+ * the service worker precaches their chunk, so they open offline too. main.tsx asks for them
+ * once the first screen is up, so a tap on their tab rarely waits.
+ */
+export const toolScreens = lazyModule(() => import('./views/tool-screens'));
 
 interface Props {
   /** The service-worker notice (main.tsx passes it; tests leave it out). */
@@ -56,17 +59,33 @@ function screenFor(id: ScreenId) {
   switch (id) {
     case 'machines':
       return <MachinesScreen />;
-    case 'lighting':
-      return <LightingScreen />;
-    case 'camera-plan':
-      return <CameraPlanScreen />;
-    case 'logger':
-      return <LoggerScreen />;
-    case 'speed-finder':
-      return <SpeedFinderScreen />;
-    case 'machine-chain':
-      return <MachineChainScreen />;
-    default:
+    case 'check':
       return <CheckScreen />;
+    default:
+      return <ToolScreen id={id} />;
+  }
+}
+
+function ToolScreen({ id }: { id: Exclude<ScreenId, 'check' | 'machines'> }) {
+  const { module: tools, failed } = toolScreens.use();
+  if (failed) {
+    return (
+      <p role="alert" data-testid="screen-load-failed">
+        This tool could not be loaded. Open Trueturn once with a connection, then try again.
+      </p>
+    );
+  }
+  if (!tools) return <p aria-busy="true">Opening…</p>;
+  switch (id) {
+    case 'lighting':
+      return <tools.LightingScreen />;
+    case 'camera-plan':
+      return <tools.CameraPlanScreen />;
+    case 'logger':
+      return <tools.LoggerScreen />;
+    case 'speed-finder':
+      return <tools.SpeedFinderScreen />;
+    case 'machine-chain':
+      return <tools.MachineChainScreen />;
   }
 }

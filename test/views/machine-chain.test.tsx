@@ -15,7 +15,7 @@ import {
   noStillRates,
   wheelSpeedHz,
 } from '../../src/core';
-import { App } from '../../src/app';
+import { App, toolScreens } from '../../src/app';
 import { formatNumber } from '../../src/lib/format';
 import { openScreen } from '../../src/lib/navigation';
 import { formatRate } from '../../src/lib/rates';
@@ -44,6 +44,8 @@ vi.mock('../../src/views/RateMap/chart', () => ({
 
 beforeAll(async () => {
   await startSession();
+  // The field tools load after the first paint (app.tsx); load them before rendering.
+  await toolScreens.load();
 });
 
 beforeEach(() => {

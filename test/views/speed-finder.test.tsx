@@ -14,7 +14,7 @@ import {
 } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
 import { speedFinderSteps } from '../../src/core';
-import { App } from '../../src/app';
+import { App, toolScreens } from '../../src/app';
 import { openScreen } from '../../src/lib/navigation';
 import { machines, saveMachine } from '../../src/state/machines';
 import { defaultSetup, type Setup } from '../../src/state/model';
@@ -31,6 +31,8 @@ import { finderCsv } from '../../src/views/SpeedFinderScreen/finder-words';
 
 beforeAll(async () => {
   await startSession();
+  // The field tools load after the first paint (app.tsx); load them before rendering.
+  await toolScreens.load();
 });
 
 beforeEach(() => {
