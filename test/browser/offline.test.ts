@@ -51,5 +51,15 @@ describe('with no network after the first visit', () => {
 
     await page.getByRole('button', { name: 'Machines' }).click();
     await expect.poll(() => page.getByTestId('machine-list').innerText()).toContain('Offline pump');
+
+    // The field tools live in a chunk loaded after the first paint: it must come from the cache.
+    for (const [tab, heading] of [
+      ['Lighting', 'Under this light'],
+      ['Whole machine', 'Parts and drives'],
+    ]) {
+      await page.getByRole('button', { name: tab, exact: true }).click();
+      await page.getByRole('heading', { name: heading }).first().waitFor();
+    }
+    expect(await page.getByTestId('screen-load-failed').count()).toBe(0);
   });
 });
