@@ -5,14 +5,18 @@
 import { InputError, MAX_SYMMETRY, parseNumber, parseQuantity } from '../core';
 import type { SpeedUnit } from '../state/model';
 
-/** What reading a field gave: a value, or the message to show beside it. */
-export type FieldReading = { ok: true; value: number } | { ok: false; message: string };
+/** What reading a field gave: a value (a number, or a list of them), or the message to show beside it. */
+export type FieldReading<T = number> = { ok: true; value: T } | { ok: false; message: string };
 
 /** Runs a reader and turns its InputError into a message; any other error is a bug and rethrows. */
-export function readField(text: string, reader: (text: string) => number): FieldReading {
+export function readField<T extends number | readonly number[]>(
+  text: string,
+  reader: (text: string) => T,
+): FieldReading<T> {
   try {
     const value = reader(text);
-    if (!Number.isFinite(value)) return { ok: false, message: 'This gives no usable number.' };
+    const numbers: readonly number[] = typeof value === 'number' ? [value] : value;
+    if (!numbers.every(Number.isFinite)) return { ok: false, message: 'This gives no usable number.' };
     return { ok: true, value };
   } catch (error) {
     if (error instanceof InputError) return { ok: false, message: sentence(error.message) };

@@ -1,7 +1,7 @@
 import type { ComponentChildren } from 'preact';
 import { useEffect, useState } from 'preact/hooks';
 import { readField } from '../../lib/fields';
-import style from './style.module.css';
+import { sameNumber, TextField } from './text-field';
 
 interface Props {
   /** Unique id: the input's id, and the root of its message's id. */
@@ -24,10 +24,6 @@ interface Props {
   disabled?: boolean;
 }
 
-function sameValue(a: number, b: number): boolean {
-  return a === b || Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
-}
-
 /**
  * A number field that checks every keystroke: good text goes straight to the set-up, bad
  * text gets a message beside the field and leaves the set-up (and the results) as they were.
@@ -40,7 +36,7 @@ export function NumberField({ id, label, value, toText, read, onValue, unit, hin
 
   useEffect(() => {
     const reading = readField(text, read);
-    if (!(reading.ok && sameValue(reading.value, value))) {
+    if (!(reading.ok && sameNumber(reading.value, value))) {
       setText(toText(value));
       setMessage(null);
     }
@@ -54,46 +50,23 @@ export function NumberField({ id, label, value, toText, read, onValue, unit, hin
     const reading = readField(next, read);
     if (reading.ok) {
       setMessage(null);
-      if (!sameValue(reading.value, value)) onValue(reading.value);
+      if (!sameNumber(reading.value, value)) onValue(reading.value);
     } else {
       setMessage(reading.message);
     }
   };
 
-  const messageId = `${id}-message`;
-  const hintId = `${id}-hint`;
-  const describedBy = [message ? messageId : '', hint ? hintId : ''].filter(Boolean).join(' ') || undefined;
   return (
-    <div class={style.field}>
-      <label class={style.label} for={id}>
-        {label}
-      </label>
-      <div class={style.row}>
-        <input
-          id={id}
-          class={style.input}
-          type="text"
-          inputMode="decimal"
-          autoComplete="off"
-          spellcheck={false}
-          value={text}
-          onInput={onInput}
-          aria-invalid={message ? 'true' : undefined}
-          aria-describedby={describedBy}
-          disabled={disabled}
-        />
-        {unit !== undefined && <span class={style.unit}>{unit}</span>}
-      </div>
-      {message && (
-        <p id={messageId} class={style.message} role="alert">
-          {message}
-        </p>
-      )}
-      {hint && (
-        <p id={hintId} class={style.hint}>
-          {hint}
-        </p>
-      )}
-    </div>
+    <TextField
+      id={id}
+      label={label}
+      text={text}
+      onInput={onInput}
+      message={message}
+      inputMode="decimal"
+      unit={unit}
+      hint={hint}
+      disabled={disabled}
+    />
   );
 }

@@ -1,8 +1,8 @@
 import type { ComponentChildren } from 'preact';
 import { useEffect, useState } from 'preact/hooks';
-import { InputError } from '../../core';
+import { readField } from '../../lib/fields';
 // The same look as a single number field.
-import style from '../NumberField/style.module.css';
+import { sameNumber, TextField } from '../NumberField/text-field';
 
 interface Props {
   /** Unique id: the input's id, and the root of its message's id. */
@@ -21,27 +21,7 @@ interface Props {
 }
 
 function sameList(a: readonly number[], b: readonly number[]): boolean {
-  return (
-    a.length === b.length &&
-    a.every(
-      (x, i) => x === b[i] || Math.abs(x - b[i]) <= 1e-9 * Math.max(Math.abs(x), Math.abs(b[i])),
-    )
-  );
-}
-
-type Reading = { ok: true; values: number[] } | { ok: false; message: string };
-
-function readText(text: string, read: (text: string) => number[]): Reading {
-  try {
-    const values = read(text);
-    if (!values.every(Number.isFinite))
-      return { ok: false, message: 'This gives no usable number.' };
-    return { ok: true, values };
-  } catch (error) {
-    if (error instanceof InputError)
-      return { ok: false, message: error.message.charAt(0).toUpperCase() + error.message.slice(1) };
-    throw error;
-  }
+  return a.length === b.length && a.every((x, i) => sameNumber(x, b[i]));
 }
 
 /**
@@ -54,8 +34,8 @@ export function NumberListField({ id, label, values, toText, read, onValues, uni
   const [message, setMessage] = useState<string | null>(null);
 
   useEffect(() => {
-    const reading = readText(text, read);
-    if (!(reading.ok && sameList(reading.values, values))) {
+    const reading = readField(text, read);
+    if (!(reading.ok && sameList(reading.value, values))) {
       setText(values.map(toText).join(' '));
       setMessage(null);
     }
@@ -67,49 +47,25 @@ export function NumberListField({ id, label, values, toText, read, onValues, uni
   const onInput = (event: Event) => {
     const next = (event.currentTarget as HTMLInputElement).value;
     setText(next);
-    const reading = readText(next, read);
+    const reading = readField(next, read);
     if (reading.ok) {
       setMessage(null);
-      if (!sameList(reading.values, values)) onValues(reading.values);
+      if (!sameList(reading.value, values)) onValues(reading.value);
     } else {
       setMessage(reading.message);
     }
   };
 
-  const messageId = `${id}-message`;
-  const hintId = `${id}-hint`;
-  const describedBy =
-    [message ? messageId : '', hint ? hintId : ''].filter(Boolean).join(' ') || undefined;
   return (
-    <div class={style.field}>
-      <label class={style.label} for={id}>
-        {label}
-      </label>
-      <div class={style.row}>
-        <input
-          id={id}
-          class={style.input}
-          type="text"
-          inputMode="text"
-          autoComplete="off"
-          spellcheck={false}
-          value={text}
-          onInput={onInput}
-          aria-invalid={message ? 'true' : undefined}
-          aria-describedby={describedBy}
-        />
-        {unit !== undefined && <span class={style.unit}>{unit}</span>}
-      </div>
-      {message && (
-        <p id={messageId} class={style.message} role="alert">
-          {message}
-        </p>
-      )}
-      {hint && (
-        <p id={hintId} class={style.hint}>
-          {hint}
-        </p>
-      )}
-    </div>
+    <TextField
+      id={id}
+      label={label}
+      text={text}
+      onInput={onInput}
+      message={message}
+      inputMode="text"
+      unit={unit}
+      hint={hint}
+    />
   );
 }

@@ -1,0 +1,75 @@
+// What a number field and a number-list field share: the look (label, input, unit, message,
+// hint) and the test of whether typed text still says the value held.
+import type { ComponentChildren } from 'preact';
+import style from './style.module.css';
+
+/** Equal, or equal but for floating-point noise (a value read back from its own text). */
+export function sameNumber(a: number, b: number): boolean {
+  return a === b || Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
+}
+
+interface Props {
+  /** Unique id: the input's id, and the root of its message's and hint's ids. */
+  id: string;
+  label: ComponentChildren;
+  text: string;
+  onInput: (event: Event) => void;
+  /** The refusal of the typed text, shown under the field; null when the text is good. */
+  message: string | null;
+  /** "decimal" for one number (a phone's number pad), "text" for a list with spaces and units. */
+  inputMode: 'decimal' | 'text';
+  unit?: ComponentChildren;
+  hint?: ComponentChildren;
+  disabled?: boolean;
+}
+
+/** A labelled text input with its unit, its refusal message and a help line, tied by aria. */
+export function TextField({
+  id,
+  label,
+  text,
+  onInput,
+  message,
+  inputMode,
+  unit,
+  hint,
+  disabled,
+}: Props) {
+  const messageId = `${id}-message`;
+  const hintId = `${id}-hint`;
+  const describedBy =
+    [message ? messageId : '', hint ? hintId : ''].filter(Boolean).join(' ') || undefined;
+  return (
+    <div class={style.field}>
+      <label class={style.label} for={id}>
+        {label}
+      </label>
+      <div class={style.row}>
+        <input
+          id={id}
+          class={style.input}
+          type="text"
+          inputMode={inputMode}
+          autoComplete="off"
+          spellcheck={false}
+          value={text}
+          onInput={onInput}
+          aria-invalid={message ? 'true' : undefined}
+          aria-describedby={describedBy}
+          disabled={disabled}
+        />
+        {unit !== undefined && <span class={style.unit}>{unit}</span>}
+      </div>
+      {message && (
+        <p id={messageId} class={style.message} role="alert">
+          {message}
+        </p>
+      )}
+      {hint && (
+        <p id={hintId} class={style.hint}>
+          {hint}
+        </p>
+      )}
+    </div>
+  );
+}
