@@ -1,13 +1,6 @@
 import { useEffect, useState } from 'preact/hooks';
 import { kmhToMps, mpsToKmh, mpsToMph, mphToMps } from '../../core';
-import {
-  readFeatures,
-  readField,
-  readPoles,
-  readSlipPercent,
-  readSpeedRpm,
-  readTolerancePercent,
-} from '../../lib/fields';
+import { readFeatures, readField, readSpeedRpm, readTolerancePercent } from '../../lib/fields';
 import { formatNumber, numberForField } from '../../lib/format';
 import { readTeeth } from '../../lib/toolFields';
 import {
@@ -25,6 +18,7 @@ import {
 } from '../../state/chain';
 import type { PartDrive, PartSpec, Setup, WheelSpec } from '../../state/model';
 import { ChoiceGroup } from '../ChoiceGroup';
+import { MotorFields } from '../MotorFields';
 import { NumberField } from '../NumberField';
 import { readBeltSlipPercent, readGroundSpeed, readPulleyMm, readTyreSize } from './chain-fields';
 import style from './style.module.css';
@@ -105,11 +99,13 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         />
       )}
       {source === 'motor' && part.motor && (
-        <MotorFields
-          id={id}
-          motor={part.motor}
-          onMotor={(m) => act((s) => withMotor(s, index, m))}
-        />
+        <div class={style.group}>
+          <MotorFields
+            id={id}
+            motor={part.motor}
+            onMotor={(m) => act((s) => withMotor(s, index, m))}
+          />
+        </div>
       )}
       {source === 'wheel' && part.wheel && (
         <WheelFields
@@ -188,48 +184,6 @@ function NameField({
         value={name}
         onInput={(e) => onName((e.currentTarget as HTMLInputElement).value)}
       />
-    </div>
-  );
-}
-
-interface MotorProps {
-  id: (field: string) => string;
-  motor: NonNullable<PartSpec['motor']>;
-  onMotor: (motor: NonNullable<PartSpec['motor']>) => void;
-}
-
-function MotorFields({ id, motor, onMotor }: MotorProps) {
-  return (
-    <div class={style.group}>
-      <ChoiceGroup
-        legend="Mains"
-        name={id('mains')}
-        options={[
-          { value: '50', label: '50 Hz' },
-          { value: '60', label: '60 Hz' },
-        ]}
-        value={motor.mainsHz === 60 ? '60' : '50'}
-        onChange={(v) => onMotor({ ...motor, mainsHz: v === '60' ? 60 : 50 })}
-      />
-      <div class={style.pair}>
-        <NumberField
-          id={id('poles')}
-          label="Poles"
-          value={motor.poles}
-          toText={numberForField}
-          read={readPoles}
-          onValue={(poles) => onMotor({ ...motor, poles })}
-        />
-        <NumberField
-          id={id('slip')}
-          label="Slip"
-          value={motor.slipPercent}
-          toText={numberForField}
-          read={readSlipPercent}
-          onValue={(slipPercent) => onMotor({ ...motor, slipPercent })}
-          unit="%"
-        />
-      </div>
     </div>
   );
 }

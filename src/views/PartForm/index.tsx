@@ -1,6 +1,6 @@
 import { motorSpeedHz, synchronousSpeedHz } from '../../core';
 import { formatNumber, numberForField } from '../../lib/format';
-import { readFeatures, readPoles, readSlipPercent, readSpeedRpm, readTolerancePercent } from '../../lib/fields';
+import { readFeatures, readSpeedRpm, readTolerancePercent } from '../../lib/fields';
 import type { SpeedUnit } from '../../state/model';
 import {
   activePart,
@@ -11,7 +11,7 @@ import {
   setTolerancePercent,
   speedUnit,
 } from '../../state/setup';
-import { ChoiceGroup } from '../ChoiceGroup';
+import { MotorFields } from '../MotorFields';
 import { NumberField } from '../NumberField';
 import { Panel } from '../Panel';
 import style from './style.module.css';
@@ -72,7 +72,7 @@ export function PartForm({ class: extra }: Props) {
         />
         <span>Speed from an induction motor</span>
       </label>
-      {motor && <MotorFields motor={motor} />}
+      {motor && <MotorWithSpeeds motor={motor} />}
       <div class={style.pair}>
         <NumberField
           id="features"
@@ -102,40 +102,12 @@ interface MotorProps {
   motor: NonNullable<ReturnType<typeof activePart.peek>['motor']>;
 }
 
-function MotorFields({ motor }: MotorProps) {
+function MotorWithSpeeds({ motor }: MotorProps) {
   const syncRpm = synchronousSpeedHz(motor.mainsHz, motor.poles) * 60;
   const runRpm = motorSpeedHz(motor.mainsHz, motor.poles, motor.slipPercent / 100) * 60;
   return (
     <div class={style.motor}>
-      <ChoiceGroup
-        legend="Mains"
-        name="motor-mains"
-        options={[
-          { value: '50', label: '50 Hz' },
-          { value: '60', label: '60 Hz' },
-        ]}
-        value={motor.mainsHz === 60 ? '60' : '50'}
-        onChange={(v) => setMotor({ ...motor, mainsHz: v === '60' ? 60 : 50 })}
-      />
-      <div class={style.pair}>
-        <NumberField
-          id="motor-poles"
-          label="Poles"
-          value={motor.poles}
-          toText={numberForField}
-          read={readPoles}
-          onValue={(poles) => setMotor({ ...motor, poles })}
-        />
-        <NumberField
-          id="motor-slip"
-          label="Slip"
-          value={motor.slipPercent}
-          toText={numberForField}
-          read={readSlipPercent}
-          onValue={(slipPercent) => setMotor({ ...motor, slipPercent })}
-          unit="%"
-        />
-      </div>
+      <MotorFields id={(field) => `motor-${field}`} motor={motor} onMotor={setMotor} />
       <p class={style.note}>
         Synchronous {formatNumber(syncRpm)} rpm (120 × mains ÷ poles); running {formatNumber(runRpm)} rpm.
       </p>
