@@ -3,6 +3,7 @@
 // text and returns the value in the set-up's units (mm, percent, km/h or mph) or throws the
 // core's InputError with a message fit to show beside the field.
 import { InputError, mpsToKmh, mpsToMph, parseQuantity, tyreDiameterM } from '../../core';
+import { sentence } from '../../lib/fields';
 import type { WheelSpec } from '../../state/model';
 
 /** Largest pulley accepted, mm (the saved-file limit): far beyond any belt drive. */
@@ -16,7 +17,7 @@ export function readPulleyMm(text: string, what: string): number {
   if (!(mm > 0) || mm > MAX_PULLEY_MM) {
     throw new InputError(
       what,
-      `${capital(what)} must be above 0 mm and at most ${MAX_PULLEY_MM.toLocaleString('en-US')} mm.`,
+      `${sentence(what)} must be above 0 mm and at most ${MAX_PULLEY_MM.toLocaleString('en-US')} mm.`,
     );
   }
   return mm;
@@ -52,8 +53,4 @@ export function readTyreSize(text: string): string {
     throw new InputError('tyre size', 'A tyre size is at most 40 characters, e.g. 205/55R16.');
   tyreDiameterM(size);
   return size;
-}
-
-function capital(text: string): string {
-  return text.charAt(0).toUpperCase() + text.slice(1);
 }
