@@ -179,7 +179,7 @@ function toBands(spans: SpanList, minHz: number, maxHz: number, maxImages: numbe
     }
     if (start > cursor) bands.push(safeBand(cursor, start));
     const causes = [...codes].sort((a, b) => a - b).map(decode);
-    bands.push({ fromHz: start, toHz: end, safe: false, reason: describeCauses(causes, maxImages), causes });
+    bands.push({ fromHz: start, toHz: end, safe: false, reason: describeCauses(causes), causes });
     cursor = end;
   }
   if (cursor < maxHz || bands.length === 0) bands.push(safeBand(cursor, maxHz));
@@ -200,7 +200,7 @@ function safeBand(fromHz: number, toHz: number): RateBand {
 
 const MAX_CAUSES_IN_REASON = 4;
 
-function describeCauses(causes: RateBandCause[], _maxImages: number): string {
+function describeCauses(causes: RateBandCause[]): string {
   const words = causes.slice(0, MAX_CAUSES_IN_REASON).map((c) => {
     const who = `part ${c.part + 1}`;
     if (c.kind === 'crawl') return `${who} turns too slowly to see moving`;
