@@ -267,10 +267,17 @@ function nearest<T>(items: T[], anchorHz: number, rateOf: (t: T) => number, perS
   return [...below.slice(0, perSide).reverse(), ...here, ...above.slice(0, perSide)];
 }
 
+/**
+ * Rates worth suggesting: a single image (to freeze) or a double image (the check at twice the
+ * rate). Nobody sets a strobe on purpose for six superimposed images; the rate map and the
+ * bands still show every lock up to the look options' limit (common practice).
+ */
+const SUGGESTED_MAX_IMAGES = 2;
+
 function nearbyLocks(part: Required<Part>, rateHz: number, range: Range, sampler: Sampler): SuggestedRate[] {
   const patternHz = part.symmetry * Math.abs(part.speedHz);
   if (patternHz === 0) return [];
-  const maxImages = sampler === 'flash' ? look.maxImages : 1;
+  const maxImages = sampler === 'flash' ? Math.min(look.maxImages, SUGGESTED_MAX_IMAGES) : 1;
   const anchor = clampTo(range, rateHz);
   const { found } = searchAround(
     anchor,
