@@ -20,6 +20,7 @@ import { corePart } from '../../src/state/check';
 import { defaultSetup, type Setup } from '../../src/state/model';
 import { replaceSetup, setup, startSession } from '../../src/state/setup';
 import { CameraPlanScreen, cameraCsv } from '../../src/views/CameraPlanScreen';
+import { field, tableRows, type } from './screen-queries';
 
 beforeAll(async () => {
   await startSession();
@@ -34,17 +35,7 @@ beforeEach(() => {
 
 afterEach(cleanup);
 
-function field(label: string): HTMLInputElement {
-  return screen.getByLabelText(label, { exact: true }) as HTMLInputElement;
-}
-
-function type(label: string, text: string) {
-  fireEvent.input(field(label), { target: { value: text } });
-}
-
-function rows(): HTMLElement[] {
-  return within(screen.getByTestId('plan-table')).getAllByRole('row').slice(1);
-}
+const rows = (): HTMLElement[] => tableRows('plan-table');
 
 /** Wikipedia, "Stroboscopic effect": a 12-spoke wheel at 2 rev/s filmed at 24 frames/s seems still. */
 function wheel(): Setup {

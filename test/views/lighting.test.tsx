@@ -8,6 +8,7 @@ import { lampOf, lighting, litPartsOf } from '../../src/state/lighting';
 import { defaultSetup, type Setup } from '../../src/state/model';
 import { replaceSetup, setup, speedUnit, startSession } from '../../src/state/setup';
 import { LightingScreen, lightingCsv } from '../../src/views/LightingScreen';
+import { field, tableRows, type } from './screen-queries';
 
 beforeAll(async () => {
   await startSession();
@@ -21,17 +22,7 @@ beforeEach(() => {
 
 afterEach(cleanup);
 
-function field(label: string): HTMLInputElement {
-  return screen.getByLabelText(label, { exact: true }) as HTMLInputElement;
-}
-
-function type(label: string, text: string) {
-  fireEvent.input(field(label), { target: { value: text } });
-}
-
-function rows(): HTMLElement[] {
-  return within(screen.getByTestId('lighting-table')).getAllByRole('row').slice(1);
-}
+const rows = (): HTMLElement[] => tableRows('lighting-table');
 
 /** A set-up with one part and the default lamps (50 Hz mains, flicker at 100 Hz, 30 %). */
 function onePart(name: string, speedRpm: number, features: number, tolerancePercent = 0): Setup {

@@ -16,6 +16,7 @@ import {
 import { defaultSetup, type Setup } from '../../src/state/model';
 import { replaceSetup, setup, startSession } from '../../src/state/setup';
 import { LoggerScreen, loggerCsv } from '../../src/views/LoggerScreen';
+import { field, tableRows, type } from './screen-queries';
 
 beforeAll(async () => {
   await startSession();
@@ -29,17 +30,7 @@ beforeEach(() => {
 
 afterEach(cleanup);
 
-function field(label: string): HTMLInputElement {
-  return screen.getByLabelText(label, { exact: true }) as HTMLInputElement;
-}
-
-function type(label: string, text: string) {
-  fireEvent.input(field(label), { target: { value: text } });
-}
-
-function rows(): HTMLElement[] {
-  return within(screen.getByTestId('logger-table')).getAllByRole('row').slice(1);
-}
+const rows = (): HTMLElement[] => tableRows('logger-table');
 
 function rowOf(label: string): HTMLElement {
   const row = rows().find((r) => r.textContent?.startsWith(label));

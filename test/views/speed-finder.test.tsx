@@ -28,6 +28,7 @@ import {
   withMeasuredSpeed,
 } from '../../src/state/speedFinder';
 import { finderCsv } from '../../src/views/SpeedFinderScreen/finder-words';
+import { field, type } from './screen-queries';
 
 beforeAll(async () => {
   await startSession();
@@ -53,14 +54,6 @@ configure({ asyncUtilTimeout: 5000 });
 
 /** The default strobe: 30 to 12,000 flashes per minute. */
 const STROBE = { minHz: 0.5, maxHz: 200 };
-
-function field(label: string): HTMLInputElement {
-  return screen.getByLabelText(label, { exact: true }) as HTMLInputElement;
-}
-
-function type(label: string, text: string) {
-  fireEvent.input(field(label), { target: { value: text } });
-}
 
 function instruction(): string {
   return screen.getByTestId('finder-instruction').textContent ?? '';
