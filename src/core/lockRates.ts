@@ -46,23 +46,18 @@ export function lockRates(part: Part, range: Range, opts?: { maxImages?: number 
   const hi = maxHz * (1 + EDGE);
   // For each image count q the rates F·q/p rise as p falls; merging the maxImages streams
   // (smallest head first) yields ascending order without a sort.
-  const nextP = new Float64Array(maxImages + 1);
-  const firstP = new Float64Array(maxImages + 1);
+  const nextP = new Int32Array(maxImages + 1);
+  const firstP = new Int32Array(maxImages + 1);
   const head = new Float64Array(maxImages + 1); // rate at nextP[q], Infinity when exhausted
-  const advance = (q: number) => {
-    let p = nextP[q];
-    while (p >= firstP[q] && q > 1 && gcd(p, q) !== 1) p--;
-    nextP[q] = p;
-    head[q] = p >= firstP[q] ? (patternHz * q) / p : Infinity;
-  };
+  let count = 0;
   for (let q = 1; q <= maxImages; q++) {
     firstP[q] = Math.max(1, Math.ceil((patternHz * q) / hi)); // s = F·q/p ≤ hi
-    nextP[q] = Math.floor((patternHz * q) / lo); // s ≥ lo
-    advance(q);
+    const last = Math.floor((patternHz * q) / lo); // s ≥ lo
+    count += Math.max(0, last - firstP[q] + 1);
+    requireWorkable(count, 'rate range', 'lock-in rates', 'raise the lowest rate or narrow the range');
+    nextP[q] = last + 1;
+    head[q] = nextHead(q);
   }
-  let count = 0;
-  for (let q = 1; q <= maxImages; q++) count += Math.max(0, nextP[q] - firstP[q] + 1);
-  requireWorkable(count, 'rate range', 'lock-in rates', 'raise the lowest rate or narrow the range');
   const out: LockRate[] = [];
   for (;;) {
     let q = 0;
@@ -75,10 +70,17 @@ export function lockRates(part: Part, range: Range, opts?: { maxImages?: number 
     }
     if (q === 0) break;
     const p = nextP[q];
-    nextP[q] = p - 1;
-    advance(q);
+    head[q] = nextHead(q);
     if (rateHz < lo || rateHz > hi) continue;
     out.push({ rateHz, images: q, p, q, lowHz: rateHz * (1 - tolerance), highHz: rateHz * (1 + tolerance) });
   }
   return out;
+
+  /** Steps stream q to its next p coprime to q; returns that lock's rate, or Infinity when done. */
+  function nextHead(q: number): number {
+    let p = nextP[q] - 1;
+    while (p >= firstP[q] && q > 1 && gcd(p, q) !== 1) p--;
+    nextP[q] = p;
+    return p >= firstP[q] ? (patternHz * q) / p : Infinity;
+  }
 }
