@@ -58,7 +58,7 @@ export function rateBands(parts: Part[], range: Range, opts?: RateBandOptions): 
 
   const spans = new SpanList(minHz, maxHz);
   checked.forEach((part, index) => addMisleadingSpans(part, index, sampler, look, spans));
-  return toBands(spans, minHz, maxHz, look.maxImages);
+  return toBands(spans, minHz, maxHz);
 }
 
 /** Cause codes pack (part, kind, images) into one number so spans live in flat arrays. */
@@ -158,7 +158,7 @@ function addMisleadingSpans(
   }
 }
 
-function toBands(spans: SpanList, minHz: number, maxHz: number, maxImages: number): RateBand[] {
+function toBands(spans: SpanList, minHz: number, maxHz: number): RateBand[] {
   const order = new Uint32Array(spans.length);
   for (let i = 0; i < order.length; i++) order[i] = i;
   const { from, to, cause } = spans;
