@@ -23,7 +23,7 @@ import {
 import { check } from './check';
 import { MAX_SPEED_RPM } from '../lib/fields';
 import { formatNumber } from '../lib/format';
-import type { PartDrive, PartSpec, Setup, WheelSpec } from './model';
+import { partLabel, type PartDrive, type PartSpec, type Setup, type WheelSpec } from './model';
 import { keepLastGood } from './outcome';
 import { defaultMotor, setup } from './setup';
 import { DataError, MAX_PARTS } from './validate';
@@ -82,11 +82,6 @@ export function chainLinkOf(drive: PartDrive): ChainLink {
   if (drive.kind === 'gear')
     return { kind: 'gear', driverTeeth: drive.driverTeeth, drivenTeeth: drive.drivenTeeth };
   return { kind: 'shaft' };
-}
-
-/** What the part is called on screen and in messages. */
-export function partLabel(s: Setup, index: number): string {
-  return s.parts[index]?.name.trim() || `Part ${index + 1}`;
 }
 
 /**

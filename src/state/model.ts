@@ -82,6 +82,11 @@ export interface Setup {
   creepRpm: number;
 }
 
+/** What a part is called on screen and in messages: its name, or its place in the list. */
+export function partLabel(s: Setup, index: number): string {
+  return s.parts[index]?.name.trim() || `Part ${index + 1}`;
+}
+
 /** A saved machine: a named set-up. */
 export interface Machine {
   id: string;

@@ -12,14 +12,13 @@ import {
 import { formatNumber } from '../lib/format';
 import {
   deriveParts,
-  partLabel,
   speedSourceOf,
   withChainSpeeds,
   withPartFields,
   withSpeedSource,
 } from './chain';
 import { saveMachine, updateMachine } from './machines';
-import type { Machine, Setup } from './model';
+import { partLabel, type Machine, type Setup } from './model';
 import { keepLastGood } from './outcome';
 import { activePart, openMachineId, setSamplerKind, setStrobeRateFpm, setup } from './setup';
 

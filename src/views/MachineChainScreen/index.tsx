@@ -7,13 +7,12 @@ import {
   chain,
   editChain,
   machineRates,
-  partLabel,
   syncChainSpeeds,
   withDrivenPart,
   type DerivedPart,
 } from '../../state/chain';
 import { check, verdictOf } from '../../state/check';
-import type { SamplerKind } from '../../state/model';
+import { partLabel, type SamplerKind } from '../../state/model';
 import { openMachineName } from '../../state/openMachine';
 import { flashUnit, setSamplerKind, setSamplerRateHz, setup } from '../../state/setup';
 import { MAX_PARTS } from '../../state/validate';

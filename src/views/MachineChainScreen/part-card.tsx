@@ -5,7 +5,6 @@ import { formatNumber, numberForField } from '../../lib/format';
 import { readTeeth } from '../../lib/toolFields';
 import {
   editChain,
-  partLabel,
   speedSourceOf,
   withDrive,
   withMotor,
@@ -16,7 +15,13 @@ import {
   type DerivedPart,
   type SpeedSource,
 } from '../../state/chain';
-import type { PartDrive, PartSpec, Setup, WheelSpec } from '../../state/model';
+import {
+  partLabel,
+  type PartDrive,
+  type PartSpec,
+  type Setup,
+  type WheelSpec,
+} from '../../state/model';
 import { ChoiceGroup } from '../ChoiceGroup';
 import { MotorFields } from '../MotorFields';
 import { NumberField } from '../NumberField';

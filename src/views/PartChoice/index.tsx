@@ -1,4 +1,5 @@
 import { formatNumber } from '../../lib/format';
+import { partLabel } from '../../state/model';
 import { selectPart } from '../../state/parts';
 import { setup } from '../../state/setup';
 import style from './style.module.css';
@@ -28,7 +29,7 @@ export function PartChoice({ id, label, editHint }: Props) {
       >
         {s.parts.map((p, i) => (
           <option key={i} value={String(i)}>
-            {p.name.trim() || `Part ${i + 1}`}
+            {partLabel(s, i)}
           </option>
         ))}
       </select>

@@ -1,5 +1,6 @@
 import { useEffect, useState } from 'preact/hooks';
 import { formatNumber } from '../../lib/format';
+import { partLabel } from '../../state/model';
 import { addPart, removePart, renamePart, selectPart } from '../../state/parts';
 import { setup } from '../../state/setup';
 import { DataError } from '../../state/validate';
@@ -65,7 +66,7 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
               aria-pressed={i === active ? 'true' : 'false'}
               onClick={() => act(() => selectPart(i))}
             >
-              <span class={style.name}>{p.name.trim() || `Part ${i + 1}`}</span>
+              <span class={style.name}>{partLabel(s, i)}</span>
               <span class={style.facts}>
                 {formatNumber(p.speedRpm)} rpm · {p.features}{' '}
                 {p.features === 1 ? 'mark' : 'blades or marks'} · ±

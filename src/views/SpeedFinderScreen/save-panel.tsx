@@ -1,7 +1,7 @@
 import { useState } from 'preact/hooks';
 import { formatNumber } from '../../lib/format';
 import { openMachineName } from '../../state/openMachine';
-import { partLabel } from '../../state/chain';
+import { partLabel } from '../../state/model';
 import { setup } from '../../state/setup';
 import { featuresInUse, saveFoundSpeed, type SaveTarget } from '../../state/speedFinder';
 import { Panel } from '../Panel';
