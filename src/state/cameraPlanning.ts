@@ -15,7 +15,7 @@ import {
   type Part,
 } from '../core';
 import { keepLastGood } from './outcome';
-import { corePart } from './check';
+import { CAMERA_RANGE, corePart } from './check';
 import {
   setExposureSeconds,
   setFrameRate,
@@ -121,9 +121,6 @@ export function applyCameraSetting(
   });
 }
 
-/** Frame rates within a camera's practical span that would reach a goal, for the "none reach it" note. */
-export const PLAN_RATE_SPAN = { minHz: 1, maxHz: 1000 } as const;
-
 /**
  * Why nothing reached the goal, in plain words, with the frame rates or exposures that would:
  * freeze needs n·|f|/k (lockRates, one image); a creep needs ratesForApparent; a natural disc
@@ -139,12 +136,12 @@ export function whyNoneReach(
   const faithfulAboveHz = 2 * patternHz * (1 + part.tolerance);
   let ratesHz: number[] = [];
   if (patternHz > 0 && goal.kind === 'freeze') {
-    ratesHz = lockRates({ ...part, tolerance: 0 }, PLAN_RATE_SPAN, { maxImages: 1 })
+    ratesHz = lockRates({ ...part, tolerance: 0 }, CAMERA_RANGE, { maxImages: 1 })
       .map((l) => l.rateHz)
       .sort((a, b) => b - a);
   } else if (patternHz > 0 && goal.kind === 'creep') {
     const wanted = Math.sign(part.speedHz || 1) * goal.creepHz;
-    ratesHz = ratesForApparent(part, wanted, PLAN_RATE_SPAN)
+    ratesHz = ratesForApparent(part, wanted, CAMERA_RANGE)
       .map((r) => r.rateHz)
       .sort((a, b) => b - a);
   }
