@@ -72,7 +72,7 @@ export function numberForField(value: number): string {
 
 /**
  * A signed speed in rpm with its direction in words.
- * @example formatRpm(-12.25) // "12.25 rpm backward"
+ * @example formatRpmWithDirection(-12.25, 1) // "12.25 rpm backward"
  */
 export function formatRpmWithDirection(rpm: number, referenceSign: number): string {
   if (!Number.isFinite(rpm)) return NO_VALUE;
