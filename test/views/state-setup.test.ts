@@ -146,4 +146,16 @@ describe('opening the session', () => {
     expect(activePart.value.features).toBe(11);
     expect(setup.value.creepRpm).toBe(defaultSetup.creepRpm);
   });
+
+  test('a change finished before the last set-up is asked for is not overwritten either', async () => {
+    // The page opens with `untouched`; the user types while storage is still opening.
+    const untouched = setup.peek();
+    setFeatures(12);
+    await openSession(
+      { hash: '', decodeShare: () => ({ ok: false, error: null }), loadLast: async () => last, clearHash: () => undefined },
+      untouched,
+    );
+    expect(activePart.value.features).toBe(12);
+    expect(setup.value.creepRpm).toBe(defaultSetup.creepRpm);
+  });
 });
