@@ -1,4 +1,5 @@
 import type { ComponentChildren } from 'preact';
+import { useEffect, useRef } from 'preact/hooks';
 import { currentScreen, openScreen, type ScreenId } from '../../lib/navigation';
 import style from './style.module.css';
 
@@ -21,6 +22,12 @@ const TABS: ReadonlyArray<{ id: ScreenId; label: string }> = [
 /** The page: our mark and name, the tab bar, notices, and the open screen. */
 export function AppFrame({ notices, children }: Props) {
   const screen = currentScreen.value;
+  const tabBar = useRef<HTMLElement>(null);
+  // On a phone the tab row scrolls sideways: keep the open tab in view.
+  useEffect(() => {
+    const open = tabBar.current?.querySelector<HTMLElement>('[aria-current="page"]');
+    open?.scrollIntoView?.({ block: 'nearest', inline: 'nearest' });
+  }, [screen]);
   return (
     <div class={style.frame}>
       <header class={style.header}>
@@ -36,7 +43,7 @@ export function AppFrame({ notices, children }: Props) {
           </svg>
           <span class={style.name}>Trueturn</span>
         </div>
-        <nav class={style.tabs} aria-label="Screens">
+        <nav class={style.tabs} aria-label="Screens" ref={tabBar}>
           {TABS.map((t) => (
             <button
               key={t.id}
