@@ -48,6 +48,9 @@ export { plainNumber } from './plainNumber';
 export {
   safetyCautions,
   cautionFlags,
+  STILLNESS_CAUTION,
+  FLASHING_CAUTION,
+  PLANNING_AID_CAUTION,
   SEIZURE_RISK_LOW_HZ,
   SEIZURE_RISK_HIGH_HZ,
   type CautionContext,

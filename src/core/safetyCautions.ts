@@ -48,6 +48,22 @@ export function cautionFlags(context: CautionContext): {
  * Throws InputError for a flash rate or sweep end that is not a finite number.
  * @example safetyCautions({ flashRatesHz: [100] }).length // 1 (only the planning-aid caution)
  */
+/** physics.md §10, first rule: apparent stillness is never a reason to reach in. */
+export const STILLNESS_CAUTION =
+  'A part that looks still, slow or backward is still turning at full speed. Never reach in, ' +
+  'open a guard or touch it because of how it looks: stop it, isolate and lock out the machine ' +
+  'first (local rules, e.g. OSHA 29 CFR 1910.147, ISO 14118).';
+
+/** physics.md §10, second rule: flashing in the photosensitive range. */
+export const FLASHING_CAUTION =
+  'Flashing between about 3 and 60 times a second can trigger seizures in people with ' +
+  'photosensitive epilepsy (WCAG 2.x success criterion 2.3.1 uses three flashes a second). ' +
+  'Warn people nearby, and keep such rates short.';
+
+/** physics.md §10, third rule: the tool defers to local codes and licensed practice. */
+export const PLANNING_AID_CAUTION =
+  "This is a planning aid: local codes, the machine maker's instructions and licensed practice come first.";
+
 export function safetyCautions(context: CautionContext = {}): string[] {
   (context.flashRatesHz ?? []).forEach((r, i) => requireFinite(r, `flash rate ${i + 1}`));
   if (context.flashSweepHz !== undefined) {
@@ -56,22 +72,8 @@ export function safetyCautions(context: CautionContext = {}): string[] {
   }
   const flags = cautionFlags(context);
   const out: string[] = [];
-  if (flags.safety) {
-    out.push(
-      'A part that looks still, slow or backward is still turning at full speed. Never reach in, ' +
-        'open a guard or touch it because of how it looks: stop it, isolate and lock out the machine ' +
-        'first (local rules, e.g. OSHA 29 CFR 1910.147, ISO 14118).',
-    );
-  }
-  if (flags.photosensitivity) {
-    out.push(
-      'Flashing between about 3 and 60 times a second can trigger seizures in people with ' +
-        'photosensitive epilepsy (WCAG 2.x success criterion 2.3.1 uses three flashes a second). ' +
-        'Warn people nearby, and keep such rates short.',
-    );
-  }
-  out.push(
-    "This is a planning aid: local codes, the machine maker's instructions and licensed practice come first.",
-  );
+  if (flags.safety) out.push(STILLNESS_CAUTION);
+  if (flags.photosensitivity) out.push(FLASHING_CAUTION);
+  out.push(PLANNING_AID_CAUTION);
   return out;
 }

@@ -1,3 +1,4 @@
+import { FLASHING_CAUTION, PLANNING_AID_CAUTION, STILLNESS_CAUTION } from '../../core';
 import { check } from '../../state/check';
 import style from './style.module.css';
 
@@ -8,8 +9,8 @@ interface Props {
 }
 
 /**
- * The cautions of physics.md §10. They show whenever they apply and cannot be dismissed:
- * stillness that is not real, and flashing that can trigger seizures.
+ * The cautions of physics.md §10, in the core's words (src/core/safetyCautions.ts, shared with
+ * every tool and printed report). They show whenever they apply and cannot be dismissed.
  */
 export function Cautions({ class: extra, show }: Props) {
   const r = show ? { showSafety: show.safety, showPhotosensitivity: show.photosensitivity } : check.value;
@@ -21,11 +22,8 @@ export function Cautions({ class: extra, show }: Props) {
           <h2 id="safety-title" class={style.title}>
             Still turning: do not trust what you see
           </h2>
-          <p>
-            It moves at its true speed whatever it looks like. Never reach in, open a guard or touch it on the strength of
-            this view: isolate and lock out first (OSHA 29 CFR 1910.147, ISO 14118, your site's rules).
-          </p>
-          <p class={style.small}>A planning aid: local codes and licensed practice come first.</p>
+          <p>{STILLNESS_CAUTION}</p>
+          <p class={style.small}>{PLANNING_AID_CAUTION}</p>
         </aside>
       )}
       {r.showPhotosensitivity && (
@@ -33,10 +31,7 @@ export function Cautions({ class: extra, show }: Props) {
           <h2 id="flash-title" class={style.title}>
             Flashing light
           </h2>
-          <p>
-            3 to 60 flashes a second can trigger seizures in people with photosensitive epilepsy (WCAG 2.x success
-            criterion 2.3.1). Warn people nearby and keep it short.
-          </p>
+          <p>{FLASHING_CAUTION}</p>
         </aside>
       )}
     </div>
