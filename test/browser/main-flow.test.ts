@@ -69,26 +69,26 @@ describe('the main flow', () => {
     const { page } = session;
     await openApp(page, inject('baseUrl'));
     const typed = ['1', '17', '177', '1771', '1769', '17690', '176900'];
-    const { shown, worstMs } = await page.evaluate(async (texts) => {
+    const { shown, frameMs } = await page.evaluate(async (texts) => {
       const input = document.getElementById('speed') as HTMLInputElement;
       const trueSpeed = document.querySelector('[data-testid="true-speed"]')!;
       const seen: string[] = [];
-      let worst = 0;
+      const times: number[] = [];
       for (const text of texts) {
         const start = performance.now();
         input.value = text;
         input.dispatchEvent(new Event('input', { bubbles: true }));
         await new Promise((r) => requestAnimationFrame(() => r(null)));
-        worst = Math.max(worst, performance.now() - start);
+        times.push(performance.now() - start);
         seen.push(trueSpeed.textContent ?? '');
       }
-      return { shown: seen, worstMs: worst };
+      return { shown: seen, frameMs: times };
     }, typed);
     // The requirement: by the next animation frame after each keystroke the new value is on
     // screen, so nothing debounces or defers the result. How long that frame took depends on the
     // machine (speed is measured in `npm run bench`, not asserted); the figure is printed.
     expect(shown).toEqual(typed.map((t) => `${Number(t).toLocaleString('en-US')} rpm`));
-    console.log(`slowest keystroke-to-screen frame: ${worstMs.toFixed(1)} ms`);
+    console.log(`keystroke-to-screen frames: ${frameMs.map((ms) => ms.toFixed(1)).join(', ')} ms`);
   });
 
   test('a camera shows blur and rolling-shutter bend as the core computes them', async () => {
