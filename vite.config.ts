@@ -19,7 +19,8 @@ export default defineConfig({
         id: '.',
         name: 'Trueturn',
         short_name: 'Trueturn',
-        description: 'What a strobe, camera or flickering light really shows of a turning part, and which rates to use.',
+        description:
+          'What a strobe, camera or flickering light really shows of a turning part, and which rates to use.',
         lang: 'en',
         theme_color: '#0d3b4f',
         background_color: '#f4f1ea',
@@ -31,7 +32,12 @@ export default defineConfig({
         icons: [
           { src: 'icon-192.png', sizes: '192x192', type: 'image/png', purpose: 'any' },
           { src: 'icon-512.png', sizes: '512x512', type: 'image/png', purpose: 'any' },
-          { src: 'icon-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+          {
+            src: 'icon-maskable-512.png',
+            sizes: '512x512',
+            type: 'image/png',
+            purpose: 'maskable',
+          },
         ],
       },
       workbox: {
@@ -49,7 +55,12 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'unit',
-          include: ['test/core/**/*.test.ts', 'test/state/**/*.test.{ts,tsx}', 'test/views/**/*.test.{ts,tsx}', 'test/render/**/*.test.ts'],
+          include: [
+            'test/core/**/*.test.ts',
+            'test/state/**/*.test.{ts,tsx}',
+            'test/views/**/*.test.{ts,tsx}',
+            'test/render/**/*.test.ts',
+          ],
           environment: 'node',
         },
       },

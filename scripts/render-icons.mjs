@@ -30,7 +30,11 @@ try {
         `<div style="width:${size}px;height:${size}px">${markup.replace('<svg ', `<svg width="${size}" height="${size}" `)}</div>` +
         `</body></html>`,
     );
-    await page.screenshot({ path: publicDir + out, omitBackground: true, clip: { x: 0, y: 0, width: size, height: size } });
+    await page.screenshot({
+      path: publicDir + out,
+      omitBackground: true,
+      clip: { x: 0, y: 0, width: size, height: size },
+    });
     console.log(`wrote public/${out}`);
   }
 } finally {

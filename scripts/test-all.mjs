@@ -13,17 +13,27 @@ function run(cmd, args, opts = {}) {
 
 if (!existsSync(CHROMIUM)) {
   if (process.getuid?.() === 0) {
-    console.log('Chromium is missing: installing Debian\'s package (about 30 s).');
+    console.log("Chromium is missing: installing Debian's package (about 30 s).");
     run('apt-get', ['update', '-qq']);
-    run('apt-get', ['install', '-y', '-qq', 'chromium'], { env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
+    run('apt-get', ['install', '-y', '-qq', 'chromium'], {
+      env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
+    });
   } else {
-    console.log(`Chromium not found at ${CHROMIUM}; install it (apt-get install chromium) or set CHROMIUM_PATH.`);
+    console.log(
+      `Chromium not found at ${CHROMIUM}; install it (apt-get install chromium) or set CHROMIUM_PATH.`,
+    );
   }
 }
 
 mkdirSync('test-output', { recursive: true });
 const report = 'test-output/vitest-results.json';
-const status = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile=${report}`]);
+const status = run('npx', [
+  'vitest',
+  'run',
+  '--reporter=default',
+  '--reporter=json',
+  `--outputFile=${report}`,
+]);
 
 let passed = 0;
 let failed = 0;

@@ -31,7 +31,11 @@ export function App({ updateNotice }: Props) {
     <>
       {updateNotice}
       {session && (
-        <Banner kind={session.kind} onClose={() => (sessionMessage.value = null)} testId="session-message">
+        <Banner
+          kind={session.kind}
+          onClose={() => (sessionMessage.value = null)}
+          testId="session-message"
+        >
           {session.text}
         </Banner>
       )}
@@ -41,17 +45,17 @@ export function App({ updateNotice }: Props) {
         </Banner>
       )}
       {problem && (
-        <Banner kind="problem" onClose={() => (storageMessage.value = null)} testId="storage-message">
+        <Banner
+          kind="problem"
+          onClose={() => (storageMessage.value = null)}
+          testId="storage-message"
+        >
           {problem}
         </Banner>
       )}
     </>
   );
-  return (
-    <AppFrame notices={notices}>
-      {screenFor(currentScreen.value)}
-    </AppFrame>
-  );
+  return <AppFrame notices={notices}>{screenFor(currentScreen.value)}</AppFrame>;
 }
 
 /** The screen for a tab; the check screen is the home screen. */

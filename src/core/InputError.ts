@@ -30,7 +30,10 @@ export function requireFinite(value: unknown, field: string): number {
  */
 export function requireFiniteResult(value: number, field: string): number {
   if (!Number.isFinite(value)) {
-    throw new InputError(field, `${field} is too large or too small for a result to be computed: check the units.`);
+    throw new InputError(
+      field,
+      `${field} is too large or too small for a result to be computed: check the units.`,
+    );
   }
   return value;
 }
@@ -50,11 +53,19 @@ export function requireNonNegative(value: unknown, field: string): number {
 }
 
 /** A whole number in [min, max]. */
-export function requireWhole(value: unknown, field: string, min: number, max = Number.MAX_SAFE_INTEGER): number {
+export function requireWhole(
+  value: unknown,
+  field: string,
+  min: number,
+  max = Number.MAX_SAFE_INTEGER,
+): number {
   const v = requireFinite(value, field);
   if (!Number.isInteger(v) || v < min || v > max) {
     const upper = max === Number.MAX_SAFE_INTEGER ? '' : ` and at most ${max}`;
-    throw new InputError(field, `${field} must be a whole number, at least ${min}${upper} (got ${v}).`);
+    throw new InputError(
+      field,
+      `${field} must be a whole number, at least ${min}${upper} (got ${v}).`,
+    );
   }
   return v;
 }

@@ -44,7 +44,11 @@ export type ApparentMotionOptions = Partial<LookOptions> & { sampler?: Sampler }
  *
  * Sources: Shannon 1949 (sampling theorem); the alias relation n·f − s·round(n·f/s) of any DSP text.
  */
-export function apparentMotion(part: Part, rateHz: number, opts?: ApparentMotionOptions): ApparentMotion {
+export function apparentMotion(
+  part: Part,
+  rateHz: number,
+  opts?: ApparentMotionOptions,
+): ApparentMotion {
   const { speedHz: f, symmetry: n } = checkPart(part);
   const s = requirePositive(rateHz, 'rate');
   const sampler = checkSampler(opts?.sampler);
@@ -64,7 +68,17 @@ export function apparentMotion(part: Part, rateHz: number, opts?: ApparentMotion
     const p = Math.round(ratio * q);
     const driftPatternHz = n * f - (p * s) / q;
     if (Math.abs(driftPatternHz) < stillPatternHz) {
-      return { ratio, step, apparentHz, faithful, images: q, look: 'still', p: Math.abs(p), q, driftHz: driftPatternHz / n };
+      return {
+        ratio,
+        step,
+        apparentHz,
+        faithful,
+        images: q,
+        look: 'still',
+        p: Math.abs(p),
+        q,
+        driftHz: driftPatternHz / n,
+      };
     }
   }
 

@@ -17,7 +17,8 @@ import {
 export function synchronousSpeedHz(mainsHz: number, poles: number): number {
   const fm = requirePositive(mainsHz, 'mains frequency');
   const P = requireWhole(poles, 'poles', 2, 1000);
-  if (P % 2 !== 0) throw new InputError('poles', `poles come in pairs: give an even number (got ${P}).`);
+  if (P % 2 !== 0)
+    throw new InputError('poles', `poles come in pairs: give an even number (got ${P}).`);
   return requireFiniteResult((2 * fm) / P, 'mains frequency');
 }
 
@@ -44,7 +45,11 @@ export function slipFromSpeed(speedHz: number, mainsHz: number, poles: number): 
  * Signs carry (an open belt keeps the direction).
  * @example beltSpeedHz(30, 0.1, 0.25) // 12
  */
-export function beltSpeedHz(driverHz: number, driverDiameterM: number, drivenDiameterM: number): number {
+export function beltSpeedHz(
+  driverHz: number,
+  driverDiameterM: number,
+  drivenDiameterM: number,
+): number {
   const f1 = requireFinite(driverHz, 'driver speed');
   const D1 = requirePositive(driverDiameterM, 'driver pulley diameter');
   const D2 = requirePositive(drivenDiameterM, 'driven pulley diameter');
@@ -72,7 +77,8 @@ export function wheelSpeedHz(groundSpeedMps: number, diameterM: number): number 
   return requireFiniteResult(v / (Math.PI * D), 'ground speed');
 }
 
-const TYRE = /^\s*(\d{2,3}(?:\.\d+)?)\s*\/\s*(\d{2,3}(?:\.\d+)?)\s*(?:Z?R|-|D|B)\s*(\d{2}(?:\.\d)?)\b/i;
+const TYRE =
+  /^\s*(\d{2,3}(?:\.\d+)?)\s*\/\s*(\d{2,3}(?:\.\d+)?)\s*(?:Z?R|-|D|B)\s*(\d{2}(?:\.\d)?)\b/i;
 
 /**
  * Overall diameter of a tyre from its ISO metric size `W/AR R d` (ISO 4000-1, ETRTO):
@@ -82,16 +88,23 @@ const TYRE = /^\s*(\d{2,3}(?:\.\d+)?)\s*\/\s*(\d{2,3}(?:\.\d+)?)\s*(?:Z?R|-|D|B)
  * @example tyreDiameterM('205/55R16') // 0.6319
  */
 export function tyreDiameterM(size: string): number {
-  if (typeof size !== 'string') throw new InputError('tyre size', 'tyre size must be text such as 205/55R16.');
+  if (typeof size !== 'string')
+    throw new InputError('tyre size', 'tyre size must be text such as 205/55R16.');
   const m = TYRE.exec(size);
   if (!m) {
-    throw new InputError('tyre size', `"${size.slice(0, 30)}" is not a tyre size: write width/aspect R rim, e.g. 205/55R16.`);
+    throw new InputError(
+      'tyre size',
+      `"${size.slice(0, 30)}" is not a tyre size: write width/aspect R rim, e.g. 205/55R16.`,
+    );
   }
   const width = Number(m[1]);
   const aspect = Number(m[2]);
   const rim = Number(m[3]);
   if (width < 50 || width > 500 || aspect < 10 || aspect > 120 || rim < 8 || rim > 30) {
-    throw new InputError('tyre size', `"${size.slice(0, 30)}" is outside real tyre sizes (width 50–500 mm, aspect 10–120, rim 8–30 in).`);
+    throw new InputError(
+      'tyre size',
+      `"${size.slice(0, 30)}" is outside real tyre sizes (width 50–500 mm, aspect 10–120, rim 8–30 in).`,
+    );
   }
   return Math.round((rim * 25.4 + (2 * width * aspect) / 100) * 1e4) / 1e7;
 }

@@ -1,4 +1,11 @@
-import { InputError, requireFinite, requireFiniteResult, requireNonNegative, requirePositive, requireWhole } from './InputError';
+import {
+  InputError,
+  requireFinite,
+  requireFiniteResult,
+  requireNonNegative,
+  requirePositive,
+  requireWhole,
+} from './InputError';
 import { MAX_SYMMETRY } from './types';
 
 /**
@@ -32,7 +39,8 @@ export function blurPitches(speedHz: number, symmetry: number, exposureS: number
  */
 export function exposureFromShutterAngle(angleDeg: number, rateHz: number): number {
   const a = requirePositive(angleDeg, 'shutter angle');
-  if (a > 360) throw new InputError('shutter angle', `shutter angle must be at most 360° (got ${a}).`);
+  if (a > 360)
+    throw new InputError('shutter angle', `shutter angle must be at most 360° (got ${a}).`);
   const s = requirePositive(rateHz, 'frame rate');
   return requireFiniteResult(a / 360 / s, 'frame rate');
 }
@@ -47,7 +55,10 @@ export function shutterAngleFromExposure(exposureS: number, rateHz: number): num
   const s = requirePositive(rateHz, 'frame rate');
   const angle = 360 * t * s;
   if (angle > 360 * (1 + 1e-9)) {
-    throw new InputError('exposure', `An exposure of ${t} s is longer than one frame at ${s} frames/s.`);
+    throw new InputError(
+      'exposure',
+      `An exposure of ${t} s is longer than one frame at ${s} frames/s.`,
+    );
   }
   return Math.min(angle, 360);
 }

@@ -76,7 +76,10 @@ export function findSpeed(
   opts?: FindSpeedOptions,
 ): SpeedFinding {
   if (!Array.isArray(observations) || observations.length === 0) {
-    throw new InputError('readings', 'Add at least one reading: a flash rate and the number of images that stood still.');
+    throw new InputError(
+      'readings',
+      'Add at least one reading: a flash rate and the number of images that stood still.',
+    );
   }
   const readings = observations.map((o, i) => ({
     rateHz: requirePositive(o?.rateHz, `rate of reading ${i + 1}`),
@@ -86,16 +89,25 @@ export function findSpeed(
   const expected = expect === undefined ? undefined : checkRange(expect, 'expected speed range');
   const tol = requireBetween(opts?.matchTolerance ?? 0.003, 'match tolerance', 0, 0.1);
   const maxMultiple = requireWhole(opts?.maxMultiple ?? 8, 'largest multiple', 1, 1000);
-  const rateRange = opts?.rateRange === undefined ? undefined : checkRange(opts.rateRange, 'strobe range');
+  const rateRange =
+    opts?.rateRange === undefined ? undefined : checkRange(opts.rateRange, 'strobe range');
 
   // Candidates come from the reading with the widest lock spacing F/q (fewest hypotheses).
   const base = readings.reduce((a, b) => (b.rateHz / b.images > a.rateHz / a.images ? b : a));
   const highest = Math.max(...readings.map((r) => r.rateHz));
-  const ceilingPatternHz = Math.max(highest * maxMultiple, expected ? n * expected.maxHz * (1 + tol) : 0);
+  const ceilingPatternHz = Math.max(
+    highest * maxMultiple,
+    expected ? n * expected.maxHz * (1 + tol) : 0,
+  );
 
   const candidates: SpeedCandidate[] = [];
   const pLast = Math.floor((ceilingPatternHz * base.images) / base.rateHz);
-  requireWorkable(pLast, 'expected speed range', 'possible speeds to test', 'lower its top or add a faster reading');
+  requireWorkable(
+    pLast,
+    'expected speed range',
+    'possible speeds to test',
+    'lower its top or add a faster reading',
+  );
   for (let p = 1; p <= pLast && candidates.length < MAX_CANDIDATES * 4; p++) {
     if (gcd(p, base.images) !== 1) continue;
     const guess = (p / base.images) * base.rateHz;
@@ -104,7 +116,9 @@ export function findSpeed(
     const speedHz = fit.patternHz / n;
     candidates.push({
       speedHz,
-      expected: expected ? speedHz >= expected.minHz * (1 - tol) && speedHz <= expected.maxHz * (1 + tol) : false,
+      expected: expected
+        ? speedHz >= expected.minHz * (1 - tol) && speedHz <= expected.maxHz * (1 + tol)
+        : false,
       misfit: fit.misfit,
       locks: fit.locks,
     });
@@ -166,9 +180,13 @@ function nextRate(
   }
   if (leading.length === 1) {
     const G = leading[0].speedHz * n;
-    const confirm = [2 * G, G, G / 2].find((s) => inRange(s) && !tried(s)) ?? (inRange(2 * G) ? 2 * G : undefined);
+    const confirm =
+      [2 * G, G, G / 2].find((s) => inRange(s) && !tried(s)) ??
+      (inRange(2 * G) ? 2 * G : undefined);
     if (confirm === undefined) return {};
     return { nextRateHz: confirm, nextPurpose: 'confirm', predictions: predict(confirm) };
   }
-  return best ? { nextRateHz: best.rate, nextPurpose: 'separate', predictions: best.predictions } : {};
+  return best
+    ? { nextRateHz: best.rate, nextPurpose: 'separate', predictions: best.predictions }
+    : {};
 }

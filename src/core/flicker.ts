@@ -8,11 +8,17 @@ export type FlickerRisk = 'no-effect' | 'low-risk' | 'elevated';
  * above. No observable effect: 0.01·f below 90 Hz, 0.0333·f from 90 Hz to 3000 Hz, no limit above.
  * Boundaries: 90 Hz belongs to the upper segment; 1250 Hz and 3000 Hz still carry their line.
  */
-export function flickerLimits(flickerHz: number): { lowRiskPercent: number; noEffectPercent: number } {
+export function flickerLimits(flickerHz: number): {
+  lowRiskPercent: number;
+  noEffectPercent: number;
+} {
   const f = requirePositive(flickerHz, 'flicker frequency');
   const lowRiskPercent = f < 90 ? 0.025 * f : f <= 1250 ? 0.08 * f : 100;
   const noEffectPercent = f < 90 ? 0.01 * f : f <= 3000 ? 0.0333 * f : 100;
-  return { lowRiskPercent: Math.min(lowRiskPercent, 100), noEffectPercent: Math.min(noEffectPercent, 100) };
+  return {
+    lowRiskPercent: Math.min(lowRiskPercent, 100),
+    noEffectPercent: Math.min(noEffectPercent, 100),
+  };
 }
 
 /**
@@ -65,7 +71,10 @@ export function svmThreshold(frequencyHz: number): number {
  */
 export function svm(components: LightComponent[]): number {
   if (!Array.isArray(components) || components.length === 0) {
-    throw new InputError('light components', 'Give at least one flicker component (frequency and amplitude).');
+    throw new InputError(
+      'light components',
+      'Give at least one flicker component (frequency and amplitude).',
+    );
   }
   let sum = 0;
   components.forEach((c, i) => {

@@ -7,7 +7,10 @@ import { InputError } from './InputError';
  */
 export function gcd(a: number, b: number): number {
   if (!(Number.isInteger(a) && Number.isInteger(b) && a >= 0 && b >= 0)) {
-    throw new InputError('whole numbers', `whole numbers of at least 0 are needed (got ${String(a)} and ${String(b)}).`);
+    throw new InputError(
+      'whole numbers',
+      `whole numbers of at least 0 are needed (got ${String(a)} and ${String(b)}).`,
+    );
   }
   // A temporary, not a destructuring swap: this runs thousands of times per lock list.
   while (b !== 0) {

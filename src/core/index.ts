@@ -30,7 +30,15 @@ export {
   flashArcBlurM,
   rollingSkewDegrees,
 } from './exposure';
-export { flickerRisk, flickerLimits, percentFlicker, svm, svmThreshold, type FlickerRisk, type LightComponent } from './flicker';
+export {
+  flickerRisk,
+  flickerLimits,
+  percentFlicker,
+  svm,
+  svmThreshold,
+  type FlickerRisk,
+  type LightComponent,
+} from './flicker';
 export {
   synchronousSpeedHz,
   motorSpeedHz,
@@ -40,7 +48,13 @@ export {
   wheelSpeedHz,
   tyreDiameterM,
 } from './drives';
-export { foldedHz, lowPassGainDb, rcCutoffHz, converterRangeDb, orderForAttenuation } from './logger';
+export {
+  foldedHz,
+  lowPassGainDb,
+  rcCutoffHz,
+  converterRangeDb,
+  orderForAttenuation,
+} from './logger';
 export * from './units';
 export { gcd } from './gcd';
 // Field tools (issue 5): speed finder steps, whole machine, lighting, camera, logger, reports.

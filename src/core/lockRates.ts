@@ -54,7 +54,12 @@ export function lockRates(part: Part, range: Range, opts?: { maxImages?: number 
     firstP[q] = Math.max(1, Math.ceil((patternHz * q) / hi)); // s = F·q/p ≤ hi
     const last = Math.floor((patternHz * q) / lo); // s ≥ lo
     count += Math.max(0, last - firstP[q] + 1);
-    requireWorkable(count, 'rate range', 'lock-in rates', 'raise the lowest rate or narrow the range');
+    requireWorkable(
+      count,
+      'rate range',
+      'lock-in rates',
+      'raise the lowest rate or narrow the range',
+    );
     nextP[q] = last + 1;
     head[q] = nextHead(q);
   }
@@ -72,7 +77,14 @@ export function lockRates(part: Part, range: Range, opts?: { maxImages?: number 
     const p = nextP[q];
     head[q] = nextHead(q);
     if (rateHz < lo || rateHz > hi) continue;
-    out.push({ rateHz, images: q, p, q, lowHz: rateHz * (1 - tolerance), highHz: rateHz * (1 + tolerance) });
+    out.push({
+      rateHz,
+      images: q,
+      p,
+      q,
+      lowHz: rateHz * (1 - tolerance),
+      highHz: rateHz * (1 + tolerance),
+    });
   }
   return out;
 

@@ -1,4 +1,10 @@
-import { requireFinite, requireFiniteResult, requireNonNegative, requirePositive, requireWhole } from './InputError';
+import {
+  requireFinite,
+  requireFiniteResult,
+  requireNonNegative,
+  requirePositive,
+  requireWhole,
+} from './InputError';
 
 /**
  * Where a component lands after sampling (physics.md §9): |f − fs·round(f/fs)|, in [0, fs/2].
@@ -55,7 +61,11 @@ export function converterRangeDb(bits: number): number {
  * Returns undefined when f is not above fc (no order can do it).
  * @example orderForAttenuation(1000, 100, 40) // 2 (order 2 gives 40.0004 dB)
  */
-export function orderForAttenuation(signalHz: number, cutoffHz: number, needDb: number): number | undefined {
+export function orderForAttenuation(
+  signalHz: number,
+  cutoffHz: number,
+  needDb: number,
+): number | undefined {
   const f = requirePositive(signalHz, 'signal frequency');
   const fc = requirePositive(cutoffHz, 'cutoff frequency');
   const need = requireNonNegative(needDb, 'attenuation needed');

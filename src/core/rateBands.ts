@@ -195,7 +195,13 @@ function decode(code: number): RateBandCause {
 }
 
 function safeBand(fromHz: number, toHz: number): RateBand {
-  return { fromHz, toHz, safe: true, reason: 'Every part shows its true direction of turning.', causes: [] };
+  return {
+    fromHz,
+    toHz,
+    safe: true,
+    reason: 'Every part shows its true direction of turning.',
+    causes: [],
+  };
 }
 
 const MAX_CAUSES_IN_REASON = 4;
@@ -207,7 +213,10 @@ function describeCauses(causes: RateBandCause[]): string {
     if (c.kind === 'backward') return `${who} looks backward or its direction is unclear`;
     return c.images === 1 ? `${who} looks still` : `${who} shows ${c.images} images standing still`;
   });
-  const more = causes.length > MAX_CAUSES_IN_REASON ? `; and ${causes.length - MAX_CAUSES_IN_REASON} more` : '';
+  const more =
+    causes.length > MAX_CAUSES_IN_REASON
+      ? `; and ${causes.length - MAX_CAUSES_IN_REASON} more`
+      : '';
   const text = words.join('; ') + more;
   return text.charAt(0).toUpperCase() + text.slice(1) + '.';
 }

@@ -18,7 +18,11 @@ import { requireWorkable } from './workLimit';
  *
  * Source: the alias relation n·a = n·f − k·s (any DSP text) solved for s.
  */
-export function ratesForApparent(part: Part, apparentHz: number, range: Range): Array<{ rateHz: number; k: number }> {
+export function ratesForApparent(
+  part: Part,
+  apparentHz: number,
+  range: Range,
+): Array<{ rateHz: number; k: number }> {
   const { speedHz: f, symmetry: n } = checkPart(part);
   const a = requireFinite(apparentHz, 'wanted apparent speed');
   const { minHz, maxHz } = checkRange(range);
@@ -29,7 +33,12 @@ export function ratesForApparent(part: Part, apparentHz: number, range: Range): 
   const kFirst = Math.max(1, Math.ceil(((n * gap) / maxHz) * (1 - 1e-12)));
   let kLast = Math.floor(((n * gap) / minHz) * (1 + 1e-12));
   if (a !== 0) kLast = Math.min(kLast, Math.ceil(gap / (2 * Math.abs(a))));
-  requireWorkable(kLast - kFirst + 1, 'rate range', 'rates', 'raise the lowest rate or narrow the range');
+  requireWorkable(
+    kLast - kFirst + 1,
+    'rate range',
+    'rates',
+    'raise the lowest rate or narrow the range',
+  );
   const out: Array<{ rateHz: number; k: number }> = [];
   for (let k = kLast; k >= kFirst; k--) {
     if (Math.abs((k * a) / gap) >= 0.5) continue;

@@ -1,4 +1,10 @@
-import { InputError, requireFinite, requirePositive, requireWhole, requireBetween } from './InputError';
+import {
+  InputError,
+  requireFinite,
+  requirePositive,
+  requireWhole,
+  requireBetween,
+} from './InputError';
 
 /** A turning part: signed speed in rev/s, identical equally spaced features, relative speed tolerance. */
 export interface Part {
@@ -33,7 +39,8 @@ export function checkPart(part: unknown, field = 'part'): Required<Part> {
   const p = part as Record<string, unknown>;
   const speedHz = requireFinite(p.speedHz, 'speed');
   const symmetry = requireWhole(p.symmetry, 'features (blades, spokes)', 1, MAX_SYMMETRY);
-  const tolerance = p.tolerance === undefined ? 0 : requireBetween(p.tolerance, 'speed tolerance', 0, 0.5);
+  const tolerance =
+    p.tolerance === undefined ? 0 : requireBetween(p.tolerance, 'speed tolerance', 0, 0.5);
   return { speedHz, symmetry, tolerance };
 }
 
@@ -46,7 +53,10 @@ export function checkRange(range: unknown, field = 'rate range'): Range {
   const minHz = requirePositive(r.minHz, `lowest ${field.replace(/ range$/, '')}`);
   const maxHz = requirePositive(r.maxHz, `highest ${field.replace(/ range$/, '')}`);
   if (!(minHz < maxHz)) {
-    throw new InputError(field, `The ${field} is empty: the lowest (${minHz}) must be below the highest (${maxHz}).`);
+    throw new InputError(
+      field,
+      `The ${field} is empty: the lowest (${minHz}) must be below the highest (${maxHz}).`,
+    );
   }
   return { minHz, maxHz };
 }
@@ -55,5 +65,8 @@ export function checkRange(range: unknown, field = 'rate range'): Range {
 export function checkSampler(sampler: unknown): Sampler {
   if (sampler === undefined) return 'flash';
   if (sampler === 'flash' || sampler === 'frames') return sampler;
-  throw new InputError('sampler', `sampler must be 'flash' (strobe or lighting) or 'frames' (camera).`);
+  throw new InputError(
+    'sampler',
+    `sampler must be 'flash' (strobe or lighting) or 'frames' (camera).`,
+  );
 }

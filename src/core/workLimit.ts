@@ -20,8 +20,13 @@ export function requireWorkable(
   limit = MAX_WORK_ITEMS,
 ): number {
   if (!(count <= limit)) {
-    const shown = Number.isFinite(count) ? `about ${Math.round(count).toLocaleString('en')}` : 'too many';
-    throw new InputError(field, `The ${field} holds ${shown} ${what}, more than can be listed: ${advice}.`);
+    const shown = Number.isFinite(count)
+      ? `about ${Math.round(count).toLocaleString('en')}`
+      : 'too many';
+    throw new InputError(
+      field,
+      `The ${field} holds ${shown} ${what}, more than can be listed: ${advice}.`,
+    );
   }
   return count;
 }

@@ -2,7 +2,11 @@
 // clicked through a temporary link, released straight after.
 
 /** Offers `text` to the user as a file named `filename`. Returns false where the browser cannot. */
-export function downloadText(filename: string, text: string, mime = 'text/plain;charset=utf-8'): boolean {
+export function downloadText(
+  filename: string,
+  text: string,
+  mime = 'text/plain;charset=utf-8',
+): boolean {
   if (typeof document === 'undefined' || typeof URL.createObjectURL !== 'function') return false;
   const url = URL.createObjectURL(new Blob([text], { type: mime }));
   const a = document.createElement('a');

@@ -16,7 +16,8 @@ export function readField<T extends number | readonly number[]>(
   try {
     const value = reader(text);
     const numbers: readonly number[] = typeof value === 'number' ? [value] : value;
-    if (!numbers.every(Number.isFinite)) return { ok: false, message: 'This gives no usable number.' };
+    if (!numbers.every(Number.isFinite))
+      return { ok: false, message: 'This gives no usable number.' };
     return { ok: true, value };
   } catch (error) {
     if (error instanceof InputError) return { ok: false, message: sentence(error.message) };
@@ -40,7 +41,10 @@ function within(value: number, min: number, max: number, what: string, unit = ''
 function above(value: number, min: number, max: number, what: string, unit = ''): number {
   if (value <= min || value > max) {
     const u = unit ? ` ${unit}` : '';
-    throw new InputError(what, `${sentence(what)} must be above ${min}${u} and at most ${max}${u}.`);
+    throw new InputError(
+      what,
+      `${sentence(what)} must be above ${min}${u} and at most ${max}${u}.`,
+    );
   }
   return value;
 }
@@ -67,7 +71,13 @@ const BARE_NUMBER = /^[+\-−]?[\d\s.,'\u00a0\u202f]+$/;
  * checked here: "1/0" or "12abc" is not a whole number.
  * @example readWhole('6 blades', 'features', 1, 100, /\s*blades?$/i) // 6
  */
-export function readWhole(text: string, what: string, min: number, max: number, words?: RegExp): number {
+export function readWhole(
+  text: string,
+  what: string,
+  min: number,
+  max: number,
+  words?: RegExp,
+): number {
   const trimmed = typeof text === 'string' ? text.trim() : '';
   const bare = words ? trimmed.replace(words, '').trim() : trimmed;
   if (bare !== '' && !BARE_NUMBER.test(bare)) {
@@ -94,7 +104,8 @@ export function readTolerancePercent(text: string): number {
 /** Motor poles: an even whole number. */
 export function readPoles(text: string): number {
   const poles = readWhole(text, 'poles', 2, 200, /\s*poles?$/i);
-  if (poles % 2 !== 0) throw new InputError('poles', 'Poles come in pairs: give an even number such as 2, 4 or 6.');
+  if (poles % 2 !== 0)
+    throw new InputError('poles', 'Poles come in pairs: give an even number such as 2, 4 or 6.');
   return poles;
 }
 
@@ -105,7 +116,13 @@ export function readSlipPercent(text: string): number {
 
 /** Camera frame rate, frames per second. */
 export function readFrameRate(text: string): number {
-  return above(parseQuantity(text, 'rate', 'fps', 'frame rate'), 0, MAX_RATE_HZ, 'frame rate', 'frames/s');
+  return above(
+    parseQuantity(text, 'rate', 'fps', 'frame rate'),
+    0,
+    MAX_RATE_HZ,
+    'frame rate',
+    'frames/s',
+  );
 }
 
 /** Shutter angle, degrees. */
@@ -123,20 +140,30 @@ export function readExposureSeconds(text: string): number {
   let seconds: number;
   if (bare) {
     const x = parseNumber(text, 'exposure');
-    if (x <= 0) throw new InputError('exposure', 'Exposure must be longer than zero: type 500 for 1/500 s.');
+    if (x <= 0)
+      throw new InputError('exposure', 'Exposure must be longer than zero: type 500 for 1/500 s.');
     seconds = x >= 1 ? 1 / x : x;
   } else {
     seconds = parseQuantity(text, 'time', 's', 'exposure');
   }
   if (seconds < 1e-6 || seconds > 1) {
-    throw new InputError('exposure', 'Exposure must lie between 1/1,000,000 s and 1 s: type 500 for 1/500 s.');
+    throw new InputError(
+      'exposure',
+      'Exposure must lie between 1/1,000,000 s and 1 s: type 500 for 1/500 s.',
+    );
   }
   return seconds;
 }
 
 /** Rolling-shutter readout, ms (0 = a global shutter). */
 export function readReadoutMs(text: string): number {
-  return within(parseQuantity(text, 'time', 'ms', 'readout time') * 1000, 0, 1000, 'readout time', 'ms');
+  return within(
+    parseQuantity(text, 'time', 'ms', 'readout time') * 1000,
+    0,
+    1000,
+    'readout time',
+    'ms',
+  );
 }
 
 /** A flash rate typed in flashes per minute or Hz (or with its own unit word) → flashes per minute. */
@@ -147,7 +174,13 @@ export function readFlashRateFpm(text: string, unit: 'fpm' | 'Hz', what = 'flash
 
 /** A lighting flicker frequency, Hz. */
 export function readFlickerHz(text: string): number {
-  return above(parseQuantity(text, 'rate', 'hz', 'flicker frequency'), 0, MAX_RATE_HZ, 'flicker frequency', 'Hz');
+  return above(
+    parseQuantity(text, 'rate', 'hz', 'flicker frequency'),
+    0,
+    MAX_RATE_HZ,
+    'flicker frequency',
+    'Hz',
+  );
 }
 
 /** Percent flicker (modulation depth), 0–100. */

@@ -9,7 +9,10 @@ const grouped = new Map<number, Intl.NumberFormat>();
 function formatter(decimals: number): Intl.NumberFormat {
   let f = grouped.get(decimals);
   if (!f) {
-    f = new Intl.NumberFormat('en-US', { maximumFractionDigits: decimals, minimumFractionDigits: 0 });
+    f = new Intl.NumberFormat('en-US', {
+      maximumFractionDigits: decimals,
+      minimumFractionDigits: 0,
+    });
     grouped.set(decimals, f);
   }
   return f;
@@ -65,7 +68,10 @@ export function numberForField(value: number): string {
   if (abs >= 1e-6 && abs < 1e15) {
     // toFixed avoids exponent form; trim the zeros it pads with.
     const decimals = Math.max(0, Math.min(12, 6 - Math.floor(Math.log10(abs))));
-    return rounded.toFixed(decimals).replace(/(\.\d*?)0+$/, '$1').replace(/\.$/, '');
+    return rounded
+      .toFixed(decimals)
+      .replace(/(\.\d*?)0+$/, '$1')
+      .replace(/\.$/, '');
   }
   return String(rounded);
 }

@@ -3,7 +3,8 @@
 import { signal } from '@preact/signals';
 
 /** Screens reachable from the tab bar. Other tools add their id here and a tab in app.tsx. */
-export type ScreenId = 'check' | 'machines' | 'lighting' | 'camera-plan' | 'logger' | 'speed-finder' | 'machine-chain';
+export type ScreenId =
+  'check' | 'machines' | 'lighting' | 'camera-plan' | 'logger' | 'speed-finder' | 'machine-chain';
 
 export const currentScreen = signal<ScreenId>('check');
 

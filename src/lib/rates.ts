@@ -28,7 +28,12 @@ export function formatRate(rateHz: number, kind: SamplerKind, flashUnit: FlashUn
 }
 
 /** A rate band "from – to unit". */
-export function formatRateSpan(fromHz: number, toHz: number, kind: SamplerKind, flashUnit: FlashUnit): string {
+export function formatRateSpan(
+  fromHz: number,
+  toHz: number,
+  kind: SamplerKind,
+  flashUnit: FlashUnit,
+): string {
   const unit = rateUnit(kind, flashUnit);
   return `${formatPrecise(rateNumber(fromHz, kind, flashUnit))} – ${formatPrecise(rateNumber(toHz, kind, flashUnit))} ${unit}`;
 }

@@ -29,7 +29,8 @@ import { flickerHzOf, samplerRateHz, setup } from './setup';
 import { formatNumber } from '../lib/format';
 
 /** What the viewer reads, in the words the screen uses for its headline. */
-export type VerdictKind = 'true' | 'steady' | 'creeping' | 'forward' | 'backward' | 'still' | 'images' | 'unclear';
+export type VerdictKind =
+  'true' | 'steady' | 'creeping' | 'forward' | 'backward' | 'still' | 'images' | 'unclear';
 
 /** How far the viewer can trust what they see. */
 export type Trust = 'trust' | 'caution' | 'danger';
@@ -157,16 +158,28 @@ function samplerMode(kind: SamplerKind): Sampler {
 }
 
 function samplerRange(s: Setup, rateHz: number): Range {
-  if (s.samplerKind === 'strobe') return { minHz: s.strobe.minFpm / 60, maxHz: s.strobe.maxFpm / 60 };
+  if (s.samplerKind === 'strobe')
+    return { minHz: s.strobe.minFpm / 60, maxHz: s.strobe.maxFpm / 60 };
   const base = s.samplerKind === 'camera' ? CAMERA_RANGE : LIGHTING_RANGE;
   return { minHz: Math.min(base.minHz, rateHz), maxHz: Math.max(base.maxHz, rateHz) };
 }
 
 /** The verdict in plain words, from the core's reading of the part (physics.md §2–3). */
-export function verdictOf(motion: ApparentMotion, part: Required<Part>, steadyLight = false): Verdict {
+export function verdictOf(
+  motion: ApparentMotion,
+  part: Required<Part>,
+  steadyLight = false,
+): Verdict {
   const trueRpm = part.speedHz * 60;
   if (steadyLight) {
-    return { kind: 'steady', headline: 'Steady light: true motion', trust: 'trust', images: 1, apparentRpm: trueRpm, trueRpm };
+    return {
+      kind: 'steady',
+      headline: 'Steady light: true motion',
+      trust: 'trust',
+      images: 1,
+      apparentRpm: trueRpm,
+      trueRpm,
+    };
   }
   const images = motion.images;
   const apparentRpm = (images > 1 ? motion.driftHz : motion.apparentHz) * 60;
@@ -176,7 +189,12 @@ export function verdictOf(motion: ApparentMotion, part: Required<Part>, steadyLi
   // never show the true motion, so they always carry the safety notice.
   if (images > 1 && motion.look !== 'still') {
     const dir = Math.sign(motion.driftHz) === Math.sign(part.speedHz) ? 'forward' : 'backward';
-    return { ...base, kind: 'images', headline: `${images} images, creeping ${dir}`, trust: 'danger' };
+    return {
+      ...base,
+      kind: 'images',
+      headline: `${images} images, creeping ${dir}`,
+      trust: 'danger',
+    };
   }
   switch (motion.look) {
     case 'true':
@@ -186,16 +204,29 @@ export function verdictOf(motion: ApparentMotion, part: Required<Part>, steadyLi
         ? { ...base, kind: 'images', headline: `${images} images, standing still`, trust: 'danger' }
         : { ...base, kind: 'still', headline: 'Looks still', trust: 'danger' };
     case 'unclear':
-      return { ...base, kind: 'unclear', headline: images > 1 ? `${images} images, direction unclear` : 'Direction unclear', trust: 'danger' };
+      return {
+        ...base,
+        kind: 'unclear',
+        headline: images > 1 ? `${images} images, direction unclear` : 'Direction unclear',
+        trust: 'danger',
+      };
     case 'backward':
-      return { ...base, kind: 'backward', headline: images > 1 ? `${images} images, turning backward` : 'Turning backward', trust: 'danger' };
+      return {
+        ...base,
+        kind: 'backward',
+        headline: images > 1 ? `${images} images, turning backward` : 'Turning backward',
+        trust: 'danger',
+      };
     case 'forward': {
       const creeping = Math.abs(apparentRpm) <= CREEP_LIMIT_RPM;
       const words = creeping ? 'creeping forward' : 'forward, slower than real';
       return {
         ...base,
         kind: creeping ? 'creeping' : 'forward',
-        headline: images > 1 ? `${images} images, ${words}` : words.charAt(0).toUpperCase() + words.slice(1),
+        headline:
+          images > 1
+            ? `${images} images, ${words}`
+            : words.charAt(0).toUpperCase() + words.slice(1),
         trust: 'caution',
       };
     }
@@ -261,9 +292,13 @@ function searchAround<T>(
 
 /** The `perSide` entries nearest the anchor on each side, plus any right at it, ascending. */
 function nearest<T>(items: T[], anchorHz: number, rateOf: (t: T) => number, perSide: number): T[] {
-  const below = items.filter((t) => rateOf(t) < anchorHz * (1 - 1e-9)).sort((a, b) => rateOf(b) - rateOf(a));
+  const below = items
+    .filter((t) => rateOf(t) < anchorHz * (1 - 1e-9))
+    .sort((a, b) => rateOf(b) - rateOf(a));
   const here = items.filter((t) => Math.abs(rateOf(t) - anchorHz) <= anchorHz * 1e-9);
-  const above = items.filter((t) => rateOf(t) > anchorHz * (1 + 1e-9)).sort((a, b) => rateOf(a) - rateOf(b));
+  const above = items
+    .filter((t) => rateOf(t) > anchorHz * (1 + 1e-9))
+    .sort((a, b) => rateOf(a) - rateOf(b));
   return [...below.slice(0, perSide).reverse(), ...here, ...above.slice(0, perSide)];
 }
 
@@ -274,7 +309,12 @@ function nearest<T>(items: T[], anchorHz: number, rateOf: (t: T) => number, perS
  */
 const SUGGESTED_MAX_IMAGES = 2;
 
-function nearbyLocks(part: Required<Part>, rateHz: number, range: Range, sampler: Sampler): SuggestedRate[] {
+function nearbyLocks(
+  part: Required<Part>,
+  rateHz: number,
+  range: Range,
+  sampler: Sampler,
+): SuggestedRate[] {
   const patternHz = part.symmetry * Math.abs(part.speedHz);
   if (patternHz === 0) return [];
   const maxImages = sampler === 'flash' ? Math.min(look.maxImages, SUGGESTED_MAX_IMAGES) : 1;
@@ -297,7 +337,13 @@ function nearbyLocks(part: Required<Part>, rateHz: number, range: Range, sampler
   }));
 }
 
-function creepRates(part: Required<Part>, creepRpm: number, rateHz: number, range: Range, sampler: Sampler): { rates: CreepRate[]; note?: string } {
+function creepRates(
+  part: Required<Part>,
+  creepRpm: number,
+  rateHz: number,
+  range: Range,
+  sampler: Sampler,
+): { rates: CreepRate[]; note?: string } {
   const f = part.speedHz;
   if (f === 0) return { rates: [], note: 'The part is not turning, so no rate can make it creep.' };
   const creepHz = creepRpm / 60;
@@ -322,11 +368,23 @@ function creepRates(part: Required<Part>, creepRpm: number, rateHz: number, rang
     return { rateHz: r.rateHz, side: sideOf(r.rateHz, rateHz), look: m.look, images: m.images };
   });
   if (rates.length > 0) return { rates };
-  if (!searched) return { rates, note: 'The features pass too often per flash here to pick a creep rate: choose a faster rate.' };
-  return { rates, note: `No rate in the range makes it creep forward at ${formatNumber(creepRpm)} rpm.` };
+  if (!searched)
+    return {
+      rates,
+      note: 'The features pass too often per flash here to pick a creep rate: choose a faster rate.',
+    };
+  return {
+    rates,
+    note: `No rate in the range makes it creep forward at ${formatNumber(creepRpm)} rpm.`,
+  };
 }
 
-function bandSummary(part: Required<Part>, rateHz: number, range: Range, sampler: Sampler): BandSummary {
+function bandSummary(
+  part: Required<Part>,
+  rateHz: number,
+  range: Range,
+  sampler: Sampler,
+): BandSummary {
   const patternHz = part.symmetry * Math.abs(part.speedHz);
   const stillPatternHz = part.symmetry * look.stillHz;
   const loHz = Math.max(0, patternHz * (1 - part.tolerance) - stillPatternHz);
@@ -340,26 +398,39 @@ function bandSummary(part: Required<Part>, rateHz: number, range: Range, sampler
     partial = true;
     const anchor = clampTo(range, rateHz);
     let w = Math.max(range.maxHz / anchor, anchor / range.minHz);
-    for (let i = 0; i < 60 && cost(windowAround(anchor, w, range)) > WORK_LIMIT; i++) w = 1 + (w - 1) / 2;
+    for (let i = 0; i < 60 && cost(windowAround(anchor, w, range)) > WORK_LIMIT; i++)
+      w = 1 + (w - 1) / 2;
     span = windowAround(anchor, w, range);
   }
   const fits = span.minHz < span.maxHz && (patternHz === 0 || cost(span) <= WORK_LIMIT);
   const all = fits ? rateBands([part], span, { sampler }) : [];
   const current = all.find((b) => b.fromHz <= rateHz && rateHz <= b.toHz);
   const safe = all.filter((b) => b.safe);
-  const wide = safe.filter((b) => b.toHz - b.fromHz >= MIN_USEFUL_BAND * Math.sqrt(b.fromHz * b.toHz));
+  const wide = safe.filter(
+    (b) => b.toHz - b.fromHz >= MIN_USEFUL_BAND * Math.sqrt(b.fromHz * b.toHz),
+  );
   const mid = (b: RateBand) => Math.sqrt(b.fromHz * b.toHz);
   const safeNearby = [...(wide.length > 0 ? wide : safe)]
     .sort((a, b) => Math.abs(Math.log(mid(a) / rateHz)) - Math.abs(Math.log(mid(b) / rateHz)))
     .slice(0, 2 * LOCKS_PER_SIDE)
     .sort((a, b) => a.fromHz - b.fromHz);
-  return { all, span: fits ? span : { minHz: rateHz, maxHz: rateHz }, partial: partial || !fits, current, safeNearby, safeCount: safe.length };
+  return {
+    all,
+    span: fits ? span : { minHz: rateHz, maxHz: rateHz },
+    partial: partial || !fits,
+    current,
+    safeNearby,
+    safeCount: safe.length,
+  };
 }
 
 function cameraResult(s: Setup, part: Required<Part>, notes: string[]): CameraResult {
   const { frameRate, exposure, readoutMs } = s.camera;
   const frameS = 1 / frameRate;
-  let exposureS = exposure.mode === 'angle' ? exposureFromShutterAngle(exposure.angleDeg, frameRate) : exposure.seconds;
+  let exposureS =
+    exposure.mode === 'angle'
+      ? exposureFromShutterAngle(exposure.angleDeg, frameRate)
+      : exposure.seconds;
   if (exposureS > frameS * (1 + 1e-9)) {
     notes.push('The exposure is longer than one frame; a camera caps it at one frame (360°).');
     exposureS = frameS;
@@ -367,7 +438,9 @@ function cameraResult(s: Setup, part: Required<Part>, notes: string[]): CameraRe
   const shutterAngleDeg = Math.min(360, 360 * exposureS * frameRate);
   const readoutS = readoutMs / 1000;
   if (readoutS > frameS * (1 + 1e-9)) {
-    notes.push('The readout time is longer than one frame: no camera reads that slowly at this frame rate.');
+    notes.push(
+      'The readout time is longer than one frame: no camera reads that slowly at this frame rate.',
+    );
   }
   const blurDeg = blurDegrees(part.speedHz, exposureS);
   const pitches = blurPitches(part.speedHz, part.symmetry, exposureS);
@@ -412,7 +485,10 @@ export function computeCheck(s: Setup): CheckResult {
   const verdict = verdictOf(motion, part, steadyLight);
   const creep = creepRates(part, s.creepRpm, rateHz, range, sampler);
   const camera = s.samplerKind === 'camera' ? cameraResult(s, part, notes) : undefined;
-  const lighting = s.samplerKind === 'lighting' ? lightingResult(flickerHzOf(s.lighting), s.lighting.modulationPercent) : undefined;
+  const lighting =
+    s.samplerKind === 'lighting'
+      ? lightingResult(flickerHzOf(s.lighting), s.lighting.modulationPercent)
+      : undefined;
   const flashes = sampler === 'flash' && !steadyLight;
 
   return {

@@ -6,7 +6,15 @@ import { motorSpeedHz } from '../core';
 import { loadMachines } from './machines';
 import { decodeShareFragment } from './shareLink';
 import { loadCurrentSetup, openStore, saveCurrentSetup } from './storage';
-import { defaultSetup, type CameraSpec, type LightingSpec, type PartSpec, type SamplerKind, type Setup, type SpeedUnit } from './model';
+import {
+  defaultSetup,
+  type CameraSpec,
+  type LightingSpec,
+  type PartSpec,
+  type SamplerKind,
+  type Setup,
+  type SpeedUnit,
+} from './model';
 
 /** A deep copy, so no two set-ups share nested objects. */
 export function copySetup(s: Setup): Setup {
@@ -187,18 +195,27 @@ export interface SessionSources {
  * default set-up; otherwise the set-up from the last visit, else the default. A set-up the
  * user already changed (it is no longer `untouched`, the one the page opened with) is left alone.
  */
-export async function openSession(sources: SessionSources, untouched: Setup = setup.peek()): Promise<void> {
+export async function openSession(
+  sources: SessionSources,
+  untouched: Setup = setup.peek(),
+): Promise<void> {
   const shared = sources.decodeShare(sources.hash);
   if (shared.ok) {
     replaceSetup(shared.setup);
     openMachineId.value = null;
-    sessionMessage.value = { kind: 'info', text: 'Opened a shared set-up. Save it as a machine to keep it.' };
+    sessionMessage.value = {
+      kind: 'info',
+      text: 'Opened a shared set-up. Save it as a machine to keep it.',
+    };
     sources.clearHash();
     return;
   }
   if (shared.error !== null) {
     replaceSetup(defaultSetup);
-    sessionMessage.value = { kind: 'problem', text: `${shared.error} The default set-up is shown instead.` };
+    sessionMessage.value = {
+      kind: 'problem',
+      text: `${shared.error} The default set-up is shown instead.`,
+    };
     sources.clearHash();
     return;
   }

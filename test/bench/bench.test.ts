@@ -13,10 +13,14 @@ async function optionalBench(path: string, exportName: string): Promise<BenchRes
 }
 
 test('every measured median stays within its budget', async () => {
-  const results = [...runCoreBench(), ...(await optionalBench('./render.bench.ts', 'runRenderBench'))];
+  const results = [
+    ...runCoreBench(),
+    ...(await optionalBench('./render.bench.ts', 'runRenderBench')),
+  ];
   const rows = results.map((r) => {
     const ok = r.medianMs <= r.budgetMs;
-    const show = (ms: number) => (ms < 0.01 ? `${(ms * 1000).toFixed(3)} µs` : `${ms.toFixed(3)} ms`);
+    const show = (ms: number) =>
+      ms < 0.01 ? `${(ms * 1000).toFixed(3)} µs` : `${ms.toFixed(3)} ms`;
     return `${ok ? 'ok  ' : 'OVER'}  ${r.name.padEnd(66)} median ${show(r.medianMs).padStart(11)}   budget ${show(r.budgetMs)}`;
   });
   console.log(['', 'Trueturn benchmarks (median)', ...rows, ''].join('\n'));

@@ -16,9 +16,12 @@ export function runCoreBench(): BenchResult[] {
   const results: BenchResult[] = [
     {
       name: 'apparentMotion, one call',
-      medianMs: medianMs(() => apparentMotion(parts[2], (rate = rate > 990 ? 10 : rate + 0.37)).apparentHz, {
-        batch: 20_000,
-      }),
+      medianMs: medianMs(
+        () => apparentMotion(parts[2], (rate = rate > 990 ? 10 : rate + 0.37)).apparentHz,
+        {
+          batch: 20_000,
+        },
+      ),
       budgetMs: 0.001,
     },
     {
@@ -33,18 +36,19 @@ export function runCoreBench(): BenchResult[] {
     },
     {
       name: 'findSpeed, 6 readings',
-      medianMs: medianMs(() =>
-        findSpeed(
-          [
-            { rateHz: 178, images: 1 },
-            { rateHz: 89, images: 1 },
-            { rateHz: 356, images: 2 },
-            { rateHz: 59.333333, images: 1 },
-            { rateHz: 44.5, images: 1 },
-            { rateHz: 534, images: 3 },
-          ],
-          6,
-        ).candidates.length,
+      medianMs: medianMs(
+        () =>
+          findSpeed(
+            [
+              { rateHz: 178, images: 1 },
+              { rateHz: 89, images: 1 },
+              { rateHz: 356, images: 2 },
+              { rateHz: 59.333333, images: 1 },
+              { rateHz: 44.5, images: 1 },
+              { rateHz: 534, images: 3 },
+            ],
+            6,
+          ).candidates.length,
       ),
       budgetMs: 2,
     },

@@ -13,7 +13,9 @@ export interface Session {
   close: () => Promise<void>;
 }
 
-export async function openBrowser(options: { width?: number; height?: number; colorScheme?: 'light' | 'dark' } = {}): Promise<Session> {
+export async function openBrowser(
+  options: { width?: number; height?: number; colorScheme?: 'light' | 'dark' } = {},
+): Promise<Session> {
   const profile = mkdtempSync(join(tmpdir(), 'trueturn-browser-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM,

@@ -11,7 +11,21 @@ afterEach(async () => {
   session = undefined;
 });
 
-const GARBAGE = ['abc', '', '   ', 'NaN', '-Infinity', '1e999', '<script>alert(1)</script>', '١٢٣', '1/0', '0x10', '12abc', '--5', '1..2'];
+const GARBAGE = [
+  'abc',
+  '',
+  '   ',
+  'NaN',
+  '-Infinity',
+  '1e999',
+  '<script>alert(1)</script>',
+  '١٢٣',
+  '1/0',
+  '0x10',
+  '12abc',
+  '--5',
+  '1..2',
+];
 
 /** The visible text of the page without what the user typed back in quotes. */
 async function shownText(page: Page): Promise<string> {
@@ -45,7 +59,15 @@ describe('typed garbage', () => {
     session = await openBrowser();
     const { page } = session;
     await openApp(page, inject('baseUrl'));
-    await checkFields(page, ['Speed', 'Blades or marks', 'Tolerance', 'Flash rate', 'Lowest rate', 'Highest rate', 'Creep speed wanted']);
+    await checkFields(page, [
+      'Speed',
+      'Blades or marks',
+      'Tolerance',
+      'Flash rate',
+      'Lowest rate',
+      'Highest rate',
+      'Creep speed wanted',
+    ]);
     await page.getByLabel('Speed from an induction motor').check();
     await checkFields(page, ['Poles', 'Slip']);
     expect(await page.locator('script:not([src])').count()).toBe(0);

@@ -41,7 +41,9 @@ describe('saved machines', () => {
     const again = await session.context.newPage();
     await openApp(again, inject('baseUrl'));
     await again.getByRole('button', { name: 'Machines' }).click();
-    await expect.poll(() => again.getByTestId('machine-list').innerText()).toContain('Sifter drive');
+    await expect
+      .poll(() => again.getByTestId('machine-list').innerText())
+      .toContain('Sifter drive');
   });
 
   test('export to a file and import it back after deleting', async () => {
@@ -61,14 +63,20 @@ describe('saved machines', () => {
     expect(file.format).toBe('trueturn-machines');
     expect(file.machines.map((m: { name: string }) => m.name)).toContain('Granulator rotor');
 
-    const row = page.locator('article', { has: page.getByRole('heading', { name: 'Granulator rotor' }) });
+    const row = page.locator('article', {
+      has: page.getByRole('heading', { name: 'Granulator rotor' }),
+    });
     await row.getByRole('button', { name: 'Delete' }).click();
     await page.getByTestId('undo-bar').waitFor();
     await page.getByTestId('undo-bar').getByRole('button', { name: 'Close' }).click();
-    await expect.poll(() => page.getByTestId('machine-list').innerText()).not.toContain('Granulator rotor');
+    await expect
+      .poll(() => page.getByTestId('machine-list').innerText())
+      .not.toContain('Granulator rotor');
 
     await page.getByTestId('import-file').setInputFiles(path);
-    await expect.poll(() => page.getByTestId('machines-outcome').innerText()).toMatch(/^Imported 2 machines/);
+    await expect
+      .poll(() => page.getByTestId('machines-outcome').innerText())
+      .toMatch(/^Imported 2 machines/);
     expect(await page.getByTestId('machine-list').innerText()).toContain('Granulator rotor');
   });
 
@@ -80,9 +88,21 @@ describe('saved machines', () => {
     const list = page.getByTestId('machine-list');
     await expect.poll(() => list.innerText()).toContain('Example');
     const before = await list.innerText();
-    for (const bad of ['this is not JSON', '{"format":"trueturn-machines","version":1,"machines":"none"}', '']) {
-      await page.getByTestId('import-file').setInputFiles({ name: 'machines.json', mimeType: 'application/json', buffer: Buffer.from(bad) });
-      await expect.poll(() => page.getByTestId('machines-outcome').innerText()).toMatch(/^Nothing was imported/);
+    for (const bad of [
+      'this is not JSON',
+      '{"format":"trueturn-machines","version":1,"machines":"none"}',
+      '',
+    ]) {
+      await page
+        .getByTestId('import-file')
+        .setInputFiles({
+          name: 'machines.json',
+          mimeType: 'application/json',
+          buffer: Buffer.from(bad),
+        });
+      await expect
+        .poll(() => page.getByTestId('machines-outcome').innerText())
+        .toMatch(/^Nothing was imported/);
       expect(await page.getByRole('alert').count()).toBeGreaterThan(0);
       expect(await list.innerText()).toBe(before);
     }

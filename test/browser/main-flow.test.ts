@@ -42,7 +42,9 @@ describe('the main flow', () => {
     const m = apparentMotion({ speedHz: 60, symmetry: 1 }, 61);
     expect(m.look).toBe('backward');
     await expect.poll(() => verdict.innerText()).toMatch(/^Turning backward/);
-    expect(await page.getByTestId('apparent-speed').innerText()).toBe(formatRpmWithDirection(m.apparentHz * 60, 1));
+    expect(await page.getByTestId('apparent-speed').innerText()).toBe(
+      formatRpmWithDirection(m.apparentHz * 60, 1),
+    );
     expect(await page.getByTestId('true-speed').innerText()).toBe('3,600 rpm');
 
     // ... and at 59 flashes/s forwards at 1 rev/s.
@@ -53,7 +55,10 @@ describe('the main flow', () => {
     expect(await page.getByTestId('photosensitivity-notice').isVisible()).toBe(true);
 
     // Tapping the single-image lock-in rate freezes it.
-    await page.getByTestId('lock-list').getByRole('button', { name: /^3,600 fpm 1 image/ }).click();
+    await page
+      .getByTestId('lock-list')
+      .getByRole('button', { name: /^3,600 fpm 1 image/ })
+      .click();
     await expect.poll(() => verdict.innerText()).toMatch(/^Looks still/);
     expect(await page.getByLabel('Flash rate', { exact: true }).inputValue()).toBe('3600');
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
@@ -61,7 +66,11 @@ describe('the main flow', () => {
     // Nothing leaves the origin: no web fonts, analytics or CDNs.
     const origin = new URL(inject('baseUrl')).origin;
     expect(requests.length).toBeGreaterThan(2);
-    expect(requests.filter((u) => !u.startsWith(origin) && !u.startsWith('data:') && !u.startsWith('blob:'))).toEqual([]);
+    expect(
+      requests.filter(
+        (u) => !u.startsWith(origin) && !u.startsWith('data:') && !u.startsWith('blob:'),
+      ),
+    ).toEqual([]);
   });
 
   test('each keystroke updates the verdict within the same frame or the next', async () => {
@@ -103,7 +112,9 @@ describe('the main flow', () => {
     const t = exposureFromShutterAngle(90, 25);
     await expect
       .poll(() => page.getByTestId('blur').innerText())
-      .toBe(`${formatNumber(blurDegrees(f, t))}° of turn, ${formatNumber(blurPitches(f, 6, t))} pitches`);
+      .toBe(
+        `${formatNumber(blurDegrees(f, t))}° of turn, ${formatNumber(blurPitches(f, 6, t))} pitches`,
+      );
     expect(await page.getByTestId('skew').innerText()).toBe(
       `${formatNumber(rollingSkewDegrees(f, 0.03))}° top to bottom, ${formatNumber((rollingSkewDegrees(f, 0.03) * 6) / 360)} pitches`,
     );
@@ -122,7 +133,9 @@ describe('the main flow', () => {
     await typeInto(page, 'Modulation (percent flicker)', '8');
     // IEEE Std 1789-2015 at 120 Hz: no-effect line 0.0333·120 = 4 %, low-risk line 0.08·120 = 9.6 %.
     expect(flickerRisk(120, 8)).toBe('low-risk');
-    await expect.poll(() => page.getByTestId('flicker-risk').innerText()).toBe('Between the no-effect and low-risk lines');
+    await expect
+      .poll(() => page.getByTestId('flicker-risk').innerText())
+      .toBe('Between the no-effect and low-risk lines');
     mkdirSync(shots, { recursive: true });
     await page.screenshot({ path: `${shots}/check-desktop-lighting-full.png`, fullPage: true });
   });

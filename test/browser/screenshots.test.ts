@@ -20,14 +20,23 @@ describe('screenshots of the check and machines screens', () => {
     for (const scheme of ['light', 'dark'] as const) {
       test(`the ${size.name} layout in ${scheme} fits the width and is written to ${dir}`, async () => {
         mkdirSync(dir, { recursive: true });
-        session = await openBrowser({ width: size.width, height: size.height, colorScheme: scheme });
+        session = await openBrowser({
+          width: size.width,
+          height: size.height,
+          colorScheme: scheme,
+        });
         const { page } = session;
         await openApp(page, inject('baseUrl'));
         const checkFile = `${dir}/check-${size.name}-${scheme}.png`;
         await page.screenshot({ path: checkFile });
-        await page.screenshot({ path: `${dir}/check-${size.name}-${scheme}-full.png`, fullPage: true });
+        await page.screenshot({
+          path: `${dir}/check-${size.name}-${scheme}-full.png`,
+          fullPage: true,
+        });
         // Nothing may stick out sideways: a phone would scroll the whole page.
-        const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+        const overflow = await page.evaluate(
+          () => document.documentElement.scrollWidth - window.innerWidth,
+        );
         expect(overflow).toBeLessThanOrEqual(0);
         await page.getByRole('button', { name: 'Machines' }).click();
         await page.getByTestId('machine-list').waitFor();

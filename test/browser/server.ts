@@ -12,11 +12,15 @@ export const testDistDir = resolve(root, 'test-output/browser-dist');
 
 /** Builds the app into `outDir` with `vite build`. Throws with Vite's output when the build fails. */
 export function buildApp(outDir = testDistDir): void {
-  const r = spawnSync(process.execPath, [viteBin, 'build', '--outDir', outDir, '--emptyOutDir', '--logLevel', 'warn'], {
-    cwd: root,
-    env: { ...process.env, NODE_ENV: 'production' },
-    encoding: 'utf8',
-  });
+  const r = spawnSync(
+    process.execPath,
+    [viteBin, 'build', '--outDir', outDir, '--emptyOutDir', '--logLevel', 'warn'],
+    {
+      cwd: root,
+      env: { ...process.env, NODE_ENV: 'production' },
+      encoding: 'utf8',
+    },
+  );
   if (r.status !== 0) throw new Error(`vite build failed:\n${r.stdout}\n${r.stderr}`);
 }
 
@@ -43,7 +47,17 @@ export async function startPreview(outDir = testDistDir): Promise<PreviewServer>
   const port = await freePort();
   const child: ChildProcess = spawn(
     process.execPath,
-    [viteBin, 'preview', '--host', '127.0.0.1', '--port', String(port), '--strictPort', '--outDir', outDir],
+    [
+      viteBin,
+      'preview',
+      '--host',
+      '127.0.0.1',
+      '--port',
+      String(port),
+      '--strictPort',
+      '--outDir',
+      outDir,
+    ],
     { cwd: root, stdio: ['ignore', 'pipe', 'pipe'] },
   );
   let output = '';

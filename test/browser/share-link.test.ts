@@ -35,9 +35,13 @@ describe('share links', () => {
     const second = await browser();
     await second.page.goto(link);
     await second.page.getByTestId('verdict').waitFor();
-    await expect.poll(() => second.page.getByLabel('Speed', { exact: true }).inputValue()).toBe('2950');
+    await expect
+      .poll(() => second.page.getByLabel('Speed', { exact: true }).inputValue())
+      .toBe('2950');
     expect(await second.page.getByLabel('Blades or marks').inputValue()).toBe('5');
-    expect(await second.page.getByLabel('Frame rate', { exact: true }).inputValue()).toBe('59.94006');
+    expect(await second.page.getByLabel('Frame rate', { exact: true }).inputValue()).toBe(
+      '59.94006',
+    );
     expect(await second.page.getByTestId('verdict').innerText()).toBe(verdict);
     expect(await second.page.getByTestId('apparent-speed').innerText()).toBe(seen);
     expect(await second.page.getByTestId('session-message').innerText()).toMatch(/shared set-up/);
@@ -48,13 +52,20 @@ describe('share links', () => {
   test('a damaged link shows a message and the default set-up', async () => {
     const s = await browser();
     const good = encodeShareFragment({ ...structuredClone(defaultSetup), creepRpm: 9 });
-    for (const bad of [good.slice(0, -5), good.replace('#s=1.', '#s=1.@@'), '#s=9.abc', '#s=1.' + 'A'.repeat(40)]) {
+    for (const bad of [
+      good.slice(0, -5),
+      good.replace('#s=1.', '#s=1.@@'),
+      '#s=9.abc',
+      '#s=1.' + 'A'.repeat(40),
+    ]) {
       // Work on a set-up of one's own first, so showing the default is a real change.
       await openApp(s.page, inject('baseUrl') + 'index.html');
       await typeInto(s.page, 'Speed', '2000');
       await s.page.goto(inject('baseUrl') + bad);
       await s.page.getByTestId('verdict').waitFor();
-      await expect.poll(() => s.page.getByTestId('session-message').innerText()).toMatch(/default set-up is shown/);
+      await expect
+        .poll(() => s.page.getByTestId('session-message').innerText())
+        .toMatch(/default set-up is shown/);
       expect(await s.page.getByLabel('Speed', { exact: true }).inputValue()).toBe('1770');
       expect(await s.page.getByLabel('Creep speed wanted').inputValue()).toBe('2');
     }
@@ -64,11 +75,20 @@ describe('share links', () => {
     const s = await browser();
     const hostile: Setup = {
       ...structuredClone(defaultSetup),
-      parts: [{ name: '<img src=x onerror="window.__hit=1">', speedRpm: 1000, features: 2, tolerancePercent: 0 }],
+      parts: [
+        {
+          name: '<img src=x onerror="window.__hit=1">',
+          speedRpm: 1000,
+          features: 2,
+          tolerancePercent: 0,
+        },
+      ],
     };
     await s.page.goto(inject('baseUrl') + encodeShareFragment(hostile));
     await s.page.getByTestId('verdict').waitFor();
-    await expect.poll(() => s.page.getByTestId('part-name').innerText()).toContain('<img src=x onerror=');
+    await expect
+      .poll(() => s.page.getByTestId('part-name').innerText())
+      .toContain('<img src=x onerror=');
     expect(await s.page.locator('main img').count()).toBe(0);
     expect(await s.page.evaluate(() => (window as { __hit?: number }).__hit)).toBeUndefined();
   });

@@ -2,7 +2,12 @@
 import 'fake-indexeddb/auto';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
-import { apparentMotion, blurDegrees, exposureFromShutterAngle, rollingSkewDegrees } from '../../src/core';
+import {
+  apparentMotion,
+  blurDegrees,
+  exposureFromShutterAngle,
+  rollingSkewDegrees,
+} from '../../src/core';
 import { App } from '../../src/app';
 import { formatNumber, formatRpmWithDirection } from '../../src/lib/format';
 import { formatRate } from '../../src/lib/rates';
@@ -53,7 +58,9 @@ describe('the check screen', () => {
     type('Flash rate', '3660');
     expect(verdict()).toBe('Turning backward');
     const m = apparentMotion({ speedHz: 60, symmetry: 1 }, 61);
-    expect(screen.getByTestId('apparent-speed').textContent).toBe(formatRpmWithDirection(m.apparentHz * 60, 1));
+    expect(screen.getByTestId('apparent-speed').textContent).toBe(
+      formatRpmWithDirection(m.apparentHz * 60, 1),
+    );
     expect(screen.getByTestId('apparent-speed').textContent).toBe('60 rpm backward');
     expect(screen.getByTestId('true-speed').textContent).toBe('3,600 rpm');
   });
@@ -77,7 +84,15 @@ describe('the check screen', () => {
 
   test('nothing on screen says NaN or Infinity, whatever is typed', () => {
     for (const text of ['', 'abc', 'NaN', '1e999', '-', '0', '-0', '1e-320', '99999999999']) {
-      for (const label of ['Speed', 'Blades or marks', 'Tolerance', 'Flash rate', 'Lowest rate', 'Highest rate', 'Creep speed wanted']) {
+      for (const label of [
+        'Speed',
+        'Blades or marks',
+        'Tolerance',
+        'Flash rate',
+        'Lowest rate',
+        'Highest rate',
+        'Creep speed wanted',
+      ]) {
         type(label, text);
       }
       const shown = document.body.textContent!.replace(/"[^"]*"/g, '');
@@ -134,7 +149,9 @@ describe('the check screen', () => {
     const blur = blurDegrees(1770 / 60, t);
     expect(screen.getByTestId('blur').textContent).toContain(`${formatNumber(blur)}°`);
     const skew = rollingSkewDegrees(1770 / 60, 0.025);
-    expect(screen.getByTestId('skew').textContent).toContain(`${formatNumber(skew)}° top to bottom`);
+    expect(screen.getByTestId('skew').textContent).toContain(
+      `${formatNumber(skew)}° top to bottom`,
+    );
     expect(screen.queryByTestId('photosensitivity-notice')).toBeNull();
     // 2.95 pitches of blur per frame: the verdict says the blades cannot be made out.
     expect(screen.getByTestId('smear-note').textContent).toMatch(/even disc/);
@@ -144,7 +161,9 @@ describe('the check screen', () => {
 
   test('a camera preset sets the frame rate exactly', () => {
     fireEvent.click(screen.getByLabelText('Camera'));
-    fireEvent.change(screen.getByLabelText('Frame rate preset'), { target: { value: String(24000 / 1001) } });
+    fireEvent.change(screen.getByLabelText('Frame rate preset'), {
+      target: { value: String(24000 / 1001) },
+    });
     expect(setup.value.camera.frameRate).toBe(24000 / 1001);
     expect(field('Frame rate').value).toBe('23.97602');
   });
@@ -171,7 +190,12 @@ describe('the check screen', () => {
     expect(field('Speed').value).toBe('1455');
     type('Poles', '3');
     // Other alerts (a storage notice) may be on screen too: the poles message must be among them.
-    expect(screen.getAllByRole('alert').map((a) => a.textContent).join(' ')).toMatch(/pairs/);
+    expect(
+      screen
+        .getAllByRole('alert')
+        .map((a) => a.textContent)
+        .join(' '),
+    ).toMatch(/pairs/);
   });
 
   test('the speed can be typed in Hz', () => {

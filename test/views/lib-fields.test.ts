@@ -152,13 +152,26 @@ describe('readField', () => {
       readSlipPercent,
     ];
     for (const reader of readers) {
-      for (const garbage of ['', '   ', 'abc', 'NaN', 'Infinity', '1e999', '<b>1</b>', '--1', '1..2', '½']) {
+      for (const garbage of [
+        '',
+        '   ',
+        'abc',
+        'NaN',
+        'Infinity',
+        '1e999',
+        '<b>1</b>',
+        '--1',
+        '1..2',
+        '½',
+      ]) {
         const r = readField(garbage, reader);
         expect(r.ok, `"${garbage}"`).toBe(false);
         if (!r.ok) {
           expect(r.message.length).toBeGreaterThan(5);
           // The message may quote what was typed, but must not produce NaN or Infinity itself.
-          expect(r.message.replace(`"${garbage.trim().slice(0, 24)}"`, '')).not.toMatch(/NaN|Infinity/);
+          expect(r.message.replace(`"${garbage.trim().slice(0, 24)}"`, '')).not.toMatch(
+            /NaN|Infinity/,
+          );
         }
       }
     }

@@ -24,7 +24,13 @@ describe('formatNumber', () => {
   });
 
   test('shows NaN, Infinity and non-numbers as a dash, never as words', () => {
-    for (const bad of [NaN, Infinity, -Infinity, undefined as unknown as number, 'x' as unknown as number]) {
+    for (const bad of [
+      NaN,
+      Infinity,
+      -Infinity,
+      undefined as unknown as number,
+      'x' as unknown as number,
+    ]) {
       expect(formatNumber(bad)).toBe(NO_VALUE);
     }
   });
@@ -95,7 +101,7 @@ describe('formatPercent and formatExposure', () => {
   });
 });
 
-describe('rates in each sampler\'s unit', () => {
+describe("rates in each sampler's unit", () => {
   test('a strobe shows flashes per minute or Hz, a camera fps, lighting Hz', () => {
     expect(formatRate(29.5, 'strobe', 'fpm')).toBe('1,770 fpm');
     expect(formatRate(29.5, 'strobe', 'Hz')).toBe('29.5 Hz');

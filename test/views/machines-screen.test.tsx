@@ -1,6 +1,14 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
-import { cleanup, configure, fireEvent, render, screen, waitFor, within } from '@testing-library/preact';
+import {
+  cleanup,
+  configure,
+  fireEvent,
+  render,
+  screen,
+  waitFor,
+  within,
+} from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
 import { App } from '../../src/app';
 import { currentScreen, openScreen } from '../../src/lib/navigation';
@@ -31,7 +39,10 @@ function names(): string[] {
 }
 
 function rowOf(name: string): HTMLElement {
-  const heading = within(screen.getByTestId('machine-list')).getByRole('heading', { level: 3, name });
+  const heading = within(screen.getByTestId('machine-list')).getByRole('heading', {
+    level: 3,
+    name,
+  });
   return heading.closest('article') as HTMLElement;
 }
 
@@ -56,12 +67,16 @@ describe('saved machines', () => {
     fireEvent.click(within(rowOf('Press 4 flywheel')).getByRole('button', { name: 'Open' }));
     expect(currentScreen.value).toBe('check');
     expect(setup.value.parts[0].speedRpm).toBe(2400);
-    expect(screen.getByText('Opened from', { exact: false }).textContent).toContain('Press 4 flywheel');
+    expect(screen.getByText('Opened from', { exact: false }).textContent).toContain(
+      'Press 4 flywheel',
+    );
   });
 
   test('a name already used is refused with a message and nothing is added', async () => {
     const count = machines.value.length;
-    fireEvent.input(screen.getByLabelText('Machine name'), { target: { value: EXAMPLE_MACHINE_NAME } });
+    fireEvent.input(screen.getByLabelText('Machine name'), {
+      target: { value: EXAMPLE_MACHINE_NAME },
+    });
     fireEvent.click(screen.getByRole('button', { name: 'Save as new machine' }));
     await waitFor(() => expect(screen.getByRole('alert').textContent).toMatch(/already saved/));
     expect(machines.value.length).toBe(count);
@@ -72,7 +87,9 @@ describe('saved machines', () => {
     const id = openMachineId.value!;
     fireEvent.input(screen.getByLabelText('Blades or marks'), { target: { value: '3' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save changes to this machine' }));
-    await waitFor(() => expect(machines.value.find((m) => m.id === id)?.setup.parts[0].features).toBe(3));
+    await waitFor(() =>
+      expect(machines.value.find((m) => m.id === id)?.setup.parts[0].features).toBe(3),
+    );
   });
 
   test('rename, duplicate, delete and undo', async () => {
@@ -80,15 +97,25 @@ describe('saved machines', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Machines' }));
 
     fireEvent.click(within(rowOf('Conveyor idler')).getByRole('button', { name: 'Rename' }));
-    fireEvent.input(screen.getByLabelText('New name'), { target: { value: 'Conveyor tail idler' } });
+    fireEvent.input(screen.getByLabelText('New name'), {
+      target: { value: 'Conveyor tail idler' },
+    });
     fireEvent.click(screen.getByRole('button', { name: 'Save name' }));
-    await waitFor(() => expect(within(rowOf('Conveyor tail idler')).queryByRole('button', { name: 'Duplicate' })).not.toBeNull());
+    await waitFor(() =>
+      expect(
+        within(rowOf('Conveyor tail idler')).queryByRole('button', { name: 'Duplicate' }),
+      ).not.toBeNull(),
+    );
     expect(names()).not.toContain('Conveyor idler');
 
-    fireEvent.click(within(rowOf('Conveyor tail idler')).getByRole('button', { name: 'Duplicate' }));
+    fireEvent.click(
+      within(rowOf('Conveyor tail idler')).getByRole('button', { name: 'Duplicate' }),
+    );
     await waitFor(() => expect(names()).toContain('Conveyor tail idler copy'));
 
-    fireEvent.click(within(rowOf('Conveyor tail idler copy')).getByRole('button', { name: 'Delete' }));
+    fireEvent.click(
+      within(rowOf('Conveyor tail idler copy')).getByRole('button', { name: 'Delete' }),
+    );
     await waitFor(() => expect(names()).not.toContain('Conveyor tail idler copy'));
     expect(screen.getByTestId('undo-bar').textContent).toContain('Conveyor tail idler copy');
     fireEvent.click(within(screen.getByTestId('undo-bar')).getByRole('button', { name: 'Undo' }));
@@ -108,10 +135,14 @@ describe('saved machines', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Machines' }));
     const before = machines.value;
     const input = screen.getByTestId('import-file') as HTMLInputElement;
-    const file = new File(['{"format":"something else"'], 'machines.json', { type: 'application/json' });
+    const file = new File(['{"format":"something else"'], 'machines.json', {
+      type: 'application/json',
+    });
     Object.defineProperty(input, 'files', { value: [file], configurable: true });
     fireEvent.change(input);
-    await waitFor(() => expect(screen.getByTestId('machines-outcome').textContent).toMatch(/Nothing was imported/));
+    await waitFor(() =>
+      expect(screen.getByTestId('machines-outcome').textContent).toMatch(/Nothing was imported/),
+    );
     expect(machines.value).toBe(before);
   });
 
@@ -122,7 +153,11 @@ describe('saved machines', () => {
     const file = new File([exportAll()], 'machines.json', { type: 'application/json' });
     Object.defineProperty(input, 'files', { value: [file], configurable: true });
     fireEvent.change(input);
-    await waitFor(() => expect(screen.getByTestId('machines-outcome').textContent).toMatch(new RegExp(`Imported ${count} machines`)));
+    await waitFor(() =>
+      expect(screen.getByTestId('machines-outcome').textContent).toMatch(
+        new RegExp(`Imported ${count} machines`),
+      ),
+    );
     expect(machines.value.length).toBe(2 * count);
     expect(names()).toContain(`${EXAMPLE_MACHINE_NAME} (imported)`);
   });

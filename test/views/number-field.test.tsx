@@ -65,7 +65,9 @@ describe('NumberField', () => {
     expect(screen.queryByRole('alert')).not.toBeNull();
     type('7');
     expect(screen.queryByRole('alert')).toBeNull();
-    expect((screen.getByLabelText('Blades') as HTMLInputElement).getAttribute('aria-invalid')).toBeNull();
+    expect(
+      (screen.getByLabelText('Blades') as HTMLInputElement).getAttribute('aria-invalid'),
+    ).toBeNull();
   });
 
   test('follows a change from outside, replacing even bad text', () => {

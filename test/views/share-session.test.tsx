@@ -5,7 +5,13 @@ import { afterEach, describe, expect, test } from 'vitest';
 import { App } from '../../src/app';
 import { defaultSetup, type Setup } from '../../src/state/model';
 import { decodeShareFragment, encodeShareFragment } from '../../src/state/shareLink';
-import { openSession, replaceSetup, sessionMessage, setup, startSession } from '../../src/state/setup';
+import {
+  openSession,
+  replaceSetup,
+  sessionMessage,
+  setup,
+  startSession,
+} from '../../src/state/setup';
 
 afterEach(cleanup);
 
@@ -30,7 +36,12 @@ describe('opening a share link', () => {
     replaceSetup(shared);
     const good = encodeShareFragment(shared);
     const tampered = good.slice(0, -6) + 'AAAAAA';
-    await openSession({ hash: tampered, decodeShare: decodeShareFragment, loadLast: async () => null, clearHash: () => {} });
+    await openSession({
+      hash: tampered,
+      decodeShare: decodeShareFragment,
+      loadLast: async () => null,
+      clearHash: () => {},
+    });
     expect(setup.value).toEqual(defaultSetup);
     render(<App />);
     expect(screen.getByTestId('session-message').textContent).toMatch(/default set-up is shown/);
@@ -40,7 +51,14 @@ describe('opening a share link', () => {
   test('markup inside a link is shown as text', async () => {
     const hostile: Setup = {
       ...structuredClone(defaultSetup),
-      parts: [{ name: '<img src=x onerror="globalThis.__hit=1">', speedRpm: 1000, features: 2, tolerancePercent: 0 }],
+      parts: [
+        {
+          name: '<img src=x onerror="globalThis.__hit=1">',
+          speedRpm: 1000,
+          features: 2,
+          tolerancePercent: 0,
+        },
+      ],
     };
     await openSession({
       hash: encodeShareFragment(hostile),

@@ -88,7 +88,13 @@ describe('the verdict', () => {
     for (const rateHz of [7, 29.5, 35.9, 36, 90, 179, 181, 360, 1000]) {
       const m = apparentMotion(part, rateHz, { sampler: 'flash' });
       const v = verdictOf(m, part);
-      const words = { true: 'true', forward: /creeping|forward/, backward: 'backward', still: /still|images/, unclear: 'unclear' };
+      const words = {
+        true: 'true',
+        forward: /creeping|forward/,
+        backward: 'backward',
+        still: /still|images/,
+        unclear: 'unclear',
+      };
       // Creeping groups of images read as images whatever the single-image look (physics.md §3).
       const want = m.images > 1 && m.look !== 'still' ? 'images' : words[m.look];
       if (typeof want === 'string') expect(v.kind).toBe(want);
@@ -111,7 +117,10 @@ describe('the verdict', () => {
   });
 
   test('steady light (0 % modulation) shows true motion', () => {
-    const s = setupWith({ samplerKind: 'lighting', lighting: { mainsHz: 50, flicker: 'double', customHz: 300, modulationPercent: 0 } });
+    const s = setupWith({
+      samplerKind: 'lighting',
+      lighting: { mainsHz: 50, flicker: 'double', customHz: 300, modulationPercent: 0 },
+    });
     const r = computeCheck(s);
     expect(r.verdict.kind).toBe('steady');
     expect(r.showSafety).toBe(false);
@@ -140,7 +149,10 @@ describe('the cautions', () => {
   });
 
   test('lighting flickering at mains frequency (50 Hz) carries the photosensitivity caution', () => {
-    const s = setupWith({ samplerKind: 'lighting', lighting: { mainsHz: 50, flicker: 'mains', customHz: 300, modulationPercent: 30 } });
+    const s = setupWith({
+      samplerKind: 'lighting',
+      lighting: { mainsHz: 50, flicker: 'mains', customHz: 300, modulationPercent: 30 },
+    });
     expect(computeCheck(s).showPhotosensitivity).toBe(true);
   });
 });
@@ -193,12 +205,14 @@ describe('rates to try', () => {
 
   test('explains why there is no creep rate for a part standing still or a creep faster than the part', () => {
     expect(computeCheck(setupWith({ part: { speedRpm: 0 } })).creepNote).toMatch(/not turning/);
-    expect(computeCheck(setupWith({ creepRpm: 5000 })).creepNote).toMatch(/slower than the true speed/);
+    expect(computeCheck(setupWith({ creepRpm: 5000 })).creepNote).toMatch(
+      /slower than the true speed/,
+    );
   });
 });
 
 describe('safe bands', () => {
-  test('are the core\'s bands over the strobe\'s own range', () => {
+  test("are the core's bands over the strobe's own range", () => {
     const s = disc(3000);
     const r = computeCheck(s);
     const bands = rateBands([corePart(s)], { minHz: 0.5, maxHz: 200 }, { sampler: 'flash' });
@@ -216,7 +230,10 @@ describe('safe bands', () => {
 
   test('for a camera, every rate above twice the pattern frequency with tolerance is safe', () => {
     // physics.md §4: for frames every rate > 2·n·|f|·(1+u) is safe.
-    const s = setupWith({ part: { speedRpm: 600, features: 2, tolerancePercent: 5 }, samplerKind: 'camera' });
+    const s = setupWith({
+      part: { speedRpm: 600, features: 2, tolerancePercent: 5 },
+      samplerKind: 'camera',
+    });
     const r = computeCheck(s);
     const last = r.bands.all.at(-1)!;
     expect(last.safe).toBe(true);
@@ -225,7 +242,10 @@ describe('safe bands', () => {
   });
 
   test('a range too dense to list is searched around the rate only, quickly, and says so', () => {
-    const s = setupWith({ part: { speedRpm: 100_000, features: 500, tolerancePercent: 0 }, samplerKind: 'strobe' });
+    const s = setupWith({
+      part: { speedRpm: 100_000, features: 500, tolerancePercent: 0 },
+      samplerKind: 'strobe',
+    });
     const r = computeCheck(s);
     expect(r.bands.partial).toBe(true);
     expect(r.bands.span.minHz).toBeGreaterThanOrEqual(0.5);
@@ -235,7 +255,7 @@ describe('safe bands', () => {
 });
 
 describe('camera and lighting read-outs', () => {
-  test('the camera read-out is the core\'s blur and rolling-shutter bend', () => {
+  test("the camera read-out is the core's blur and rolling-shutter bend", () => {
     const s = setupWith({ samplerKind: 'camera' });
     const r = computeCheck(s);
     const f = 1770 / 60;
@@ -262,14 +282,17 @@ describe('camera and lighting read-outs', () => {
   });
 
   test('an exposure longer than a frame is capped at one frame and noted', () => {
-    const s = setupWith({ samplerKind: 'camera', camera: { frameRate: 30, exposure: { mode: 'time', seconds: 0.5 }, readoutMs: 25 } });
+    const s = setupWith({
+      samplerKind: 'camera',
+      camera: { frameRate: 30, exposure: { mode: 'time', seconds: 0.5 }, readoutMs: 25 },
+    });
     const r = computeCheck(s);
     expect(r.camera?.exposureS).toBeCloseTo(1 / 30, 15);
     expect(r.camera?.shutterAngleDeg).toBeCloseTo(360, 9);
     expect(r.notes.join(' ')).toMatch(/longer than one frame/);
   });
 
-  test('the lighting read-out is the core\'s IEEE Std 1789-2015 class', () => {
+  test("the lighting read-out is the core's IEEE Std 1789-2015 class", () => {
     const s = setupWith({ samplerKind: 'lighting' });
     const r = computeCheck(s);
     expect(r.lighting?.flickerHz).toBe(100);
@@ -280,14 +303,14 @@ describe('camera and lighting read-outs', () => {
 });
 
 describe('refused set-ups', () => {
-  test('tryCheck reports the core\'s message instead of throwing', () => {
+  test("tryCheck reports the core's message instead of throwing", () => {
     const s = setupWith({ part: { features: 0 } });
     const outcome = tryCheck(s);
     expect(outcome.ok).toBe(false);
     if (!outcome.ok) expect(outcome.message).toMatch(/features/);
   });
 
-  test('a strobe rate outside the strobe\'s own range is noted', () => {
+  test("a strobe rate outside the strobe's own range is noted", () => {
     const r = computeCheck(setupWith({ strobe: { rateFpm: 20000, minFpm: 30, maxFpm: 12000 } }));
     expect(r.rateInRange).toBe(false);
     expect(r.notes.join(' ')).toMatch(/outside this strobe's own range/);
@@ -300,8 +323,12 @@ describe('nothing computed is NaN or Infinity', () => {
     for (const kind of kinds) {
       for (const speedRpm of [0, 1, -1770, 1770, 12_000, 600_000]) {
         for (const features of [1, 3, 60, 5000]) {
-          const r = computeCheck(setupWith({ samplerKind: kind, part: { speedRpm, features, tolerancePercent: 2 } }));
-          const text = JSON.stringify(r, (_k, v) => (typeof v === 'number' && !Number.isFinite(v) ? 'BAD' : v));
+          const r = computeCheck(
+            setupWith({ samplerKind: kind, part: { speedRpm, features, tolerancePercent: 2 } }),
+          );
+          const text = JSON.stringify(r, (_k, v) =>
+            typeof v === 'number' && !Number.isFinite(v) ? 'BAD' : v,
+          );
           expect(text, `${kind} ${speedRpm} rpm ${features}`).not.toContain('BAD');
         }
       }

@@ -119,7 +119,10 @@ describe('opening the session', () => {
       clearHash: () => undefined,
     });
     expect(setup.value).toEqual(defaultSetup);
-    expect(sessionMessage.value).toEqual({ kind: 'problem', text: 'This share link is damaged. The default set-up is shown instead.' });
+    expect(sessionMessage.value).toEqual({
+      kind: 'problem',
+      text: 'This share link is damaged. The default set-up is shown instead.',
+    });
   });
 
   test('without a link, the last set-up comes back', async () => {
@@ -152,7 +155,12 @@ describe('opening the session', () => {
     const untouched = setup.peek();
     setFeatures(12);
     await openSession(
-      { hash: '', decodeShare: () => ({ ok: false, error: null }), loadLast: async () => last, clearHash: () => undefined },
+      {
+        hash: '',
+        decodeShare: () => ({ ok: false, error: null }),
+        loadLast: async () => last,
+        clearHash: () => undefined,
+      },
       untouched,
     );
     expect(activePart.value.features).toBe(12);

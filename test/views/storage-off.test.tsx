@@ -19,7 +19,9 @@ configure({ asyncUtilTimeout: 5000 });
 describe('without storage', () => {
   test('a banner says saving is off and changes last only for this tab', () => {
     render(<App />);
-    expect(screen.getByTestId('storage-status').textContent).toMatch(/Saving is off.*until this tab is closed/);
+    expect(screen.getByTestId('storage-status').textContent).toMatch(
+      /Saving is off.*until this tab is closed/,
+    );
   });
 
   test('machines can still be saved, in memory', async () => {

@@ -35,8 +35,22 @@ export function AppFrame({ notices, children }: Props) {
           <svg class={style.mark} viewBox="0 0 512 512" aria-hidden="true">
             <g transform="translate(256 256)">
               <circle r="168" fill="none" stroke="currentColor" stroke-width="40" />
-              <path d="M0 0V-138" stroke="currentColor" stroke-width="34" stroke-linecap="round" opacity="0.25" transform="rotate(-64)" />
-              <path d="M0 0V-138" stroke="currentColor" stroke-width="38" stroke-linecap="round" opacity="0.45" transform="rotate(-32)" />
+              <path
+                d="M0 0V-138"
+                stroke="currentColor"
+                stroke-width="34"
+                stroke-linecap="round"
+                opacity="0.25"
+                transform="rotate(-64)"
+              />
+              <path
+                d="M0 0V-138"
+                stroke="currentColor"
+                stroke-width="38"
+                stroke-linecap="round"
+                opacity="0.45"
+                transform="rotate(-32)"
+              />
               <path d="M0 0V-140" stroke="var(--accent)" stroke-width="50" stroke-linecap="round" />
               <circle r="44" fill="var(--accent)" />
             </g>

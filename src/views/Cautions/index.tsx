@@ -13,7 +13,9 @@ interface Props {
  * every tool and printed report). They show whenever they apply and cannot be dismissed.
  */
 export function Cautions({ class: extra, show }: Props) {
-  const r = show ? { showSafety: show.safety, showPhotosensitivity: show.photosensitivity } : check.value;
+  const r = show
+    ? { showSafety: show.safety, showPhotosensitivity: show.photosensitivity }
+    : check.value;
   if (!r.showSafety && !r.showPhotosensitivity) return null;
   return (
     <div class={`${style.cautions} ${extra ?? ''}`}>
@@ -27,7 +29,11 @@ export function Cautions({ class: extra, show }: Props) {
         </aside>
       )}
       {r.showPhotosensitivity && (
-        <aside class={`${style.caution} ${style.flash}`} aria-labelledby="flash-title" data-testid="photosensitivity-notice">
+        <aside
+          class={`${style.caution} ${style.flash}`}
+          aria-labelledby="flash-title"
+          data-testid="photosensitivity-notice"
+        >
           <h2 id="flash-title" class={style.title}>
             Flashing light
           </h2>

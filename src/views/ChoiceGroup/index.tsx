@@ -13,7 +13,14 @@ interface Props<T extends string> {
 }
 
 /** A row of large radio buttons: one choice among a few, all visible at once. */
-export function ChoiceGroup<T extends string>({ legend, name, options, value, onChange, quietLegend }: Props<T>) {
+export function ChoiceGroup<T extends string>({
+  legend,
+  name,
+  options,
+  value,
+  onChange,
+  quietLegend,
+}: Props<T>) {
   return (
     <fieldset class={style.group}>
       <legend class={quietLegend ? style.quiet : style.legend}>{legend}</legend>

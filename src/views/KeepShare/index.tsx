@@ -61,7 +61,10 @@ export function KeepShare({ class: extra }: Props) {
       await navigator.clipboard.writeText(link);
       setOutcome({ kind: 'done', text: 'Link copied.' });
     } catch {
-      setOutcome({ kind: 'problem', text: 'This browser did not allow copying: select the link and copy it by hand.' });
+      setOutcome({
+        kind: 'problem',
+        text: 'This browser did not allow copying: select the link and copy it by hand.',
+      });
     }
   };
 
@@ -117,10 +120,16 @@ export function KeepShare({ class: extra }: Props) {
             </button>
           </div>
         )}
-        <p class={style.hint}>The set-up travels inside the link itself; it never passes through a server.</p>
+        <p class={style.hint}>
+          The set-up travels inside the link itself; it never passes through a server.
+        </p>
       </div>
       {outcome && (
-        <p class={style.outcome} data-kind={outcome.kind} role={outcome.kind === 'problem' ? 'alert' : 'status'}>
+        <p
+          class={style.outcome}
+          data-kind={outcome.kind}
+          role={outcome.kind === 'problem' ? 'alert' : 'status'}
+        >
           {outcome.text}
         </p>
       )}

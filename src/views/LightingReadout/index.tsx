@@ -33,8 +33,8 @@ export function LightingReadout({ class: extra, lighting }: Props) {
           <dt>IEEE Std 1789-2015</dt>
           <dd data-testid="flicker-risk">{RISK_WORDS[l.risk]}</dd>
           <dd class={style.words}>
-            At {formatNumber(l.flickerHz)} Hz the lines are {formatPercent(l.noEffectPercent)} (no observable effect) and{' '}
-            {formatPercent(l.lowRiskPercent)} (low risk).
+            At {formatNumber(l.flickerHz)} Hz the lines are {formatPercent(l.noEffectPercent)} (no
+            observable effect) and {formatPercent(l.lowRiskPercent)} (low risk).
           </dd>
         </div>
         <div>

@@ -47,7 +47,10 @@ export function MachinesScreen(_props: Props) {
       a.click();
       a.remove();
       setTimeout(() => URL.revokeObjectURL(url), 1000);
-      setOutcome({ kind: 'done', text: `Exported ${list.length} machine${list.length === 1 ? '' : 's'}.` });
+      setOutcome({
+        kind: 'done',
+        text: `Exported ${list.length} machine${list.length === 1 ? '' : 's'}.`,
+      });
     } catch (error) {
       setOutcome({ kind: 'problem', text: messageOf(error) });
     }
@@ -70,8 +73,14 @@ export function MachinesScreen(_props: Props) {
       setOutcome({ kind: 'problem', text: `Nothing was imported. ${result.error}` });
       return;
     }
-    const renamed = result.renamed.length > 0 ? ` Renamed to avoid clashes: ${result.renamed.map((r) => `"${r.to}"`).join(', ')}.` : '';
-    setOutcome({ kind: 'done', text: `Imported ${result.added.length} machine${result.added.length === 1 ? '' : 's'}.${renamed}` });
+    const renamed =
+      result.renamed.length > 0
+        ? ` Renamed to avoid clashes: ${result.renamed.map((r) => `"${r.to}"`).join(', ')}.`
+        : '';
+    setOutcome({
+      kind: 'done',
+      text: `Imported ${result.added.length} machine${result.added.length === 1 ? '' : 's'}.${renamed}`,
+    });
   };
 
   return (
@@ -91,7 +100,9 @@ export function MachinesScreen(_props: Props) {
           </div>
         )}
         {list.length === 0 ? (
-          <p class={style.empty}>No machines saved yet. Set one up on the Check screen and save it there.</p>
+          <p class={style.empty}>
+            No machines saved yet. Set one up on the Check screen and save it there.
+          </p>
         ) : (
           <ul class={style.list} data-testid="machine-list">
             {list.map((m) => (
@@ -103,18 +114,37 @@ export function MachinesScreen(_props: Props) {
         )}
       </Panel>
       <Panel title="Move to another device" id="transfer">
-        <p class={style.help}>Export writes every saved machine to one file. Import adds the machines of such a file to this list.</p>
+        <p class={style.help}>
+          Export writes every saved machine to one file. Import adds the machines of such a file to
+          this list.
+        </p>
         <div class={style.actions}>
-          <button type="button" class={style.primary} onClick={exportFile} disabled={list.length === 0}>
+          <button
+            type="button"
+            class={style.primary}
+            onClick={exportFile}
+            disabled={list.length === 0}
+          >
             Export all machines
           </button>
           <label class={style.fileButton}>
-            <input type="file" accept=".json,application/json" class={style.file} onChange={importFile} data-testid="import-file" />
+            <input
+              type="file"
+              accept=".json,application/json"
+              class={style.file}
+              onChange={importFile}
+              data-testid="import-file"
+            />
             <span>Import from a file</span>
           </label>
         </div>
         {outcome && (
-          <p class={style.outcome} data-kind={outcome.kind} role={outcome.kind === 'problem' ? 'alert' : 'status'} data-testid="machines-outcome">
+          <p
+            class={style.outcome}
+            data-kind={outcome.kind}
+            role={outcome.kind === 'problem' ? 'alert' : 'status'}
+            data-testid="machines-outcome"
+          >
             {outcome.text}
           </p>
         )}
@@ -211,10 +241,18 @@ function MachineRow({ machine, onOutcome }: RowProps) {
           <button type="button" class={style.quiet} onClick={() => setRenaming(true)}>
             Rename
           </button>
-          <button type="button" class={style.quiet} onClick={() => void act(() => duplicateMachine(machine.id))}>
+          <button
+            type="button"
+            class={style.quiet}
+            onClick={() => void act(() => duplicateMachine(machine.id))}
+          >
             Duplicate
           </button>
-          <button type="button" class={style.quiet} onClick={() => void act(() => deleteMachine(machine.id))}>
+          <button
+            type="button"
+            class={style.quiet}
+            onClick={() => void act(() => deleteMachine(machine.id))}
+          >
             Delete
           </button>
         </div>

@@ -30,7 +30,18 @@ interface Props {
  * When the set-up changes from elsewhere (a tapped suggestion, an opened machine), the text
  * follows unless it already says the same value.
  */
-export function NumberField({ id, label, value, toText, read, onValue, unit, hint, unitKey, disabled }: Props) {
+export function NumberField({
+  id,
+  label,
+  value,
+  toText,
+  read,
+  onValue,
+  unit,
+  hint,
+  unitKey,
+  disabled,
+}: Props) {
   const [text, setText] = useState(() => toText(value));
   const [message, setMessage] = useState<string | null>(null);
 

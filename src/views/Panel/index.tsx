@@ -13,7 +13,10 @@ interface Props {
 /** A titled card: the building block of every screen. */
 export function Panel({ title, id, children, class: extra }: Props) {
   return (
-    <section class={extra ? `${style.panel} ${extra}` : style.panel} aria-labelledby={`${id}-title`}>
+    <section
+      class={extra ? `${style.panel} ${extra}` : style.panel}
+      aria-labelledby={`${id}-title`}
+    >
       <h2 id={`${id}-title`} class={style.title}>
         {title}
       </h2>

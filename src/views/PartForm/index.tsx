@@ -41,7 +41,9 @@ export function PartForm({ class: extra }: Props) {
       class={style.select}
       aria-label="Speed unit"
       value={unit}
-      onChange={(e) => (speedUnit.value = (e.currentTarget as HTMLSelectElement).value as SpeedUnit)}
+      onChange={(e) =>
+        (speedUnit.value = (e.currentTarget as HTMLSelectElement).value as SpeedUnit)
+      }
     >
       {SPEED_UNITS.map((u) => (
         <option key={u} value={u}>
@@ -62,13 +64,21 @@ export function PartForm({ class: extra }: Props) {
         read={(text) => readSpeedRpm(text, unit)}
         onValue={setSpeedRpm}
         unit={unitChooser}
-        hint={motor ? 'From the motor below. Typing a speed here stops following the motor.' : 'A unit may be typed too: 1780 rpm, 29.7 Hz.'}
+        hint={
+          motor
+            ? 'From the motor below. Typing a speed here stops following the motor.'
+            : 'A unit may be typed too: 1780 rpm, 29.7 Hz.'
+        }
       />
       <label class={style.toggle}>
         <input
           type="checkbox"
           checked={motor !== undefined}
-          onChange={(e) => setMotor((e.currentTarget as HTMLInputElement).checked ? { ...defaultMotor } : undefined)}
+          onChange={(e) =>
+            setMotor(
+              (e.currentTarget as HTMLInputElement).checked ? { ...defaultMotor } : undefined,
+            )
+          }
         />
         <span>Speed from an induction motor</span>
       </label>
@@ -109,7 +119,8 @@ function MotorWithSpeeds({ motor }: MotorProps) {
     <div class={style.motor}>
       <MotorFields id={(field) => `motor-${field}`} motor={motor} onMotor={setMotor} />
       <p class={style.note}>
-        Synchronous {formatNumber(syncRpm)} rpm (120 × mains ÷ poles); running {formatNumber(runRpm)} rpm.
+        Synchronous {formatNumber(syncRpm)} rpm (120 × mains ÷ poles); running{' '}
+        {formatNumber(runRpm)} rpm.
       </p>
     </div>
   );

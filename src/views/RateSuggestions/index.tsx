@@ -34,9 +34,15 @@ export function RateSuggestions({ class: extra }: Props) {
   return (
     <Panel title="Rates to try" id="suggestions" class={extra}>
       <div class={style.block}>
-        <h3 class={style.subtitle}>{r.sampler === 'frames' ? 'Rates that freeze it' : 'Lock-in rates nearby'}</h3>
+        <h3 class={style.subtitle}>
+          {r.sampler === 'frames' ? 'Rates that freeze it' : 'Lock-in rates nearby'}
+        </h3>
         {r.locks.length === 0 ? (
-          <p class={style.none}>{r.part.speedHz === 0 ? 'The part is not turning.' : 'None near this rate in the range.'}</p>
+          <p class={style.none}>
+            {r.part.speedHz === 0
+              ? 'The part is not turning.'
+              : 'None near this rate in the range.'}
+          </p>
         ) : (
           <ul class={style.list} data-testid="lock-list">
             {r.locks.map((l) => (
@@ -68,7 +74,12 @@ export function RateSuggestions({ class: extra }: Props) {
           <ul class={style.list} data-testid="creep-list">
             {r.creep.map((c) => (
               <li key={c.rateHz}>
-                <button type="button" class={style.rate} data-side={c.side} onClick={() => setSamplerRateHz(c.rateHz)}>
+                <button
+                  type="button"
+                  class={style.rate}
+                  data-side={c.side}
+                  onClick={() => setSamplerRateHz(c.rateHz)}
+                >
                   <span class={style.value}>{rate(c.rateHz)}</span>
                   <span class={style.what}>
                     {c.images > 1 ? `${imagesText(c.images)}, ` : ''}
@@ -82,8 +93,8 @@ export function RateSuggestions({ class: extra }: Props) {
           <p class={style.none}>{r.creepNote}</p>
         )}
         <p class={style.help}>
-          The part seems to turn forward at {formatNumber(r.creepRpm)} rpm: slow enough to inspect, and its direction stays
-          right.
+          The part seems to turn forward at {formatNumber(r.creepRpm)} rpm: slow enough to inspect,
+          and its direction stays right.
         </p>
       </div>
     </Panel>
@@ -112,11 +123,7 @@ function LockButton({ lock, rate, span, tolerance }: LockProps) {
         {imagesText(lock.images)}
         {here ? ' · this rate' : ''}
       </span>
-      {tolerance && (
-        <span class={style.span}>
-          ± tolerance: {span(lock.lowHz, lock.highHz)}
-        </span>
-      )}
+      {tolerance && <span class={style.span}>± tolerance: {span(lock.lowHz, lock.highHz)}</span>}
     </button>
   );
 }

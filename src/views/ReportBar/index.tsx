@@ -31,7 +31,13 @@ export function ReportBar({ title, machineName, csv, cautions }: Props) {
           <button
             type="button"
             class={style.button}
-            onClick={() => downloadText(`${fileStem(`${title} ${machineName ?? ''}`)}.csv`, csv(), 'text/csv;charset=utf-8')}
+            onClick={() =>
+              downloadText(
+                `${fileStem(`${title} ${machineName ?? ''}`)}.csv`,
+                csv(),
+                'text/csv;charset=utf-8',
+              )
+            }
           >
             Save table (CSV)
           </button>

@@ -9,7 +9,9 @@ export function bandWords(causes: readonly RateBandCause[]): string {
   const words: string[] = [];
   if (causes.some((c) => c.kind === 'crawl')) words.push('turns too slowly to see');
   if (causes.some((c) => c.kind === 'still' && c.images === 1)) words.push('looks still');
-  const multi = [...new Set(causes.filter((c) => c.kind === 'still' && c.images > 1).map((c) => c.images))].sort((a, b) => a - b);
+  const multi = [
+    ...new Set(causes.filter((c) => c.kind === 'still' && c.images > 1).map((c) => c.images)),
+  ].sort((a, b) => a - b);
   if (multi.length > 0) words.push(`${joinOr(multi.map(String))} images standing still`);
   if (causes.some((c) => c.kind === 'backward')) words.push('backward or direction unclear');
   return words.join('; ');

@@ -17,11 +17,16 @@ export function SafeBands({ class: extra }: Props) {
   const span = (from: number, to: number) => formatRateSpan(from, to, r.samplerKind, unit);
   const b = r.bands;
   const current = b.current;
-  const tolerance = r.part.tolerance > 0 ? ` for any speed within ±${formatPercent(r.part.tolerance * 100)}` : '';
+  const tolerance =
+    r.part.tolerance > 0 ? ` for any speed within ±${formatPercent(r.part.tolerance * 100)}` : '';
   return (
     <Panel title="Safe rates" id="bands" class={extra}>
       {current && (
-        <p class={style.current} data-safe={current.safe ? 'true' : 'false'} data-testid="current-band">
+        <p
+          class={style.current}
+          data-safe={current.safe ? 'true' : 'false'}
+          data-testid="current-band"
+        >
           {current.safe
             ? `This rate lies in a safe band: ${span(current.fromHz, current.toHz)}.`
             : `This rate lies in a misleading band, ${span(current.fromHz, current.toHz)}: ${bandWords(current.causes)}.`}
@@ -30,7 +35,8 @@ export function SafeBands({ class: extra }: Props) {
       {b.safeNearby.length > 0 ? (
         <>
           <p class={style.help}>
-            Every rate in these bands shows the part turning its true way{tolerance}. Tap a band to use its middle.
+            Every rate in these bands shows the part turning its true way{tolerance}. Tap a band to
+            use its middle.
           </p>
           <ul class={style.list} data-testid="safe-bands">
             {b.safeNearby.map((band) => (
@@ -54,11 +60,15 @@ export function SafeBands({ class: extra }: Props) {
         </>
       ) : (
         <p class={style.none} data-testid="no-safe-band">
-          {b.all.length === 0 ? 'Too many lock-in rates lie close together here to list the bands.' : 'No rate in this range is safe: every one misleads.'}
+          {b.all.length === 0
+            ? 'Too many lock-in rates lie close together here to list the bands.'
+            : 'No rate in this range is safe: every one misleads.'}
         </p>
       )}
       <p class={style.help}>
-        {b.partial ? `Searched ${span(b.span.minHz, b.span.maxHz)} only: the whole range holds too many lock-in rates to list.` : `Range searched: ${span(b.span.minHz, b.span.maxHz)}.`}
+        {b.partial
+          ? `Searched ${span(b.span.minHz, b.span.maxHz)} only: the whole range holds too many lock-in rates to list.`
+          : `Range searched: ${span(b.span.minHz, b.span.maxHz)}.`}
       </p>
     </Panel>
   );

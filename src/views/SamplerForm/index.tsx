@@ -46,7 +46,14 @@ export function SamplerForm({ class: extra }: Props) {
   const kind = setup.value.samplerKind;
   return (
     <Panel title="Seen by" id="sampler" class={extra}>
-      <ChoiceGroup legend="Seen by" quietLegend name="sampler-kind" options={KINDS} value={kind} onChange={setSamplerKind} />
+      <ChoiceGroup
+        legend="Seen by"
+        quietLegend
+        name="sampler-kind"
+        options={KINDS}
+        value={kind}
+        onChange={setSamplerKind}
+      />
       {kind === 'camera' && <CameraFields />}
       {kind === 'strobe' && <StrobeFields />}
       {kind === 'lighting' && <LightingFields />}
@@ -106,8 +113,10 @@ function CameraFields() {
           const e = camera.exposure;
           if (mode === e.mode) return;
           // Keep the same exposure when switching how it is given.
-          if (mode === 'time' && e.mode === 'angle') setExposureSeconds(e.angleDeg / 360 / camera.frameRate);
-          if (mode === 'angle' && e.mode === 'time') setShutterAngle(Math.min(360, 360 * e.seconds * camera.frameRate));
+          if (mode === 'time' && e.mode === 'angle')
+            setExposureSeconds(e.angleDeg / 360 / camera.frameRate);
+          if (mode === 'angle' && e.mode === 'time')
+            setShutterAngle(Math.min(360, 360 * e.seconds * camera.frameRate));
         }}
       />
       {camera.exposure.mode === 'angle' ? (
@@ -167,7 +176,9 @@ function StrobeFields() {
             class={style.unitSelect}
             aria-label="Flash rate unit"
             value={unit}
-            onChange={(e) => (flashUnit.value = (e.currentTarget as HTMLSelectElement).value as 'fpm' | 'Hz')}
+            onChange={(e) =>
+              (flashUnit.value = (e.currentTarget as HTMLSelectElement).value as 'fpm' | 'Hz')
+            }
           >
             <option value="fpm">fpm</option>
             <option value="Hz">Hz</option>
@@ -184,7 +195,8 @@ function StrobeFields() {
           toText={toText}
           read={(text) => {
             const v = readFlashRateFpm(text, unit, 'lowest rate');
-            if (v >= setup.peek().strobe.maxFpm) throw new InputError('lowest rate', 'The lowest rate must be below the highest.');
+            if (v >= setup.peek().strobe.maxFpm)
+              throw new InputError('lowest rate', 'The lowest rate must be below the highest.');
             return v;
           }}
           onValue={(v) => setStrobeRange(v, setup.peek().strobe.maxFpm)}
@@ -198,7 +210,8 @@ function StrobeFields() {
           toText={toText}
           read={(text) => {
             const v = readFlashRateFpm(text, unit, 'highest rate');
-            if (v <= setup.peek().strobe.minFpm) throw new InputError('highest rate', 'The highest rate must be above the lowest.');
+            if (v <= setup.peek().strobe.minFpm)
+              throw new InputError('highest rate', 'The highest rate must be above the lowest.');
             return v;
           }}
           onValue={(v) => setStrobeRange(setup.peek().strobe.minFpm, v)}

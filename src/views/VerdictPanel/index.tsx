@@ -9,7 +9,11 @@ interface Props {
   class?: string;
 }
 
-const SAMPLER_WORDS = { strobe: 'strobe at', camera: 'camera at', lighting: 'light flickering at' } as const;
+const SAMPLER_WORDS = {
+  strobe: 'strobe at',
+  camera: 'camera at',
+  lighting: 'light flickering at',
+} as const;
 
 /** What the viewer will see, in big words: the verdict, the apparent speed and the true speed. */
 export function VerdictPanel({ class: extra }: Props) {
@@ -17,12 +21,19 @@ export function VerdictPanel({ class: extra }: Props) {
   const v = r.verdict;
   const sign = v.trueRpm < 0 ? -1 : 1;
   // Half a pitch per sample can be read either way: give no direction with the speed.
-  const seen = v.kind === 'unclear' ? `${formatNumber(Math.abs(v.apparentRpm))} rpm, either way` : formatRpmWithDirection(v.apparentRpm, sign);
+  const seen =
+    v.kind === 'unclear'
+      ? `${formatNumber(Math.abs(v.apparentRpm))} rpm, either way`
+      : formatRpmWithDirection(v.apparentRpm, sign);
   const trueSpeed = `${formatNumber(Math.abs(v.trueRpm))} rpm`;
   const features = r.part.symmetry === 1 ? '1 mark' : `${formatNumber(r.part.symmetry)} features`;
   const partName = activePart.value.name.trim();
   return (
-    <section class={`${style.verdict} ${extra ?? ''}`} data-trust={v.trust} aria-labelledby="verdict-title">
+    <section
+      class={`${style.verdict} ${extra ?? ''}`}
+      data-trust={v.trust}
+      aria-labelledby="verdict-title"
+    >
       <h2 id="verdict-title" class={style.title}>
         What you will see
       </h2>
@@ -30,7 +41,9 @@ export function VerdictPanel({ class: extra }: Props) {
         <TrustMark trust={v.trust} />
         <p class={style.headline} data-testid="verdict">
           {v.headline}
-          <span class={style.quiet}>. Seen at {seen}; true speed {trueSpeed}.</span>
+          <span class={style.quiet}>
+            . Seen at {seen}; true speed {trueSpeed}.
+          </span>
         </p>
       </div>
       <dl class={style.speeds}>
@@ -50,7 +63,8 @@ export function VerdictPanel({ class: extra }: Props) {
       )}
       <p class={style.context}>
         {partName && <span data-testid="part-name">{partName}: </span>}
-        {features} · {SAMPLER_WORDS[r.samplerKind]} {formatRate(r.rateHz, r.samplerKind, flashUnit.value)}
+        {features} · {SAMPLER_WORDS[r.samplerKind]}{' '}
+        {formatRate(r.rateHz, r.samplerKind, flashUnit.value)}
       </p>
     </section>
   );
