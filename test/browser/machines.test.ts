@@ -93,13 +93,11 @@ describe('saved machines', () => {
       '{"format":"trueturn-machines","version":1,"machines":"none"}',
       '',
     ]) {
-      await page
-        .getByTestId('import-file')
-        .setInputFiles({
-          name: 'machines.json',
-          mimeType: 'application/json',
-          buffer: Buffer.from(bad),
-        });
+      await page.getByTestId('import-file').setInputFiles({
+        name: 'machines.json',
+        mimeType: 'application/json',
+        buffer: Buffer.from(bad),
+      });
       await expect
         .poll(() => page.getByTestId('machines-outcome').innerText())
         .toMatch(/^Nothing was imported/);
