@@ -8,7 +8,6 @@ import {
   readReadoutMs,
   readShutterAngle,
 } from '../../lib/fields';
-import { InputError } from '../../core';
 import type { SamplerKind } from '../../state/model';
 import {
   flashUnit,
@@ -21,13 +20,13 @@ import {
   setReadoutMs,
   setSamplerKind,
   setShutterAngle,
-  setStrobeRange,
   setStrobeRateFpm,
   setup,
 } from '../../state/setup';
 import { ChoiceGroup } from '../ChoiceGroup';
 import { NumberField } from '../NumberField';
 import { Panel } from '../Panel';
+import { StrobeRangeFields } from './strobe-range';
 import { FRAME_RATE_PRESETS, presetFor } from './presets';
 import style from './style.module.css';
 
@@ -160,7 +159,6 @@ function StrobeFields() {
   const strobe = setup.value.strobe;
   const unit = flashUnit.value;
   const toText = (fpm: number) => numberForField(unit === 'fpm' ? fpm : fpm / 60);
-  const unitWord = unit === 'fpm' ? 'fpm' : 'Hz';
   return (
     <div class={style.fields}>
       <NumberField
@@ -186,38 +184,7 @@ function StrobeFields() {
         }
         hint="fpm = flashes per minute."
       />
-      <div class={style.pair}>
-        <NumberField
-          id="strobe-min"
-          label="Lowest rate"
-          value={strobe.minFpm}
-          unitKey={unit}
-          toText={toText}
-          read={(text) => {
-            const v = readFlashRateFpm(text, unit, 'lowest rate');
-            if (v >= setup.peek().strobe.maxFpm)
-              throw new InputError('lowest rate', 'The lowest rate must be below the highest.');
-            return v;
-          }}
-          onValue={(v) => setStrobeRange(v, setup.peek().strobe.maxFpm)}
-          unit={unitWord}
-        />
-        <NumberField
-          id="strobe-max"
-          label="Highest rate"
-          value={strobe.maxFpm}
-          unitKey={unit}
-          toText={toText}
-          read={(text) => {
-            const v = readFlashRateFpm(text, unit, 'highest rate');
-            if (v <= setup.peek().strobe.minFpm)
-              throw new InputError('highest rate', 'The highest rate must be above the lowest.');
-            return v;
-          }}
-          onValue={(v) => setStrobeRange(setup.peek().strobe.minFpm, v)}
-          unit={unitWord}
-        />
-      </div>
+      <StrobeRangeFields idPrefix="strobe" minLabel="Lowest rate" maxLabel="Highest rate" />
     </div>
   );
 }

@@ -1,13 +1,12 @@
 import { InputError } from '../../core';
 import {
   readFeatures,
-  readFlashRateFpm,
   readPoles,
   readSlipPercent,
   readSpeedRpm,
 } from '../../lib/fields';
 import { formatNumber, numberForField } from '../../lib/format';
-import { activePart, flashUnit, setStrobeRange, setup } from '../../state/setup';
+import { activePart } from '../../state/setup';
 import {
   expectation,
   featuresInUse,
@@ -17,6 +16,7 @@ import {
 import { ChoiceGroup } from '../ChoiceGroup';
 import { NumberField } from '../NumberField';
 import { Panel } from '../Panel';
+import { StrobeRangeFields } from '../SamplerForm/strobe-range';
 import style from './style.module.css';
 
 interface Props {
@@ -46,10 +46,6 @@ function startMotor(): Partial<Expectation> {
 export function FinderSetupPanel({ expectedRpm }: Props) {
   const e = expectation.value;
   const part = activePart.value;
-  const strobe = setup.value.strobe;
-  const unit = flashUnit.value;
-  const rateText = (fpm: number) => numberForField(unit === 'fpm' ? fpm : fpm / 60);
-  const unitWord = unit === 'fpm' ? 'fpm' : 'Hz';
   return (
     <Panel title="The part and the strobe" id="finder-setup">
       <NumberField
@@ -61,38 +57,11 @@ export function FinderSetupPanel({ expectedRpm }: Props) {
         onValue={(n) => (finderFeatures.value = n)}
         hint={`The Check screen's part${part.name.trim() ? ` (${part.name.trim()})` : ''} has ${part.features}. One reflective mark (1) makes the reading unambiguous.`}
       />
-      <div class={style.pair}>
-        <NumberField
-          id="finder-strobe-min"
-          label="Strobe's lowest rate"
-          value={strobe.minFpm}
-          unitKey={unit}
-          toText={rateText}
-          read={(text) => {
-            const v = readFlashRateFpm(text, unit, 'lowest rate');
-            if (v >= setup.peek().strobe.maxFpm)
-              throw new InputError('lowest rate', 'The lowest rate must be below the highest.');
-            return v;
-          }}
-          onValue={(v) => setStrobeRange(v, setup.peek().strobe.maxFpm)}
-          unit={unitWord}
-        />
-        <NumberField
-          id="finder-strobe-max"
-          label="Strobe's highest rate"
-          value={strobe.maxFpm}
-          unitKey={unit}
-          toText={rateText}
-          read={(text) => {
-            const v = readFlashRateFpm(text, unit, 'highest rate');
-            if (v <= setup.peek().strobe.minFpm)
-              throw new InputError('highest rate', 'The highest rate must be above the lowest.');
-            return v;
-          }}
-          onValue={(v) => setStrobeRange(setup.peek().strobe.minFpm, v)}
-          unit={unitWord}
-        />
-      </div>
+      <StrobeRangeFields
+        idPrefix="finder-strobe"
+        minLabel="Strobe's lowest rate"
+        maxLabel="Strobe's highest rate"
+      />
       <ChoiceGroup
         legend="Expected speed"
         name="finder-expect"
