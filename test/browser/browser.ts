@@ -56,3 +56,41 @@ export async function typeInto(page: Page, label: string | RegExp, text: string)
   await field.fill('');
   await field.pressSequentially(text);
 }
+
+/**
+ * What the app has stored in IndexedDB under `key` (idb-keyval's database and store, as in
+ * src/state/storage.ts), or undefined. A test that reloads waits on this for the write it relies
+ * on: the page writes after each change, and a reload could otherwise come before the write.
+ */
+export function storedRecord(page: Page, key: string): Promise<unknown> {
+  return page.evaluate(async (k) => {
+    // Opening a database that does not exist would create it empty, under the app's feet.
+    const names = (await indexedDB.databases()).map((d) => d.name);
+    if (!names.includes('trueturn')) return undefined;
+    return new Promise<unknown>((done, fail) => {
+      const open = indexedDB.open('trueturn');
+      open.onerror = () => fail(open.error);
+      open.onsuccess = () => {
+        const db = open.result;
+        if (!db.objectStoreNames.contains('records')) {
+          db.close();
+          return done(undefined);
+        }
+        const get = db.transaction('records', 'readonly').objectStore('records').get(k);
+        get.onsuccess = () => {
+          db.close();
+          done(get.result);
+        };
+        get.onerror = () => fail(get.error);
+      };
+    });
+  }, key);
+}
+
+/** The set-up stored for the next visit (src/state/storage.ts KEYS.currentSetup). */
+export async function storedSetup(
+  page: Page,
+): Promise<{ parts: Array<{ speedRpm: number; features: number }> } | undefined> {
+  return (await storedRecord(page, 'trueturn/current-setup')) as
+    { parts: Array<{ speedRpm: number; features: number }> } | undefined;
+}

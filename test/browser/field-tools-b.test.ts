@@ -304,10 +304,10 @@ describe('the field tools in a real browser, at phone size', () => {
     // "Open in check" puts that setting on the check screen, where the camera view is.
     await rows.first().getByRole('button', { name: 'Open in check' }).click();
     await page.getByTestId('verdict').waitFor();
-    expect(await page.getByRole('radio', { name: 'Camera' }).isChecked()).toBe(true);
-    expect(await page.getByLabel('Frame rate', { exact: true }).inputValue()).toBe(
-      numberForField(reached.settings[0].frameRate),
-    );
+    await expect.poll(() => page.getByRole('radio', { name: 'Camera' }).isChecked()).toBe(true);
+    await expect
+      .poll(() => page.getByLabel('Frame rate', { exact: true }).inputValue())
+      .toBe(numberForField(reached.settings[0].frameRate));
     await expect.poll(() => page.getByTestId('verdict').innerText()).toMatch(/^Looks still/);
   });
 
@@ -351,12 +351,12 @@ describe('the field tools in a real browser, at phone size', () => {
     await expect
       .poll(() => page.getByTestId('logger-headline').innerText())
       .toBe('The record is clean');
-    expect(await page.getByLabel('Sample rate', { exact: true }).inputValue()).toBe(
-      numberForField(slow.proposal!.sampleHz),
-    );
-    expect(await page.getByLabel('Order', { exact: true }).inputValue()).toBe(
-      String(slow.proposal!.order),
-    );
+    await expect
+      .poll(() => page.getByLabel('Sample rate', { exact: true }).inputValue())
+      .toBe(numberForField(slow.proposal!.sampleHz));
+    await expect
+      .poll(() => page.getByLabel('Order', { exact: true }).inputValue())
+      .toBe(String(slow.proposal!.order));
     const clean = loggerPlan(
       tones(defaultLoggerEntries.harmonics),
       slow.proposal!.sampleHz,

@@ -1,7 +1,7 @@
 // Saved machines in a real browser: they survive a reload, go out to a file and come back.
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { openApp, openBrowser, typeInto, type Session } from './browser';
+import { openApp, openBrowser, storedSetup, typeInto, type Session } from './browser';
 
 let session: Session | undefined;
 
@@ -25,11 +25,13 @@ describe('saved machines', () => {
     await typeInto(page, 'Speed', '1480');
     await saveMachine(session, 'Sifter drive');
     await typeInto(page, 'Blades or marks', '4');
+    // The reload must come after the page has stored that change.
+    await expect.poll(async () => (await storedSetup(page))?.parts[0].features).toBe(4);
 
     await page.reload();
     await page.getByTestId('verdict').waitFor();
     await expect.poll(() => page.getByLabel('Speed', { exact: true }).inputValue()).toBe('1480');
-    expect(await page.getByLabel('Blades or marks').inputValue()).toBe('4');
+    await expect.poll(() => page.getByLabel('Blades or marks').inputValue()).toBe('4');
     await page.getByRole('button', { name: 'Machines' }).click();
     const list = page.getByTestId('machine-list');
     await expect.poll(() => list.innerText()).toContain('Sifter drive');

@@ -60,7 +60,9 @@ describe('the main flow', () => {
       .getByRole('button', { name: /^3,600 fpm 1 image/ })
       .click();
     await expect.poll(() => verdict.innerText()).toMatch(/^Looks still/);
-    expect(await page.getByLabel('Flash rate', { exact: true }).inputValue()).toBe('3600');
+    await expect
+      .poll(() => page.getByLabel('Flash rate', { exact: true }).inputValue())
+      .toBe('3600');
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
 
     // Nothing leaves the origin: no web fonts, analytics or CDNs.

@@ -1,7 +1,7 @@
 // Offline use: after the first visit the app and the saved machines must work with the server
 // gone. This test runs its own preview server so stopping it does not disturb other tests.
 import { afterEach, describe, expect, inject, test } from 'vitest';
-import { openApp, openBrowser, typeInto, type Session } from './browser';
+import { openApp, openBrowser, storedSetup, typeInto, type Session } from './browser';
 import { startPreview, type PreviewServer } from './server';
 
 let session: Session | undefined;
@@ -34,6 +34,7 @@ describe('with no network after the first visit', () => {
     await page.getByLabel('Machine name').fill('Offline pump');
     await page.getByRole('button', { name: 'Save as new machine' }).click();
     await page.getByText('Saved as "Offline pump".').waitFor();
+    await expect.poll(async () => (await storedSetup(page))?.parts[0].speedRpm).toBe(2900);
 
     await server.stop();
     // The server is really gone: a direct request fails.

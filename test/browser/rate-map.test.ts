@@ -24,9 +24,34 @@ const strobeRange: Range = { minHz: 30 / 60, maxHz: 12000 / 60 };
 /** A tap this close to a lock marker takes the lock's rate (src/views/RateMap/chart.ts). */
 const SNAP_PX = 6;
 
-/** The plot area: uPlot's overlay, which takes the taps, spans exactly the plotted rates. */
-function plot(page: Page): Locator {
-  return page.getByTestId('rate-map').locator('.u-over');
+/**
+ * The plot area once the chart on it is drawn on `axis` for the test rig's mark (the widget
+ * marks its plot box with what the chart shows: src/views/RateMap). uPlot's overlay takes the
+ * taps and spans exactly the plotted rates. The chart is drawn after the page paints, so every
+ * measurement and tap goes through this locator, which waits for that drawing.
+ */
+function plot(page: Page, axis: 'log' | 'linear'): Locator {
+  return page
+    .getByTestId('rate-map')
+    .locator(`[data-axis="${axis}"][data-parts^="${mark.speedHz}/${mark.symmetry}/"] .u-over`);
+}
+
+/** The plot area's size in CSS pixels, once drawn on `axis`. */
+async function plotSize(
+  page: Page,
+  axis: 'log' | 'linear',
+): Promise<{ width: number; height: number }> {
+  const area = plot(page, axis);
+  await area.waitFor();
+  await area.scrollIntoViewIfNeeded();
+  const box = await area.boundingBox();
+  if (!box) throw new Error('the rate map has no plot area');
+  return { width: box.width, height: box.height };
+}
+
+/** Taps the plot `x` CSS pixels from its left edge, halfway up (Playwright waits until it can). */
+function tapAt(page: Page, axis: 'log' | 'linear', x: number, height: number): Promise<void> {
+  return plot(page, axis).click({ position: { x, y: height / 2 } });
 }
 
 /** The rate at `x` CSS pixels from the plot's left edge, as the axis maps it. */
@@ -108,17 +133,12 @@ async function expectRateNear(page: Page, x: number, width: number, log: boolean
   );
 }
 
-async function openRig(
-  page: Page,
-): Promise<{ box: { x: number; y: number; width: number; height: number } }> {
+/** Opens the check screen on the test rig and returns the drawn plot's size (log axis). */
+async function openRig(page: Page): Promise<{ width: number; height: number }> {
   await openApp(page, inject('baseUrl'));
   await typeInto(page, 'Speed', '600');
   await typeInto(page, 'Blades or marks', '1');
-  await plot(page).waitFor();
-  await plot(page).scrollIntoViewIfNeeded();
-  const box = await plot(page).boundingBox();
-  if (!box) throw new Error('the rate map has no plot area');
-  return { box };
+  return plotSize(page, 'log');
 }
 
 /** A 32-bit checksum of a canvas's pixels, read in the page. */
@@ -149,12 +169,12 @@ describe('the rate map on the check screen', () => {
   test('a tap sets the rate under it; the rate field and the verdict follow and agree with the core', async () => {
     session = await openBrowser({ width: 1280, height: 800 });
     const { page } = session;
-    const { box } = await openRig(page);
+    const box = await openRig(page);
     // 30 to 12,000 fpm is a 400:1 range: the map starts on a logarithmic axis.
     expect(await page.getByLabel('Logarithmic rate axis').isChecked()).toBe(true);
 
     const x = clearX(box.width, true, 0.62, SNAP_PX + 2);
-    await page.mouse.click(box.x + x, box.y + box.height / 2);
+    await tapAt(page, 'log', x, box.height);
     await expectRateNear(page, x, box.width, true);
     await expectVerdictAgrees(page);
   });
@@ -162,7 +182,7 @@ describe('the rate map on the check screen', () => {
   test('a tap beside a lock marker takes the exact lock-in rate: one still image at 600 fpm', async () => {
     session = await openBrowser({ width: 1280, height: 800 });
     const { page } = session;
-    const { box } = await openRig(page);
+    const box = await openRig(page);
     const lockX = xOfRate(10, box.width, strobeRange, true);
     const tapX = lockX + 3;
     // The 10 Hz lock must be the nearest marker to the tap for the snap to pick it.
@@ -172,7 +192,7 @@ describe('the rate map on the check screen', () => {
         Math.abs(xOfRate(b.rateHz, box.width, strobeRange, true) - tapX),
     )[0];
     expect(nearest.rateHz).toBe(10);
-    await page.mouse.click(box.x + tapX, box.y + box.height / 2);
+    await tapAt(page, 'log', tapX, box.height);
     await expect
       .poll(() => page.getByLabel('Flash rate', { exact: true }).inputValue())
       .toBe('600');
@@ -186,25 +206,25 @@ describe('the rate map on the check screen', () => {
   test('a drag follows the pointer, and the linear axis maps taps evenly', async () => {
     session = await openBrowser({ width: 1280, height: 800 });
     const { page } = session;
-    const { box } = await openRig(page);
-    const y = box.y + box.height / 2;
+    const box = await openRig(page);
 
     const from = clearX(box.width, true, 0.3, SNAP_PX + 2);
     const to = clearX(box.width, true, 0.8, 1);
-    await page.mouse.move(box.x + from, y);
+    await plot(page, 'log').hover({ position: { x: from, y: box.height / 2 } });
+    // Hovering scrolled the plot into view: the drag's end is measured from where it is now.
+    const at = await plot(page, 'log').boundingBox();
+    if (!at) throw new Error('the rate map has no plot area');
     await page.mouse.down();
-    await page.mouse.move(box.x + to, y, { steps: 8 });
+    await page.mouse.move(at.x + to, at.y + box.height / 2, { steps: 8 });
     await page.mouse.up();
     await expectRateNear(page, to, box.width, true);
     await expectVerdictAgrees(page);
 
     await page.getByLabel('Logarithmic rate axis').uncheck();
-    // The chart is rebuilt on the new axis; wait for the new overlay before measuring it.
-    await expect.poll(() => page.getByTestId('rate-map').locator('.u-over').count()).toBe(1);
-    const linear = await plot(page).boundingBox();
-    if (!linear) throw new Error('the rate map has no plot area');
+    // The chart is rebuilt on the new axis; its plot is measured once that one is drawn.
+    const linear = await plotSize(page, 'linear');
     const x = clearX(linear.width, false, 0.5, SNAP_PX + 2);
-    await page.mouse.click(linear.x + x, linear.y + linear.height / 2);
+    await tapAt(page, 'linear', x, linear.height);
     await expectRateNear(page, x, linear.width, false);
     await expectVerdictAgrees(page);
     // Halfway across a linear axis is halfway through the range, about 6,000 fpm, not the

@@ -42,9 +42,24 @@ export interface PreviewServer {
   stop: () => Promise<void>;
 }
 
-/** Starts `vite preview --host 127.0.0.1 --strictPort` on a free port and waits until it answers. */
+/**
+ * Starts `vite preview --host 127.0.0.1 --strictPort` on a free port and waits until it answers.
+ * The port is free when asked for, but another process may take it before vite binds it: then
+ * vite exits at once, and another free port is tried.
+ */
 export async function startPreview(outDir = testDistDir): Promise<PreviewServer> {
-  const port = await freePort();
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await startPreviewOnce(outDir, await freePort());
+    } catch (error) {
+      if (!(error instanceof PortTakenError) || attempt >= 5) throw error;
+    }
+  }
+}
+
+class PortTakenError extends Error {}
+
+async function startPreviewOnce(outDir: string, port: number): Promise<PreviewServer> {
   const child: ChildProcess = spawn(
     process.execPath,
     [
@@ -66,7 +81,10 @@ export async function startPreview(outDir = testDistDir): Promise<PreviewServer>
   const url = `http://127.0.0.1:${port}/`;
   const deadline = Date.now() + 30_000;
   for (;;) {
-    if (child.exitCode !== null) throw new Error(`vite preview exited early:\n${output}`);
+    if (child.exitCode !== null) {
+      const Failure = /already in use|EADDRINUSE/i.test(output) ? PortTakenError : Error;
+      throw new Failure(`vite preview exited early:\n${output}`);
+    }
     try {
       const res = await fetch(url);
       if (res.ok) break;

@@ -1,6 +1,6 @@
-import { useEffect, useState } from 'preact/hooks';
 import { kmhToMps, mpsToKmh, mpsToMph, mphToMps } from '../../core';
 import { readFeatures, readField, readSpeedRpm, readTolerancePercent } from '../../lib/fields';
+import { useFollowingText } from '../../lib/followingText';
 import { formatNumber, numberForField } from '../../lib/format';
 import { readTeeth } from '../../lib/toolFields';
 import {
@@ -249,31 +249,21 @@ function TyreField({
   size: string;
   onSize: (size: string) => void;
 }) {
-  const [text, setText] = useState(size);
-  const [message, setMessage] = useState<string | null>(null);
-  useEffect(() => {
-    if (text.trim() !== size) {
-      setText(size);
-      setMessage(null);
-    }
-    // Only an outside change rewrites the text.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [size]);
+  const { text, message, edit } = useFollowingText(
+    size,
+    (shown) => shown.trim() === size,
+    () => size,
+  );
   const onInput = (event: Event) => {
     const next = (event.currentTarget as HTMLInputElement).value;
-    setText(next);
     // readField turns the core's refusal into a sentence (and rethrows anything else).
     let clean = '';
     const reading = readField(next, (t) => {
       clean = readTyreSize(t);
       return 0;
     });
-    if (!reading.ok) {
-      setMessage(reading.message);
-      return;
-    }
-    setMessage(null);
-    if (clean !== size) onSize(clean);
+    edit(next, reading.ok ? null : reading.message);
+    if (reading.ok && clean !== size) onSize(clean);
   };
   return (
     <div class={style.nameField}>

@@ -1,6 +1,6 @@
 import type { ComponentChildren } from 'preact';
-import { useEffect, useState } from 'preact/hooks';
 import { readField } from '../../lib/fields';
+import { useFollowingText } from '../../lib/followingText';
 import { sameNumber, TextField } from './text-field';
 
 interface Props {
@@ -42,29 +42,20 @@ export function NumberField({
   unitKey,
   disabled,
 }: Props) {
-  const [text, setText] = useState(() => toText(value));
-  const [message, setMessage] = useState<string | null>(null);
-
-  useEffect(() => {
-    const reading = readField(text, read);
-    if (!(reading.ok && sameNumber(reading.value, value))) {
-      setText(toText(value));
-      setMessage(null);
-    }
-    // Only an outside change of the value or the unit rewrites the text, never a keystroke.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [value, unitKey]);
+  const { text, message, edit } = useFollowingText(
+    `${value} ${unitKey ?? ''}`,
+    (shown) => {
+      const reading = readField(shown, read);
+      return reading.ok && sameNumber(reading.value, value);
+    },
+    () => toText(value),
+  );
 
   const onInput = (event: Event) => {
     const next = (event.currentTarget as HTMLInputElement).value;
-    setText(next);
     const reading = readField(next, read);
-    if (reading.ok) {
-      setMessage(null);
-      if (!sameNumber(reading.value, value)) onValue(reading.value);
-    } else {
-      setMessage(reading.message);
-    }
+    edit(next, reading.ok ? null : reading.message);
+    if (reading.ok && !sameNumber(reading.value, value)) onValue(reading.value);
   };
 
   return (

@@ -1,6 +1,6 @@
 import type { ComponentChildren } from 'preact';
-import { useEffect, useState } from 'preact/hooks';
 import { readField } from '../../lib/fields';
+import { useFollowingText } from '../../lib/followingText';
 // The same look as a single number field.
 import { sameNumber, TextField } from '../NumberField/text-field';
 
@@ -30,30 +30,21 @@ function sameList(a: readonly number[], b: readonly number[]): boolean {
  * leaves the list (and the results) as they were.
  */
 export function NumberListField({ id, label, values, toText, read, onValues, unit, hint }: Props) {
-  const [text, setText] = useState(() => values.map(toText).join(' '));
-  const [message, setMessage] = useState<string | null>(null);
-
-  useEffect(() => {
-    const reading = readField(text, read);
-    if (!(reading.ok && sameList(reading.value, values))) {
-      setText(values.map(toText).join(' '));
-      setMessage(null);
-    }
-    // Only an outside change of the list rewrites the text, never a keystroke. Keyed on the
-    // numbers, not the array, which a caller may rebuild at every render.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [values.join(' ')]);
+  // Keyed on the numbers, not the array, which a caller may rebuild at every render.
+  const { text, message, edit } = useFollowingText(
+    values.join(' '),
+    (shown) => {
+      const reading = readField(shown, read);
+      return reading.ok && sameList(reading.value, values);
+    },
+    () => values.map(toText).join(' '),
+  );
 
   const onInput = (event: Event) => {
     const next = (event.currentTarget as HTMLInputElement).value;
-    setText(next);
     const reading = readField(next, read);
-    if (reading.ok) {
-      setMessage(null);
-      if (!sameList(reading.value, values)) onValues(reading.value);
-    } else {
-      setMessage(reading.message);
-    }
+    edit(next, reading.ok ? null : reading.message);
+    if (reading.ok && !sameList(reading.value, values)) onValues(reading.value);
   };
 
   return (

@@ -1,5 +1,6 @@
-import { useEffect, useState } from 'preact/hooks';
+import { useState } from 'preact/hooks';
 import { formatNumber } from '../../lib/format';
+import { useFollowingText } from '../../lib/followingText';
 import { partLabel } from '../../state/model';
 import { addPart, removePart, renamePart, selectPart } from '../../state/parts';
 import { setup } from '../../state/setup';
@@ -26,19 +27,13 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
   const s = setup.value;
   const active = s.parts[s.activePart] ? s.activePart : 0;
   const chosen = s.parts[active];
-  const [name, setName] = useState(chosen.name);
   const [problem, setProblem] = useState<string | null>(null);
-  // Another part chosen, or its name changed elsewhere: the field follows. The text of this
-  // render is compared, as in NumberField, so the set-up echoing a keystroke back never
-  // overwrites keys typed since.
-  useEffect(() => {
-    if (name !== chosen.name) {
-      setName(chosen.name);
-      setProblem(null);
-    }
-    // Only the chosen part or its stored name rewrite the text, never a keystroke.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [active, chosen.name]);
+  // Another part chosen, or its name changed elsewhere: the field follows, in the same render.
+  const { text: name, edit } = useFollowingText(
+    `${active} ${chosen.name}`,
+    (shown) => shown === chosen.name,
+    () => chosen.name,
+  );
 
   const act = (action: () => void) => {
     try {
@@ -51,7 +46,7 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
 
   const onName = (event: Event) => {
     const next = (event.currentTarget as HTMLInputElement).value;
-    setName(next);
+    edit(next, null);
     act(() => renamePart(active, next));
   };
 

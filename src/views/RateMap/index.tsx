@@ -137,6 +137,7 @@ export function RateMap(props: Props) {
     }
     setDrawFailed(false);
     chart.current = made;
+    markDrawn(holder, log, key);
     const observer =
       typeof ResizeObserver === 'function'
         ? new ResizeObserver(() => made.resize(chartSize(holder).width, chartSize(holder).height))
@@ -146,13 +147,16 @@ export function RateMap(props: Props) {
       observer?.disconnect();
       made.destroy();
       chart.current = null;
+      markDrawn(holder, null, null);
     };
     // Data and rate changes go through update() and setRate() below, without a rebuild.
   }, [chartModule, log, samplerKind, flashUnit, hasSeries, range.minHz, range.maxHz, scheme]);
 
   useEffect(() => {
-    if (series && 'limit' in computed)
-      chart.current?.update(series, latest.current.rateHz, computed.limit);
+    if (series && 'limit' in computed && chart.current && holderRef.current) {
+      chart.current.update(series, latest.current.rateHz, computed.limit);
+      markDrawn(holderRef.current, log, key);
+    }
   }, [computed]);
 
   useEffect(() => {
@@ -242,6 +246,22 @@ export function RateMap(props: Props) {
       {caution && <p class={style.caution}>{caution}</p>}
     </div>
   );
+}
+
+/**
+ * Says on the plot's box what the chart on it shows now (its axis and the parts' numbers), or
+ * removes it while no chart is drawn. The chart is drawn after the page paints, so a reader that
+ * needs the drawn chart (a test, a tap on a lock marker) waits for these, not for time. Written
+ * straight to the element: a re-render for each drawing would cost every keystroke a frame.
+ */
+function markDrawn(holder: HTMLElement, log: boolean | null, partsKey: string | null): void {
+  if (log === null || partsKey === null) {
+    delete holder.dataset.axis;
+    delete holder.dataset.parts;
+  } else {
+    holder.dataset.axis = log ? 'log' : 'linear';
+    holder.dataset.parts = partsKey;
+  }
 }
 
 /** 'dark' or 'light' as the system sets it; the chart's colours are read again when it changes. */
