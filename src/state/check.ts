@@ -117,7 +117,11 @@ export interface CheckResult {
   bands: BandSummary;
   camera?: CameraResult;
   lighting?: LightingResult;
-  /** physics.md §10: the part may look still or wrong: never trust it to be stopped. */
+  /**
+   * physics.md §4 and §10: the view is aliased (anything but the true motion with one image:
+   * still, slowed forward, several images, backward, unclear, a creep asked for), so the
+   * stillness and lock-out caution goes with the verdict.
+   */
   showSafety: boolean;
   /** physics.md §10: a flash rate between 3 and 60 per second. */
   showPhotosensitivity: boolean;
@@ -470,6 +474,16 @@ function lightingResult(flickerHz: number, modulationPercent: number): LightingR
   };
 }
 
+/**
+ * An aliased view (physics.md §4): every view that is not the true motion with one image. A
+ * sampler below the pattern's Nyquist rate (not faithful) always aliases; above it, several
+ * superimposed images (one mark at 10 rev/s under 30.5 flashes/s shows three) are not the
+ * true motion either.
+ */
+export function isAliased(motion: ApparentMotion): boolean {
+  return !motion.faithful || motion.images > 1 || motion.look !== 'true';
+}
+
 /** Everything the check screen shows for a set-up. Throws the core's InputError for a set-up it refuses. */
 export function computeCheck(s: Setup): CheckResult {
   const part = corePart(s);
@@ -507,7 +521,7 @@ export function computeCheck(s: Setup): CheckResult {
     bands: bandSummary(part, rateHz, range, sampler),
     camera,
     lighting,
-    showSafety: verdict.trust === 'danger',
+    showSafety: !steadyLight && isAliased(motion),
     showPhotosensitivity: flashes && cautionFlags({ flashRatesHz: [rateHz] }).photosensitivity,
     notes,
   };

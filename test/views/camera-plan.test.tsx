@@ -150,9 +150,14 @@ describe('the camera plan screen', () => {
     const before = cameraPlanning.result.value;
     expect(before?.nearMisses.every((s) => s.frameRate === 240)).toBe(true);
     fireEvent.click(screen.getByLabelText('240'));
-    expect(screen.getByTestId('plan-problem').textContent).toMatch(/at least one frame rate/);
+    // physics.md §10: the answer is withdrawn with the core's words; the table stays, marked not current.
+    expect(screen.getByTestId('withdrawn').textContent).toMatch(/at least one frame rate/);
+    expect(screen.getByTestId('not-current')).toBeTruthy();
     expect(cameraPlanning.result.value).toBe(before);
-    expect(rows().length).toBeGreaterThan(0);
+    // Kept in place for when the entries are good again, but out of reach of taps and screen readers.
+    const kept = screen.getByTestId('not-current').parentElement!;
+    expect(kept.querySelectorAll('tr').length).toBeGreaterThan(1);
+    expect(kept.querySelector('[inert]')).not.toBeNull();
   });
 
   test('garbage in a list field gets a message naming the item, and the list stays', () => {

@@ -212,9 +212,9 @@ describe('the whole machine', () => {
     buildMotorBeltFan();
     type(0, 'Tolerance', '45');
     type(1, 'Belt slip', '20');
-    expect(screen.getByTestId('chain-problem').textContent).toMatch(
-      /uncertain by more than ±50 %.*last entries that could be worked out/,
-    );
+    // physics.md §10: the answer is withdrawn with the core's words; the results are marked not current.
+    expect(screen.getByTestId('withdrawn').textContent).toMatch(/uncertain by more than ±50 %/);
+    expect(screen.getByTestId('not-current')).toBeTruthy();
     expect((setup.value.parts[1].drive as { slipPercent: number }).slipPercent).toBe(20);
     // The last good speeds stay on screen.
     expect(speedOf(1)).toMatch(/^582 rpm ± 45 %/);

@@ -122,11 +122,6 @@ export function CameraPlanScreen() {
   const warnings = (
     <>
       <Cautions show={cautionFlags(cautions)} />
-      {problem && (
-        <p class={style.problem} role="alert" data-testid="plan-problem">
-          {problem} {plan ? 'The table shows the last entries that could be worked out.' : ''}
-        </p>
-      )}
     </>
   );
 
@@ -265,6 +260,7 @@ export function CameraPlanScreen() {
       entries={entries}
       results={results}
       report={report}
+      withdraw={{ refusal: problem }}
     />
   );
 }

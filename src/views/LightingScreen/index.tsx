@@ -96,11 +96,6 @@ export function LightingScreen() {
   const warnings = (
     <>
       <Cautions show={cautionFlags(cautions)} />
-      {problem && result && (
-        <p class={style.problem} role="alert" data-testid="lighting-problem">
-          {problem} The results shown are for the last set-up that could be worked out.
-        </p>
-      )}
     </>
   );
 
@@ -178,6 +173,7 @@ export function LightingScreen() {
       entries={entries}
       results={results}
       report={report}
+      withdraw={{ refusal: problem }}
     />
   );
 }

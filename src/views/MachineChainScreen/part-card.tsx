@@ -25,6 +25,7 @@ import {
 import { ChoiceGroup } from '../ChoiceGroup';
 import { MotorFields } from '../MotorFields';
 import { NumberField } from '../NumberField';
+import { useReportedProblem } from '../NumberField/text-field';
 import { readBeltSlipPercent, readGroundSpeed, readPulleyMm, readTyreSize } from './chain-fields';
 import style from './style.module.css';
 
@@ -52,6 +53,8 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
   const part = setup.parts[index];
   const source = speedSourceOf(part);
   const id = (field: string) => `part-${index}-${field}`;
+  // Several parts share labels ("Speed"): a "fix …" note names the part too.
+  const named = (label: string) => `${partLabel(setup, index)}: ${label}`;
   const act = (edit: (s: Setup) => Setup) => {
     try {
       editChain(edit);
@@ -80,6 +83,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
       <NumberField
         id={id('features')}
         label="Blades or marks"
+        name={named('Blades or marks')}
         value={part.features}
         toText={numberForField}
         read={readFeatures}
@@ -96,6 +100,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         <NumberField
           id={id('speed')}
           label="Speed"
+          name={named('Speed')}
           value={part.speedRpm}
           toText={numberForField}
           read={(text) => readSpeedRpm(text, 'rpm')}
@@ -107,6 +112,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         <div class={style.group}>
           <MotorFields
             id={id}
+            name={named}
             motor={part.motor}
             onMotor={(m) => act((s) => withMotor(s, index, m))}
           />
@@ -115,6 +121,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
       {source === 'wheel' && part.wheel && (
         <WheelFields
           id={id}
+          named={named}
           wheel={part.wheel}
           onWheel={(w) => act((s) => withWheel(s, index, w))}
         />
@@ -122,6 +129,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
       {source === 'drive' && part.drive && (
         <DriveFields
           id={id}
+          named={named}
           setup={setup}
           index={index}
           drive={part.drive}
@@ -132,6 +140,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         <NumberField
           id={id('tolerance')}
           label="Tolerance"
+          name={named('Tolerance')}
           value={part.tolerancePercent}
           toText={numberForField}
           read={readTolerancePercent}
@@ -195,11 +204,13 @@ function NameField({
 
 interface WheelProps {
   id: (field: string) => string;
+  /** A field's name in a "fix …" note, from its label. */
+  named: (label: string) => string;
   wheel: WheelSpec;
   onWheel: (wheel: WheelSpec) => void;
 }
 
-function WheelFields({ id, wheel, onWheel }: WheelProps) {
+function WheelFields({ id, named, wheel, onWheel }: WheelProps) {
   // Another unit keeps the same ground speed.
   const changeUnit = (unit: WheelSpec['unit']) => {
     if (unit === wheel.unit) return;
@@ -211,6 +222,7 @@ function WheelFields({ id, wheel, onWheel }: WheelProps) {
       <NumberField
         id={id('ground')}
         label="Ground speed"
+        name={named('Ground speed')}
         value={wheel.groundSpeed}
         unitKey={wheel.unit}
         toText={numberForField}
@@ -232,6 +244,7 @@ function WheelFields({ id, wheel, onWheel }: WheelProps) {
       />
       <TyreField
         id={id('tyre')}
+        name={named('Tyre size')}
         size={wheel.tyreSize}
         onSize={(tyreSize) => onWheel({ ...wheel, tyreSize })}
       />
@@ -242,10 +255,13 @@ function WheelFields({ id, wheel, onWheel }: WheelProps) {
 /** A tyre size, checked at each keystroke like a number field: bad text keeps the last good size. */
 function TyreField({
   id,
+  name,
   size,
   onSize,
 }: {
   id: string;
+  /** The field's name in a "fix …" note: which part's tyre. */
+  name: string;
   size: string;
   onSize: (size: string) => void;
 }) {
@@ -254,6 +270,7 @@ function TyreField({
     (shown) => shown.trim() === size,
     () => size,
   );
+  useReportedProblem(id, name, message);
   const onInput = (event: Event) => {
     const next = (event.currentTarget as HTMLInputElement).value;
     // readField turns the core's refusal into a sentence (and rethrows anything else).
@@ -295,13 +312,15 @@ function TyreField({
 
 interface DriveProps {
   id: (field: string) => string;
+  /** A field's name in a "fix …" note, from its label. */
+  named: (label: string) => string;
   setup: Setup;
   index: number;
   drive: PartDrive;
   onDrive: (drive: PartDrive) => void;
 }
 
-function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
+function DriveFields({ id, named, setup, index, drive, onDrive }: DriveProps) {
   const kinds: Array<{ value: PartDrive['kind']; label: string }> = [
     { value: 'belt', label: 'Belt' },
     { value: 'gear', label: 'Gears' },
@@ -347,6 +366,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
             <NumberField
               id={id('driver-mm')}
               label="Driver pulley"
+              name={named('Driver pulley')}
               value={drive.driverMm}
               toText={numberForField}
               read={(text) => readPulleyMm(text, 'driver pulley')}
@@ -356,6 +376,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
             <NumberField
               id={id('driven-mm')}
               label="Driven pulley"
+              name={named('Driven pulley')}
               value={drive.drivenMm}
               toText={numberForField}
               read={(text) => readPulleyMm(text, 'driven pulley')}
@@ -366,6 +387,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
           <NumberField
             id={id('belt-slip')}
             label="Belt slip"
+            name={named('Belt slip')}
             value={drive.slipPercent}
             toText={numberForField}
             read={readBeltSlipPercent}
@@ -381,6 +403,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
             <NumberField
               id={id('driver-teeth')}
               label="Driver teeth"
+              name={named('Driver teeth')}
               value={drive.driverTeeth}
               toText={numberForField}
               read={readTeeth}
@@ -389,6 +412,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
             <NumberField
               id={id('driven-teeth')}
               label="Driven teeth"
+              name={named('Driven teeth')}
               value={drive.drivenTeeth}
               toText={numberForField}
               read={readTeeth}
