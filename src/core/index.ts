@@ -112,6 +112,10 @@ export {
   type CameraSetting,
   type CameraPlan,
   type CameraPlanOptions,
+  type CameraCondition,
+  type CameraNeeds,
+  type LookRate,
+  MAX_LOOK_RATES,
 } from './cameraPlan';
 export {
   loggerPlan,
