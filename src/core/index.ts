@@ -36,8 +36,13 @@ export {
   percentFlicker,
   svm,
   svmThreshold,
+  lightHarmonics,
+  lightSvm,
+  SVM_MAX_HZ,
   type FlickerRisk,
   type LightComponent,
+  type LightShape,
+  type LightWave,
 } from './flicker';
 export {
   synchronousSpeedHz,

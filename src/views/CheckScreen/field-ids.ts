@@ -16,13 +16,14 @@ export const VERDICT_FIELDS: readonly string[] = [
   'modulation',
 ];
 
-/** What the lists, the rate map and the preview read besides: tolerance, strobe range, readout. */
+/** What the lists, the rate map, the preview and the readouts read besides: tolerance, strobe range, readout, PWM duty. */
 export const RESULT_FIELDS: readonly string[] = [
   ...VERDICT_FIELDS,
   'tolerance',
   'strobe-min',
   'strobe-max',
   'readout',
+  'duty',
 ];
 
 /** What the creep suggestions read besides: the creep wanted. */
