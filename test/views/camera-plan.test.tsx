@@ -143,6 +143,11 @@ describe('the camera plan screen', () => {
       /Sharpness: no setting of this camera meets it\. Sharp features need an exposure of 1\/18,000 s or shorter/,
     );
     expect(text).toMatch(/a camera with a faster readout or a global shutter/);
+    // The answer at the top names both obstacles and what would lift them.
+    expect(screen.getByTestId('plan-blocked').textContent).toBe(
+      'Sharpness: needs 1/18,000 s or shorter: a faster shutter, more light' +
+        'Rolling shutter: needs a readout of 5 ms or shorter: a global shutter',
+    );
     // Adding fast shutter speeds does not make it reach: the readout still breaks the blades.
     type('Shutter speeds', '500 1000 2000 4000');
     expect(screen.getByTestId('plan-headline').textContent).toBe(

@@ -41,6 +41,7 @@ import { ReportBar } from '../ReportBar';
 import { ResultTable, type ResultColumn } from '../ResultTable';
 import { ToolLayout } from '../ToolLayout';
 import {
+  blockedLines,
   CONDITION_NAMES,
   conditionLines,
   GOAL_WORDS,
@@ -106,16 +107,11 @@ export function CameraPlanScreen() {
           </p>
         )}
         {plan && reached.length === 0 && (
-          <>
-            <p>A setting reaches the goal only when every condition holds:</p>
-            <ul class={style.conditions} data-testid="plan-none">
-              {conditionLines(plan, planReadoutMs.value).map((line) => (
-                <li key={line.condition} data-met={line.met > 0 ? 'some' : 'none'}>
-                  {line.text}
-                </li>
-              ))}
-            </ul>
-          </>
+          <ul class={style.blocked} data-testid="plan-blocked">
+            {blockedLines(plan).map((line) => (
+              <li key={line}>{line}</li>
+            ))}
+          </ul>
         )}
       </div>
     </Panel>
@@ -221,6 +217,18 @@ export function CameraPlanScreen() {
 
   const results = (
     <>
+      {plan && reached.length === 0 && (
+        <Panel title="What the goal needs" id="plan-needs">
+          <p class={style.plain}>A setting reaches the goal only when every condition holds.</p>
+          <ul class={style.conditions} data-testid="plan-none">
+            {conditionLines(plan, planReadoutMs.value).map((line) => (
+              <li key={line.condition} data-met={line.met > 0 ? 'some' : 'none'}>
+                {line.text}
+              </li>
+            ))}
+          </ul>
+        </Panel>
+      )}
       <Panel
         title={reached.length > 0 ? 'Settings that reach the goal' : 'Closest settings'}
         id="plan-settings"

@@ -199,3 +199,37 @@ function rateList(ratesHz: number[], count: number): string {
   const listed = ratesHz.map(rateText).join(', ');
   return count > ratesHz.length ? `${listed} and ${count - ratesHz.length} slower` : listed;
 }
+
+/** What would lift a condition, in a few words for the answer at the top. */
+function shortLift(c: CameraCondition, plan: CameraPlan): string {
+  const n = plan.needs;
+  switch (c) {
+    case 'look':
+      if (plan.goal === 'honest') return `a rate above ${rateText(n.faithfulAboveHz)}`;
+      return n.lookRateCount > 0
+        ? `a rate such as ${n.lookRates
+            .slice(0, 3)
+            .map((r) => rateText(r.rateHz))
+            .join(', ')}`
+        : 'a rate outside this camera’s span';
+    case 'sharpness':
+      return `${formatExposure(n.sharpExposureS)} or shorter: a faster shutter, more light`;
+    case 'blur':
+      return `${formatExposure(n.discExposureS)} or longer: a slower shutter with an ND filter`;
+    case 'smoothness':
+      return `an exposure of a whole number of pitches, such as ${formatExposure(n.discExposureS)}`;
+    case 'bend':
+      return `a readout of ${formatNumber(n.bendReadoutS * 1000)} ms or shorter: a global shutter`;
+  }
+}
+
+/**
+ * Which conditions block the goal, for the answer at the top: those no setting of the camera
+ * meets; or, when each is met by some setting but none meets all, those the closest setting fails.
+ * @example blockedLines(plan) // ["Sharpness: needs 1/18,000 s or shorter: a faster shutter, more light", …]
+ */
+export function blockedLines(plan: CameraPlan): string[] {
+  const none = plan.conditions.filter((c) => (plan.met[c] ?? 0) === 0);
+  const blocking = none.length > 0 ? none : (plan.nearMisses[0]?.blocks ?? []);
+  return blocking.map((c) => `${CONDITION_NAMES[c]}: needs ${shortLift(c, plan)}`);
+}
