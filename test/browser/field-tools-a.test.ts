@@ -67,11 +67,16 @@ async function noSidewaysScroll(page: Page): Promise<number> {
   return page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
 }
 
-/** Types each garbage text into the field: a message beside it, `unchanged` keeps its text, nothing reads NaN. */
+/**
+ * Types each garbage text into the field: a message beside it, nothing reads NaN. `unchanged`
+ * keeps its text; with `withdrawn`, the answer holding it is withdrawn while the text is refused
+ * (physics.md §10) and comes back as it was once the good text is back.
+ */
 async function refusesGarbage(
   page: Page,
   field: ReturnType<Page['getByLabel']>,
   unchanged: ReturnType<Page['getByTestId']>,
+  withdrawn = false,
 ) {
   const good = await field.inputValue();
   const before = await unchanged.innerText();
@@ -83,11 +88,19 @@ async function refusesGarbage(
       (await page.locator(`[id="${messageId}"]`).innerText()).length,
       `"${text}"`,
     ).toBeGreaterThan(5);
-    expect(await unchanged.innerText(), `"${text}"`).toBe(before);
+    if (withdrawn) {
+      await expect
+        .poll(() => page.getByTestId('withdrawn').innerText(), `"${text}"`)
+        .toMatch(/^No answer until /);
+      expect(await unchanged.isVisible(), `"${text}"`).toBe(false);
+    } else {
+      expect(await unchanged.innerText(), `"${text}"`).toBe(before);
+    }
     expect(await shownText(page), `"${text}"`).not.toMatch(/NaN|Infinity/);
   }
   await field.fill(good);
   expect(await field.getAttribute('aria-invalid')).toBeNull();
+  await expect.poll(() => unchanged.innerText()).toBe(before);
 }
 
 describe('the speed finder at phone size', () => {
@@ -218,7 +231,7 @@ describe('the whole machine at phone size', () => {
       .toMatch(new RegExp(`^${formatNumber(fanHz * 60)} rpm ± 1 %`));
 
     // Garbage in a pulley leaves the fan's speed as it was.
-    await refusesGarbage(page, second.getByLabel('Driver pulley', { exact: true }), speeds);
+    await refusesGarbage(page, second.getByLabel('Driver pulley', { exact: true }), speeds, true);
 
     // Freeze the fan while the motor's mark does not stand still.
     await page.getByLabel('Part to freeze').selectOption('1');
