@@ -90,7 +90,7 @@ async function refusesGarbage(
     ).toBeGreaterThan(5);
     if (withdrawn) {
       await expect
-        .poll(() => page.getByTestId('withdrawn').innerText(), `"${text}"`)
+        .poll(() => page.getByTestId('withdrawn').innerText(), { message: `"${text}"` })
         .toMatch(/^No answer until /);
       expect(await unchanged.isVisible(), `"${text}"`).toBe(false);
     } else {

@@ -81,17 +81,16 @@ async function refuseGarbage(page: Page, labels: string[], watched: string) {
       ).toBeGreaterThan(5);
       expect(await field.inputValue(), 'the typed text stays').toBe(text);
       await expect
-        .poll(
-          async () => (await page.getByTestId('withdrawn').innerText()).split('\n')[0],
-          `${label}: "${text}"`,
-        )
+        .poll(async () => (await page.getByTestId('withdrawn').innerText()).split('\n')[0], {
+          message: `${label}: "${text}"`,
+        })
         .toBe(`No answer until ${label} is fixed`);
       expect(await page.getByTestId(watched).isVisible(), `${label}: "${text}"`).toBe(false);
       expect(await shownText(page), `${label}: "${text}"`).not.toMatch(/NaN|Infinity/);
     }
     await field.fill(good);
     expect(await field.getAttribute('aria-invalid'), label).toBeNull();
-    await expect.poll(() => page.getByTestId(watched).innerText(), label).toBe(before);
+    await expect.poll(() => page.getByTestId(watched).innerText(), { message: label }).toBe(before);
     expect(await page.getByTestId('withdrawn').count(), label).toBe(0);
   }
 }

@@ -101,7 +101,7 @@ describe('never a false all-clear', () => {
       const text = await field.inputValue();
       // Wait for the state this text must give: a verdict for a number, none for the letters.
       const want = /O/.test(text) ? /^No verdict until Speed is fixed$/ : /^(True motion|Looks)/;
-      await expect.poll(() => verdict.innerText(), text).toMatch(want);
+      await expect.poll(() => verdict.innerText(), { message: text }).toMatch(want);
       seen.push(`${text}: ${await verdict.innerText()}`);
     }
     expect(seen.slice(2)).toEqual([
