@@ -24,6 +24,8 @@ import {
 } from '../../state/model';
 import { ChoiceGroup } from '../ChoiceGroup';
 import { MotorFields } from '../MotorFields';
+import { problemsAmong } from '../../state/fieldProblems';
+import { fieldNames } from '../NotCurrent';
 import { NumberField } from '../NumberField';
 import { useReportedProblem } from '../NumberField/text-field';
 import { readBeltSlipPercent, readGroundSpeed, readPulleyMm, readTyreSize } from './chain-fields';
@@ -52,6 +54,8 @@ const NEW_DRIVE: { belt: PartDrive; gear: PartDrive } = {
 export function PartCard({ setup, index, derived, onProblem }: Props) {
   const part = setup.parts[index];
   const source = speedSourceOf(part);
+  // Any refused entry on the page may feed this part's speed along the chain.
+  const stale = problemsAmong();
   const id = (field: string) => `part-${index}-${field}`;
   // Several parts share labels ("Speed"): a "fix …" note names the part too.
   const named = (label: string) => `${partLabel(setup, index)}: ${label}`;
@@ -149,7 +153,12 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         />
       )}
       <p class={style.derived} data-testid={`chain-speed-${index}`}>
-        {derived ? speedWords(derived) : 'Speed not worked out: see the message above.'}
+        {/* A speed carried from a refused entry is not the one on screen (physics.md §10). */}
+        {stale.length > 0
+          ? `Not current: fix ${fieldNames(stale)} first.`
+          : derived
+            ? speedWords(derived)
+            : 'Speed not worked out: see the message above.'}
       </p>
       {setup.parts.length > 1 && (
         <button
