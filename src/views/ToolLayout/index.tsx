@@ -21,7 +21,12 @@ interface Props {
    * entries (`refusal`), the answer is withdrawn where it stands and the results are marked
    * not current. Left out, the tool's answer never depends on a field's text.
    */
-  withdraw?: { fields?: readonly string[]; refusal?: string };
+  withdraw?: {
+    fields?: readonly string[];
+    /** Fields the answer does not read (a draft entry not yet added), left out of `fields`. */
+    except?: readonly string[];
+    refusal?: string;
+  };
 }
 
 /**
@@ -37,7 +42,9 @@ export function ToolLayout({
   testId,
   withdraw,
 }: Props) {
-  const problems = withdraw ? problemsAmong(withdraw.fields) : [];
+  const problems = withdraw
+    ? problemsAmong(withdraw.fields).filter((p) => !withdraw.except?.includes(p.id))
+    : [];
   const refusal = withdraw?.refusal;
   const withdrawn = problems.length > 0 || refusal !== undefined;
   return (
