@@ -96,9 +96,15 @@ describe('the camera plan screen', () => {
     expect(why).toContain(
       `${formatPrecise(177)} fps, ${formatPrecise(88.5)} fps, ${formatPrecise(59)} fps`,
     );
+    // Rates the camera does not offer are named as what the goal needs, never offered as a setting.
+    expect(screen.getByTestId('plan-blocked').textContent).toContain(
+      'Look: needs a frame rate this camera does not offer, such as 177 fps, 88.5 fps, 59 fps',
+    );
     const plan = cameraPlanning.result.value!;
     expect(plan.settings).toHaveLength(0);
     expect(rows()).toHaveLength(plan.nearMisses.length);
+    // Every setting in the table is one of the camera's own rates (issue 8 item 6).
+    for (const s of plan.nearMisses) expect(abilities.value.frameRatesHz).toContain(s.frameRate);
     expect(rows().length).toBeGreaterThan(0);
   });
 

@@ -205,13 +205,15 @@ function shortLift(c: CameraCondition, plan: CameraPlan): string {
   const n = plan.needs;
   switch (c) {
     case 'look':
-      if (plan.goal === 'honest') return `a rate above ${rateText(n.faithfulAboveHz)}`;
+      // Rates the camera does not offer are named as what the goal needs, never as a setting:
+      // only the person knows whether the camera can run at them.
+      if (plan.goal === 'honest') return `a frame rate above ${rateText(n.faithfulAboveHz)}`;
       return n.lookRateCount > 0
-        ? `a rate such as ${n.lookRates
+        ? `a frame rate this camera does not offer, such as ${n.lookRates
             .slice(0, 3)
             .map((r) => rateText(r.rateHz))
-            .join(', ')}`
-        : 'a rate outside this camera’s span';
+            .join(', ')} (add it under Other frame rates if the camera can run at it)`
+        : 'a frame rate outside this camera’s span';
     case 'sharpness':
       return `${formatExposure(n.sharpExposureS)} or shorter: a faster shutter, more light`;
     case 'blur':
