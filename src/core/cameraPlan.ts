@@ -1,5 +1,5 @@
 import { InputError, requireNonNegative, requirePositive } from './InputError';
-import { checkPart, type Look, type Part } from './types';
+import { checkPart, type Look, type Part, type Range } from './types';
 import { checkLookOptions, type LookOptions } from './lookOptions';
 import { apparentMotion } from './apparentMotion';
 import { rateBands } from './rateBands';
@@ -10,6 +10,7 @@ import {
   rollingSkewDegrees,
   shutterAngleFromExposure,
 } from './exposure';
+import { ratesForApparent } from './ratesForApparent';
 import { hzToRpm } from './units';
 import { plainNumber } from './plainNumber';
 import { safetyCautions } from './safetyCautions';
@@ -60,14 +61,29 @@ export interface CameraAbilities {
  * What the video should show:
  * 'freeze': the part stands still, features sharp;
  * 'creep': the part turns slowly forward at about creepHz (rev/s, > 0);
- * 'natural': a smoothly blurred disc, as the eye sees a fast part, with no misleading look;
- * 'honest': whatever it shows, nothing misleading (no still, backward or unclear look).
+ * 'natural': a smoothly blurred disc, as the eye sees a fast part;
+ * 'honest': whatever it shows, nothing misleading (never still, nearly still, backward or unclear).
  */
 export type CameraGoal =
   | { kind: 'freeze' }
   | { kind: 'creep'; creepHz: number }
   | { kind: 'natural' }
   | { kind: 'honest' };
+
+/**
+ * One condition a goal sets; a setting reaches the goal only when every condition of the goal
+ * holds (see cameraPlan for which goal sets which):
+ * 'look': the look the goal needs (freeze: one image standing still; creep: forward near the
+ *   creep wanted at every speed within the tolerance; honest: nothing misleading at any speed
+ *   within the tolerance);
+ * 'sharpness': the exposure is short enough (freeze: blur ≤ sharpBlurDeg; creep: blur ≤
+ *   creepBlurPitches of a pitch, so the features stay apart);
+ * 'blur': the exposure is long enough to blur at least one pitch (natural);
+ * 'smoothness': the blur leaves at most maxResidualContrast of the pattern (natural);
+ * 'bend': the rolling shutter turns the part less than maxBendPitches while a frame is read
+ *   (for nothing misleading, an even disc has nothing left to bend).
+ */
+export type CameraCondition = 'look' | 'sharpness' | 'blur' | 'smoothness' | 'bend';
 
 export interface CameraSetting {
   frameRate: number;
@@ -79,38 +95,98 @@ export interface CameraSetting {
   apparentRpm: number;
   /** Apparent speeds at the two ends of the part's tolerance, rpm. */
   apparentRpmRange: [number, number];
-  /** For some speed within the tolerance it looks still, backward or of unclear direction (rateBands). */
+  /** For some speed within the tolerance it misleads (rateBands at this rate, sampler 'frames'). */
   misleading: boolean;
+  /** Still at the nominal speed but not at both ends of the tolerance: it drifts there. */
+  driftsWithinTolerance: boolean;
   blurDegrees: number;
   blurPitches: number;
-  /** Rolling-shutter bend across the frame, degrees. */
+  /** Rolling-shutter bend across the frame, degrees and pitches. */
   skewDegrees: number;
+  skewPitches: number;
   /** Contrast of the pattern left after the exposure's blur, 0…1 (|sin(πb)/(πb)|, b = blur in pitches). */
   residualContrast: number;
-  /** It reaches the goal. */
+  /** Blurred at least one pitch, with at most maxResidualContrast of the pattern left: an even disc. */
+  evenDisc: boolean;
+  /** The readout takes longer than a frame: the camera cannot read whole frames at this rate as given. */
+  readoutLongerThanFrame: boolean;
+  /** The goal's conditions this setting fails, in the order of CameraPlan.conditions (empty: it reaches the goal). */
+  blocks: CameraCondition[];
+  /** It reaches the goal: every condition of the goal holds. */
   reaches: boolean;
-  /** 0…100, higher is better for the goal (see cameraPlan). */
+  /** 0…100, higher is better for the goal among settings alike in reaching it (see cameraPlan). */
   score: number;
-  /** Why, in plain words. */
-  why: string;
+}
+
+/** A frame rate that shows the look the goal needs, and whether the camera offers it. */
+export interface LookRate {
+  rateHz: number;
+  offered: boolean;
+}
+
+/** What would lift each condition of the goal, as numbers (the screen says it in words). */
+export interface CameraNeeds {
+  /** Pattern frequency n·|f|, Hz. */
+  patternHz: number;
+  /**
+   * Frame rates within the camera's own span that show the look: freeze, every sub-multiple
+   * n·|f|/k (physics.md §3); creep, the rates of ratesForApparent that show it. Highest first,
+   * at most MAX_LOOK_RATES of them; empty for the other goals.
+   */
+  lookRates: LookRate[];
+  /** How many such rates lie in the span (lookRates may hold fewer). */
+  lookRateCount: number;
+  /** Every rate above this shows the true motion at every speed within the tolerance: 2·n·|f|·(1+u). */
+  faithfulAboveHz: number;
+  /** Longest exposure that meets the goal's sharpness, s (1 s for a part that does not turn: any will do). */
+  sharpExposureS: number;
+  /** Shortest exposure that blurs one pitch, s: 1/(n·|f|). */
+  discExposureS: number;
+  /** Longest readout that keeps the bend under the limit, s: maxBendPitches/(n·|f|). */
+  bendReadoutS: number;
+  /** Shortest and longest exposure the camera offers at any of its rates, s. */
+  shortestExposureS: number;
+  longestExposureS: number;
 }
 
 export interface CameraPlan {
+  goal: CameraGoal['kind'];
+  /** The goal's conditions, in the order blocks are listed. */
+  conditions: CameraCondition[];
+  /** For each condition of the goal, how many of the camera's settings meet it. */
+  met: Partial<Record<CameraCondition, number>>;
+  /** How many settings were weighed (every frame rate with every exposure that fits in a frame). */
+  weighed: number;
+  /** The camera's own span of frame rates: its lowest and highest. */
+  span: Range;
+  needs: CameraNeeds;
   /** Settings that reach the goal, best first. */
   settings: CameraSetting[];
-  /** When few or none reach it: the best of the rest, up to five. */
+  /** The best of the rest, up to five: fewest conditions failed first, then by score. */
   nearMisses: CameraSetting[];
+  /** Safety cautions that apply (physics.md §10). */
   cautions: string[];
 }
 
 export interface CameraPlanOptions extends Partial<LookOptions> {
-  /** Blur up to this many degrees keeps features sharp enough to inspect. Default 2° (a judgement). */
+  /** Blur up to this many degrees of turn keeps features sharp enough to inspect a frozen part. Default 2° (a judgement). */
   sharpBlurDeg?: number;
+  /** Blur up to this share of a pitch keeps features apart, so a slow turn can be followed. Default 0.5 (a judgement). */
+  creepBlurPitches?: number;
   /** A pattern left with at most this contrast after blur reads as a smooth disc. Default 0.1 (a judgement). */
   maxResidualContrast?: number;
+  /**
+   * Rolling-shutter bend, in pitches, at which the features break into pieces. Default 1:
+   * physics.md §5, straight blades bend and, past a pitch, break into pieces.
+   */
+  maxBendPitches?: number;
 }
 
 const NEAR_MISSES = 5;
+/** Most look rates returned: more than anyone reads, far more than a camera offers. */
+export const MAX_LOOK_RATES = 200;
+/** Most creep candidates weighed for the list of look rates. */
+const MAX_LOOK_WORK = 10_000;
 /**
  * Beyond this many features passing per frame the look hangs on the speed's 7th digit, which
  * nobody knows; rateBands' work also grows with it.
@@ -120,36 +196,57 @@ const MAX_PITCHES_PER_FRAME = 1e6;
 const CREEP_FACTOR = 3;
 /** Creep clarity 1/(1 + 4·blur in pitches): half at a quarter pitch (a judgement). */
 const CREEP_BLUR_WEIGHT = 4;
+/** Two frame rates this close are the same setting. */
+const SAME_RATE = 1e-9;
+
+const GOAL_CONDITIONS: Record<CameraGoal['kind'], CameraCondition[]> = {
+  freeze: ['look', 'sharpness', 'bend'],
+  creep: ['look', 'sharpness', 'bend'],
+  natural: ['blur', 'smoothness'],
+  honest: ['look', 'bend'],
+};
+
+interface Limits {
+  sharpBlurDeg: number;
+  creepBlurPitches: number;
+  maxResidual: number;
+  maxBendPitches: number;
+}
 
 /**
- * Ranks the camera's settings (every frame rate with every shutter angle or exposure that fits
+ * Weighs the camera's settings (every frame rate with every shutter angle or exposure that fits
  * in a frame) for a goal (physics.md §2–§5). For each: the look (apparentMotion, 'frames'),
- * whether any speed within the tolerance looks misleading (rateBands at that rate), blur
- * (blurDegrees, blurPitches), rolling-shutter skew (rollingSkewDegrees) and the pattern contrast
- * left by the blur: an exposure t averages the pattern over b = n·|f|·t pitches, which scales
- * its fundamental by sin(πb)/(πb) (a box filter in time), so at whole pitches the disc is even.
- * Reaching the goal:
- * - freeze: still at the nominal speed, blur under one pitch;
- * - creep: forward (or true) for every speed in the tolerance, apparent speed within a factor
- *   of 3 of the one wanted, blur under one pitch;
- * - natural: blur at least one pitch and either nothing misleading or a residual contrast of at
- *   most maxResidualContrast;
- * - honest: nothing misleading, or blurred into an even disc as for natural.
- * Score (0…100) multiplies factors in (0, 1], each a documented judgement:
+ * whether any speed within the tolerance misleads (rateBands at that rate), blur (blurDegrees,
+ * blurPitches), rolling-shutter bend (rollingSkewDegrees) and the pattern contrast left by the
+ * blur: an exposure t averages the pattern over b = n·|f|·t pitches, which scales its
+ * fundamental by sin(πb)/(πb) (a box filter in time), so at whole pitches the disc is even.
+ *
+ * A setting reaches the goal only when every condition of the goal holds (CameraCondition):
+ * - freeze: look (one image still at the nominal speed), sharpness (blur ≤ sharpBlurDeg), bend;
+ * - creep: look (forward at both ends of the tolerance with no wrap between them, apparent
+ *   speed within a factor of 3 of the one wanted), sharpness (blur ≤ creepBlurPitches), bend;
+ * - natural: blur (at least one pitch) and smoothness (residual contrast ≤ maxResidualContrast);
+ * - honest: look (nothing misleading at any speed within the tolerance) and bend (or an even disc).
+ * Settings that reach the goal are ranked by score; the rest never rank above them and are
+ * offered as near misses, fewest conditions failed first. Score (0…100) multiplies factors in
+ * (0, 1], each a documented judgement:
  * - freeze: stillness 1/(1 + |apparent rpm|) · sharpness 1/(1 + blur°/sharpBlurDeg) · straightness;
  * - creep: closeness 1/(1 + |ln(a/wanted)|) · clarity 1/(1 + 4·blur pitches) · straightness;
- * - natural: min(1, blur pitches) · (1 − residual contrast), · 0.2 when misleading and not even;
- * - honest: 1 (true speed), 0.9 (even disc), 0.8 (slower forward), 0.2 (misleading) · straightness;
- * straightness is 1/(1 + skew°/pitch°), and 1 for an even disc (nothing left to bend).
+ * - natural: min(1, blur pitches) · (1 − residual contrast), halved when the faint pattern left misleads;
+ * - honest: 1 (true speed), 0.8 (slower forward), 0.2 (misleading) · straightness;
+ * straightness is 1/(1 + bend in pitches), and 1 for an even disc (nothing left to bend).
+ * With the settings comes what would lift each condition (CameraNeeds): the frame rates in the
+ * camera's span that show the look, the longest sharp exposure, the shortest exposure that
+ * blurs a pitch, the longest readout within the bend limit.
  *
  * Units: frames/s, seconds, degrees, rev/s; apparent speeds in rpm. Throws InputError for no
  * frame rates, a rate ≤ 0, no shutter angles or exposures, an angle outside (0, 360], an
  * exposure ≤ 0, none that fits in a frame, a negative readout, a bad part, an unknown goal, a
- * creep ≤ 0, or a frame rate at which over a million features pass per frame.
+ * creep ≤ 0, bad options, or a frame rate at which over a million features pass per frame.
  *
  * @example
  * // Wikipedia, "Stroboscopic effect": a 12-spoke wheel at 2 rev/s filmed at 24 frames/s looks still.
- * cameraPlan({ frameRatesHz: [24, 25, 30], shutterAnglesDeg: [45], readoutS: 0 },
+ * cameraPlan({ frameRatesHz: [24, 25, 30], exposuresS: [1 / 1000], readoutS: 0 },
  *   { speedHz: 2, symmetry: 12 }, { kind: 'freeze' }).settings[0].frameRate // 24
  *
  * Sources: shutter angle t = (θ/360)/s (cinema practice: 180° at 24 frames/s = 1/48 s); the
@@ -163,27 +260,46 @@ export function cameraPlan(
 ): CameraPlan {
   const p = checkPart(part);
   const g = checkGoal(goal);
-  const sharpBlurDeg = requirePositive(opts?.sharpBlurDeg ?? 2, 'sharp blur limit');
-  const maxResidual = requirePositive(opts?.maxResidualContrast ?? 0.1, 'smooth disc contrast');
+  const limits: Limits = {
+    sharpBlurDeg: requirePositive(opts?.sharpBlurDeg ?? 2, 'sharp blur limit'),
+    creepBlurPitches: requirePositive(opts?.creepBlurPitches ?? 0.5, 'creep blur limit'),
+    maxResidual: requirePositive(opts?.maxResidualContrast ?? 0.1, 'smooth disc contrast'),
+    maxBendPitches: requirePositive(opts?.maxBendPitches ?? 1, 'bend limit'),
+  };
   const look = checkLookOptions(opts);
   const combos = settingsOf(camera);
   const readoutS = requireNonNegative(camera.readoutS, 'readout time');
+  const conditions = GOAL_CONDITIONS[g.kind];
 
   const all = combos.map(({ frameRate, exposureS, shutterAngle }) =>
-    evaluate(p, g, frameRate, exposureS, shutterAngle, readoutS, look, sharpBlurDeg, maxResidual),
+    evaluate(p, g, conditions, frameRate, exposureS, shutterAngle, readoutS, look, limits),
   );
   const byScore = (a: CameraSetting, b: CameraSetting) =>
     b.score - a.score || b.frameRate - a.frameRate || a.exposureS - b.exposureS;
   const settings = all.filter((s) => s.reaches).sort(byScore);
   const nearMisses = all
     .filter((s) => !s.reaches)
-    .sort(byScore)
+    .sort((a, b) => a.blocks.length - b.blocks.length || byScore(a, b))
     .slice(0, NEAR_MISSES);
+  const met: Partial<Record<CameraCondition, number>> = {};
+  for (const c of conditions) met[c] = all.filter((s) => !s.blocks.includes(c)).length;
+  const rates = combos.map((c) => c.frameRate);
+  const span = { minHz: Math.min(...rates), maxHz: Math.max(...rates) };
+
   return {
+    goal: g.kind,
+    conditions,
+    met,
+    weighed: all.length,
+    span,
+    needs: needsOf(p, g, span, rates, combos, limits, look),
     settings,
     nearMisses,
+    // physics.md §4 and §10: freezing or creeping is aliased by intent; any other setting that
+    // is not the true motion is aliased too.
     cautions: safetyCautions({
-      apparentStillness: g.kind === 'freeze' || all.some((s) => s.misleading),
+      apparentStillness:
+        g.kind === 'freeze' || g.kind === 'creep' || all.some((s) => s.look !== 'true'),
     }),
   };
 }
@@ -199,7 +315,13 @@ function checkGoal(goal: CameraGoal): CameraGoal {
   throw new InputError('goal', "The goal must be 'freeze', 'creep', 'natural' or 'honest'.");
 }
 
-function settingsOf(camera: CameraAbilities) {
+interface Combo {
+  frameRate: number;
+  exposureS: number;
+  shutterAngle: number;
+}
+
+function settingsOf(camera: CameraAbilities): Combo[] {
   if (typeof camera !== 'object' || camera === null) {
     throw new InputError(
       'camera',
@@ -218,7 +340,7 @@ function settingsOf(camera: CameraAbilities) {
     throw new InputError('shutter', 'Give at least one shutter angle or exposure time.');
   }
   const seen = new Set<string>();
-  const out: Array<{ frameRate: number; exposureS: number; shutterAngle: number }> = [];
+  const out: Combo[] = [];
   const add = (frameRate: number, exposureS: number, shutterAngle: number) => {
     const key = `${frameRate}|${exposureS.toPrecision(12)}`;
     if (!seen.has(key)) {
@@ -254,18 +376,37 @@ function listOf(list: number[] | undefined, field: string): number[] {
   return list;
 }
 
+/** The creep look (physics.md §2): forward at both tolerance ends, the same whole k between them (no wrap), near the creep wanted. */
+function creepLookHolds(
+  part: Required<Part>,
+  frameRate: number,
+  nominalRpm: number,
+  wantedRpm: number,
+  opts: ApparentMotionOpts,
+): boolean {
+  const ratio = wantedRpm === 0 ? 0 : nominalRpm / wantedRpm;
+  if (!(ratio >= 1 / CREEP_FACTOR && ratio <= CREEP_FACTOR)) return false;
+  const ends = [part.speedHz * (1 - part.tolerance), part.speedHz * (1 + part.tolerance)].map(
+    (speedHz) => apparentMotion({ ...part, speedHz }, frameRate, opts),
+  );
+  const sameK = Math.round(ends[0].ratio) === Math.round(ends[1].ratio);
+  return sameK && ends.every((m) => m.look === 'forward' || m.look === 'true');
+}
+
+type ApparentMotionOpts = LookOptions & { sampler: 'frames' };
+
 function evaluate(
   part: Required<Part>,
   goal: CameraGoal,
+  conditions: CameraCondition[],
   frameRate: number,
   exposureS: number,
   shutterAngle: number,
   readoutS: number,
   look: LookOptions,
-  sharpBlurDeg: number,
-  maxResidual: number,
+  limits: Limits,
 ): CameraSetting {
-  const opts = { ...look, sampler: 'frames' as const };
+  const opts: ApparentMotionOpts = { ...look, sampler: 'frames' };
   const pitchesPerFrame =
     (part.symmetry * Math.abs(part.speedHz) * (1 + part.tolerance)) / frameRate;
   if (!(pitchesPerFrame <= MAX_PITCHES_PER_FRAME)) {
@@ -277,26 +418,24 @@ function evaluate(
   }
   const m = apparentMotion(part, frameRate, opts);
   const apparentRpm = m.look === 'still' ? 0 : hzToRpm(m.apparentHz);
-  const ends = [part.speedHz * (1 - part.tolerance), part.speedHz * (1 + part.tolerance)].map(
-    (speedHz) => {
-      const e = apparentMotion({ ...part, speedHz }, frameRate, opts);
-      return e.look === 'still' ? 0 : hzToRpm(e.apparentHz);
-    },
+  const endMotions = [part.speedHz * (1 - part.tolerance), part.speedHz * (1 + part.tolerance)].map(
+    (speedHz) => apparentMotion({ ...part, speedHz }, frameRate, opts),
   );
+  const ends = endMotions.map((e) => (e.look === 'still' ? 0 : hzToRpm(e.apparentHz)));
   const apparentRpmRange: [number, number] = [Math.min(...ends), Math.max(...ends)];
   const bands = rateBands(
     [part],
-    { minHz: frameRate * (1 - 1e-9), maxHz: frameRate * (1 + 1e-9) },
+    { minHz: frameRate * (1 - SAME_RATE), maxHz: frameRate * (1 + SAME_RATE) },
     opts,
   );
   const misleading = bands.some((b) => !b.safe);
   const blurDeg = blurDegrees(part.speedHz, exposureS);
   const blurP = blurPitches(part.speedHz, part.symmetry, exposureS);
   const skewDeg = rollingSkewDegrees(part.speedHz, readoutS);
+  const skewP = (skewDeg * part.symmetry) / 360;
   const residualContrast =
     blurP === 0 ? 1 : Math.abs(Math.sin(Math.PI * blurP) / (Math.PI * blurP));
-  const pitchDeg = 360 / part.symmetry;
-  const smoothDisc = blurP >= 1 && residualContrast <= maxResidual;
+  const evenDisc = blurP >= 1 && residualContrast <= limits.maxResidual;
   if (![apparentRpm, ...ends, blurDeg, blurP, skewDeg, residualContrast].every(Number.isFinite)) {
     throw new InputError(
       'speed',
@@ -304,52 +443,46 @@ function evaluate(
     );
   }
 
-  const sharp = 1 / (1 + blurDeg / sharpBlurDeg);
-  // An even disc has no features left for the rolling shutter to bend.
-  const straight = smoothDisc ? 1 : 1 / (1 + skewDeg / pitchDeg);
-  let reaches: boolean;
+  const wantedRpm =
+    goal.kind === 'creep' ? Math.sign(part.speedHz || 1) * hzToRpm(goal.creepHz) : 0;
+  const holds: Record<CameraCondition, () => boolean> = {
+    look: () =>
+      goal.kind === 'freeze'
+        ? m.look === 'still' && m.images === 1
+        : goal.kind === 'creep'
+          ? creepLookHolds(part, frameRate, apparentRpm, wantedRpm, opts)
+          : !misleading,
+    sharpness: () =>
+      goal.kind === 'creep' ? blurP <= limits.creepBlurPitches : blurDeg <= limits.sharpBlurDeg,
+    blur: () => blurP >= 1,
+    smoothness: () => residualContrast <= limits.maxResidual,
+    // For nothing misleading, an even disc has no features left for the rolling shutter to
+    // bend; a freeze or creep needs the features themselves whole.
+    bend: () => skewP < limits.maxBendPitches || (goal.kind === 'honest' && evenDisc),
+  };
+  const blocks = conditions.filter((c) => !holds[c]());
+
+  const straight = evenDisc ? 1 : 1 / (1 + skewP);
   let factor: number;
   switch (goal.kind) {
     case 'freeze':
-      reaches = m.look === 'still' && blurP < 1;
-      factor = (1 / (1 + Math.abs(apparentRpm))) * sharp * straight;
+      factor =
+        (1 / (1 + Math.abs(apparentRpm))) * (1 / (1 + blurDeg / limits.sharpBlurDeg)) * straight;
       break;
     case 'creep': {
-      const wanted = Math.sign(part.speedHz || 1) * hzToRpm(goal.creepHz);
-      const ratio = apparentRpm === 0 ? 0 : apparentRpm / wanted;
-      const forward = (m.look === 'forward' || m.look === 'true') && ratio > 0;
-      reaches =
-        forward && !misleading && ratio >= 1 / CREEP_FACTOR && ratio <= CREEP_FACTOR && blurP < 1;
+      const ratio = apparentRpm === 0 ? 0 : apparentRpm / wantedRpm;
       // A creep is seen while the features stay apart: clarity falls with blur in pitches.
       const clarity = 1 / (1 + CREEP_BLUR_WEIGHT * blurP);
       factor = (ratio > 0 ? 1 / (1 + Math.abs(Math.log(ratio))) : 0.01) * clarity * straight;
       break;
     }
     case 'natural':
-      reaches = blurP >= 1 && (!misleading || residualContrast <= maxResidual);
-      factor = Math.min(1, blurP) * (1 - residualContrast) * (misleading && !smoothDisc ? 0.2 : 1);
+      factor = Math.min(1, blurP) * (1 - residualContrast) * (misleading ? 0.5 : 1);
       break;
-    default: {
-      reaches = !misleading || smoothDisc;
-      const honesty = misleading ? (smoothDisc ? 0.9 : 0.2) : m.look === 'true' ? 1 : 0.8;
-      factor = honesty * straight;
-    }
+    default:
+      factor = (misleading ? 0.2 : m.look === 'true' ? 1 : 0.8) * straight;
   }
-  const score = Math.max(0, Math.min(100, 100 * factor));
-  const why = explain(
-    part,
-    m.look,
-    m.images,
-    apparentRpm,
-    misleading,
-    blurDeg,
-    blurP,
-    pitchDeg,
-    skewDeg,
-    residualContrast,
-    sharpBlurDeg,
-    maxResidual,
-  );
+  const stillEnds = endMotions.every((e) => e.look === 'still');
   return {
     frameRate,
     exposureS,
@@ -358,61 +491,91 @@ function evaluate(
     apparentRpm,
     apparentRpmRange,
     misleading,
+    driftsWithinTolerance: m.look === 'still' && part.tolerance > 0 && !stillEnds,
     blurDegrees: blurDeg,
     blurPitches: blurP,
     skewDegrees: skewDeg,
+    skewPitches: skewP,
     residualContrast,
-    reaches,
-    score,
-    why,
+    evenDisc,
+    readoutLongerThanFrame: readoutS * frameRate > 1 + SAME_RATE,
+    blocks,
+    reaches: blocks.length === 0,
+    score: Math.max(0, Math.min(100, 100 * factor)),
   };
 }
 
-function explain(
+/** What would lift each condition: rates that show the look, and the exposure and readout limits. */
+function needsOf(
   part: Required<Part>,
-  look: Look,
-  images: number,
-  apparentRpm: number,
-  misleading: boolean,
-  blurDeg: number,
-  blurP: number,
-  pitchDeg: number,
-  skewDeg: number,
-  residual: number,
-  sharpBlurDeg: number,
-  maxResidual: number,
-): string {
-  const words: string[] = [];
-  const speed = `${plainNumber(Math.abs(apparentRpm))} rpm`;
-  if (blurP >= 1 && residual <= maxResidual) {
-    words.push(`Blur of ${plainNumber(blurP)} pitches smears the features into an even disc.`);
-  } else {
-    if (look === 'still')
-      words.push(images > 1 ? `${images} positions alternate.` : 'Looks still.');
-    else if (look === 'true') words.push('Shows the true speed and direction.');
-    else if (look === 'unclear') words.push('Direction cannot be told.');
-    else words.push(`Seems to turn ${look} at ${speed}.`);
-    if (blurDeg <= sharpBlurDeg) words.push(`Sharp (blur ${plainNumber(blurDeg)}°).`);
-    else if (blurP < 1)
-      words.push(
-        `Blur ${plainNumber(blurDeg)}° (${plainNumber(blurP)} pitch) softens the features.`,
-      );
-    else
-      words.push(
-        `Blur ${plainNumber(blurP)} pitches, but the pattern still shows (contrast ${plainNumber(residual)}).`,
-      );
+  goal: CameraGoal,
+  span: Range,
+  offeredHz: number[],
+  combos: Combo[],
+  limits: Limits,
+  look: LookOptions,
+): CameraNeeds {
+  const speed = Math.abs(part.speedHz);
+  const patternHz = part.symmetry * speed;
+  const exposures = combos.map((c) => c.exposureS);
+  const offered = (hz: number) => offeredHz.some((r) => Math.abs(r - hz) <= SAME_RATE * hz);
+  let candidates: number[] = [];
+  let count = 0;
+  if (patternHz > 0 && goal.kind === 'freeze') {
+    // Every sub-multiple n·|f|/k within the span (physics.md §3, q = 1).
+    const kFirst = Math.max(1, Math.ceil((patternHz / span.maxHz) * (1 - 1e-12)));
+    const kLast = Math.floor((patternHz / span.minHz) * (1 + 1e-12));
+    count = Math.max(0, kLast - kFirst + 1);
+    for (let k = kFirst; k <= kLast && candidates.length < MAX_LOOK_RATES; k++)
+      candidates.push(patternHz / k);
+  } else if (
+    patternHz > 0 &&
+    goal.kind === 'creep' &&
+    // More candidates than anyone reads (a fast gear against a slow span): list none.
+    part.symmetry * (speed + goal.creepHz) * (1 / span.minHz - 1 / span.maxHz) <= MAX_LOOK_WORK
+  ) {
+    const wanted = Math.sign(part.speedHz || 1) * goal.creepHz;
+    const range = { minHz: span.minHz * (1 - SAME_RATE), maxHz: span.maxHz * (1 + SAME_RATE) };
+    const opts: ApparentMotionOpts = { ...look, sampler: 'frames' };
+    // Only rates where the camera really shows that creep (physics.md §4).
+    candidates = ratesForApparent(part, wanted, range)
+      .map((r) => r.rateHz)
+      .filter((hz) =>
+        creepLookHolds(
+          part,
+          hz,
+          hzToRpm(apparentMotion(part, hz, opts).apparentHz),
+          hzToRpm(wanted),
+          opts,
+        ),
+      )
+      .sort((a, b) => b - a);
+    count = candidates.length;
+    candidates = candidates.slice(0, MAX_LOOK_RATES);
   }
-  const even = blurP >= 1 && residual <= maxResidual;
-  if (misleading && look !== 'still' && !even)
-    words.push('Within the speed tolerance it can look still or backward.');
-  if (skewDeg > 0 && !even) {
-    words.push(
-      skewDeg >= pitchDeg
-        ? `Rolling shutter turns it ${plainNumber(skewDeg)}° during readout: the features break up.`
-        : `Rolling shutter bends the features by ${plainNumber(skewDeg)}°.`,
+  // A part that does not turn blurs and bends nothing: any exposure or readout will do.
+  const perPitchS = patternHz > 0 ? 1 / patternHz : 1;
+  const sharpExposureS =
+    goal.kind === 'creep'
+      ? limits.creepBlurPitches * perPitchS
+      : speed > 0
+        ? limits.sharpBlurDeg / (360 * speed)
+        : 1;
+  if (![sharpExposureS, perPitchS].every(Number.isFinite)) {
+    throw new InputError(
+      'speed',
+      'The speed is too slow to plan exposures for: check its units (rpm or rev/s).',
     );
   }
-  if (part.tolerance > 0 && look === 'still')
-    words.push('Freezes only at the nominal speed; within the tolerance it drifts.');
-  return words.join(' ');
+  return {
+    patternHz,
+    lookRates: candidates.map((rateHz) => ({ rateHz, offered: offered(rateHz) })),
+    lookRateCount: count,
+    faithfulAboveHz: 2 * patternHz * (1 + part.tolerance),
+    sharpExposureS,
+    discExposureS: perPitchS,
+    bendReadoutS: limits.maxBendPitches * perPitchS,
+    shortestExposureS: Math.min(...exposures),
+    longestExposureS: Math.max(...exposures),
+  };
 }

@@ -36,8 +36,13 @@ export {
   percentFlicker,
   svm,
   svmThreshold,
+  lightHarmonics,
+  lightSvm,
+  SVM_MAX_HZ,
   type FlickerRisk,
   type LightComponent,
+  type LightShape,
+  type LightWave,
 } from './flicker';
 export {
   synchronousSpeedHz,
@@ -112,6 +117,10 @@ export {
   type CameraSetting,
   type CameraPlan,
   type CameraPlanOptions,
+  type CameraCondition,
+  type CameraNeeds,
+  type LookRate,
+  MAX_LOOK_RATES,
 } from './cameraPlan';
 export {
   loggerPlan,

@@ -3,7 +3,15 @@ import { checkPart, type Look, type Part } from './types';
 import { checkLookOptions, type LookOptions } from './lookOptions';
 import { apparentMotion } from './apparentMotion';
 import { stillRates } from './freezeRates';
-import { flickerLimits, flickerRisk, svm, type FlickerRisk } from './flicker';
+import {
+  flickerLimits,
+  flickerRisk,
+  lightHarmonics,
+  svm,
+  type FlickerRisk,
+  type LightComponent,
+  type LightWave,
+} from './flicker';
 import { hzToRpm } from './units';
 import { plainNumber } from './plainNumber';
 import { safetyCautions } from './safetyCautions';
@@ -16,6 +24,8 @@ export interface Lamp {
   flicker: 'double' | 'mains' | number;
   /** Percent flicker, 100·(Lmax − Lmin)/(Lmax + Lmin), 0…100. */
   modulationPercent: number;
+  /** The light's shape over a flicker period (lightHarmonics). Default: a sine. */
+  waveform?: LightWave;
 }
 
 /** A part of the machine under the light. */
@@ -37,6 +47,12 @@ export interface PartUnderLight {
   images: number;
   /** It can look still, backward or of unclear direction. */
   misleading: boolean;
+  /**
+   * The flickering light shows it other than as it truly turns, at some speed within its
+   * tolerance (physics.md §4: still, slowed, several images, backward, unclear): the stillness
+   * caution goes with it.
+   */
+  aliased: boolean;
   /** Misleading under flicker people can see (SVM ≥ 1): a hazard. */
   hazard: boolean;
   verdict: LightingVerdict;
@@ -51,8 +67,13 @@ export interface LightingCheck {
   /** IEEE Std 1789-2015 lines at this frequency, percent. */
   lowRiskPercent: number;
   noEffectPercent: number;
-  /** CIE TN 006:2016 stroboscopic visibility measure of the sinusoidal component (amplitude = modulation/100). */
+  /**
+   * Stroboscopic visibility measure (CIE TN 006:2016, threshold fit of Perz et al. 2018) of the
+   * light's harmonics up to 2 kHz for its waveform (lightSvm).
+   */
   svm: number;
+  /** The components the SVM counts: the flicker frequency and its harmonics up to 2 kHz, relative to the mean. */
+  harmonics: LightComponent[];
   /** SVM ≥ 1: the average observer sees the stroboscopic effect. */
   visible: boolean;
   parts: PartUnderLight[];
@@ -69,7 +90,8 @@ const SEVERITY: Record<Look, number> = { true: 0, forward: 1, unclear: 2, backwa
 /**
  * How a lamp's flicker shows the parts of a machine (physics.md §6): the flicker frequency
  * (twice the mains, the mains, or a custom rate), its IEEE Std 1789-2015 risk and the CIE TN
- * 006:2016 SVM of its sinusoidal component (amplitude = modulation/100); for each part, what
+ * 006:2016 SVM of the light's harmonics up to 2 kHz for its waveform (sine unless given;
+ * threshold fit of Perz et al., JOSA A 35(2):309, 2018); for each part, what
  * it looks like under that light (apparentMotion, sampler 'flash') and the worst look for any
  * speed within its tolerance (still spans in closed form from stillRates, the other looks at
  * the band's ends and middle: between them a look can change only through a still lock).
@@ -86,7 +108,10 @@ const SEVERITY: Record<Look, number> = { true: 0, forward: 1, unclear: 2, backwa
  * lightingCheck({ mainsHz: 50, flicker: 'double', modulationPercent: 30 },
  *   [{ name: 'chuck', speedHz: 50, symmetry: 2 }]).parts[0].worstLook // 'still'
  *
- * Sources: IEEE Std 1789-2015 (risk lines), CIE TN 006:2016 (SVM), physics.md §2–§3 (looks).
+ * Steady light (0 % modulation) samples nothing: every part looks as it truly turns.
+ *
+ * Sources: IEEE Std 1789-2015 (risk lines), CIE TN 006:2016 (SVM) with the threshold fit of
+ * Perz et al. (2018), physics.md §2–§3 (looks).
  */
 export function lightingCheck(
   lamp: Lamp,
@@ -116,7 +141,8 @@ export function lightingCheck(
   const look = checkLookOptions(opts);
   const { lowRiskPercent, noEffectPercent } = flickerLimits(flickerHz);
   const risk = flickerRisk(flickerHz, modulation);
-  const visibility = svm([{ frequencyHz: flickerHz, amplitude: modulation / 100 }]);
+  const harmonics = lightHarmonics(lamp.waveform ?? { shape: 'sine' }, flickerHz, modulation);
+  const visibility = harmonics.length === 0 ? 0 : svm(harmonics);
   const visible = visibility >= 1;
   const flickers = modulation > 0;
 
@@ -135,13 +161,14 @@ export function lightingCheck(
     lowRiskPercent,
     noEffectPercent,
     svm: visibility,
+    harmonics,
     visible,
     parts: rows,
     verdict,
     summary: summarise(verdict, flickerHz, modulation, risk, visibility, rows),
     remedies: verdict === 'fine' ? [] : remedies(lamp, flickerHz, noEffectPercent),
     cautions: safetyCautions({
-      apparentStillness: rows.some((r) => r.misleading && flickers),
+      apparentStillness: rows.some((r) => r.aliased),
       flashRatesHz: flickers ? [flickerHz] : [],
     }),
   };
@@ -169,6 +196,21 @@ function partUnderLight(
   const part = checkPart(raw, `part ${index + 1}`);
   const name =
     typeof raw.name === 'string' && raw.name.trim() !== '' ? raw.name.trim() : `part ${index + 1}`;
+  if (!flickers) {
+    // Steady light samples nothing: every part looks as it truly turns (physics.md §6).
+    return {
+      name,
+      look: 'true',
+      apparentRpm: hzToRpm(part.speedHz),
+      worstLook: 'true',
+      images: 1,
+      misleading: false,
+      aliased: false,
+      hazard: false,
+      verdict: 'fine',
+      text: `${name}: the light does not flicker, so it looks as it is (${plainNumber(Math.abs(hzToRpm(part.speedHz)))} rpm).`,
+    };
+  }
   const opts = { ...look, sampler: 'flash' as const };
   const nominal = apparentMotion(part, flickerHz, opts);
   const apparentRpm = nominal.look === 'still' ? 0 : hzToRpm(nominal.apparentHz);
@@ -216,6 +258,7 @@ function partUnderLight(
     worstLook,
     images,
     misleading,
+    aliased: worstLook !== 'true' || nominal.images > 1,
     hazard,
     verdict,
     text,

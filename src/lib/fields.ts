@@ -188,6 +188,15 @@ export function readModulationPercent(text: string): number {
   return within(parseQuantity(text, 'percent', '%', 'modulation'), 0, 100, 'modulation', '%');
 }
 
+/** A PWM light's duty cycle, percent: above 0 and below 100 (at either end the light would not switch). */
+export function readDutyPercent(text: string): number {
+  const duty = parseQuantity(text, 'percent', '%', 'duty cycle');
+  if (!(duty > 0 && duty < 100)) {
+    throw new InputError('duty cycle', 'Duty cycle must be above 0 % and below 100 %.');
+  }
+  return duty;
+}
+
 /** Wanted slow forward creep, rpm (a positive number). */
 export function readCreepRpm(text: string): number {
   const hz = parseQuantity(text, 'speed', 'rpm', 'creep');

@@ -4,18 +4,16 @@
 import { batch, computed, signal } from '@preact/signals';
 import {
   cameraPlan,
-  lockRates,
-  ratesForApparent,
+  STILLNESS_CAUTION,
   standardFrameRates,
   type CameraAbilities,
   type CameraGoal,
   type CameraPlan,
   type CameraSetting,
   type CautionContext,
-  type Part,
 } from '../core';
 import { keepLastGood } from './outcome';
-import { CAMERA_RANGE, corePart } from './check';
+import { corePart } from './check';
 import {
   setExposureSeconds,
   setFrameRate,
@@ -93,12 +91,13 @@ export const cameraPlanning = keepLastGood<CameraPlan>(() =>
   cameraPlan(abilities.value, corePart(setup.value), goalOf(goalKind.value, setup.value.creepRpm)),
 );
 
-/** Cautions of a plan (physics.md §10): freezing, or any setting that can mislead. */
-export function cameraCautions(plan: CameraPlan, kind: GoalKind): CautionContext {
-  const all = [...plan.settings, ...plan.nearMisses];
-  return {
-    apparentStillness: kind === 'freeze' || all.some((s) => s.misleading || s.look === 'still'),
-  };
+/**
+ * Cautions of a plan (physics.md §4, §10): the stillness caution whenever the plan can show an
+ * aliased view (a freeze or creep by intent, or any setting that is not the true motion), as
+ * the core's own cautions for the plan say.
+ */
+export function cameraCautions(plan: CameraPlan): CautionContext {
+  return { apparentStillness: plan.cautions.includes(STILLNESS_CAUTION) };
 }
 
 /**
@@ -119,31 +118,4 @@ export function applyCameraSetting(
     setReadoutMs(readoutMs);
     setSamplerKind('camera');
   });
-}
-
-/**
- * Why nothing reached the goal, in plain words, with the frame rates or exposures that would:
- * freeze needs n·|f|/k (lockRates, one image); a creep needs ratesForApparent; a natural disc
- * needs an exposure of at least one pitch, 1/(n·|f|) s; nothing misleading needs a rate above
- * 2·n·|f|·(1 + u) or that disc. Returns numbers for the screen to format.
- */
-export function whyNoneReach(
-  part: Required<Part>,
-  goal: CameraGoal,
-): { kind: GoalKind; ratesHz: number[]; minExposureS: number; faithfulAboveHz: number } {
-  const patternHz = part.symmetry * Math.abs(part.speedHz);
-  const minExposureS = patternHz > 0 ? 1 / patternHz : Infinity;
-  const faithfulAboveHz = 2 * patternHz * (1 + part.tolerance);
-  let ratesHz: number[] = [];
-  if (patternHz > 0 && goal.kind === 'freeze') {
-    ratesHz = lockRates({ ...part, tolerance: 0 }, CAMERA_RANGE, { maxImages: 1 })
-      .map((l) => l.rateHz)
-      .sort((a, b) => b - a);
-  } else if (patternHz > 0 && goal.kind === 'creep') {
-    const wanted = Math.sign(part.speedHz || 1) * goal.creepHz;
-    ratesHz = ratesForApparent(part, wanted, CAMERA_RANGE)
-      .map((r) => r.rateHz)
-      .sort((a, b) => b - a);
-  }
-  return { kind: goal.kind, ratesHz: ratesHz.slice(0, 4), minExposureS, faithfulAboveHz };
 }

@@ -12,6 +12,7 @@ import {
   exposureFromShutterAngle,
   flickerLimits,
   flickerRisk,
+  lightHarmonics,
   lockRates,
   rateBands,
   ratesForApparent,
@@ -19,13 +20,14 @@ import {
   svm,
   type ApparentMotion,
   type FlickerRisk,
+  type LightWave,
   type Part,
   type RateBand,
   type Range,
   type Sampler,
 } from '../core';
 import { defaultSetup, type SamplerKind, type Setup } from './model';
-import { flickerHzOf, samplerRateHz, setup } from './setup';
+import { flickerHzOf, lightWaveOf, samplerRateHz, setup } from './setup';
 import { formatNumber } from '../lib/format';
 
 /** What the viewer reads, in the words the screen uses for its headline. */
@@ -96,7 +98,16 @@ export interface LightingResult {
   risk: FlickerRisk;
   lowRiskPercent: number;
   noEffectPercent: number;
-  /** CIE TN 006:2016 stroboscopic visibility measure of the main component (1 = threshold). */
+  /** The light's shape over a flicker period. */
+  wave: LightWave;
+  /** Amplitude of the component at the flicker frequency, relative to the mean (a sine's is the percent flicker / 100). */
+  fundamental: number;
+  /** Components counted by the SVM: the flicker frequency and its harmonics up to 2 kHz. */
+  harmonicCount: number;
+  /**
+   * Stroboscopic visibility measure (CIE TN 006:2016, threshold fit of Perz et al. 2018) of
+   * those components (1 = threshold; 0 with none below 2 kHz).
+   */
   svm: number;
 }
 
@@ -117,7 +128,11 @@ export interface CheckResult {
   bands: BandSummary;
   camera?: CameraResult;
   lighting?: LightingResult;
-  /** physics.md §10: the part may look still or wrong: never trust it to be stopped. */
+  /**
+   * physics.md §4 and §10: the view is aliased (anything but the true motion with one image:
+   * still, slowed forward, several images, backward, unclear, a creep asked for), so the
+   * stillness and lock-out caution goes with the verdict.
+   */
   showSafety: boolean;
   /** physics.md §10: a flash rate between 3 and 60 per second. */
   showPhotosensitivity: boolean;
@@ -458,16 +473,34 @@ function cameraResult(s: Setup, part: Required<Part>, notes: string[]): CameraRe
   };
 }
 
-function lightingResult(flickerHz: number, modulationPercent: number): LightingResult {
+export function lightingResult(
+  flickerHz: number,
+  modulationPercent: number,
+  wave: LightWave,
+): LightingResult {
   const limits = flickerLimits(flickerHz);
+  // The light's harmonics up to 2 kHz for its shape, each relative to the mean (physics.md §6).
+  const harmonics = lightHarmonics(wave, flickerHz, modulationPercent);
   return {
     flickerHz,
     modulationPercent,
     risk: flickerRisk(flickerHz, modulationPercent),
     ...limits,
-    // A sinusoidal flicker of percent flicker m has amplitude m/100 of the mean (CIE TN 006:2016).
-    svm: svm([{ frequencyHz: flickerHz, amplitude: modulationPercent / 100 }]),
+    wave,
+    fundamental: harmonics[0]?.amplitude ?? 0,
+    harmonicCount: harmonics.length,
+    svm: harmonics.length === 0 ? 0 : svm(harmonics),
   };
+}
+
+/**
+ * An aliased view (physics.md §4): every view that is not the true motion with one image. A
+ * sampler below the pattern's Nyquist rate (not faithful) always aliases; above it, several
+ * superimposed images (one mark at 10 rev/s under 30.5 flashes/s shows three) are not the
+ * true motion either.
+ */
+export function isAliased(motion: ApparentMotion): boolean {
+  return !motion.faithful || motion.images > 1 || motion.look !== 'true';
 }
 
 /** Everything the check screen shows for a set-up. Throws the core's InputError for a set-up it refuses. */
@@ -487,7 +520,11 @@ export function computeCheck(s: Setup): CheckResult {
   const camera = s.samplerKind === 'camera' ? cameraResult(s, part, notes) : undefined;
   const lighting =
     s.samplerKind === 'lighting'
-      ? lightingResult(flickerHzOf(s.lighting), s.lighting.modulationPercent)
+      ? lightingResult(
+          flickerHzOf(s.lighting),
+          s.lighting.modulationPercent,
+          lightWaveOf(s.lighting),
+        )
       : undefined;
   const flashes = sampler === 'flash' && !steadyLight;
 
@@ -507,7 +544,7 @@ export function computeCheck(s: Setup): CheckResult {
     bands: bandSummary(part, rateHz, range, sampler),
     camera,
     lighting,
-    showSafety: verdict.trust === 'danger',
+    showSafety: !steadyLight && isAliased(motion),
     showPhotosensitivity: flashes && cautionFlags({ flashRatesHz: [rateHz] }).photosensitivity,
     notes,
   };

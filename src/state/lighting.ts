@@ -9,7 +9,7 @@ import {
 } from '../core';
 import type { Setup } from './model';
 import { keepLastGood } from './outcome';
-import { setup } from './setup';
+import { lightWaveOf, setup } from './setup';
 
 /** The set-up's lighting as the core's lamp. */
 export function lampOf(s: Setup): Lamp {
@@ -18,6 +18,7 @@ export function lampOf(s: Setup): Lamp {
     mainsHz: l.mainsHz,
     flicker: l.flicker === 'custom' ? l.customHz : l.flicker,
     modulationPercent: l.modulationPercent,
+    waveform: lightWaveOf(l),
   };
 }
 
@@ -32,12 +33,13 @@ export function litPartsOf(s: Setup): LitPart[] {
 }
 
 /**
- * The cautions a lighting result calls for (physics.md §10): stillness that is not real when a
- * part can look still, backward or unclear under flicker; the seizure range for the flicker rate.
+ * The cautions a lighting result calls for (physics.md §4, §10): stillness that is not real when
+ * a flickering light shows any part other than as it truly turns (still, slowed, several images,
+ * backward, unclear); the seizure range for the flicker rate.
  */
 export function lightingCautions(result: LightingCheck, modulationPercent: number): CautionContext {
   return {
-    apparentStillness: result.parts.some((p) => p.misleading),
+    apparentStillness: result.parts.some((p) => p.aliased),
     flashRatesHz: modulationPercent > 0 ? [result.flickerHz] : [],
   };
 }

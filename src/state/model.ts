@@ -67,7 +67,20 @@ export interface LightingSpec {
   customHz: number;
   /** Percent flicker, 100·(Lmax − Lmin)/(Lmax + Lmin). */
   modulationPercent: number;
+  /**
+   * The light's shape over a flicker period (physics.md §6): a sine (the default, and what
+   * older set-ups assumed), rectangular PWM, or the full-wave rectified sine of a plain driver.
+   */
+  waveform?: LightWaveform;
+  /** Share of each period a PWM light is on, percent (kept while another shape is chosen). Default 50. */
+  dutyPercent?: number;
 }
+
+/** The light's shape as the set-up keeps it. */
+export type LightWaveform = 'sine' | 'rectangular' | 'rectified';
+
+/** PWM duty when none was given: a square wave. */
+export const DEFAULT_DUTY_PERCENT = 50;
 
 /** Everything the check screen shows, as the user set it. */
 export interface Setup {

@@ -2,11 +2,12 @@
 // values already checked by the field readers (src/lib/fields.ts) and always build a new
 // object, so every computed view that reads `setup` follows at once.
 import { computed, effect, signal } from '@preact/signals';
-import { motorSpeedHz } from '../core';
+import { motorSpeedHz, type LightWave } from '../core';
 import { loadMachines } from './machines';
 import { decodeShareFragment } from './shareLink';
 import { loadCurrentSetup, openStore, saveCurrentSetup } from './storage';
 import {
+  DEFAULT_DUTY_PERCENT,
   defaultSetup,
   type CameraSpec,
   type LightingSpec,
@@ -135,6 +136,23 @@ export function setCustomFlickerHz(customHz: number): void {
 
 export function setModulationPercent(modulationPercent: number): void {
   updateLighting({ modulationPercent });
+}
+
+export function setWaveform(waveform: NonNullable<LightingSpec['waveform']>): void {
+  updateLighting({ waveform });
+}
+
+/** PWM duty, percent; the caller guarantees 0 < duty < 100. */
+export function setDutyPercent(dutyPercent: number): void {
+  updateLighting({ dutyPercent });
+}
+
+/** The core's light wave for a lighting set-up (a sine when none was chosen). */
+export function lightWaveOf(lighting: LightingSpec): LightWave {
+  const shape = lighting.waveform ?? 'sine';
+  return shape === 'rectangular'
+    ? { shape, dutyCycle: (lighting.dutyPercent ?? DEFAULT_DUTY_PERCENT) / 100 }
+    : { shape };
 }
 
 export function setCreepRpm(creepRpm: number): void {

@@ -347,13 +347,38 @@ function strobeFrom(x: unknown, path: string): StrobeSpec {
 }
 
 function lightingFrom(x: unknown, path: string): LightingSpec {
-  const r = readRecord(x, path, ['mainsHz', 'flicker', 'customHz', 'modulationPercent']);
-  return {
+  const r = readRecord(
+    x,
+    path,
+    ['mainsHz', 'flicker', 'customHz', 'modulationPercent'],
+    ['waveform', 'dutyPercent'],
+  );
+  const lighting: LightingSpec = {
     mainsHz: oneOf(r.mainsHz, pathTo(path, 'mainsHz'), [50, 60] as const),
     flicker: oneOf(r.flicker, pathTo(path, 'flicker'), ['double', 'mains', 'custom'] as const),
     customHz: aboveZero(r.customHz, pathTo(path, 'customHz'), 1e6),
     modulationPercent: between(r.modulationPercent, pathTo(path, 'modulationPercent'), 0, 100),
   };
+  // Both are newer than the first file format: absent, the light is a sine (as it was then).
+  if ('waveform' in r) {
+    lighting.waveform = oneOf(r.waveform, pathTo(path, 'waveform'), [
+      'sine',
+      'rectangular',
+      'rectified',
+    ] as const);
+  }
+  if ('dutyPercent' in r) {
+    const dutyPath = pathTo(path, 'dutyPercent');
+    const duty = between(r.dutyPercent, dutyPath, 0, 100);
+    if (duty === 0 || duty === 100) {
+      throw new DataError(
+        dutyPath,
+        `${dutyPath} must lie between 0 and 100, ends not included (got ${duty}).`,
+      );
+    }
+    lighting.dutyPercent = duty;
+  }
+  return lighting;
 }
 
 const SETUP_KEYS = [

@@ -67,11 +67,17 @@ async function noSidewaysScroll(page: Page): Promise<number> {
   return page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
 }
 
-/** Types each garbage text into the field: a message beside it, `unchanged` keeps its text, nothing reads NaN. */
+/**
+ * Types each garbage text into the field: a message beside it, nothing reads NaN. `unchanged`
+ * keeps its text; with `withdrawn`, the screen's answer is withdrawn and `unchanged` says it is
+ * not current while the text is refused (physics.md §10), and both come back as they were once
+ * the good text is back.
+ */
 async function refusesGarbage(
   page: Page,
   field: ReturnType<Page['getByLabel']>,
   unchanged: ReturnType<Page['getByTestId']>,
+  withdrawn = false,
 ) {
   const good = await field.inputValue();
   const before = await unchanged.innerText();
@@ -83,11 +89,28 @@ async function refusesGarbage(
       (await page.locator(`[id="${messageId}"]`).innerText()).length,
       `"${text}"`,
     ).toBeGreaterThan(5);
-    expect(await unchanged.innerText(), `"${text}"`).toBe(before);
+    if (withdrawn) {
+      await expect
+        .poll(() => page.getByTestId('withdrawn').innerText(), { message: `"${text}"` })
+        .toMatch(/^No answer until /);
+      // Hidden behind the withdrawn answer, in results marked not current, or saying so itself.
+      expect(
+        await unchanged.evaluate(
+          (e) =>
+            e.closest('[hidden]') !== null ||
+            e.closest('[data-current="false"]') !== null ||
+            /^Not current: fix /.test(e.textContent ?? ''),
+        ),
+        `"${text}"`,
+      ).toBe(true);
+    } else {
+      expect(await unchanged.innerText(), `"${text}"`).toBe(before);
+    }
     expect(await shownText(page), `"${text}"`).not.toMatch(/NaN|Infinity/);
   }
   await field.fill(good);
   expect(await field.getAttribute('aria-invalid')).toBeNull();
+  await expect.poll(() => unchanged.innerText()).toBe(before);
 }
 
 describe('the speed finder at phone size', () => {
@@ -129,11 +152,12 @@ describe('the speed finder at phone size', () => {
     await page.getByRole('button', { name: 'Add reading' }).click();
     expect(await page.getByTestId('reading-refused').isVisible()).toBe(true);
     expect(await page.getByTestId('reading-list').locator('li').count()).toBe(1);
-    // Garbage in a recorded reading keeps the step as it was.
+    // Garbage in a recorded reading withdraws the step until it is fixed (physics.md §10); then it is back as it was.
     await refusesGarbage(
       page,
       page.getByLabel('Reading 1: rate', { exact: true }),
       page.getByTestId('finder-instruction'),
+      true,
     );
 
     // The proposed rate goes to the Check screen's strobe.
@@ -159,6 +183,7 @@ describe('the speed finder at phone size', () => {
       page,
       page.getByLabel('From', { exact: true }),
       page.getByTestId('finder-instruction'),
+      true,
     );
     await page.getByRole('radio', { name: 'Not known' }).check();
 
@@ -218,7 +243,7 @@ describe('the whole machine at phone size', () => {
       .toMatch(new RegExp(`^${formatNumber(fanHz * 60)} rpm ± 1 %`));
 
     // Garbage in a pulley leaves the fan's speed as it was.
-    await refusesGarbage(page, second.getByLabel('Driver pulley', { exact: true }), speeds);
+    await refusesGarbage(page, second.getByLabel('Driver pulley', { exact: true }), speeds, true);
 
     // Freeze the fan while the motor's mark does not stand still.
     await page.getByLabel('Part to freeze').selectOption('1');

@@ -1,5 +1,6 @@
-// Typed garbage in every field: each gets a message beside it, the results stay as they were,
-// and nothing on screen ever reads NaN or Infinity.
+// Typed garbage in every field: each gets a message beside it, the set-up stays as it was, the
+// verdict (if the field feeds it) is withdrawn and the lists are marked not current until the
+// text is good again, and nothing on screen ever reads NaN or Infinity.
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { openApp, openBrowser, type Session } from './browser';
@@ -33,6 +34,20 @@ async function shownText(page: Page): Promise<string> {
   return text.replace(/"[^"]*"/g, '');
 }
 
+/** Fields the verdict reads: garbage in one withdraws the verdict (physics.md §10); the others leave it. */
+const VERDICT_LABELS = new Set([
+  'Speed',
+  'Blades or marks',
+  'Flash rate',
+  'Poles',
+  'Slip',
+  'Frame rate',
+  'Shutter angle',
+  'Exposure time',
+  'Flicker frequency',
+  'Modulation (percent flicker)',
+]);
+
 async function checkFields(page: Page, labels: string[]) {
   for (const label of labels) {
     const field = page.getByLabel(label, { exact: true });
@@ -45,12 +60,25 @@ async function checkFields(page: Page, labels: string[]) {
       const messageId = (await field.getAttribute('aria-describedby'))!.split(' ')[0];
       const message = await page.locator(`[id="${messageId}"]`).innerText();
       expect(message.length, `${label}: "${text}"`).toBeGreaterThan(5);
-      expect(await page.getByTestId('verdict').innerText()).toBe(verdict);
-      expect(await page.getByTestId('apparent-speed').innerText()).toBe(seen);
+      if (VERDICT_LABELS.has(label)) {
+        await expect
+          .poll(() => page.getByTestId('verdict').innerText(), { message: `${label}: "${text}"` })
+          .toBe(`No verdict until ${label} is fixed`);
+        expect(await page.getByTestId('apparent-speed').count()).toBe(0);
+      } else {
+        // Lists read this field, the verdict does not: it stands, the lists are marked.
+        expect(await page.getByTestId('verdict').innerText()).toBe(verdict);
+        expect(await page.getByTestId('apparent-speed').innerText()).toBe(seen);
+        expect(await page.getByTestId('not-current').count()).toBeGreaterThan(0);
+      }
       expect(await shownText(page), `${label}: "${text}"`).not.toMatch(/NaN|Infinity/);
     }
     await field.fill(good);
     expect(await field.getAttribute('aria-invalid')).toBeNull();
+    await expect
+      .poll(() => page.getByTestId('verdict').innerText(), { message: label })
+      .toBe(verdict);
+    expect(await page.getByTestId('not-current').count()).toBe(0);
   }
 }
 

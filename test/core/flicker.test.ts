@@ -1,11 +1,16 @@
 import { describe, expect, it } from 'vitest';
+import FFT from 'fft.js';
 import fc from 'fast-check';
 import {
   flickerLimits,
   flickerRisk,
+  lightHarmonics,
+  lightSvm,
   percentFlicker,
   svm,
   svmThreshold,
+  SVM_MAX_HZ,
+  type LightWave,
 } from '../../src/core/flicker';
 import {
   anyFinite,
@@ -137,8 +142,10 @@ describe('percentFlicker', () => {
 });
 
 describe('svm: stroboscopic visibility measure', () => {
-  // The threshold T(f) = 2.865e-5·f^1.543 + 0.225 is the one physics.md §6 gives for CIE TN 006:2016.
-  it('computes the threshold physics.md §6 gives: T(100 Hz) = 0.2599 (worked by hand)', () => {
+  // The threshold T(f) = 2.865e-5·f^1.543 + 0.225 is the power fit of Perz, Vogels, Sekulovski,
+  // Wang and Hu, "Stroboscopic effect: contrast threshold function and dependence on illumination
+  // level", JOSA A 35(2):309 (2018); the SVM itself is defined in CIE TN 006:2016.
+  it('computes the Perz et al. (2018) power fit: T(100 Hz) = 0.2599 (worked by hand)', () => {
     expect(svmThreshold(100)).toBeCloseTo(0.259924, 6);
     expect(svmThreshold(1000)).toBeCloseTo(1.444339, 6);
     expect(svmThreshold(1)).toBeCloseTo(0.22502865, 10);
@@ -215,5 +222,159 @@ describe('flicker: never NaN or Infinity', () => {
 
   it('copes with light levels near the largest number', () => {
     expect(percentFlicker(Number.MAX_VALUE, Number.MAX_VALUE / 2)).toBeCloseTo(100 / 3, 9);
+  });
+});
+
+/**
+ * The light's harmonics found by spectrum analysis, independently of the closed forms: one
+ * flicker period sampled N times, transformed by fft.js (a general-purpose FFT from the registry;
+ * Cooley–Tukey, Math. Comp. 19, 1965); bin m of a real signal holds amplitude 2·|X_m|/N, divided
+ * here by the mean (bin 0) to give C_m relative to the mean.
+ */
+function fftHarmonics(level: (phase: number) => number, count: number): number[] {
+  const N = 1 << 16;
+  const fft = new FFT(N);
+  const input = new Array<number>(N);
+  // Midpoint samples: a rectangular edge falls between samples, never on one.
+  for (let i = 0; i < N; i++) input[i] = level((i + 0.5) / N);
+  const out = fft.createComplexArray() as number[];
+  fft.realTransform(out, input);
+  const mean = out[0] / N;
+  const amps: number[] = [];
+  for (let m = 1; m <= count; m++)
+    amps.push((2 * Math.hypot(out[2 * m], out[2 * m + 1])) / N / mean);
+  return amps;
+}
+
+/** Levels normalised so that Lmax + Lmin = 2 (percent flicker M = (Lmax − Lmin)/2). */
+const rectangular = (M: number, D: number) => (phase: number) => (phase < D ? 1 + M : 1 - M);
+/** B + A·|sin(π·phase)| with Lmin = B, Lmax = B + A and M = A/(2B + A); A = 1. */
+const rectified = (M: number) => (phase: number) =>
+  (1 - M) / (2 * M) + Math.abs(Math.sin(Math.PI * phase));
+
+describe('lightHarmonics: the light’s Fourier components for its waveform', () => {
+  it('gives a sine one component equal to the percent flicker: C1 = M', () => {
+    expect(lightHarmonics({ shape: 'sine' }, 100, 30)).toEqual([
+      { frequencyHz: 100, amplitude: 0.3 },
+    ]);
+  });
+
+  it('gives a 50 % square wave from 0 to full a fundamental 4/π times a sine’s, and odd harmonics 4/(mπ)', () => {
+    // Fourier series of a rectangular pulse train: C_m = 2·|sin(mπD)|/(mπD) for a 0-to-1 wave.
+    const h = lightHarmonics({ shape: 'rectangular', dutyCycle: 0.5 }, 100, 100);
+    expect(h[0].amplitude).toBeCloseTo(4 / Math.PI, 12);
+    expect(h[0].amplitude / lightHarmonics({ shape: 'sine' }, 100, 100)[0].amplitude).toBeCloseTo(
+      4 / Math.PI,
+      12,
+    );
+    expect(h[1].amplitude).toBeCloseTo(0, 12);
+    expect(h[2].amplitude).toBeCloseTo(4 / (3 * Math.PI), 12);
+    // Up to 2 kHz (CIE TN 006:2016): 20 harmonics of 100 Hz, the last at 2000 Hz.
+    expect(h).toHaveLength(20);
+    expect(h.at(-1)!.frequencyHz).toBe(SVM_MAX_HZ);
+  });
+
+  it('matches an FFT of the rectangular wave for any duty and depth', () => {
+    for (const [M, D] of [
+      [1, 0.5],
+      [1, 0.1],
+      [0.3, 0.25],
+      [0.8, 0.7],
+    ]) {
+      const closed = lightHarmonics({ shape: 'rectangular', dutyCycle: D }, 100, 100 * M);
+      const found = fftHarmonics(rectangular(M, D), 12);
+      for (let m = 0; m < 12; m++)
+        expect(closed[m].amplitude, `M ${M}, D ${D}, m ${m + 1}`).toBeCloseTo(found[m], 3);
+    }
+  });
+
+  it('gives the full-wave rectified sine C_k = 2/(4k² − 1) at 100 % flicker: 2/3, 2/15, 2/35', () => {
+    // |sin x| = 2/π − (4/π)·Σ cos(2kx)/(4k² − 1): each term over the mean 2/π.
+    const h = lightHarmonics({ shape: 'rectified' }, 100, 100);
+    expect(h.slice(0, 3).map((c) => c.amplitude)).toEqual([
+      expect.closeTo(2 / 3, 12),
+      expect.closeTo(2 / 15, 12),
+      expect.closeTo(2 / 35, 12),
+    ]);
+    expect(h.map((c) => c.frequencyHz).slice(0, 3)).toEqual([100, 200, 300]);
+  });
+
+  it('matches an FFT of the rectified wave, smoothed or not', () => {
+    for (const M of [1, 0.5, 0.2]) {
+      const closed = lightHarmonics({ shape: 'rectified' }, 100, 100 * M);
+      const found = fftHarmonics(rectified(M), 8);
+      for (let k = 0; k < 8; k++)
+        expect(closed[k].amplitude, `M ${M}, k ${k + 1}`).toBeCloseTo(found[k], 6);
+    }
+  });
+
+  it('keeps percent flicker and waveform consistent: each modelled wave has the percent flicker it was given', () => {
+    // Percent flicker 100·(Lmax − Lmin)/(Lmax + Lmin) (IES definition, as in IEEE Std 1789-2015).
+    const sampled = (level: (p: number) => number) => {
+      let hi = -Infinity;
+      let lo = Infinity;
+      for (let i = 0; i <= 10000; i++) {
+        const v = level(i / 10000);
+        hi = Math.max(hi, v);
+        lo = Math.min(lo, v);
+      }
+      return (100 * (hi - lo)) / (hi + lo);
+    };
+    for (const M of [0.1, 0.5, 1]) {
+      expect(sampled(rectangular(M, 0.3))).toBeCloseTo(100 * M, 9);
+      expect(sampled(rectified(M))).toBeCloseTo(100 * M, 6);
+    }
+  });
+
+  it('has nothing for steady light, and nothing above 2 kHz', () => {
+    expect(lightHarmonics({ shape: 'rectified' }, 100, 0)).toEqual([]);
+    expect(lightHarmonics({ shape: 'sine' }, 2500, 50)).toEqual([]);
+    expect(lightSvm({ shape: 'sine' }, 2500, 50)).toBe(0);
+    expect(lightSvm({ shape: 'rectangular', dutyCycle: 0.5 }, 100, 0)).toBe(0);
+  });
+
+  it('rejects an unknown shape and a duty at or beyond 0 or 100 %', () => {
+    expectInputError(
+      () => lightHarmonics(bad({ shape: 'triangle' }), 100, 30),
+      'light waveform',
+      'waveform',
+    );
+    expectInputError(() => lightHarmonics(bad(null), 100, 30), 'light waveform', 'waveform');
+    for (const d of [0, 1, -0.1, 1.5, undefined])
+      expectInputError(
+        () => lightHarmonics({ shape: 'rectangular', dutyCycle: d } as LightWave, 100, 30),
+        'duty cycle',
+      );
+  });
+});
+
+describe('lightSvm: the SVM of a lamp’s waveform', () => {
+  it('equals svm of the single component for a sine (the doc example)', () => {
+    expect(lightSvm({ shape: 'sine' }, 100, 26)).toBe(svm([{ frequencyHz: 100, amplitude: 0.26 }]));
+  });
+
+  it('counts every harmonic up to 2 kHz of a square wave with the Perz et al. (2018) threshold', () => {
+    // Written out: C_m = 4/(mπ) for odd m at 50 % duty, T(f) = 2.865e-5·f^1.543 + 0.225, Minkowski 3.7.
+    const T = (f: number) => 2.865e-5 * Math.pow(f, 1.543) + 0.225;
+    let sum = 0;
+    for (let m = 1; m <= 20; m += 2) sum += Math.pow(4 / (m * Math.PI) / T(100 * m), 3.7);
+    expect(lightSvm({ shape: 'rectangular', dutyCycle: 0.5 }, 100, 100)).toBeCloseTo(
+      Math.pow(sum, 1 / 3.7),
+      12,
+    );
+  });
+
+  it('never gives NaN or Infinity', () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom('sine', 'rectangular', 'rectified'),
+        anyFinite(),
+        anyFinite(),
+        anyFinite(),
+        (shape, duty, f, m) =>
+          finiteOrInputError(() => lightSvm({ shape, dutyCycle: duty } as LightWave, f, m)),
+      ),
+      { seed: 2018, numRuns: 500 },
+    );
   });
 });

@@ -3,7 +3,10 @@ import fc from 'fast-check';
 import { lightingCheck, type Lamp } from '../../src/core/lightingCheck';
 import { anyFinite, bad, expectInputError, finiteOrInputError } from './expectInputError';
 
-/** CIE TN 006:2016 visibility threshold T(f) = 2.865e-5·f^1.543 + 0.225 (physics.md §6), written out. */
+/**
+ * Visibility threshold of the SVM (CIE TN 006:2016): the power fit T(f) = 2.865e-5·f^1.543 + 0.225
+ * of Perz et al., JOSA A 35(2):309 (2018), written out.
+ */
 const T = (f: number) => 2.865e-5 * Math.pow(f, 1.543) + 0.225;
 
 // IEC 60034-1: a 2-pole motor on 50 Hz is 3000 rpm synchronous; a two-jaw chuck on it passes
@@ -100,10 +103,19 @@ describe('lightingCheck: how the machine looks under a flickering lamp', () => {
     expect(check.remedies).toEqual([]);
   });
 
-  it('sees nothing misleading when the light does not flicker', () => {
+  it('sees nothing misleading when the light does not flicker: at 0 % nothing looks still', () => {
+    // Steady light samples nothing (physics.md §6): the chuck that stands still at 30 % shows its true motion.
     const check = lightingCheck({ ...lamp50, modulationPercent: 0 }, [chuck]);
     expect(check.svm).toBe(0);
-    expect(check.parts[0]).toMatchObject({ misleading: false, hazard: false, verdict: 'fine' });
+    expect(check.parts[0]).toMatchObject({
+      look: 'true',
+      worstLook: 'true',
+      apparentRpm: 3000,
+      misleading: false,
+      aliased: false,
+      hazard: false,
+      verdict: 'fine',
+    });
     expect(check.verdict).toBe('fine');
     expect(check.summary).toMatch(/does not flicker/);
     expect(check.cautions).toHaveLength(1); // only the planning-aid caution
@@ -194,5 +206,45 @@ describe('lightingCheck: never NaN or Infinity', () => {
       ),
       { seed: 1949, numRuns: 500 },
     );
+  });
+});
+
+describe('lightingCheck: the lamp’s waveform (issue 8 item 9)', () => {
+  it('counts a PWM lamp’s harmonics: a 50 % square wave at 25 % flicker is visible where a sine is not', () => {
+    // Sine: SVM = 0.25/T(100) = 0.96 < 1. Square wave of the same percent flicker: C_m = 4·0.25/(mπ)
+    // for odd m (Fourier series of a rectangular pulse train), combined to 2 kHz with exponent 3.7.
+    const sine = lightingCheck({ ...lamp50, modulationPercent: 25 }, [chuck]);
+    expect(sine.svm).toBeCloseTo(0.25 / T(100), 12);
+    expect(sine.visible).toBe(false);
+    expect(sine.parts[0].verdict).toBe('caution');
+    const square = lightingCheck(
+      { ...lamp50, modulationPercent: 25, waveform: { shape: 'rectangular', dutyCycle: 0.5 } },
+      [chuck],
+    );
+    let sum = 0;
+    for (let m = 1; m <= 20; m += 2) sum += Math.pow((4 * 0.25) / (m * Math.PI) / T(100 * m), 3.7);
+    expect(square.svm).toBeCloseTo(Math.pow(sum, 1 / 3.7), 12);
+    expect(square.visible).toBe(true);
+    expect(square.parts[0].verdict).toBe('hazard');
+    expect(square.harmonics).toHaveLength(20);
+  });
+
+  it('gives a plain driver’s rectified light its 2/3 fundamental at full flicker', () => {
+    // |sin x| = 2/π − (4/π)·Σ cos(2kx)/(4k² − 1): C₁ = (4/3π)/(2/π) = 2/3 at 100 Hz.
+    const check = lightingCheck(
+      { ...lamp50, modulationPercent: 100, waveform: { shape: 'rectified' } },
+      [chuck],
+    );
+    expect(check.harmonics[0]).toEqual({ frequencyHz: 100, amplitude: expect.closeTo(2 / 3, 12) });
+  });
+
+  it('carries the stillness caution for a part that only seems slower under the flicker', () => {
+    // physics.md §4: a slowed forward view is aliased too. One mark at 101 rev/s under 100 Hz
+    // flicker: r = 1.01, e = +0.01 pitch, a = 0.01·100 = 1 rev/s forward (physics.md §2).
+    const creep = lightingCheck(lamp50, [{ name: 'disc', speedHz: 101, symmetry: 1 }]);
+    expect(creep.parts[0].look).toBe('forward');
+    expect(creep.parts[0].misleading).toBe(false);
+    expect(creep.parts[0].aliased).toBe(true);
+    expect(creep.cautions.join(' ')).toMatch(/lock out/);
   });
 });

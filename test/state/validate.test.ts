@@ -42,6 +42,15 @@ describe('validateSetup', () => {
     expect('motor' in out.parts[1]).toBe(false);
   });
 
+  it('reads a lighting set-up without a waveform as the sine older set-ups assumed, and keeps a given one', () => {
+    const s = sampleSetup();
+    expect('waveform' in validateSetup(s).lighting).toBe(false);
+    s.lighting = { ...s.lighting, waveform: 'rectangular', dutyPercent: 12.5 };
+    expect(validateSetup(s).lighting).toEqual(s.lighting);
+    s.lighting = { ...s.lighting, waveform: 'rectified' };
+    expect(validateSetup(s).lighting.waveform).toBe('rectified');
+  });
+
   it('accepts the edges of every range', () => {
     const s = sampleSetup();
     s.parts[0] = { name: '', speedRpm: -1e7, features: 100_000, tolerancePercent: 50 };
@@ -249,6 +258,16 @@ describe('validateSetup', () => {
       'a modulation over 100 %',
       (s) => (s.lighting.modulationPercent = 100.1),
       'set-up › lighting › modulationPercent must be a number from 0 to 100 (got 100.1).',
+    ],
+    [
+      'an unknown light waveform',
+      (s) => (s.lighting.waveform = 'triangle'),
+      'set-up › lighting › waveform must be one of "sine", "rectangular", "rectified" (got the text "triangle").',
+    ],
+    [
+      'a PWM duty of 100 %',
+      (s) => (s.lighting.dutyPercent = 100),
+      'set-up › lighting › dutyPercent must lie between 0 and 100, ends not included (got 100).',
     ],
     [
       'a creep given as a boolean',

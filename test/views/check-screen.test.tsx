@@ -72,14 +72,72 @@ describe('the check screen', () => {
     expect(region.textContent).toContain('Looks still');
   });
 
-  test('bad text gets a message beside its field and the last good result stays', () => {
+  test('bad text gets a message beside its field, keeps the set-up, and withdraws the verdict', () => {
     const before = check.value;
     type('Speed', 'fast');
     expect(field('Speed').getAttribute('aria-invalid')).toBe('true');
     expect(screen.getByRole('alert').textContent).toMatch(/not a number/);
     expect(setup.value.parts[0].speedRpm).toBe(1770);
     expect(check.value).toBe(before);
+    // physics.md §10: a verdict from inputs no longer valid is withdrawn where it stands.
+    expect(verdict()).toBe('No verdict until Speed is fixed');
+    type('Speed', '1770');
     expect(verdict()).toBe('Looks still');
+  });
+
+  test('a speed made invalid after a good one withdraws the verdict where it stands and marks every list not current', () => {
+    // Issue 8 item 3: fan 1750 rpm, 6 blades, strobe 1748 flashes/min; then "1750x".
+    type('Speed', '1750');
+    type('Flash rate', '1748');
+    expect(verdict()).toBe('Creeping forward');
+    type('Speed', '1750x');
+    const panel = screen.getByTestId('verdict').closest('section')!;
+    expect(panel.textContent).not.toMatch(/Creeping|1,750 rpm/);
+    expect(verdict()).toBe('No verdict until Speed is fixed');
+    expect(within(panel).getByText(/Speed: "x" is not a unit for speed/)).toBeTruthy();
+    // Every list worked out from the speed says so, and is out of reach while it does.
+    const marks = screen.getAllByTestId('not-current');
+    expect(marks.length).toBeGreaterThanOrEqual(4); // rate map, preview, locks, creep, bands
+    for (const m of marks) expect(m.textContent).toMatch(/^Not current: fix Speed first/);
+    const locks = screen.getByTestId('lock-list').closest('[data-current]')!;
+    expect(locks.getAttribute('data-current')).toBe('false');
+    // The fix button takes the cursor to the field.
+    fireEvent.click(within(panel).getByRole('button', { name: 'Fix Speed' }));
+    expect(document.activeElement).toBe(field('Speed'));
+    type('Speed', '1750');
+    expect(verdict()).toBe('Creeping forward');
+    expect(screen.queryAllByTestId('not-current')).toHaveLength(0);
+  });
+
+  test('"17OO" typed key by key never shows the verdict for 17 rpm once the text is refused', () => {
+    // Issue 8 item 3: the letter O typed for a zero.
+    const seen: string[] = [];
+    for (const text of ['1', '17', '17O', '17OO']) {
+      type('Speed', text);
+      seen.push(verdict());
+    }
+    expect(seen[1]).toBe('True motion'); // 17 rpm under 1770 fpm: faithful (Shannon 1949)
+    expect(seen.slice(2)).toEqual([
+      'No verdict until Speed is fixed',
+      'No verdict until Speed is fixed',
+    ]);
+    expect(screen.getByTestId('verdict').closest('section')!.textContent).not.toMatch(/17 rpm/);
+  });
+
+  test('a bad creep speed marks only the creep list not current; the verdict stands', () => {
+    type('Creep speed wanted', 'slow');
+    expect(verdict()).toBe('Looks still');
+    const marks = screen.getAllByTestId('not-current');
+    expect(marks).toHaveLength(1);
+    expect(marks[0].textContent).toMatch(/fix Creep speed wanted/);
+    expect(marks[0].parentElement!.querySelector('[data-testid="lock-list"]')).toBeNull();
+  });
+
+  test('a bad tolerance keeps the verdict but marks the lists not current', () => {
+    // The verdict reads the nominal speed only; lock bands and safe bands read the tolerance.
+    type('Tolerance', '-1');
+    expect(verdict()).toBe('Looks still');
+    expect(screen.getAllByTestId('not-current')[0].textContent).toMatch(/fix Tolerance/);
   });
 
   test('nothing on screen says NaN or Infinity, whatever is typed', () => {
@@ -127,7 +185,17 @@ describe('the check screen', () => {
     // physics.md §4 worked check: f = 30 rev/s, creep 0.5 rev/s → 29.5 flashes/s = 1770 fpm.
     expect(setup.value.strobe.rateFpm).toBeCloseTo(1770, 9);
     expect(verdict()).toBe('Creeping forward');
-    expect(screen.queryByTestId('safety-notice')).toBeNull();
+    // physics.md §4: a creep asked for is still an aliased view; the lock-out caution goes with it.
+    expect(screen.getByTestId('safety-notice')).toBeTruthy();
+  });
+
+  test('the creep of issue 8 carries the lock-out caution: 6 blades at 1750 rpm under 1748 flashes/min', () => {
+    // physics.md §2: a = f − k·s/n = (1750 − 1748)/60 rev/s = 2 rpm forward (k = 6).
+    type('Speed', '1750');
+    type('Flash rate', '1748');
+    expect(verdict()).toBe('Creeping forward');
+    expect(screen.getByTestId('apparent-speed').textContent).toBe('2 rpm forward');
+    expect(screen.getByTestId('safety-notice').textContent).toMatch(/lock out the machine/);
   });
 
   test('a strobe rate can be typed in Hz', () => {

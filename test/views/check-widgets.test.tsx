@@ -57,18 +57,18 @@ describe('the check screen’s preview and rate map', () => {
     expect(within(preview).queryByText(stillness)).toBeNull();
     expect(within(map).queryByText(stillness)).toBeNull();
 
-    // Wikipedia, "Stroboscopic effect": 60 rev/s at 59 flashes a second seems to turn forward at
-    // 1 rev/s. A creep forward is to be used with care, not distrusted: the screen shows no
-    // stillness caution, so the preview (which looks slow) and the map (which marks still
-    // rates) carry it.
+    // One mark at 60 rev/s under 125 flashes a second: above twice the pattern rate, so the
+    // strobe shows the true motion (Shannon 1949) and the screen shows no stillness caution.
+    // The map, which marks the still rates, then carries it; the preview, which shows the
+    // true motion, has nothing to warn of.
     replaceSetup({
       ...structuredClone(defaultSetup),
       parts: [{ name: 'Disc', speedRpm: 3600, features: 1, tolerancePercent: 0 }],
-      strobe: { rateFpm: 3540, minFpm: 30, maxFpm: 12000 },
+      strobe: { rateFpm: 125 * 60, minFpm: 30, maxFpm: 12000 },
     });
     await waitFor(() => expect(screen.queryByTestId('safety-notice')).toBeNull());
-    expect(apparentMotion({ speedHz: 60, symmetry: 1 }, 59).look).toBe('forward');
-    expect(within(preview).getByText(stillness)).toBeTruthy();
+    expect(apparentMotion({ speedHz: 60, symmetry: 1 }, 125).look).toBe('true');
+    expect(within(preview).queryByText(stillness)).toBeNull();
     expect(within(map).getByText(stillness)).toBeTruthy();
   });
 

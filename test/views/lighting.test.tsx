@@ -43,9 +43,10 @@ describe('the lighting check screen', () => {
       'Hazard: a part can look still or backward',
     );
     expect(screen.getByTestId('lighting-summary').textContent).toBe(expected.summary);
+    // Said once, loudly, at the top: the answer box is the alert, naming the part.
     const shout = screen.getByTestId('lighting-hazard');
     expect(shout.getAttribute('role')).toBe('alert');
-    expect(shout.textContent).toContain('HAZARD');
+    expect(shout.textContent).toContain('Hazard');
     expect(shout.textContent).toContain('Fan');
     const [row] = rows();
     expect(row.getAttribute('data-state')).toBe('hazard');
@@ -210,5 +211,46 @@ describe('the lighting check screen', () => {
   test('the report bar offers print and CSV', () => {
     expect(screen.getByRole('button', { name: 'Print report' })).toBeTruthy();
     expect(screen.getByRole('button', { name: 'Save table (CSV)' })).toBeTruthy();
+  });
+
+  test('the hazard is said once: one answer box naming it, then the single stillness caution, no third box', () => {
+    // Issue 8 item 9: the same hazard was shown in three stacked boxes (answer, shout, caution).
+    const panel = screen.getByRole('region', { name: 'Under this light' });
+    expect([...panel.children].map((e) => e.tagName)).toEqual(['H2', 'DIV']);
+    expect(panel.querySelector('[data-testid="lighting-hazard"]')).toBe(panel.children[1]);
+    const boxes = [...document.querySelectorAll('[role="alert"], aside')].filter((e) =>
+      /hazard|still turning/i.test(e.textContent ?? ''),
+    );
+    expect(boxes.map((e) => e.getAttribute('data-testid'))).toEqual([
+      'lighting-hazard',
+      'safety-notice',
+    ]);
+  });
+
+  test('at 0 % modulation no part looks still: a two-jaw chuck at 3000 rpm shows its true motion', () => {
+    // Steady light samples nothing (physics.md §6); at 30 % the same chuck stands still under 100 Hz.
+    act(() => replaceSetup(onePart('Chuck', 3000, 2)));
+    expect(rows()[0].textContent).toContain('Looks still');
+    type('Modulation (percent flicker)', '0');
+    expect(rows()[0].textContent).not.toContain('Looks still');
+    expect(rows()[0].textContent).toContain('True motion');
+    expect(screen.queryByTestId('safety-notice')).toBeNull();
+  });
+
+  test('a PWM light flickers 4/π as strongly as a sine of the same percent flicker, and its SVM says so', () => {
+    // A 50 % square wave from 0 to full (100 % flicker): C1 = 2·sin(π/2)/(π/2) = 4/π (Fourier
+    // series of a rectangular pulse train); the sine's C1 is 1. SVM from the Perz et al. (2018) fit.
+    type('Modulation (percent flicker)', '100');
+    const sineSvm = Number(screen.getByTestId('svm').textContent);
+    fireEvent.click(screen.getByLabelText('PWM (on–off)'));
+    expect(setup.value.lighting.waveform).toBe('rectangular');
+    expect(field('Duty cycle').value).toBe('50');
+    const T = (f: number) => 2.865e-5 * Math.pow(f, 1.543) + 0.225;
+    // Odd harmonics 1, 3, 5 … up to 2 kHz, C_m = 4/(mπ) at 50 % duty (even ones vanish).
+    let sum = 0;
+    for (let m = 1; m * 100 <= 2000; m += 2) sum += Math.pow(4 / (m * Math.PI) / T(100 * m), 3.7);
+    expect(screen.getByTestId('svm').textContent).toBe(formatNumber(Math.pow(sum, 1 / 3.7), 2));
+    expect(Number(screen.getByTestId('svm').textContent)).toBeGreaterThan(sineSvm * 1.2);
+    expect(screen.getByTestId('light-wave').textContent).toContain('swings 127.3 % of the mean');
   });
 });

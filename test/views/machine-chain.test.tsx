@@ -184,15 +184,22 @@ describe('the whole machine', () => {
     await vi.waitFor(() => expect(charts.at(-1)?.parts).toBe(2));
   });
 
-  test('garbage in a pulley is refused beside the field and the speeds stay', () => {
+  test('garbage in a pulley is refused beside the field, keeps the set-up, and marks the carried speeds not current', () => {
     buildMotorBeltFan();
     for (const text of ['abc', '', '0', '-100', 'NaN', '1e999', '12abc', '5 furlongs']) {
       type(1, 'Driver pulley', text);
       const input = card(1).getByLabelText('Driver pulley', { exact: true });
       expect(input.getAttribute('aria-invalid'), text).toBe('true');
-      expect(speedOf(1), text).toBe('582 rpm ± 1 % (576.2 – 587.8 rpm)');
+      // physics.md §10: a speed carried from a refused entry is not shown as current.
+      expect(speedOf(1), text).toBe('Not current: fix Fan: Driver pulley first.');
+      expect(screen.getByTestId('withdrawn').textContent, text).toMatch(
+        /^No answer until Fan: Driver pulley is fixed/,
+      );
+      expect((setup.value.parts[1].drive as { driverMm: number }).driverMm).toBe(100);
       expect(document.body.textContent!.replace(/"[^"]*"/g, ''), text).not.toMatch(/NaN|Infinity/);
     }
+    type(1, 'Driver pulley', '100');
+    expect(speedOf(1)).toBe('582 rpm ± 1 % (576.2 – 587.8 rpm)');
     // A unit may be typed: 4 in = 101.6 mm.
     type(1, 'Driver pulley', '4 in');
     expect((setup.value.parts[1].drive as { driverMm: number }).driverMm).toBeCloseTo(101.6, 9);
@@ -205,6 +212,8 @@ describe('the whole machine', () => {
     expect(card(0).getByLabelText('Tyre size').getAttribute('aria-invalid')).toBe('true');
     expect(card(0).getByRole('alert').textContent).toMatch(/is not a tyre size/);
     expect(setup.value.parts[0].wheel?.tyreSize).toBe('205/55R16');
+    expect(speedOf(0)).toMatch(/^Not current: fix .*Tyre size first\.$/);
+    fireEvent.input(card(0).getByLabelText('Tyre size'), { target: { value: '205/55R16' } });
     expect(speedOf(0)).toBe(before);
   });
 
@@ -212,9 +221,9 @@ describe('the whole machine', () => {
     buildMotorBeltFan();
     type(0, 'Tolerance', '45');
     type(1, 'Belt slip', '20');
-    expect(screen.getByTestId('chain-problem').textContent).toMatch(
-      /uncertain by more than ±50 %.*last entries that could be worked out/,
-    );
+    // physics.md §10: the answer is withdrawn with the core's words; the results are marked not current.
+    expect(screen.getByTestId('withdrawn').textContent).toMatch(/uncertain by more than ±50 %/);
+    expect(screen.getByTestId('not-current')).toBeTruthy();
     expect((setup.value.parts[1].drive as { slipPercent: number }).slipPercent).toBe(20);
     // The last good speeds stay on screen.
     expect(speedOf(1)).toMatch(/^582 rpm ± 45 %/);

@@ -4,9 +4,13 @@ import { useState } from 'preact/hooks';
 import { afterEach, describe, expect, test } from 'vitest';
 import { numberForField } from '../../src/lib/format';
 import { readFeatures } from '../../src/lib/fields';
+import { clearFieldProblems, fieldProblems } from '../../src/state/fieldProblems';
 import { NumberField } from '../../src/views/NumberField';
 
-afterEach(cleanup);
+afterEach(() => {
+  cleanup();
+  clearFieldProblems();
+});
 
 /** A field bound to local state, with a button that changes the value from outside. */
 function Harness({ onValues }: { onValues: number[] }) {
@@ -82,5 +86,29 @@ describe('NumberField', () => {
     render(<Harness onValues={[]} />);
     type('08');
     expect((screen.getByLabelText('Blades') as HTMLInputElement).value).toBe('08');
+  });
+
+  test('lists refused text among the page’s refused fields, by id and label, until the text is good again', () => {
+    // physics.md §10: results worked out from a refused field are withdrawn; they learn of it here.
+    render(<Harness onValues={[]} />);
+    expect(fieldProblems.value).toEqual([]);
+    type('2.5');
+    expect(fieldProblems.value).toEqual([
+      { id: 'features', label: 'Blades', message: expect.stringMatching(/whole number/) },
+    ]);
+    type('7');
+    expect(fieldProblems.value).toEqual([]);
+  });
+
+  test('drops its refusal from the list when its text is rewritten from outside or it leaves the page', () => {
+    const { unmount } = render(<Harness onValues={[]} />);
+    type('abc');
+    expect(fieldProblems.value.map((p) => p.id)).toEqual(['features']);
+    fireEvent.click(screen.getByText('outside'));
+    expect(fieldProblems.value).toEqual([]);
+    type('abc');
+    expect(fieldProblems.value).toHaveLength(1);
+    unmount();
+    expect(fieldProblems.value).toEqual([]);
   });
 });

@@ -129,10 +129,42 @@ describe('the verdict', () => {
 });
 
 describe('the cautions', () => {
-  test('the safety notice shows for still, backward and unclear, and not for a forward creep', () => {
-    expect(computeCheck(disc(3600)).showSafety).toBe(true);
-    expect(computeCheck(disc(61 * 60)).showSafety).toBe(true);
-    expect(computeCheck(disc(59 * 60)).showSafety).toBe(false);
+  test('the safety notice shows for every aliased view, a forward creep included, and not for true motion', () => {
+    // physics.md §4: every view that is not faithful carries the stillness caution of §10.
+    expect(computeCheck(disc(3600)).showSafety).toBe(true); // still
+    expect(computeCheck(disc(61 * 60)).showSafety).toBe(true); // backward
+    expect(computeCheck(disc(59 * 60)).showSafety).toBe(true); // creeping forward at 60 rpm
+    expect(computeCheck(disc(100 * 60)).showSafety).toBe(true); // r = 0.6: forward, slowed
+    expect(computeCheck(disc(121 * 60)).showSafety).toBe(false); // r < 0.5: faithful (Shannon 1949)
+  });
+
+  test('the fan of issue 8 creeping forward at 2 rpm carries the safety notice', () => {
+    // 6 blades at 1750 rpm under 1748 flashes/min: a = (1750 − 1748)/60 rev/s (physics.md §2).
+    const r = computeCheck(
+      setupWith({
+        part: { speedRpm: 1750, features: 6, tolerancePercent: 0 },
+        samplerKind: 'strobe',
+        strobe: { rateFpm: 1748, minFpm: 30, maxFpm: 12000 },
+      }),
+    );
+    expect(r.verdict.kind).toBe('creeping');
+    expect(r.verdict.apparentRpm).toBeCloseTo(2, 9);
+    expect(r.motion.faithful).toBe(false);
+    expect(r.showSafety).toBe(true);
+  });
+
+  test('several images above the Nyquist rate carry the safety notice although the sampler is faithful', () => {
+    // One mark at 10 rev/s under 30.5 flashes/s: three images creep (physics.md §3).
+    const r = computeCheck(
+      setupWith({
+        part: { speedRpm: 600, features: 1, tolerancePercent: 0 },
+        samplerKind: 'strobe',
+        strobe: { rateFpm: 30.5 * 60, minFpm: 30, maxFpm: 12000 },
+      }),
+    );
+    expect(r.motion.faithful).toBe(true);
+    expect(r.motion.images).toBe(3);
+    expect(r.showSafety).toBe(true);
   });
 
   test('the photosensitivity caution shows for a flash rate from 3 to 60 per second', () => {

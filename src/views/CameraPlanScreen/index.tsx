@@ -17,13 +17,11 @@ import { formatExposure, formatNumber, formatPrecise, numberForField } from '../
 import { openScreen } from '../../lib/navigation';
 import { readList } from '../../lib/toolFields';
 import {
-  abilities,
   applyCameraSetting,
   cameraCautions,
   cameraPlanning,
   exposuresS,
   goalKind,
-  goalOf,
   otherRatesHz,
   planReadoutMs,
   shutterAnglesDeg,
@@ -31,7 +29,6 @@ import {
   toggleStandardRate,
   type GoalKind,
 } from '../../state/cameraPlanning';
-import { corePart } from '../../state/check';
 import { openMachineName } from '../../state/openMachine';
 import { setCreepRpm, setup } from '../../state/setup';
 import { Cautions } from '../Cautions';
@@ -43,8 +40,14 @@ import { PartChoice } from '../PartChoice';
 import { ReportBar } from '../ReportBar';
 import { ResultTable, type ResultColumn } from '../ResultTable';
 import { ToolLayout } from '../ToolLayout';
-import { lookWords } from '../../lib/lookWords';
-import { noneReachText } from './none-reach';
+import {
+  blockedLines,
+  CONDITION_NAMES,
+  conditionLines,
+  GOAL_WORDS,
+  settingLook,
+  settingWords,
+} from './plan-words';
 import style from './style.module.css';
 
 const GOALS: ReadonlyArray<{ value: GoalKind; label: string }> = [
@@ -53,13 +56,6 @@ const GOALS: ReadonlyArray<{ value: GoalKind; label: string }> = [
   { value: 'natural', label: 'Natural blur' },
   { value: 'honest', label: 'Nothing misleading' },
 ];
-
-const GOAL_WORDS: Record<GoalKind, string> = {
-  freeze: 'the part stands still with sharp features',
-  creep: 'the part turns slowly forward',
-  natural: 'a smoothly blurred disc, as the eye sees a fast part',
-  honest: 'nothing misleading: never still, backward or of unclear direction',
-};
 
 /** Most values in one list field: enough for any camera's menu. */
 const MAX_LIST = 12;
@@ -83,7 +79,7 @@ export function CameraPlanScreen() {
   const problem = cameraPlanning.problem.value;
   const kind = goalKind.value;
   const s = setup.value;
-  const cautions = plan ? cameraCautions(plan, kind) : { apparentStillness: true };
+  const cautions = plan ? cameraCautions(plan) : { apparentStillness: true };
   const reached = plan ? plan.settings : [];
   const shown = reached.length > 0 ? reached : (plan?.nearMisses ?? []);
   const best = reached[0];
@@ -103,17 +99,19 @@ export function CameraPlanScreen() {
               ? `${reached.length} ${reached.length === 1 ? 'setting reaches' : 'settings reach'} the goal`
               : 'No setting of this camera reaches the goal'}
         </p>
-        <p>Goal: {GOAL_WORDS[kind]}.</p>
-        {best && (
+        <p>Goal: {GOAL_WORDS[plan?.goal ?? kind]}.</p>
+        {plan && best && (
           <p data-testid="plan-best">
             Best: {formatPrecise(best.frameRate)} fps at {formatExposure(best.exposureS)}.{' '}
-            {best.why}
+            {settingWords(best, plan)}
           </p>
         )}
         {plan && reached.length === 0 && (
-          <p data-testid="plan-none">
-            {noneReachText(corePart(s), goalOf(kind, s.creepRpm), abilities.value)}
-          </p>
+          <ul class={style.blocked} data-testid="plan-blocked">
+            {blockedLines(plan).map((line) => (
+              <li key={line}>{line}</li>
+            ))}
+          </ul>
         )}
       </div>
     </Panel>
@@ -122,11 +120,6 @@ export function CameraPlanScreen() {
   const warnings = (
     <>
       <Cautions show={cautionFlags(cautions)} />
-      {problem && (
-        <p class={style.problem} role="alert" data-testid="plan-problem">
-          {problem} {plan ? 'The table shows the last entries that could be worked out.' : ''}
-        </p>
-      )}
     </>
   );
 
@@ -224,6 +217,18 @@ export function CameraPlanScreen() {
 
   const results = (
     <>
+      {plan && reached.length === 0 && (
+        <Panel title="What the goal needs" id="plan-needs">
+          <p class={style.plain}>A setting reaches the goal only when every condition holds.</p>
+          <ul class={style.conditions} data-testid="plan-none">
+            {conditionLines(plan, planReadoutMs.value).map((line) => (
+              <li key={line.condition} data-met={line.met > 0 ? 'some' : 'none'}>
+                {line.text}
+              </li>
+            ))}
+          </ul>
+        </Panel>
+      )}
       <Panel
         title={reached.length > 0 ? 'Settings that reach the goal' : 'Closest settings'}
         id="plan-settings"
@@ -235,10 +240,12 @@ export function CameraPlanScreen() {
                 ? 'Best first. "Open in check" sets the camera and shows it on the check screen.'
                 : 'None reaches the goal; these come closest.'
             }
-            columns={columnsFor(open)}
+            columns={columnsFor(open, plan!)}
             rows={shown}
             rowKey={(r) => `${r.frameRate}|${r.exposureS}`}
-            rowState={(r) => (r.misleading ? 'caution' : undefined)}
+            rowState={(r) =>
+              !r.reaches ? 'fail' : r.misleading || r.readoutLongerThanFrame ? 'caution' : undefined
+            }
             testId="plan-table"
           />
         ) : (
@@ -265,11 +272,15 @@ export function CameraPlanScreen() {
       entries={entries}
       results={results}
       report={report}
+      withdraw={{ refusal: problem }}
     />
   );
 }
 
-function columnsFor(open: (s: CameraSetting) => void): ReadonlyArray<ResultColumn<CameraSetting>> {
+function columnsFor(
+  open: (s: CameraSetting) => void,
+  plan: CameraPlan,
+): ReadonlyArray<ResultColumn<CameraSetting>> {
   return [
     { label: 'Rank', numeric: true, cell: (_, i) => String(i + 1) },
     { label: 'Frame rate', numeric: true, cell: (r) => `${formatPrecise(r.frameRate)} fps` },
@@ -278,15 +289,20 @@ function columnsFor(open: (s: CameraSetting) => void): ReadonlyArray<ResultColum
       numeric: true,
       cell: (r) => `${formatExposure(r.exposureS)} (${formatNumber(r.shutterAngle)}°)`,
     },
-    { label: 'Looks', cell: (r) => lookWords(r.look, 1, r.apparentRpm) },
+    { label: 'Looks', cell: (r) => settingLook(r) },
     {
       label: 'Blur',
       numeric: true,
       cell: (r) => `${formatNumber(r.blurDegrees)}°, ${formatNumber(r.blurPitches)} pitch`,
     },
     { label: 'Bend', numeric: true, cell: (r) => `${formatNumber(r.skewDegrees)}°` },
+    {
+      label: 'Goal',
+      cell: (r) =>
+        r.reaches ? 'Reaches it' : `Fails: ${r.blocks.map((c) => CONDITION_NAMES[c]).join(', ')}`,
+    },
     { label: 'Score', numeric: true, cell: (r) => formatNumber(r.score, r.score < 10 ? 1 : 0) },
-    { label: 'What it looks like', cell: (r) => r.why },
+    { label: 'What it looks like', cell: (r) => settingWords(r, plan) },
     {
       label: 'Try it',
       action: true,
@@ -316,9 +332,12 @@ export function cameraCsv(plan: CameraPlan): string {
     { label: 'blur (pitches)', value: (r) => r.blurPitches },
     { label: 'rolling-shutter bend (°)', value: (r) => r.skewDegrees },
     { label: 'pattern contrast left', value: (r) => r.residualContrast },
+    { label: 'rolling-shutter bend (pitches)', value: (r) => r.skewPitches },
+    { label: 'readout longer than a frame', value: (r) => r.readoutLongerThanFrame },
     { label: 'reaches the goal', value: (r) => r.reaches },
+    { label: 'fails', value: (r) => r.blocks.join(' ') },
     { label: 'score', value: (r) => r.score },
-    { label: 'what it looks like', value: (r) => r.why },
+    { label: 'what it looks like', value: (r) => settingWords(r, plan) },
   ];
   return csvTable(columns, rows);
 }

@@ -1,11 +1,25 @@
 // The preview and the rate map, fed from the set-up on screen. Both load after the first paint
 // (lazy-widgets.ts); until then a placeholder of about their size holds their place.
-import { check } from '../../state/check';
+import { check, checkProblem } from '../../state/check';
+import { problemsAmong } from '../../state/fieldProblems';
+import { VERDICT_FIELDS } from './field-ids';
 import { flashUnit, setSamplerRateHz, setup } from '../../state/setup';
 import { Panel } from '../Panel';
 import { widgets as lazyWidgets } from './lazy-widgets';
 import { previewInputOf, rateMapInputOf } from './widget-inputs';
 import style from './style.module.css';
+
+/**
+ * The screen shows the stillness caution: for an aliased view, and while the verdict is
+ * withdrawn (nothing then says the view is true).
+ */
+function screenShowsSafety(): boolean {
+  return (
+    check.value.showSafety ||
+    problemsAmong(VERDICT_FIELDS).length > 0 ||
+    checkProblem.value !== undefined
+  );
+}
 
 /**
  * The part being checked as the sampler shows it, beside the part as it really turns. Its
@@ -21,7 +35,7 @@ export function CheckPreview() {
       {input === null ? (
         <p class={style.quiet}>Steady light samples nothing: the part looks as it really turns.</p>
       ) : widgets ? (
-        <widgets.Preview {...input} showCautions={!result.showSafety} />
+        <widgets.Preview {...input} showCautions={!screenShowsSafety()} />
       ) : (
         <div class={style.previewPlaceholder} data-testid="preview-placeholder">
           <div class={style.square} />
@@ -52,7 +66,7 @@ export function CheckRateMap() {
           {...input}
           onRateChange={setSamplerRateHz}
           flashUnit={flashUnit.value}
-          showCautions={!result.showSafety}
+          showCautions={!screenShowsSafety()}
         />
       ) : (
         <div class={style.mapPlaceholder} data-testid="rate-map-placeholder">

@@ -1,15 +1,18 @@
 import type { ComponentChildren } from 'preact';
 import { check, checkProblem } from '../../state/check';
+import { problemsAmong } from '../../state/fieldProblems';
 import { CameraReadout } from '../CameraReadout';
 import { Cautions } from '../Cautions';
 import { KeepShare } from '../KeepShare';
 import { LightingReadout } from '../LightingReadout';
+import { NotCurrent } from '../NotCurrent';
 import { PartForm } from '../PartForm';
 import { RateSuggestions } from '../RateSuggestions';
 import { SafeBands } from '../SafeBands';
 import { SamplerForm } from '../SamplerForm';
 import { VerdictPanel } from '../VerdictPanel';
 import { CheckPreview, CheckRateMap } from './connected-widgets';
+import { RESULT_FIELDS, VERDICT_FIELDS } from './field-ids';
 import style from './style.module.css';
 
 interface Props {
@@ -28,41 +31,64 @@ interface Props {
 /**
  * The check screen: enter the part and what looks at it, and see at once what the viewer
  * will see, which rates to use and which to avoid. On a phone one column, verdict first and
- * pinned to the top; on a desktop, entries on the left and results on the right. The rate map
- * sits under the rate it sets; the preview sits under the cautions that go with it.
+ * pinned to the top, its cautions right under it; on a desktop, entries on the left and
+ * results on the right. The rate map sits under the rate it sets; the preview sits under the
+ * cautions that go with it. While an entry is refused, the verdict is withdrawn and every
+ * result worked out from it is marked not current (physics.md §10).
  */
 export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap /> }: Props) {
-  const problem = checkProblem.value;
-  const notes = check.value.notes;
+  const refusal = checkProblem.value;
+  const r = check.value;
+  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
+  const stale = problemsAmong(RESULT_FIELDS);
   return (
     <div class={style.screen}>
       <div class={style.verdict}>
         <VerdictPanel />
       </div>
       <div class={style.warnings}>
-        <Cautions />
-        {(problem || notes.length > 0) && (
-          <ul class={style.notes} data-testid="check-notes">
-            {problem && (
-              <li>{problem} The results shown are for the last set-up that could be worked out.</li>
-            )}
-            {notes.map((n) => (
-              <li key={n}>{n}</li>
-            ))}
-          </ul>
+        {/* With the verdict withdrawn nothing says the view is true: keep the stillness caution. */}
+        <Cautions
+          show={{
+            safety: r.showSafety || withdrawn,
+            photosensitivity: r.showPhotosensitivity,
+          }}
+        />
+        {r.notes.length > 0 && (
+          <NotCurrent problems={stale} refusal={refusal}>
+            <ul class={style.notes} data-testid="check-notes">
+              {r.notes.map((n) => (
+                <li key={n}>{n}</li>
+              ))}
+            </ul>
+          </NotCurrent>
         )}
       </div>
       <div class={style.entries}>
         <PartForm />
         <SamplerForm />
-        {chart && <div class={style.slot}>{chart}</div>}
+        {chart && (
+          <div class={style.slot}>
+            <NotCurrent problems={stale} refusal={refusal}>
+              {chart}
+            </NotCurrent>
+          </div>
+        )}
       </div>
       <div class={style.results}>
-        {preview && <div class={style.slot}>{preview}</div>}
+        {preview && (
+          <div class={style.slot}>
+            <NotCurrent problems={stale} refusal={refusal}>
+              {preview}
+            </NotCurrent>
+          </div>
+        )}
         <RateSuggestions />
-        <SafeBands />
-        <CameraReadout />
-        <LightingReadout />
+        <NotCurrent problems={stale} refusal={refusal}>
+          <SafeBands />
+          <CameraReadout />
+          <LightingReadout />
+        </NotCurrent>
         <KeepShare />
       </div>
     </div>

@@ -15,11 +15,28 @@ const RISK_WORDS: Record<LightingResult['risk'], string> = {
   elevated: 'Above the low-risk line',
 };
 
-/** For lighting: the flicker, its risk class by IEEE Std 1789-2015 and its visibility (CIE TN 006:2016). */
+/** The light's shape in words, with a PWM light's duty. */
+function waveWords(l: LightingResult): string {
+  switch (l.wave.shape) {
+    case 'sine':
+      return 'Sine';
+    case 'rectangular':
+      return `PWM, on ${formatPercent(100 * (l.wave.dutyCycle ?? 0.5))} of each period`;
+    case 'rectified':
+      return 'Rectified mains';
+  }
+}
+
+/**
+ * For lighting: the flicker and its waveform, its risk class by IEEE Std 1789-2015, and its
+ * stroboscopic visibility (SVM, CIE TN 006:2016, with the threshold fit of Perz et al. 2018)
+ * from the light's harmonics up to 2 kHz.
+ */
 export function LightingReadout({ class: extra, lighting }: Props) {
   const l = lighting ?? check.value.lighting;
   if (!l) return null;
   const visible = l.svm >= 1;
+  const steady = l.modulationPercent === 0;
   return (
     <Panel title="The light" id="lighting-readout" class={extra}>
       <dl class={style.facts}>
@@ -27,6 +44,11 @@ export function LightingReadout({ class: extra, lighting }: Props) {
           <dt>Flicker</dt>
           <dd>
             {formatNumber(l.flickerHz)} Hz at {formatPercent(l.modulationPercent)}
+          </dd>
+          <dd class={style.words} data-testid="light-wave">
+            {waveWords(l)}
+            {!steady &&
+              `: its ${formatNumber(l.flickerHz)} Hz component swings ${formatPercent(100 * l.fundamental)} of the mean light (a sine of the same percent flicker: ${formatPercent(l.modulationPercent)})${l.harmonicCount > 1 ? `; ${l.harmonicCount} components up to 2 kHz counted` : ''}.`}
           </dd>
         </div>
         <div data-risk={l.risk}>
@@ -41,11 +63,15 @@ export function LightingReadout({ class: extra, lighting }: Props) {
           <dt>Stroboscopic visibility (SVM)</dt>
           <dd data-testid="svm">{formatNumber(l.svm, 2)}</dd>
           <dd class={style.words}>
-            {l.modulationPercent === 0
+            {steady
               ? 'Steady light: no stroboscopic effect.'
-              : visible
-                ? 'At or above 1: most people will see the effect (CIE TN 006:2016).'
-                : 'Below 1: most people will not notice the effect, but some will (CIE TN 006:2016).'}
+              : l.harmonicCount === 0
+                ? 'No component below 2 kHz: the measure counts none.'
+                : visible
+                  ? 'At or above 1: most people will see the effect.'
+                  : 'Below 1: most people will not notice the effect, but some will.'}{' '}
+            SVM as defined in CIE TN 006:2016, with the visibility threshold fit of Perz et al.,
+            JOSA A 35(2):309 (2018).
           </dd>
         </div>
       </dl>

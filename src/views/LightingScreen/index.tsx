@@ -8,7 +8,7 @@ import {
 import { formatNumber } from '../../lib/format';
 import { lighting, lightingCautions } from '../../state/lighting';
 import { openMachineName } from '../../state/openMachine';
-import { setup } from '../../state/setup';
+import { lightWaveOf, setup } from '../../state/setup';
 import { Cautions } from '../Cautions';
 import { LightingReadout } from '../LightingReadout';
 import { Panel } from '../Panel';
@@ -68,10 +68,17 @@ export function LightingScreen() {
     : [];
   const hazards = result ? result.parts.filter((p) => p.hazard) : [];
 
+  // The hazard is said once, here at the top with the verdict; the stillness caution under it
+  // is the one wording every screen shares (src/core/safetyCautions.ts).
   const summary = (
     <Panel title="Under this light" id="lighting-verdict">
       {result ? (
-        <div class={style.verdict} data-verdict={result.verdict}>
+        <div
+          class={style.verdict}
+          data-verdict={result.verdict}
+          role={hazards.length > 0 ? 'alert' : undefined}
+          data-testid={hazards.length > 0 ? 'lighting-hazard' : undefined}
+        >
           <p class={style.headline} data-testid="lighting-headline">
             {HEADLINES[result.verdict]}
           </p>
@@ -80,27 +87,12 @@ export function LightingScreen() {
       ) : (
         <p class={style.plain}>Nothing to show yet: {problem}</p>
       )}
-      {hazards.length > 0 && (
-        <div class={style.hazard} role="alert" data-testid="lighting-hazard">
-          <p class={style.shout}>HAZARD: DO NOT TRUST WHAT YOU SEE</p>
-          <p>
-            {hazards.map((p) => p.name).join(', ')} can look still or turn backward under this light
-            while {hazards.length === 1 ? 'it turns' : 'they turn'} at full speed, and people will
-            see it.
-          </p>
-        </div>
-      )}
     </Panel>
   );
 
   const warnings = (
     <>
       <Cautions show={cautionFlags(cautions)} />
-      {problem && result && (
-        <p class={style.problem} role="alert" data-testid="lighting-problem">
-          {problem} The results shown are for the last set-up that could be worked out.
-        </p>
-      )}
     </>
   );
 
@@ -127,6 +119,9 @@ export function LightingScreen() {
             risk: result.risk,
             lowRiskPercent: result.lowRiskPercent,
             noEffectPercent: result.noEffectPercent,
+            wave: lightWaveOf(s.lighting),
+            fundamental: result.harmonics[0]?.amplitude ?? 0,
+            harmonicCount: result.harmonics.length,
             svm: result.svm,
           }}
         />
@@ -178,6 +173,7 @@ export function LightingScreen() {
       entries={entries}
       results={results}
       report={report}
+      withdraw={{ refusal: problem }}
     />
   );
 }

@@ -118,11 +118,6 @@ export function LoggerScreen() {
       <p class={style.statement} data-testid="alias-note">
         {ALIAS_AFTER_CONVERTER_NOTE}
       </p>
-      {problem && plan && (
-        <p class={style.problem} role="alert" data-testid="logger-problem">
-          {problem} The results shown are for the last entries that could be worked out.
-        </p>
-      )}
     </>
   );
 
@@ -317,6 +312,7 @@ export function LoggerScreen() {
       entries={entries}
       results={results}
       report={report}
+      withdraw={{ refusal: problem }}
     />
   );
 }

@@ -120,14 +120,11 @@ export function MachineChainScreen(_props: Props) {
   const warnings = (
     <>
       <Cautions show={cautionFlags(cautions)} />
-      {[...new Set([chainProblem, ratesProblem, editProblem])].filter(Boolean).map((message) => (
-        <p key={message} class={style.problem} role="alert" data-testid="chain-problem">
-          {message}{' '}
-          {message === editProblem
-            ? 'Nothing was changed.'
-            : 'The results shown are for the last entries that could be worked out.'}
+      {editProblem && (
+        <p class={style.problem} role="alert" data-testid="chain-problem">
+          {editProblem} Nothing was changed.
         </p>
-      ))}
+      )}
     </>
   );
 
@@ -316,6 +313,7 @@ export function MachineChainScreen(_props: Props) {
       warnings={warnings}
       entries={entries}
       results={results}
+      withdraw={{ refusal: chainProblem ?? ratesProblem }}
     />
   );
 }

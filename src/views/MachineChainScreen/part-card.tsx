@@ -24,7 +24,10 @@ import {
 } from '../../state/model';
 import { ChoiceGroup } from '../ChoiceGroup';
 import { MotorFields } from '../MotorFields';
+import { problemsAmong } from '../../state/fieldProblems';
+import { fieldNames } from '../NotCurrent';
 import { NumberField } from '../NumberField';
+import { useReportedProblem } from '../NumberField/text-field';
 import { readBeltSlipPercent, readGroundSpeed, readPulleyMm, readTyreSize } from './chain-fields';
 import style from './style.module.css';
 
@@ -51,7 +54,11 @@ const NEW_DRIVE: { belt: PartDrive; gear: PartDrive } = {
 export function PartCard({ setup, index, derived, onProblem }: Props) {
   const part = setup.parts[index];
   const source = speedSourceOf(part);
+  // Any refused entry on the page may feed this part's speed along the chain.
+  const stale = problemsAmong();
   const id = (field: string) => `part-${index}-${field}`;
+  // Several parts share labels ("Speed"): a "fix …" note names the part too.
+  const named = (label: string) => `${partLabel(setup, index)}: ${label}`;
   const act = (edit: (s: Setup) => Setup) => {
     try {
       editChain(edit);
@@ -80,6 +87,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
       <NumberField
         id={id('features')}
         label="Blades or marks"
+        name={named('Blades or marks')}
         value={part.features}
         toText={numberForField}
         read={readFeatures}
@@ -96,6 +104,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         <NumberField
           id={id('speed')}
           label="Speed"
+          name={named('Speed')}
           value={part.speedRpm}
           toText={numberForField}
           read={(text) => readSpeedRpm(text, 'rpm')}
@@ -107,6 +116,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         <div class={style.group}>
           <MotorFields
             id={id}
+            name={named}
             motor={part.motor}
             onMotor={(m) => act((s) => withMotor(s, index, m))}
           />
@@ -115,6 +125,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
       {source === 'wheel' && part.wheel && (
         <WheelFields
           id={id}
+          named={named}
           wheel={part.wheel}
           onWheel={(w) => act((s) => withWheel(s, index, w))}
         />
@@ -122,6 +133,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
       {source === 'drive' && part.drive && (
         <DriveFields
           id={id}
+          named={named}
           setup={setup}
           index={index}
           drive={part.drive}
@@ -132,6 +144,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         <NumberField
           id={id('tolerance')}
           label="Tolerance"
+          name={named('Tolerance')}
           value={part.tolerancePercent}
           toText={numberForField}
           read={readTolerancePercent}
@@ -140,7 +153,12 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         />
       )}
       <p class={style.derived} data-testid={`chain-speed-${index}`}>
-        {derived ? speedWords(derived) : 'Speed not worked out: see the message above.'}
+        {/* A speed carried from a refused entry is not the one on screen (physics.md §10). */}
+        {stale.length > 0
+          ? `Not current: fix ${fieldNames(stale)} first.`
+          : derived
+            ? speedWords(derived)
+            : 'Speed not worked out: see the message above.'}
       </p>
       {setup.parts.length > 1 && (
         <button
@@ -195,11 +213,13 @@ function NameField({
 
 interface WheelProps {
   id: (field: string) => string;
+  /** A field's name in a "fix …" note, from its label. */
+  named: (label: string) => string;
   wheel: WheelSpec;
   onWheel: (wheel: WheelSpec) => void;
 }
 
-function WheelFields({ id, wheel, onWheel }: WheelProps) {
+function WheelFields({ id, named, wheel, onWheel }: WheelProps) {
   // Another unit keeps the same ground speed.
   const changeUnit = (unit: WheelSpec['unit']) => {
     if (unit === wheel.unit) return;
@@ -211,6 +231,7 @@ function WheelFields({ id, wheel, onWheel }: WheelProps) {
       <NumberField
         id={id('ground')}
         label="Ground speed"
+        name={named('Ground speed')}
         value={wheel.groundSpeed}
         unitKey={wheel.unit}
         toText={numberForField}
@@ -232,6 +253,7 @@ function WheelFields({ id, wheel, onWheel }: WheelProps) {
       />
       <TyreField
         id={id('tyre')}
+        name={named('Tyre size')}
         size={wheel.tyreSize}
         onSize={(tyreSize) => onWheel({ ...wheel, tyreSize })}
       />
@@ -242,10 +264,13 @@ function WheelFields({ id, wheel, onWheel }: WheelProps) {
 /** A tyre size, checked at each keystroke like a number field: bad text keeps the last good size. */
 function TyreField({
   id,
+  name,
   size,
   onSize,
 }: {
   id: string;
+  /** The field's name in a "fix …" note: which part's tyre. */
+  name: string;
   size: string;
   onSize: (size: string) => void;
 }) {
@@ -254,6 +279,7 @@ function TyreField({
     (shown) => shown.trim() === size,
     () => size,
   );
+  useReportedProblem(id, name, message);
   const onInput = (event: Event) => {
     const next = (event.currentTarget as HTMLInputElement).value;
     // readField turns the core's refusal into a sentence (and rethrows anything else).
@@ -295,13 +321,15 @@ function TyreField({
 
 interface DriveProps {
   id: (field: string) => string;
+  /** A field's name in a "fix …" note, from its label. */
+  named: (label: string) => string;
   setup: Setup;
   index: number;
   drive: PartDrive;
   onDrive: (drive: PartDrive) => void;
 }
 
-function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
+function DriveFields({ id, named, setup, index, drive, onDrive }: DriveProps) {
   const kinds: Array<{ value: PartDrive['kind']; label: string }> = [
     { value: 'belt', label: 'Belt' },
     { value: 'gear', label: 'Gears' },
@@ -347,6 +375,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
             <NumberField
               id={id('driver-mm')}
               label="Driver pulley"
+              name={named('Driver pulley')}
               value={drive.driverMm}
               toText={numberForField}
               read={(text) => readPulleyMm(text, 'driver pulley')}
@@ -356,6 +385,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
             <NumberField
               id={id('driven-mm')}
               label="Driven pulley"
+              name={named('Driven pulley')}
               value={drive.drivenMm}
               toText={numberForField}
               read={(text) => readPulleyMm(text, 'driven pulley')}
@@ -366,6 +396,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
           <NumberField
             id={id('belt-slip')}
             label="Belt slip"
+            name={named('Belt slip')}
             value={drive.slipPercent}
             toText={numberForField}
             read={readBeltSlipPercent}
@@ -381,6 +412,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
             <NumberField
               id={id('driver-teeth')}
               label="Driver teeth"
+              name={named('Driver teeth')}
               value={drive.driverTeeth}
               toText={numberForField}
               read={readTeeth}
@@ -389,6 +421,7 @@ function DriveFields({ id, setup, index, drive, onDrive }: DriveProps) {
             <NumberField
               id={id('driven-teeth')}
               label="Driven teeth"
+              name={named('Driven teeth')}
               value={drive.drivenTeeth}
               toText={numberForField}
               read={readTeeth}

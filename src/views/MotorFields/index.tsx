@@ -12,13 +12,15 @@ interface Props {
   id: (field: string) => string;
   motor: Motor;
   onMotor: (motor: Motor) => void;
+  /** A field's name in a "fix …" note, from its label, where several motors share a page. */
+  name?: (label: string) => string;
 }
 
 /**
  * An induction motor's nameplate: mains frequency, poles and slip. The caller wraps it and
  * says what the speed comes to; the part editor and the whole-machine screen both use it.
  */
-export function MotorFields({ id, motor, onMotor }: Props) {
+export function MotorFields({ id, motor, onMotor, name = (label) => label }: Props) {
   return (
     <>
       <ChoiceGroup
@@ -35,6 +37,7 @@ export function MotorFields({ id, motor, onMotor }: Props) {
         <NumberField
           id={id('poles')}
           label="Poles"
+          name={name('Poles')}
           value={motor.poles}
           toText={numberForField}
           read={readPoles}
@@ -43,6 +46,7 @@ export function MotorFields({ id, motor, onMotor }: Props) {
         <NumberField
           id={id('slip')}
           label="Slip"
+          name={name('Slip')}
           value={motor.slipPercent}
           toText={numberForField}
           read={readSlipPercent}

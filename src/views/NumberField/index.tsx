@@ -19,6 +19,8 @@ interface Props {
   unit?: ComponentChildren;
   /** A short help line under the field. */
   hint?: ComponentChildren;
+  /** The field's name in a "fix …" note, when the label alone is ambiguous on its page. */
+  name?: string;
   /** Changes when the unit changes, so the text is rewritten in the new unit. */
   unitKey?: string;
   disabled?: boolean;
@@ -41,6 +43,7 @@ export function NumberField({
   hint,
   unitKey,
   disabled,
+  name,
 }: Props) {
   const { text, message, edit } = useFollowingText(
     `${value} ${unitKey ?? ''}`,
@@ -69,6 +72,7 @@ export function NumberField({
       unit={unit}
       hint={hint}
       disabled={disabled}
+      name={name}
     />
   );
 }

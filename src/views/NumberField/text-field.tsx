@@ -1,6 +1,8 @@
 // What a number field and a number-list field share: the look (label, input, unit, message,
 // hint) and the test of whether typed text still says the value held.
 import type { ComponentChildren } from 'preact';
+import { useLayoutEffect } from 'preact/hooks';
+import { reportFieldProblem } from '../../state/fieldProblems';
 import style from './style.module.css';
 
 /** Equal, or equal but for floating-point noise (a value read back from its own text). */
@@ -21,9 +23,33 @@ interface Props {
   unit?: ComponentChildren;
   hint?: ComponentChildren;
   disabled?: boolean;
+  /**
+   * The field's name where a result says "fix …" (src/state/fieldProblems.ts): the label when
+   * it is plain text, unless the label alone is ambiguous on its page ("Speed" of which part).
+   */
+  name?: string;
 }
 
-/** A labelled text input with its unit, its refusal message and a help line, tied by aria. */
+/**
+ * Keeps the page's list of refused fields (src/state/fieldProblems.ts) in step with a field:
+ * listed under `id` with its `name` while `message` says its text is refused, gone when the
+ * text is good again, is rewritten from outside, or the field leaves the page. A layout effect
+ * runs before the browser paints, so no painted frame shows a result that this field's refused
+ * text has already made stale.
+ */
+export function useReportedProblem(id: string, name: string, message: string | null): void {
+  useLayoutEffect(() => {
+    reportFieldProblem(id, message ? { label: name, message } : null);
+  }, [id, name, message]);
+  useLayoutEffect(() => () => reportFieldProblem(id, null), [id]);
+}
+
+/**
+ * A labelled text input with its unit, its refusal message and a help line, tied by aria.
+ * While its text is refused it says so in the page's list of refused fields, so every result
+ * worked out from its last good value can be withdrawn; the entry goes when the text is good
+ * again, is rewritten from outside, or the field leaves the page.
+ */
 export function TextField({
   id,
   label,
@@ -34,7 +60,9 @@ export function TextField({
   unit,
   hint,
   disabled,
+  name,
 }: Props) {
+  useReportedProblem(id, name ?? (typeof label === 'string' ? label : id), message);
   const messageId = `${id}-message`;
   const hintId = `${id}-hint`;
   const describedBy =

@@ -18,6 +18,8 @@ interface Props {
   onValues: (values: number[]) => void;
   unit?: ComponentChildren;
   hint?: ComponentChildren;
+  /** The field's name in a "fix …" note, when the label alone is ambiguous on its page. */
+  name?: string;
 }
 
 function sameList(a: readonly number[], b: readonly number[]): boolean {
@@ -29,7 +31,17 @@ function sameList(a: readonly number[], b: readonly number[]): boolean {
  * number field: a good list goes straight through, bad text gets a message beside the field and
  * leaves the list (and the results) as they were.
  */
-export function NumberListField({ id, label, values, toText, read, onValues, unit, hint }: Props) {
+export function NumberListField({
+  id,
+  label,
+  values,
+  toText,
+  read,
+  onValues,
+  unit,
+  hint,
+  name,
+}: Props) {
   // Keyed on the numbers, not the array, which a caller may rebuild at every render.
   const { text, message, edit } = useFollowingText(
     values.join(' '),
@@ -57,6 +69,7 @@ export function NumberListField({ id, label, values, toText, read, onValues, uni
       inputMode="text"
       unit={unit}
       hint={hint}
+      name={name}
     />
   );
 }

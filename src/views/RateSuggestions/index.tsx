@@ -1,7 +1,10 @@
 import { formatNumber, numberForField } from '../../lib/format';
 import { readCreepRpm } from '../../lib/fields';
 import { formatRate, formatRateSpan } from '../../lib/rates';
-import { check, type CreepRate, type SuggestedRate } from '../../state/check';
+import { check, checkProblem, type CreepRate, type SuggestedRate } from '../../state/check';
+import { problemsAmong } from '../../state/fieldProblems';
+import { CREEP_FIELDS, RESULT_FIELDS } from '../CheckScreen/field-ids';
+import { NotCurrent } from '../NotCurrent';
 import { flashUnit, setCreepRpm, setSamplerRateHz, setup } from '../../state/setup';
 import { NumberField } from '../NumberField';
 import { Panel } from '../Panel';
@@ -31,27 +34,31 @@ export function RateSuggestions({ class: extra }: Props) {
   const rate = (hz: number) => formatRate(hz, kind, unit);
   const span = (fromHz: number, toHz: number) => formatRateSpan(fromHz, toHz, kind, unit);
   const tolerance = r.part.tolerance > 0;
+  // Rates worked out from a refused entry are marked not current, out of reach (physics.md §10).
+  const refusal = checkProblem.value;
   return (
     <Panel title="Rates to try" id="suggestions" class={extra}>
       <div class={style.block}>
         <h3 class={style.subtitle}>
           {r.sampler === 'frames' ? 'Rates that freeze it' : 'Lock-in rates nearby'}
         </h3>
-        {r.locks.length === 0 ? (
-          <p class={style.none}>
-            {r.part.speedHz === 0
-              ? 'The part is not turning.'
-              : 'None near this rate in the range.'}
-          </p>
-        ) : (
-          <ul class={style.list} data-testid="lock-list">
-            {r.locks.map((l) => (
-              <li key={`${l.rateHz}-${l.images}`}>
-                <LockButton lock={l} rate={rate} span={span} tolerance={tolerance} />
-              </li>
-            ))}
-          </ul>
-        )}
+        <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={refusal}>
+          {r.locks.length === 0 ? (
+            <p class={style.none}>
+              {r.part.speedHz === 0
+                ? 'The part is not turning.'
+                : 'None near this rate in the range.'}
+            </p>
+          ) : (
+            <ul class={style.list} data-testid="lock-list">
+              {r.locks.map((l) => (
+                <li key={`${l.rateHz}-${l.images}`}>
+                  <LockButton lock={l} rate={rate} span={span} tolerance={tolerance} />
+                </li>
+              ))}
+            </ul>
+          )}
+        </NotCurrent>
         <p class={style.help}>
           {r.sampler === 'frames'
             ? 'At these frame rates each frame catches the features in the same place.'
@@ -70,28 +77,30 @@ export function RateSuggestions({ class: extra }: Props) {
           onValue={setCreepRpm}
           unit="rpm"
         />
-        {r.creep.length > 0 ? (
-          <ul class={style.list} data-testid="creep-list">
-            {r.creep.map((c) => (
-              <li key={c.rateHz}>
-                <button
-                  type="button"
-                  class={style.rate}
-                  data-side={c.side}
-                  onClick={() => setSamplerRateHz(c.rateHz)}
-                >
-                  <span class={style.value}>{rate(c.rateHz)}</span>
-                  <span class={style.what}>
-                    {c.images > 1 ? `${imagesText(c.images)}, ` : ''}
-                    {LOOK_WORDS[c.look]}
-                  </span>
-                </button>
-              </li>
-            ))}
-          </ul>
-        ) : (
-          <p class={style.none}>{r.creepNote}</p>
-        )}
+        <NotCurrent problems={problemsAmong(CREEP_FIELDS)} refusal={refusal}>
+          {r.creep.length > 0 ? (
+            <ul class={style.list} data-testid="creep-list">
+              {r.creep.map((c) => (
+                <li key={c.rateHz}>
+                  <button
+                    type="button"
+                    class={style.rate}
+                    data-side={c.side}
+                    onClick={() => setSamplerRateHz(c.rateHz)}
+                  >
+                    <span class={style.value}>{rate(c.rateHz)}</span>
+                    <span class={style.what}>
+                      {c.images > 1 ? `${imagesText(c.images)}, ` : ''}
+                      {LOOK_WORDS[c.look]}
+                    </span>
+                  </button>
+                </li>
+              ))}
+            </ul>
+          ) : (
+            <p class={style.none}>{r.creepNote}</p>
+          )}
+        </NotCurrent>
         <p class={style.help}>
           The part seems to turn forward at {formatNumber(r.creepRpm)} rpm: slow enough to inspect,
           and its direction stays right.

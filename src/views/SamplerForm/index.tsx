@@ -4,14 +4,17 @@ import {
   readFlashRateFpm,
   readFlickerHz,
   readFrameRate,
+  readDutyPercent,
   readModulationPercent,
   readReadoutMs,
   readShutterAngle,
 } from '../../lib/fields';
-import type { SamplerKind } from '../../state/model';
+import { DEFAULT_DUTY_PERCENT, type LightWaveform, type SamplerKind } from '../../state/model';
 import {
   flashUnit,
   setCustomFlickerHz,
+  setDutyPercent,
+  setWaveform,
   setExposureSeconds,
   setFlickerMode,
   setFrameRate,
@@ -189,9 +192,25 @@ function StrobeFields() {
   );
 }
 
-/** Mains, flicker and modulation of the set-up's lighting (also used by the lighting check). */
+const WAVEFORMS: ReadonlyArray<{ value: LightWaveform; label: string }> = [
+  { value: 'sine', label: 'Sine' },
+  { value: 'rectangular', label: 'PWM (on–off)' },
+  { value: 'rectified', label: 'Rectified mains' },
+];
+
+/** How the percent flicker sets each shape's levels (physics.md §6), in a line under the choice. */
+const WAVEFORM_NOTES: Record<LightWaveform, string> = {
+  sine: 'A smooth swing between max and min: its flicker component is the percent flicker itself.',
+  rectangular:
+    'Switches between max and min; at 100 % it goes fully off. Its harmonics count too: a 50 % square wave flickers 4/π times as strongly as a sine.',
+  rectified:
+    'Humps of a rectified sine sitting on the min level (a plain driver; 100 % = no smoothing at all). Its harmonics count too.',
+};
+
+/** Mains, flicker, modulation and waveform of the set-up's lighting (also used by the lighting check). */
 export function LightingFields() {
   const lighting = setup.value.lighting;
+  const waveform = lighting.waveform ?? 'sine';
   return (
     <div class={style.fields}>
       <ChoiceGroup
@@ -237,6 +256,26 @@ export function LightingFields() {
         unit="%"
         hint="100 × (max − min) ÷ (max + min) of the light level. 0 = steady light."
       />
+      <ChoiceGroup
+        legend="Light waveform"
+        name="waveform"
+        options={WAVEFORMS}
+        value={waveform}
+        onChange={setWaveform}
+      />
+      {waveform === 'rectangular' && (
+        <NumberField
+          id="duty"
+          label="Duty cycle"
+          value={lighting.dutyPercent ?? DEFAULT_DUTY_PERCENT}
+          toText={numberForField}
+          read={readDutyPercent}
+          onValue={setDutyPercent}
+          unit="%"
+          hint="Share of each period the light is at its high level; 50 % = a square wave."
+        />
+      )}
+      <p class={style.note}>{WAVEFORM_NOTES[waveform]}</p>
     </div>
   );
 }

@@ -175,6 +175,7 @@ export function SpeedFinderScreen(_props: Props) {
       warnings={warnings}
       entries={entries}
       results={results}
+      withdraw={{ except: ['new-reading-rate'] }}
     />
   );
 }

@@ -1,7 +1,10 @@
 import { formatRpmWithDirection, formatNumber } from '../../lib/format';
 import { formatRate } from '../../lib/rates';
-import { check } from '../../state/check';
+import { check, checkProblem } from '../../state/check';
+import { problemsAmong } from '../../state/fieldProblems';
 import { activePart, flashUnit } from '../../state/setup';
+import { VERDICT_FIELDS } from '../CheckScreen/field-ids';
+import { Withdrawn } from '../NotCurrent';
 import { TrustMark } from '../TrustMark';
 import style from './style.module.css';
 
@@ -15,8 +18,36 @@ const SAMPLER_WORDS = {
   lighting: 'light flickering at',
 } as const;
 
-/** What the viewer will see, in big words: the verdict, the apparent speed and the true speed. */
+/**
+ * What the viewer will see, in big words: the verdict, the apparent speed and the true speed.
+ * While a field the verdict reads is refused, or the core refuses the set-up, the verdict is
+ * withdrawn in its place and says what to fix (physics.md §10): never the last good answer for
+ * a value no longer on screen.
+ */
 export function VerdictPanel({ class: extra }: Props) {
+  const problems = problemsAmong(VERDICT_FIELDS);
+  const refusal = checkProblem.value;
+  if (problems.length > 0 || refusal !== undefined) {
+    return (
+      <section
+        class={`${style.verdict} ${extra ?? ''}`}
+        data-trust="withdrawn"
+        aria-labelledby="verdict-title"
+      >
+        <h2 id="verdict-title" class={style.title}>
+          What you will see
+        </h2>
+        <div role="status" aria-live="polite" aria-atomic="true">
+          <Withdrawn
+            problems={problems}
+            refusal={problems.length > 0 ? undefined : refusal}
+            what="verdict"
+            testId="verdict"
+          />
+        </div>
+      </section>
+    );
+  }
   const r = check.value;
   const v = r.verdict;
   const sign = v.trueRpm < 0 ? -1 : 1;
