@@ -132,3 +132,33 @@ function normalise(x: Float64Array): Float64Array {
   for (let i = 0; i < x.length; i++) x[i] *= g;
   return x;
 }
+
+/**
+ * The sound of a 6-blade fan at 1750 rpm on a 50 Hz site: blade pass at 175 Hz with two
+ * harmonics, a faint shaft line, 100 Hz hum, pink noise 10 dB down, the speed drifting 0.1 %.
+ * Invented test data (the fan of the issue's browser check), peak 0.5 of full scale.
+ */
+export function fanAt1750Rpm(sampleRateHz = 48_000, durationS = 6, seed = 1750): Float32Array {
+  const random = seededRandom(seed);
+  const samples = machineSound(
+    {
+      sampleRateHz,
+      durationS,
+      speedHz: 1750 / 60,
+      drift: 0.001,
+      lines: [
+        { order: 6, amplitude: 1, phase: 0.4 },
+        { order: 12, amplitude: 0.45, phase: 2.1 },
+        { order: 18, amplitude: 0.2, phase: 4.0 },
+        { order: 1, amplitude: 0.08, phase: 1.3 },
+      ],
+      hum: { mainsHz: 50, lines: [{ order: 2, amplitude: 0.6, phase: 0.9 }] },
+      noise: { colour: 'pink', snrDb: 10 },
+    },
+    random,
+  );
+  let peak = 0;
+  for (const v of samples) peak = Math.max(peak, Math.abs(v));
+  for (let i = 0; i < samples.length; i++) samples[i] *= 0.5 / peak;
+  return samples;
+}

@@ -4,7 +4,7 @@ import { InputError } from '../InputError';
 export interface RecordingLevel {
   /** Largest |sample|. */
   peak: number;
-  /** Root-mean-square level in dB relative to full scale (−Infinity is never returned: at least −400). */
+  /** Root-mean-square level, dB relative to full scale (a full-scale sine reads −3.01 dB; silence −400, never −Infinity). */
   rmsDbfs: number;
   /** Share of samples at or within 0.1 % of full scale. */
   fullScaleFraction: number;
@@ -18,13 +18,15 @@ export interface RecordingLevel {
 export const SILENCE_DBFS = 20 * Math.log10(1 / 32768);
 /** Share of full-scale samples from which a recording counts as clipped (a judgement). */
 export const CLIPPED_FRACTION = 0.001;
+/** Largest |sample| accepted: audio is scaled to ±1, and a little over it after processing; a thousand times over is not audio. */
+const MAX_SAMPLE = 1000;
 /** |x| from which a sample counts as full scale. */
 const FULL_SCALE = 0.999;
 
 /**
- * The level of `samples` (a recording scaled to ±1, as the Web Audio API delivers it), and
- * whether it is silent or clipped. Throws InputError naming the first sample that is not a
- * number, so that no NaN reaches the spectrum.
+ * The level of samples[from…to) (a recording scaled to ±1, as the Web Audio API delivers it),
+ * and whether it is silent or clipped. Throws InputError naming the first sample that is not a
+ * number or lies beyond ±1000, so that no NaN or overflow reaches the spectrum.
  * @example recordingLevel(new Float32Array([0.5, -0.5])).rmsDbfs // -6.02…
  */
 export function recordingLevel(
@@ -37,10 +39,10 @@ export function recordingLevel(
   let fullScale = 0;
   for (let i = from; i < to; i++) {
     const x = samples[i];
-    if (typeof x !== 'number' || !Number.isFinite(x)) {
+    if (typeof x !== 'number' || !(Math.abs(x) <= MAX_SAMPLE)) {
       throw new InputError(
         'recording',
-        `The recording is damaged: sample ${i + 1} is not a number. Record again or pick another file.`,
+        `The recording is damaged: sample ${i + 1} is ${typeof x === 'number' && Number.isFinite(x) ? 'far beyond full scale' : 'not a number'}. Record again or pick another file.`,
       );
     }
     const a = Math.abs(x);

@@ -28,6 +28,11 @@ const SPAN_RATIO = 1000;
  * line are shallower, while two lines three bins apart dip about 20 dB between them.
  */
 const VALLEY_RATIO = 10;
+/**
+ * Lines more than this below the loudest bin are rounding, not sound: samples carry at most
+ * 24 bits (144 dB), and arithmetic on them a little less (a judgement).
+ */
+const DYNAMIC_RANGE_DB = 120;
 /** Most lines kept, strongest first: more than any machine shows, and it bounds the tone finder's work. */
 export const MAX_PEAKS = 400;
 /** Narrowest block (bins) over which the noise floor is taken. */
@@ -79,7 +84,8 @@ export const TINY_POWER = 1e-30;
 
 /**
  * The lines of `power` between bins firstBin and lastBin, at most MAX_PEAKS (the strongest),
- * in order of frequency. A line is a local maximum at least LINE_PROMINENCE_DB above `floor`,
+ * in order of frequency. A line is a local maximum at least LINE_PROMINENCE_DB above `floor`
+ * (and within 120 dB of the loudest bin),
  * with the bins around it down to 30 dB below it (or to twice the floor, or to a valley
  * more than 10 dB deep): a steady line fills 3–5 such bins (the Hann main lobe, ±2 bins to its nulls, Harris 1978). Lesser maxima
  * inside that span are ripples of the same line, not lines: a line whose speed drifted is
@@ -106,10 +112,14 @@ export function findPeaks(
   const minRatio = 10 ** (LINE_PROMINENCE_DB / 10);
   const lo = Math.max(1, firstBin);
   const hi = Math.min(power.length - 2, lastBin);
+  let loudest = 0;
+  for (let k = lo; k <= hi; k++) loudest = Math.max(loudest, power[k]);
+  const quietest = loudest * 10 ** (-DYNAMIC_RANGE_DB / 10);
   const maxima: number[] = [];
   for (let k = lo; k <= hi; k++) {
     const p = power[k];
-    if (p > power[k - 1] && p >= power[k + 1] && p >= minRatio * floor[k]) maxima.push(k);
+    if (p > power[k - 1] && p >= power[k + 1] && p >= minRatio * floor[k] && p >= quietest)
+      maxima.push(k);
   }
   maxima.sort((a, b) => power[b] - power[a]);
   const claimed = new Uint8Array(power.length);

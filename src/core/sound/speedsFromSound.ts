@@ -16,8 +16,8 @@ export interface SpeedsFromSoundOptions {
 
 /**
  * How sure a candidate is, as a code (the UI words it):
- * - 'clear': the leader, two or more lines agree, and no other speed scores half as well;
- * - 'likely': the leader, but another speed scores at least half as well, or one line only;
+ * - 'clear': the leader, two or more lines agree, and no other speed scores 60 % as well;
+ * - 'likely': the leader, but another speed scores at least 60 % as well, or one line only;
  * - 'tied': another speed fits (nearly) as well: the sound alone cannot choose;
  * - 'possible': fits clearly worse than the leader, kept because it still explains lines;
  * - 'faint': its strongest line stands less than 16 dB above the noise.
@@ -88,6 +88,12 @@ const SHAFT_WEIGHT = 0.5;
  * counts a little against.
  */
 const ABSENT_FLOORS = 2;
+/** Share of the next present harmonic's amplitude a hole in a blade-pass series costs (a judgement). */
+const HOLE_SHARE = 0.5;
+/** Share of its amplitude a line halfway or a third of the way between blade-pass lines costs when the comb leaves it unexplained (a judgement). */
+const UNEXPLAINED_SHARE = 0.5;
+/** How close (bins) to such a fraction a line must sit to count. */
+const FRACTION_BINS = 1.5;
 /** Seeds kept for refinement: local maxima scoring at least this share of the best. */
 const SEED_SHARE = 0.2;
 const MAX_SEEDS = 40;
@@ -97,7 +103,7 @@ const MAX_CANDIDATES = 8;
 /** Another candidate at or above this share of a candidate's score ties with it. */
 const TIED_SHARE = 0.9;
 /** The leader is 'clear' when the runner-up scores below this share. */
-const CLEAR_SHARE = 0.5;
+const CLEAR_SHARE = 0.6;
 /** A candidate whose strongest line stands less than this above the floor is 'faint'. */
 const FAINT_DB = 16;
 /** Two candidates closer than this (relative) are one. */
@@ -175,7 +181,7 @@ export function speedsFromSound(
       fit.speedHz > range.maxHz * (1 + SAME_SPEED)
     )
       continue;
-    const score = comb.lineScore(fit.speedHz, fit.fitted);
+    const score = comb.lineScore(fit.speedHz, fit.fitted, usable);
     if (!(score > 0)) continue;
     if (found.some((c) => Math.abs(c.speedHz - fit.speedHz) <= SAME_SPEED * fit.speedHz)) {
       const twin = found.find(
@@ -218,6 +224,8 @@ class Comb {
   private readonly orders: Array<{ order: number; weight: number; kind: 'pattern' | 'shaft' }>;
   private readonly binHz: number;
   private readonly floor: Float64Array;
+  private readonly mask: Uint8Array;
+  private readonly n: number;
   private readonly lowHz: number;
   private readonly highHz: number;
 
@@ -225,6 +233,8 @@ class Comb {
     const { power, floor, binHz } = spectrum;
     this.binHz = binHz;
     this.floor = floor;
+    this.mask = mask;
+    this.n = n;
     this.lowHz = spectrum.minToneHz;
     this.highHz = spectrum.maxToneHz;
     // Evidence per bin: the largest amplitude within ±1 bin (a line between bins, or a grid
@@ -267,18 +277,54 @@ class Comb {
   }
 
   /**
-   * The harmonic sum at a fitted speed, from the lines the fit kept: each kept line counts its
-   * amplitude less ABSENT_FLOORS floor amplitudes; every other order of the comb in the band
-   * counts as absent (at most zero: a line nearby that the fit rejected is not this comb's).
+   * The harmonic sum at a fitted speed, from the lines the fit kept, with two checks that a
+   * plain harmonic sum lacks (in the spirit of the two-way mismatch of R. C. Maher & J. W.
+   * Beauchamp, "Fundamental frequency estimation of musical signals using a two-way mismatch
+   * procedure", J. Acoust. Soc. Am. 95(4), 1994: predicted lines that are missing, and
+   * measured lines left unexplained, both count against):
+   * - each kept line counts its amplitude less ABSENT_FLOORS floor amplitudes; every other
+   *   order in the band counts as absent (at most zero);
+   * - a hole in the blade-pass series (a pattern harmonic missing below a present one, the
+   *   fundamental included) costs HOLE_SHARE of the next present harmonic's amplitude: a comb
+   *   at half the speed finds every other harmonic missing;
+   * - a line at a half or a third of the way between the comb's blade-pass lines (below its
+   *   first one included), that the comb does not explain, costs UNEXPLAINED_SHARE of its
+   *   amplitude: a comb at twice (three times) the speed leaves those lines of the true one
+   *   unexplained. Lines elsewhere (another machine's) do not count.
+   * Lines under hum are neither.
    */
-  lineScore(speedHz: number, lines: FitLine[]): number {
+  lineScore(speedHz: number, lines: FitLine[], peaks: SpectrumPeak[]): number {
+    const pattern = lines.filter((l) => l.kind === 'pattern').sort((a, b) => a.order - b.order);
     let sum = 0;
-    for (const { order, weight } of this.orders) {
+    for (const { order, weight, kind } of this.orders) {
       const x = order * speedHz;
       if (x < this.lowHz || x > this.highHz) continue;
       const line = lines.find((l) => l.order === order);
-      if (line) sum += weight * (line.amplitude - ABSENT_FLOORS * Math.sqrt(this.floor[line.bin]));
-      else sum += weight * Math.min(0, this.evidence[Math.round(x / this.binHz)]);
+      if (line) {
+        sum += weight * (line.amplitude - ABSENT_FLOORS * Math.sqrt(this.floor[line.bin]));
+        continue;
+      }
+      const bin = Math.round(x / this.binHz);
+      if (this.mask[bin]) continue;
+      sum += weight * Math.min(0, this.evidence[bin]);
+      if (kind !== 'pattern') continue;
+      const above = pattern.find((l) => l.order > order);
+      if (above) sum -= weight * HOLE_SHARE * above.amplitude;
+    }
+    if (pattern.length === 0) return sum;
+    const toneHz = this.n * speedHz;
+    // From below the comb's first line (a line at half of it is the tell-tale of a comb at
+    // twice the speed) to one step past its last.
+    const lowest = 0.4 * toneHz;
+    const highest = pattern[pattern.length - 1].hz + toneHz;
+    for (const p of peaks) {
+      if (p.hz <= lowest || p.hz >= highest || lines.some((l) => l.hz === p.hz)) continue;
+      const ratio = p.hz / toneHz;
+      const between = [2, 3].some((d) => {
+        const j = Math.round(ratio * d);
+        return j % d !== 0 && Math.abs(p.hz - (j / d) * toneHz) <= FRACTION_BINS * this.binHz;
+      });
+      if (between) sum -= UNEXPLAINED_SHARE * 10 ** (p.levelDb / 20);
     }
     return sum;
   }
