@@ -7,7 +7,7 @@ import {
 } from '../InputError';
 import { apparentMotion } from '../apparentMotion';
 import { checkRange, MAX_SYMMETRY, type Look, type Range } from '../types';
-import type { SoundConfidence, SoundSpeedCandidate } from './speedsFromSound';
+import { CLEAR_SHARE, type SoundConfidence, type SoundSpeedCandidate } from './speedsFromSound';
 
 export interface SoundStrobeOptions {
   /** Features of the part (blades, teeth): the n both methods use. */
@@ -67,9 +67,12 @@ const STROBE_TOLERANCE = 0.003;
  * the speed; the two together leave the speeds both allow (within twice the sound's precision
  * plus the strobe's slack).
  *
+ * One speed stands when no other speed both allow scored 60 % of it by sound (the threshold
+ * of a 'clear' sound leader); otherwise several stay open.
+ *
  * Then the next rate: the speed to confirm is the best-ranked speed both allow (or the sound's
- * leader); the others still open are the other matches, or, with no readings yet, the sound's
- * other candidates. Tried in order: s = n·f (one image standing still: the plain confirmation),
+ * leader); the others still open are the other matches (for one speed: every other strobe
+ * candidate), or, with no readings yet, the sound's candidates that scored 60 % of its leader. Tried in order: s = n·f (one image standing still: the plain confirmation),
  * 2·n·f (two images), n·f/2 (one image), 3·n·f (three images), n·f/3; the first, inside the
  * strobe's range, where apparentMotion shows the speed to confirm differently from every other
  * speed still open. (At n·f a speed 2f also shows one still image, so n·f confirms alone but
@@ -107,46 +110,48 @@ export function joinSoundWithStrobe(
 
   if (heard.length === 0) return { status: 'no-sound', matches: [] };
   if (seen.length === 0) {
-    const [lead, ...others] = heard;
+    // Open besides the leader: the speeds that keep it from being clear (60 % of its score).
+    const [lead, ...rest] = heard;
+    const open = rest.filter((c) => c.score >= CLEAR_SHARE * lead.score).map((c) => c.speedHz);
     const settled = lead.confidence !== 'tied';
     return {
       status: 'sound-only',
       ...(settled ? { speedHz: lead.speedHz, precisionHz: lead.precisionHz } : {}),
       matches: [],
-      ...nextRate(
-        lead.speedHz,
-        others.map((c) => c.speedHz),
-        n,
-        rateRange,
-        settled,
-      ),
+      ...nextRate(lead.speedHz, open, n, rateRange, settled),
     };
   }
 
-  const matches: SoundStrobeMatch[] = [];
+  const paired: Array<{ match: SoundStrobeMatch; score: number }> = [];
   for (const c of heard) {
     for (const s of seen) {
       if (Math.abs(s - c.speedHz) <= 2 * c.precisionHz + tol * s) {
-        matches.push({
-          speedHz: c.speedHz,
-          precisionHz: c.precisionHz,
-          strobeSpeedHz: s,
-          soundConfidence: c.confidence,
+        paired.push({
+          match: {
+            speedHz: c.speedHz,
+            precisionHz: c.precisionHz,
+            strobeSpeedHz: s,
+            soundConfidence: c.confidence,
+          },
+          score: c.score,
         });
       }
     }
   }
-  if (matches.length === 0) {
+  if (paired.length === 0) {
     // Nothing agrees: confirm the sound's leader directly, apart from every strobe candidate.
     return {
       status: 'disagree',
-      matches,
+      matches: [],
       ...nextRate(heard[0].speedHz, seen, n, rateRange, false),
     };
   }
+  paired.sort((a, b) => b.score - a.score);
+  const matches = paired.map((p) => p.match);
   const [lead, ...others] = matches;
-  if (others.length === 0) {
-    // One speed: confirm it, and make sure the other strobe candidates would look different.
+  // One speed when no other that both allow scored 60 % of it by sound.
+  if (others.length === 0 || paired[1].score < CLEAR_SHARE * paired[0].score) {
+    // Confirm it, and make sure the other strobe candidates would look different there.
     return {
       status: 'one',
       speedHz: lead.speedHz,

@@ -24,10 +24,11 @@ export const LINE_PROMINENCE_DB = 10;
 /** A line's span reaches down to this ratio below its strongest bin (30 dB). */
 const SPAN_RATIO = 1000;
 /**
- * A valley deeper than this (10 dB) below a line's peak ends its span: ripples of a drifting
- * line are shallower, while two lines three bins apart dip about 20 dB between them.
+ * A valley this far (6 dB) below the maxima on both sides ends a line's span: the ripples of a
+ * drifting line, where averaged segments saw it up to two bins apart, dip about 3 dB; two lines
+ * four bins apart dip well over 10 dB between them.
  */
-const VALLEY_RATIO = 10;
+const VALLEY_RATIO = 4;
 /**
  * Lines more than this below the loudest bin are rounding, not sound: samples carry at most
  * 24 bits (144 dB), and arithmetic on them a little less (a judgement).
@@ -87,7 +88,7 @@ export const TINY_POWER = 1e-30;
  * in order of frequency. A line is a local maximum at least LINE_PROMINENCE_DB above `floor`
  * (and within 120 dB of the loudest bin),
  * with the bins around it down to 30 dB below it (or to twice the floor, or to a valley
- * more than 10 dB deep): a steady line fills 3–5 such bins (the Hann main lobe, ±2 bins to its nulls, Harris 1978). Lesser maxima
+ * 6 dB below the maxima on both sides): a steady line fills 3–5 such bins (the Hann main lobe, ±2 bins to its nulls, Harris 1978). Lesser maxima
  * inside that span are ripples of the same line, not lines: a line whose speed drifted is
  * smeared over more bins, with ripples where the averaged segments saw it at different
  * frequencies.
@@ -127,12 +128,16 @@ export function findPeaks(
   for (const k of maxima) {
     if (claimed[k]) continue;
     const p = power[k];
-    // Out from the peak while the bins stay within 30 dB of it and above twice the floor,
-    // and not past a valley more than 10 dB deep (beyond it rises another line).
-    const inSpan = (from: number, to: number) =>
-      power[to] >= p / SPAN_RATIO &&
-      power[to] >= 2 * floor[to] &&
-      !(power[to] > power[from] && power[from] < p / VALLEY_RATIO);
+    // Out from the peak while the bins stay within 30 dB of it and above twice the floor, and
+    // not past a valley 6 dB below the maxima on both sides of it (beyond it rises another line).
+    const inSpan = (from: number, to: number) => {
+      if (power[to] < p / SPAN_RATIO || power[to] < 2 * floor[to]) return false;
+      if (power[to] <= power[from]) return true;
+      let top = to;
+      const step = to - from;
+      while (top + step >= lo && top + step <= hi && power[top + step] >= power[top]) top += step;
+      return power[from] * VALLEY_RATIO >= Math.min(p, power[top]);
+    };
     let left = k;
     while (left > lo && inSpan(left, left - 1)) left--;
     let right = k;

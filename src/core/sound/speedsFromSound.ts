@@ -103,7 +103,7 @@ const MAX_CANDIDATES = 8;
 /** Another candidate at or above this share of a candidate's score ties with it. */
 const TIED_SHARE = 0.9;
 /** The leader is 'clear' when the runner-up scores below this share. */
-const CLEAR_SHARE = 0.6;
+export const CLEAR_SHARE = 0.6;
 /** A candidate whose strongest line stands less than this above the floor is 'faint'. */
 const FAINT_DB = 16;
 /** Two candidates closer than this (relative) are one. */
@@ -358,20 +358,25 @@ class Comb {
       'narrow the expected speed range',
       MAX_GRID_POINTS,
     );
-    const speeds: number[] = [];
-    const scores: number[] = [];
-    for (let f = from; f <= to; f += this.binHz / this.topOrder(f)) {
-      speeds.push(f);
-      scores.push(this.score(f));
+    // The left sum of the steps exceeds that integral by at most the largest order.
+    const room = Math.ceil(estimate) + maxOrder + 2;
+    const speeds = new Float64Array(room);
+    const scores = new Float64Array(room);
+    let count = 0;
+    let best = -Infinity;
+    for (let f = from; f <= to && count < room; f += this.binHz / this.topOrder(f)) {
+      speeds[count] = f;
+      scores[count] = this.score(f);
+      if (scores[count] > best) best = scores[count];
+      count++;
     }
-    const best = Math.max(...scores);
     if (!(best > 0)) return [];
     const maxima: Array<{ speedHz: number; score: number }> = [];
-    for (let i = 0; i < scores.length; i++) {
+    for (let i = 0; i < count; i++) {
       if (i > 0 && scores[i] <= scores[i - 1]) continue;
       let j = i;
-      while (j + 1 < scores.length && scores[j + 1] === scores[i]) j++;
-      if (j + 1 < scores.length && scores[j + 1] > scores[i]) continue;
+      while (j + 1 < count && scores[j + 1] === scores[i]) j++;
+      if (j + 1 < count && scores[j + 1] > scores[i]) continue;
       if (scores[i] >= SEED_SHARE * best) {
         maxima.push({ speedHz: speeds[(i + j) >> 1], score: scores[i] });
       }

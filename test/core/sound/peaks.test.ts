@@ -69,12 +69,12 @@ describe('a line between bins', () => {
     }
   });
 
-  it('stays apart from another line three bins away', () => {
+  it('stays apart from another line four bins away', () => {
     const fs = 48_000;
     const length = 4 * fs;
     const bin = soundSpectrum(new Float32Array(length).fill(0.01), fs).binHz;
     const a = 500.3 * bin;
-    const b = a + 3 * bin;
+    const b = a + 4 * bin;
     const x = Float64Array.from(
       { length },
       (_, j) =>
