@@ -273,6 +273,9 @@ describe('sound capture in Chromium', () => {
     try {
       const wav = readFileSync(wavPath).toString('base64');
       const fan = await decode(wav, 'audio/wav');
+      console.log(
+        `picked file: ${fan.durationS?.toFixed(2)} s at ${fan.sampleRateHz} Hz, ${fan.rpm?.toFixed(2)} rpm (${fan.confidence})`,
+      );
       expect(fan.error).toBeUndefined();
       expect(fan.durationS).toBeCloseTo(6, 2);
       expect(Math.abs(fan.rpm! - 1750)).toBeLessThan(2);
