@@ -7,7 +7,12 @@ import {
 } from '../InputError';
 import { apparentMotion } from '../apparentMotion';
 import { checkRange, MAX_SYMMETRY, type Look, type Range } from '../types';
-import { CLEAR_SHARE, type SoundConfidence, type SoundSpeedCandidate } from './speedsFromSound';
+import {
+  CLEAR_SHARE,
+  TIED_SHARE,
+  type SoundConfidence,
+  type SoundSpeedCandidate,
+} from './speedsFromSound';
 
 export interface SoundStrobeOptions {
   /** Features of the part (blades, teeth): the n both methods use. */
@@ -45,7 +50,7 @@ export interface SoundStrobeJoin {
    * something else); 'no-sound': the sound gave no speed.
    */
   status: 'sound-only' | 'one' | 'several' | 'disagree' | 'no-sound';
-  /** The speed to take, rev/s: the one both agree on, or the sound's leader when it is not tied. */
+  /** The speed to take, rev/s: the one both agree on, or the sound's leader when no other speed scored 90 % of it. */
   speedHz?: number;
   precisionHz?: number;
   /** Speeds both allow, the sound's ranking first. */
@@ -113,7 +118,7 @@ export function joinSoundWithStrobe(
     // Open besides the leader: the speeds that keep it from being clear (60 % of its score).
     const [lead, ...rest] = heard;
     const open = rest.filter((c) => c.score >= CLEAR_SHARE * lead.score).map((c) => c.speedHz);
-    const settled = lead.confidence !== 'tied';
+    const settled = !rest.some((c) => c.score >= TIED_SHARE * lead.score);
     return {
       status: 'sound-only',
       ...(settled ? { speedHz: lead.speedHz, precisionHz: lead.precisionHz } : {}),

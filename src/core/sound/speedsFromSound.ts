@@ -17,8 +17,8 @@ export interface SpeedsFromSoundOptions {
 /**
  * How sure a candidate is, as a code (the UI words it):
  * - 'clear': the leader, two or more lines agree, and no other speed scores 60 % as well;
- * - 'likely': the leader, but another speed scores at least 60 % as well, or one line only;
- * - 'tied': another speed fits (nearly) as well: the sound alone cannot choose;
+ * - 'likely': the leader, but another speed scores 60–90 % as well, or it rests on one line;
+ * - 'tied': another speed scores at least 90 % as well: the sound alone cannot choose;
  * - 'possible': fits clearly worse than the leader, kept because it still explains lines;
  * - 'faint': its strongest line stands less than 16 dB above the noise.
  */
@@ -101,7 +101,7 @@ const MAX_SEEDS = 40;
 const PLAUSIBLE_SHARE = 0.4;
 const MAX_CANDIDATES = 8;
 /** Another candidate at or above this share of a candidate's score ties with it. */
-const TIED_SHARE = 0.9;
+export const TIED_SHARE = 0.9;
 /** The leader is 'clear' when the runner-up scores below this share. */
 export const CLEAR_SHARE = 0.6;
 /** A candidate whose strongest line stands less than this above the floor is 'faint'. */
@@ -183,12 +183,13 @@ export function speedsFromSound(
       continue;
     const score = comb.lineScore(fit.speedHz, fit.fitted, usable);
     if (!(score > 0)) continue;
-    if (found.some((c) => Math.abs(c.speedHz - fit.speedHz) <= SAME_SPEED * fit.speedHz)) {
-      const twin = found.find(
-        (c) => Math.abs(c.speedHz - fit.speedHz) <= SAME_SPEED * fit.speedHz,
-      )!;
-      if (twin.score >= score) continue;
-      found.splice(found.indexOf(twin), 1);
+    // Two seeds that refine to the same speed are one candidate: keep the better fit.
+    const twin = found.findIndex(
+      (c) => Math.abs(c.speedHz - fit.speedHz) <= SAME_SPEED * fit.speedHz,
+    );
+    if (twin >= 0) {
+      if (found[twin].score >= score) continue;
+      found.splice(twin, 1);
     }
     const { fitted: _fitted, ...candidate } = fit;
     found.push({ ...candidate, score, confidence: 'possible' });
