@@ -88,8 +88,9 @@ const STROBE_TOLERANCE = 0.003;
  * or inverted strobe range, or a tolerance outside 0…0.1.
  *
  * @example
- * // A 6-blade fan heard at 29.17 rev/s (1750 rpm); one reading at 58.33 flashes/s allows
- * // 9.72, 19.44, 29.17, 38.89… rev/s; only 29.17 agrees, confirmed by one image at 175 flashes/s.
+ * // A 6-blade fan heard at 29.17 rev/s (1750 rpm); one image at 58.33 flashes/s allows 9.72,
+ * // 19.44, 29.17, 38.89… rev/s; only 29.17 agrees. Proposed: 350 flashes/s, two images still
+ * // (at 175 a speed of 58.33 rev/s would show one image too).
  * joinSoundWithStrobe(sound.candidates, findSpeed([{ rateHz: 58.33, images: 1 }], 6).candidates, { symmetry: 6 })
  */
 export function joinSoundWithStrobe(
