@@ -135,3 +135,34 @@ export {
 } from './loggerPlan';
 export { csv, csvField, csvTable, type CsvValue, type CsvColumn } from './csv';
 export { MAX_WORK_ITEMS } from './workLimit';
+// Hear the speed (issue 12): the spectrum of a recording, the speeds it holds, and their join
+// with strobe readings.
+export {
+  soundSpectrum,
+  MIN_SAMPLE_RATE_HZ,
+  MAX_SAMPLE_RATE_HZ,
+  ANALYSIS_RATE_LIMIT_HZ,
+  MIN_RECORDING_S,
+  MAX_RECORDING_S,
+  type SoundSpectrum,
+  type SoundSpectrumOptions,
+} from './sound/spectrum';
+export { recordingLevel, SILENCE_DBFS, type RecordingLevel } from './sound/level';
+export type { SpectrumPeak } from './sound/peaks';
+export type { HumLine } from './sound/hum';
+export {
+  speedsFromSound,
+  DEFAULT_SOUND_SPEED_RANGE,
+  type SpeedsFromSoundOptions,
+  type SoundSpeeds,
+  type SoundSpeedCandidate,
+  type SoundLine,
+  type SoundConfidence,
+} from './sound/speedsFromSound';
+export {
+  joinSoundWithStrobe,
+  type SoundStrobeOptions,
+  type SoundStrobeJoin,
+  type SoundStrobeMatch,
+  type StrobeView,
+} from './sound/joinSoundWithStrobe';

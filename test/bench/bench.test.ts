@@ -1,6 +1,7 @@
 // `npm run bench`: medians against budgets. Run by test/bench/vitest.config.ts only, never by `npm test`.
 import { expect, test } from 'vitest';
 import { runCoreBench } from './core.bench';
+import { runSoundBench } from './sound.bench';
 import type { BenchResult } from './measure';
 
 async function optionalBench(path: string, exportName: string): Promise<BenchResult[]> {
@@ -15,6 +16,7 @@ async function optionalBench(path: string, exportName: string): Promise<BenchRes
 test('every measured median stays within its budget', async () => {
   const results = [
     ...runCoreBench(),
+    ...runSoundBench(),
     ...(await optionalBench('./render.bench.ts', 'runRenderBench')),
   ];
   const rows = results.map((r) => {
