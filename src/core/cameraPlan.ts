@@ -284,10 +284,12 @@ function evaluate(
     },
   );
   const apparentRpmRange: [number, number] = [Math.min(...ends), Math.max(...ends)];
+  // A creep is the slow forward turn asked for: only still, backward or unclear views spoil it
+  // (the nearly-still margin of safe bands would refuse every creep).
   const bands = rateBands(
     [part],
     { minHz: frameRate * (1 - 1e-9), maxHz: frameRate * (1 + 1e-9) },
-    opts,
+    goal.kind === 'creep' ? { ...opts, nearlyStillHz: look.stillHz } : opts,
   );
   const misleading = bands.some((b) => !b.safe);
   const blurDeg = blurDegrees(part.speedHz, exposureS);
