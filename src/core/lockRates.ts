@@ -63,15 +63,16 @@ export function lockRates(part: Part, range: Range, opts?: { maxImages?: number 
       );
     }
     count += coprimeCount(firstP[q], last, q);
-    requireWorkable(
-      count,
-      'rate range',
-      'lock-in rates',
-      'raise the lowest rate or narrow the range',
-    );
     nextP[q] = last + 1;
-    head[q] = nextHead(q);
   }
+  // The whole count first, so that a refusal gives it right.
+  requireWorkable(
+    count,
+    'rate range',
+    'lock-in rates',
+    'raise the lowest rate or narrow the range',
+  );
+  for (let q = 1; q <= maxImages; q++) head[q] = nextHead(q);
   const out: LockRate[] = [];
   for (;;) {
     let q = 0;

@@ -9,8 +9,8 @@ import type { Range } from './types';
  */
 const SLOW_HZ = 1;
 /** Rates tried besides the simple multiples: locks of the top candidate, and a grid. */
-const MAX_LOCK_TRIALS = 256;
-const GRID_TRIALS = 128;
+const MAX_LOCK_TRIALS = 96;
+const GRID_TRIALS = 96;
 /** Simple multiples of a candidate's pattern rate a technician would try first. */
 const MULTIPLES = [2, 1, 1 / 2, 2 / 3, 3 / 2, 3, 1 / 3, 4, 1 / 4];
 /** Round numbers of flashes per minute, coarsest first, that a proposed rate moves to when it tells as much there. */
@@ -43,6 +43,7 @@ export function robustView(
   symmetry: number,
   rateHz: number,
   spread: number,
+  exactKey?: string,
 ): string | undefined {
   const at = (factor: number) =>
     viewKey(
@@ -50,7 +51,7 @@ export function robustView(
         sampler: 'flash',
       }),
     );
-  const key = at(1);
+  const key = exactKey ?? at(1);
   return spread === 0 || (at(1 - spread) === key && at(1 + spread) === key) ? key : undefined;
 }
 
@@ -97,7 +98,7 @@ export function mostTellingRate(
     const exact = patternsHz.map((G) => robustView(G, symmetry, rateHz, 0));
     if (best && !beats(score(exact), best)) continue;
     const views = patternsHz.map((G, i) =>
-      spread === 0 ? exact[i] : robustView(G, symmetry, rateHz, spread),
+      spread === 0 ? exact[i] : robustView(G, symmetry, rateHz, spread, exact[i]),
     );
     const s = score(views);
     if (s.pairsTold > 0 && (!best || beats(s, best))) {
