@@ -237,7 +237,7 @@ function toBands(
       fromHz: start,
       toHz: end,
       safe: false,
-      promise: 'Can look still, slow, doubled or backward',
+      promise: 'Can look still, nearly still, doubled or backward',
       reason: describeCauses(causes, nearlyStillHz),
       causes,
     });

@@ -141,7 +141,7 @@ export function whyNoneReach(
       .sort((a, b) => b - a);
   } else if (patternHz > 0 && goal.kind === 'creep') {
     const wanted = Math.sign(part.speedHz || 1) * goal.creepHz;
-    ratesHz = ratesForApparent(part, wanted, CAMERA_RANGE)
+    ratesHz = ratesForApparent(part, wanted, CAMERA_RANGE, { sampler: 'frames' })
       .map((r) => r.rateHz)
       .sort((a, b) => b - a);
   }

@@ -75,7 +75,7 @@ describe('rateBands: the camera case', () => {
     // forward at 6 rpm = 0.1 rev/s: 10 − 0.1 = 9.9 frames/s.
     expect(band.fromHz).toBeCloseTo(9.9, 12);
     expect(band.toHz).toBe(20);
-    expect(band.promise).toBe('Can look still, slow, doubled or backward');
+    expect(band.promise).toBe('Can look still, nearly still, doubled or backward');
   });
 });
 

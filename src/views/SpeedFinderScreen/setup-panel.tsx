@@ -1,10 +1,5 @@
 import { InputError } from '../../core';
-import {
-  readFeatures,
-  readPoles,
-  readSlipPercent,
-  readSpeedRpm,
-} from '../../lib/fields';
+import { readFeatures, readPoles, readSlipPercent, readSpeedRpm } from '../../lib/fields';
 import { formatNumber, numberForField } from '../../lib/format';
 import { activePart } from '../../state/setup';
 import {
