@@ -60,6 +60,11 @@ export interface FindSpeedOptions {
 const MAX_CANDIDATES = 40;
 /** Candidates compared when choosing the next rate. */
 const COMPARED = 8;
+/**
+ * Most possible speeds tested inside an expected range, every one returned: beyond this the
+ * range is far too wide for the readings to settle anything at a machine (a judgement).
+ */
+const MAX_EXPECTED_TESTS = 10_000;
 
 /**
  * The true speeds consistent with a set of strobe readings (physics.md §7). A reading of q
@@ -140,6 +145,7 @@ export function findSpeed(
       'expected speed range',
       'possible speeds to test',
       'narrow it or add a faster reading',
+      MAX_EXPECTED_TESTS,
     );
     for (let p = pIn.first; p <= pIn.last; p++) {
       const c = candidateAt(p);

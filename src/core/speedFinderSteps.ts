@@ -435,7 +435,7 @@ function separateInstruction(
   );
   text += stands
     ? ' Where images stand still or drift slowly, small changes of rate stop them: record that rate and how many images.'
-    : ' The view itself tells the speed: nothing is expected to stand still there.';
+    : ' Nothing is expected to stand still there: the way the part seems to move tells the speeds apart.';
   if (!separatesTop) {
     text +=
       " No rate in the strobe's range shows the likeliest speed differently from every other; this one tells the most of them apart.";

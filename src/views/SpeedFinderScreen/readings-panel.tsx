@@ -113,8 +113,8 @@ function ImagesChoice({ id, label, value, onChange }: ImagesProps) {
         }}
       >
         {value === undefined && (
-          <option value="" disabled>
-            Choose
+          <option value="" disabled aria-label="not chosen yet">
+            ?
           </option>
         )}
         {IMAGE_CHOICES.map((n) => (
