@@ -46,10 +46,10 @@ export function lockRates(part: Part, range: Range, opts?: { maxImages?: number 
   const lo = minHz * (1 - EDGE);
   const hi = maxHz * (1 + EDGE);
   // For each image count q the rates F·q/p rise as p falls; merging the maxImages streams
-  // (smallest head first) yields ascending order without a sort. p is a whole number in a
-  // double (exact to 2^53), never a 32-bit integer.
-  const nextP = new Float64Array(maxImages + 1);
-  const firstP = new Float64Array(maxImages + 1);
+  // (smallest head first) yields ascending order without a sort. p lives in plain arrays, not a
+  // 32-bit typed array: small p stay fast integers, large ones exact doubles up to 2^53.
+  const nextP: number[] = new Array<number>(maxImages + 1).fill(0);
+  const firstP: number[] = new Array<number>(maxImages + 1).fill(0);
   const head = new Float64Array(maxImages + 1); // rate at nextP[q], Infinity when exhausted
   let count = 0;
   for (let q = 1; q <= maxImages; q++) {
