@@ -1,6 +1,6 @@
 import { requireFiniteResult, requirePositive } from './InputError';
 import { checkPart, checkSampler, type Look, type Part, type Sampler } from './types';
-import { checkLookOptions, type LookOptions } from './lookOptions';
+import { checkLookOptions, THRESHOLD_SLACK, type LookOptions } from './lookOptions';
 import { gcd } from './gcd';
 
 export interface ApparentMotion {
@@ -21,6 +21,13 @@ export interface ApparentMotion {
   q: number;
   /** Signed drift of the q-image group, rev/s (equals apparentHz when q = 1). */
   driftHz: number;
+  /**
+   * An aliased view (look other than 'true') whose speed seen (the group's drift when
+   * several images show, else the single image's apparent speed) is below the nearly-still
+   * threshold (physics.md §4; default 6 rpm). Still views are nearly still too. To a person
+   * at the machine it is as dangerous as still.
+   */
+  nearlyStill: boolean;
 }
 
 export type ApparentMotionOptions = Partial<LookOptions> & { sampler?: Sampler };
@@ -29,10 +36,13 @@ export type ApparentMotionOptions = Partial<LookOptions> & { sampler?: Sampler }
  * What a sampler at `rateHz` shows of a turning part (physics.md §2–§3).
  *
  * ratio r = n·f/s; step e = r − round(r) in [−0.5, 0.5]; apparent speed a = e·s/n rev/s.
- * Precedence: a group of q ≤ maxImages images whose drift |r − p/q|·s/n is below the still
- * threshold reads 'still' (under 'frames' only q = 1 freezes); otherwise a faithful sampler
- * (s > 2·n·|f|, Nyquist–Shannon) reads 'true'; otherwise |e| ≥ unclearStep reads 'unclear',
- * and the sign of e against the sign of f reads 'forward' or 'backward'.
+ * Precedence: among the groups of q ≤ maxImages images (p/q in lowest terms; under 'frames'
+ * only q = 1) whose drift |r − p/q|·s/n is at or below the still threshold, the one with the
+ * smallest drift reads 'still' with q images (ties go to the smaller q; an exact lock drifts 0
+ * and so reports its own q); otherwise a faithful sampler (s > 2·n·|f|, Nyquist–Shannon) reads
+ * 'true'; otherwise |e| ≥ unclearStep reads 'unclear', and the sign of e against the sign of f
+ * reads 'forward' or 'backward'. Thresholds are inclusive, with a relative slack of
+ * THRESHOLD_SLACK so that decimal inputs land where they were meant.
  *
  * Units: speedHz in rev/s (signed), rateHz in Hz (samples per second).
  * Throws InputError for a non-finite speed, a feature count that is not a whole number ≥ 1,
@@ -59,27 +69,44 @@ export function apparentMotion(
   const step = clampHalf(ratio - k);
   const apparentHz = (step * s) / n;
   const faithful = Math.abs(ratio) < 0.5;
+  const patternHz = n * f;
+  // Below this, a speed seen is nearly still (never below the still threshold itself).
+  const nearlyStillHz = Math.max(o.nearlyStillHz, o.stillHz);
+  const nearlyStillBelow = nearlyStillHz - THRESHOLD_SLACK * (Math.abs(f) + nearlyStillHz);
 
-  // Lock test (§3): the smallest q whose group drifts slower than the still threshold.
-  // |r − p/q|·s/n < stillHz  ⇔  |n·f − (p/q)·s| < n·stillHz  (pattern-frequency form).
+  // Lock test (§3): of the q whose group drifts at or below the still threshold, the smallest
+  // drift. |r − p/q|·s/n ≤ stillHz  ⇔  |n·f − (p/q)·s| ≤ n·stillHz (pattern-frequency form).
+  // A fraction p/q not in lowest terms is the same group as its reduced form: skipped, so that
+  // rounding cannot let 3p/3q beat p/q by one unit in the last place.
   const lockQ = sampler === 'flash' ? o.maxImages : 1;
   const stillPatternHz = n * o.stillHz;
+  const stillUpTo = stillPatternHz + THRESHOLD_SLACK * (Math.abs(patternHz) + stillPatternHz);
+  let lockQFound = 0;
+  let lockP = 0;
+  let lockDrift = Infinity;
   for (let q = 1; q <= lockQ; q++) {
     const p = Math.round(ratio * q);
-    const driftPatternHz = n * f - (p * s) / q;
-    if (Math.abs(driftPatternHz) < stillPatternHz) {
-      return {
-        ratio,
-        step,
-        apparentHz,
-        faithful,
-        images: q,
-        look: 'still',
-        p: Math.abs(p),
-        q,
-        driftHz: driftPatternHz / n,
-      };
+    const driftPatternHz = patternHz - (p * s) / q;
+    const size = Math.abs(driftPatternHz);
+    if (size <= stillUpTo && size < Math.abs(lockDrift) && (q === 1 || gcd(Math.abs(p), q) === 1)) {
+      lockQFound = q;
+      lockP = p;
+      lockDrift = driftPatternHz;
     }
+  }
+  if (lockQFound > 0) {
+    return {
+      ratio,
+      step,
+      apparentHz,
+      faithful,
+      images: lockQFound,
+      look: 'still',
+      p: Math.abs(lockP),
+      q: lockQFound,
+      driftHz: lockDrift / n,
+      nearlyStill: true,
+    };
   }
 
   // Near-lock under a flash: the smallest q ≥ 2 whose group creeps by less than
@@ -113,7 +140,8 @@ export function apparentMotion(
       : Math.sign(step) === Math.sign(f)
         ? 'forward'
         : 'backward';
-  return { ratio, step, apparentHz, faithful, images, look, p, q, driftHz };
+  const nearlyStill = look !== 'true' && Math.abs(driftHz) < nearlyStillBelow;
+  return { ratio, step, apparentHz, faithful, images, look, p, q, driftHz, nearlyStill };
 }
 
 /** Rounding can leave ratio − round(ratio) a hair outside [−0.5, 0.5]; keep the documented range. */

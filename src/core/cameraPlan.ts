@@ -423,10 +423,12 @@ function evaluate(
   );
   const ends = endMotions.map((e) => (e.look === 'still' ? 0 : hzToRpm(e.apparentHz)));
   const apparentRpmRange: [number, number] = [Math.min(...ends), Math.max(...ends)];
+  // A creep is the slow forward turn asked for: only still, backward or unclear views spoil it
+  // (the nearly-still margin of safe bands would refuse every creep).
   const bands = rateBands(
     [part],
     { minHz: frameRate * (1 - SAME_RATE), maxHz: frameRate * (1 + SAME_RATE) },
-    opts,
+    goal.kind === 'creep' ? { ...opts, nearlyStillHz: look.stillHz } : opts,
   );
   const misleading = bands.some((b) => !b.safe);
   const blurDeg = blurDegrees(part.speedHz, exposureS);
@@ -538,7 +540,7 @@ function needsOf(
     const range = { minHz: span.minHz * (1 - SAME_RATE), maxHz: span.maxHz * (1 + SAME_RATE) };
     const opts: ApparentMotionOpts = { ...look, sampler: 'frames' };
     // Only rates where the camera really shows that creep (physics.md §4).
-    candidates = ratesForApparent(part, wanted, range)
+    candidates = ratesForApparent(part, wanted, range, { sampler: 'frames' })
       .map((r) => r.rateHz)
       .filter((hz) =>
         creepLookHolds(

@@ -2,6 +2,7 @@ import { InputError, requirePositive, requireWhole, requireBetween } from './Inp
 import { checkRange, MAX_IMAGES_LIMIT, MAX_SYMMETRY, type Look, type Range } from './types';
 import { apparentMotion } from './apparentMotion';
 import { gcd } from './gcd';
+import { mostTellingRate } from './tellingRate';
 import { requireWorkable } from './workLimit';
 
 /** A strobe reading: at rateHz the technician saw `images` images standing still. */
@@ -43,14 +44,27 @@ export interface FindSpeedOptions {
   matchTolerance?: number;
   /** Without an expected range, candidates go up to this multiple of the highest reading. Default 8. */
   maxMultiple?: number;
-  /** The strobe's own range: the next rate is chosen inside it. */
+  /**
+   * The strobe's own range: the next rate is searched over all of it. Default: from a third of
+   * the slowest compared candidate's pattern rate to three times the fastest one's.
+   */
   rateRange?: Range;
+  /** false: leave the next rate out (a caller that chooses its own). Default true. */
+  proposeNext?: boolean;
 }
 
-/** Keeps the list readable: nobody tests more than a few dozen hypotheses at a machine. */
+/**
+ * Keeps the list readable: nobody tests more than a few dozen hypotheses at a machine. Speeds
+ * inside an expected range are never dropped for it; this caps only those outside.
+ */
 const MAX_CANDIDATES = 40;
 /** Candidates compared when choosing the next rate. */
-const COMPARED = 6;
+const COMPARED = 8;
+/**
+ * Most possible speeds tested inside an expected range, every one returned: beyond this the
+ * range is far too wide for the readings to settle anything at a machine (a judgement).
+ */
+const MAX_EXPECTED_TESTS = 10_000;
 
 /**
  * The true speeds consistent with a set of strobe readings (physics.md §7). A reading of q
@@ -59,11 +73,17 @@ const COMPARED = 6;
  * expected range first, then slowest first: coming down from high rates, the first single
  * image is at n·f, so a faster candidate means a higher lock was passed unseen. Two adjacent
  * single-image rates F1 > F2 give n·f = F1·F2/(F1 − F2).
- * The next rate proposed is one where the leading candidate's view differs from the others
- * (for example twice its single-image rate: two images if it is right).
+ * With an expected range, every speed inside it is enumerated directly (p from
+ * ⌈q·n·min/F⌉ to ⌊q·n·max/F⌋ for the base reading F with q images) and all of them are
+ * returned; speeds outside it follow, up to MAX_CANDIDATES in all.
+ * The next rate is searched over the strobe's whole range (mostTellingRate): the rate whose
+ * predicted views tell the leading candidate from every other, else the most pairs apart; with
+ * one candidate left, twice its single-image rate confirms it (two images if it is right).
+ * No next rate when no rate in the range tells any two candidates apart.
  *
  * Units: rates in Hz, speeds in rev/s. Throws InputError for no readings, a rate ≤ 0, an image
- * count not a whole number in 1…64, a bad symmetry, an empty or inverted expected range.
+ * count not a whole number in 1…64, a bad symmetry, an empty or inverted expected range, or an
+ * expected range holding more possible speeds than can be listed.
  *
  * @example
  * // Single images at 30 and 20 flashes/s, one mark: 30·20/(30 − 20) = 60 rev/s.
@@ -92,40 +112,59 @@ export function findSpeed(
   const rateRange =
     opts?.rateRange === undefined ? undefined : checkRange(opts.rateRange, 'strobe range');
 
-  // Candidates come from the reading with the widest lock spacing F/q (fewest hypotheses).
+  // Candidates come from the reading with the widest lock spacing F/q (fewest hypotheses):
+  // n·f = (p/q)·F for whole p ≥ 1 coprime to q.
   const base = readings.reduce((a, b) => (b.rateHz / b.images > a.rateHz / a.images ? b : a));
   const highest = Math.max(...readings.map((r) => r.rateHz));
-  const ceilingPatternHz = Math.max(
-    highest * maxMultiple,
-    expected ? n * expected.maxHz * (1 + tol) : 0,
-  );
-
-  const candidates: SpeedCandidate[] = [];
-  const pLast = Math.floor((ceilingPatternHz * base.images) / base.rateHz);
-  requireWorkable(
-    pLast,
-    'expected speed range',
-    'possible speeds to test',
-    'lower its top or add a faster reading',
-  );
-  for (let p = 1; p <= pLast && candidates.length < MAX_CANDIDATES * 4; p++) {
-    if (gcd(p, base.images) !== 1) continue;
-    const guess = (p / base.images) * base.rateHz;
-    const fit = explain(guess, readings, tol);
-    if (!fit) continue;
+  const pOf = (patternHz: number) => (patternHz * base.images) / base.rateHz;
+  const candidateAt = (p: number): SpeedCandidate | undefined => {
+    if (gcd(p, base.images) !== 1) return undefined;
+    const fit = explain((p / base.images) * base.rateHz, readings, tol);
+    if (!fit) return undefined;
     const speedHz = fit.patternHz / n;
-    candidates.push({
+    return {
       speedHz,
       expected: expected
         ? speedHz >= expected.minHz * (1 - tol) && speedHz <= expected.maxHz * (1 + tol)
         : false,
       misfit: fit.misfit,
       locks: fit.locks,
-    });
+    };
+  };
+
+  // physics.md §7: inside an expected range, every p from ⌈q·n·min/F⌉ to ⌊q·n·max/F⌋, all kept.
+  const inside: SpeedCandidate[] = [];
+  let pIn = { first: 1, last: 0 };
+  if (expected) {
+    pIn = {
+      first: Math.max(1, Math.ceil(pOf(n * expected.minHz * (1 - tol)))),
+      last: Math.floor(pOf(n * expected.maxHz * (1 + tol))),
+    };
+    requireWorkable(
+      pIn.last - pIn.first + 1,
+      'expected speed range',
+      'possible speeds to test',
+      'narrow it or add a faster reading',
+      MAX_EXPECTED_TESTS,
+    );
+    for (let p = pIn.first; p <= pIn.last; p++) {
+      const c = candidateAt(p);
+      if (c?.expected) inside.push(c);
+    }
   }
-  candidates.sort((a, b) => Number(b.expected) - Number(a.expected) || a.speedHz - b.speedHz);
-  const ranked = candidates.slice(0, MAX_CANDIDATES);
-  return { candidates: ranked, ...nextRate(ranked, n, readings, rateRange) };
+  // Outside it (or without one), slowest first up to maxMultiple times the highest reading.
+  const outside: SpeedCandidate[] = [];
+  const pLast = Math.floor(pOf(highest * maxMultiple));
+  requireWorkable(pLast, 'readings', 'possible speeds to test', 'add a faster reading');
+  const room = Math.max(0, MAX_CANDIDATES - inside.length);
+  for (let p = 1; p <= pLast && outside.length < room; p++) {
+    if (p >= pIn.first && p <= pIn.last) continue;
+    const c = candidateAt(p);
+    if (c && !c.expected) outside.push(c);
+  }
+  const ranked = [...inside, ...outside];
+  if (opts?.proposeNext === false) return { candidates: ranked };
+  return { candidates: ranked, ...nextRate(ranked, n, readings, rateRange, tol) };
 }
 
 /** Does pattern frequency G explain every reading? Returns the refined G and the locks. */
@@ -149,44 +188,31 @@ function nextRate(
   n: number,
   readings: StrobeReading[],
   rateRange: Range | undefined,
+  tol: number,
 ): Pick<SpeedFinding, 'nextRateHz' | 'nextPurpose' | 'predictions'> {
   if (candidates.length === 0) return {};
   const leading = candidates.slice(0, COMPARED);
-  const inRange = (s: number) => !rateRange || (s >= rateRange.minHz && s <= rateRange.maxHz);
+  const patterns = leading.map((c) => c.speedHz * n);
+  const range = rateRange ?? {
+    minHz: Math.min(...patterns) / 3,
+    maxHz: Math.max(...patterns) * 3,
+  };
+  const inRange = (s: number) => s >= range.minHz * (1 - 1e-9) && s <= range.maxHz * (1 + 1e-9);
   const tried = (s: number) => readings.some((r) => Math.abs(r.rateHz - s) <= 1e-6 * s);
   const predict = (s: number): Prediction[] =>
     leading.map((c) => {
       const m = apparentMotion({ speedHz: c.speedHz, symmetry: n }, s);
       return { speedHz: c.speedHz, images: m.images, look: m.look };
     });
-  const key = (p: Prediction) => `${p.look}:${p.images}`;
 
-  // Rates that tell the leader from the rest, in the order a technician would try them.
-  const proposals: number[] = [];
-  for (const c of leading) {
-    const G = c.speedHz * n;
-    proposals.push(G, 2 * G, G / 2, 3 * G, G / 3);
-  }
-  let best: { rate: number; predictions: Prediction[]; distinct: number } | undefined;
-  for (const rate of proposals) {
-    if (!(rate > 0) || !inRange(rate) || tried(rate)) continue;
-    const predictions = predict(rate);
-    const lead = key(predictions[0]);
-    const distinct = new Set(predictions.map(key)).size;
-    if (leading.length > 1 && predictions.slice(1).every((p) => key(p) !== lead)) {
-      return { nextRateHz: rate, nextPurpose: 'separate', predictions };
-    }
-    if (!best || distinct > best.distinct) best = { rate, predictions, distinct };
-  }
   if (leading.length === 1) {
-    const G = leading[0].speedHz * n;
-    const confirm =
-      [2 * G, G, G / 2].find((s) => inRange(s) && !tried(s)) ??
-      (inRange(2 * G) ? 2 * G : undefined);
+    const G = patterns[0];
+    const confirm = [2 * G, G, G / 2].find((s) => inRange(s) && !tried(s));
     if (confirm === undefined) return {};
     return { nextRateHz: confirm, nextPurpose: 'confirm', predictions: predict(confirm) };
   }
+  const best = mostTellingRate(patterns, n, range, tried, tol);
   return best
-    ? { nextRateHz: best.rate, nextPurpose: 'separate', predictions: best.predictions }
+    ? { nextRateHz: best.rateHz, nextPurpose: 'separate', predictions: predict(best.rateHz) }
     : {};
 }

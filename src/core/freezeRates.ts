@@ -2,8 +2,16 @@ import { InputError, requireWhole } from './InputError';
 import { checkPart, checkRange, checkSampler, type Part, type Range, type Sampler } from './types';
 import { checkLookOptions, type LookOptions } from './lookOptions';
 import { lockRates } from './lockRates';
+import { isSettableBand, settingStepHz } from './settableBands';
 
-export type StillRateOptions = Partial<LookOptions> & { sampler?: Sampler };
+export type StillRateOptions = Partial<LookOptions> & {
+  sampler?: Sampler;
+  /**
+   * Smallest change of rate a person can set, Hz (freezeRates, noStillRates): bands narrower
+   * than this are not offered. Default: 1 flash per minute under a flash, 0.01 frames/s on camera.
+   */
+  settingStepHz?: number;
+};
 
 /** A span of rates where one part can look still. */
 export interface StillSpan {
@@ -63,6 +71,11 @@ export function stillRates(parts: Part[], range: Range, opts?: StillRateOptions)
  * (physics.md §4, several parts): the target's single-image still spans minus every other
  * part's still spans (any image count under a flash). Ascending by rate. The band is where the
  * freeze can be found: within it, the exact rate depends on the part's actual speed.
+ * Only bands a person can set and that do what they say are offered (isSettableBand): each
+ * contains the lock for the target's nominal speed, n·|f|/p, and is at least one setting step
+ * wide. A piece of a still span that another part's stillness cut off from the nominal lock
+ * would freeze the part only at one end of its tolerance (at the nominal speed it turns
+ * slowly or backward): it is left out, as is any sliver.
  *
  * Units: rev/s, Hz. Throws InputError for an empty part list, a target that is not the index
  * (from 0) of a part, a bad part or range, an unknown sampler or bad look options.
@@ -79,7 +92,7 @@ export function freezeRates(
   range: Range,
   opts?: StillRateOptions,
 ): FreezeBand[] {
-  const { checked, minHz, maxHz, qMax, look } = checkAll(parts, range, opts);
+  const { checked, minHz, maxHz, qMax, look, stepHz } = checkAll(parts, range, opts);
   const t = requireWhole(target, 'part to freeze', 0, checked.length - 1);
   const own: StillSpan[] = [];
   addStillSpans(checked[t], t, minHz, maxHz, 1, look.stillHz, own);
@@ -92,13 +105,16 @@ export function freezeRates(
   const out: FreezeBand[] = [];
   for (const span of own.sort((a, b) => a.fromHz - b.fromHz)) {
     for (const [fromHz, toHz] of subtract([span.fromHz, span.toHz], blocked)) {
-      out.push({
-        fromHz,
-        toHz,
-        p: span.p,
-        lockRateHz: span.p === 0 ? 0 : patternHz / span.p,
-        dense: span.dense,
-      });
+      // In a dense span the locks n·|f|/p of every p ≥ span.p lie side by side: a piece holds
+      // the nominal lock of the smallest p whose lock is not above the piece's top.
+      const p =
+        span.p === 0 || !span.dense
+          ? span.p
+          : Math.max(span.p, Math.ceil((patternHz / toHz) * (1 - 1e-12)));
+      const lockRateHz = p === 0 ? 0 : patternHz / p;
+      const band = { fromHz, toHz, p, lockRateHz, dense: span.dense };
+      // A part slower than the still threshold (p = 0) looks still at every rate: no lock to hold.
+      if (isSettableBand(band, stepHz, p === 0 ? undefined : lockRateHz)) out.push(band);
     }
   }
   return out;
@@ -107,7 +123,7 @@ export function freezeRates(
 /**
  * Bands of rates at which no part looks still (physics.md §4): the range minus every part's
  * still spans. Parts may still look slow or backward there (see rateBands for that).
- * Ascending by rate.
+ * Ascending by rate. Bands narrower than one setting step are not offered (isSettableBand).
  *
  * Units: rev/s, Hz. Throws InputError as stillRates does.
  *
@@ -121,9 +137,11 @@ export function noStillRates(
   range: Range,
   opts?: StillRateOptions,
 ): Array<{ fromHz: number; toHz: number }> {
-  const { minHz, maxHz } = checkRange(range);
+  const { minHz, maxHz, stepHz } = checkAll(parts, range, opts);
   const spans = stillRates(parts, range, opts);
-  return subtract([minHz, maxHz], union(spans)).map(([fromHz, toHz]) => ({ fromHz, toHz }));
+  return subtract([minHz, maxHz], union(spans))
+    .map(([fromHz, toHz]) => ({ fromHz, toHz }))
+    .filter((band) => isSettableBand(band, stepHz));
 }
 
 function checkAll(parts: Part[], range: Range, opts: StillRateOptions | undefined) {
@@ -136,7 +154,8 @@ function checkAll(parts: Part[], range: Range, opts: StillRateOptions | undefine
   const look = checkLookOptions(opts);
   // On camera only a single image freezes; under a flash q superimposed images stand still.
   const qMax = sampler === 'flash' ? look.maxImages : 1;
-  return { checked, minHz, maxHz, qMax, look };
+  const stepHz = settingStepHz(sampler, opts?.settingStepHz);
+  return { checked, minHz, maxHz, qMax, look, stepHz };
 }
 
 /** More still spans than this for one part would take seconds to list and mean nothing on a chart. */

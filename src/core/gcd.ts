@@ -9,7 +9,7 @@ export function gcd(a: number, b: number): number {
   if (!(Number.isInteger(a) && Number.isInteger(b) && a >= 0 && b >= 0)) {
     throw new InputError(
       'whole numbers',
-      `whole numbers of at least 0 are needed (got ${String(a)} and ${String(b)}).`,
+      `whole numbers of at least 0 are needed (got ${shown(a)} and ${shown(b)}).`,
     );
   }
   // A temporary, not a destructuring swap: this runs thousands of times per lock list.
@@ -19,4 +19,11 @@ export function gcd(a: number, b: number): number {
     b = r;
   }
   return a;
+}
+
+/** A value for a message: never throws, whatever it is given. */
+function shown(value: unknown): string {
+  return typeof value === 'number'
+    ? String(value)
+    : `a ${value === null ? 'nothing' : typeof value}`;
 }

@@ -2,7 +2,8 @@
 export { InputError } from './InputError';
 export type { Part, Range, Sampler, Look } from './types';
 export { MAX_SYMMETRY, MAX_IMAGES_LIMIT } from './types';
-export { defaultLookOptions, type LookOptions } from './lookOptions';
+export { defaultLookOptions, THRESHOLD_SLACK, type LookOptions } from './lookOptions';
+export { DEFAULT_SETTING_STEP_HZ, settingStepHz, isSettableBand } from './settableBands';
 export { apparentMotion, type ApparentMotion, type ApparentMotionOptions } from './apparentMotion';
 export { lockRates, type LockRate } from './lockRates';
 export { ratesForApparent } from './ratesForApparent';

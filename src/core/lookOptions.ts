@@ -21,6 +21,14 @@ export interface LookOptions {
    * per second is still seen as q separate images (a judgement). Default 1.
    */
   groupSpacingsPerS: number;
+  /**
+   * An aliased view whose apparent speed is below this (rev/s) reads as *nearly still*
+   * (physics.md §4). Default 6 rpm = 0.1 rev/s: one turn in 10 s or longer. A part creeping
+   * that slowly gives a person at the machine the same false sense that it has stopped as
+   * one standing still (a judgement, not a published figure). A value below stillHz acts
+   * as stillHz: nothing slower than still can be "nearly" still.
+   */
+  nearlyStillHz: number;
 }
 
 export const defaultLookOptions: Readonly<LookOptions> = Object.freeze({
@@ -28,7 +36,16 @@ export const defaultLookOptions: Readonly<LookOptions> = Object.freeze({
   unclearStep: 0.45,
   maxImages: 8,
   groupSpacingsPerS: 1,
+  nearlyStillHz: 6 / 60,
 });
+
+/**
+ * Relative slack of every threshold comparison (physics.md §2): a value equal to a threshold
+ * up to this share of the numbers compared counts as equal, so a decimal input lands where
+ * the user meant it (3000.25 rpm at 50 frames/s drifts exactly 0.25 rpm: still). 2^-42,
+ * about 2.3e-13: a thousand times the rounding of one subtraction, yet below 2^-40 (1e-12).
+ */
+export const THRESHOLD_SLACK = 2 ** -42;
 
 /** Fills in and validates look options. Throws InputError. */
 export function checkLookOptions(opts: Partial<LookOptions> | undefined): Readonly<LookOptions> {
@@ -41,7 +58,8 @@ export function checkLookOptions(opts: Partial<LookOptions> | undefined): Readon
     (opts.stillHz === undefined &&
       opts.unclearStep === undefined &&
       opts.maxImages === undefined &&
-      opts.groupSpacingsPerS === undefined)
+      opts.groupSpacingsPerS === undefined &&
+      opts.nearlyStillHz === undefined)
   ) {
     return defaultLookOptions;
   }
@@ -51,6 +69,7 @@ export function checkLookOptions(opts: Partial<LookOptions> | undefined): Readon
     unclearStep: requireBetween(o.unclearStep, 'unclear step', 0, 0.5),
     maxImages: requireWhole(o.maxImages, 'largest image count', 1, MAX_IMAGES_LIMIT),
     groupSpacingsPerS: requirePositive(o.groupSpacingsPerS, 'image group spacing'),
+    nearlyStillHz: requirePositive(o.nearlyStillHz, 'nearly-still threshold'),
   };
 }
 

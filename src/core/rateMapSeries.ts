@@ -1,4 +1,4 @@
-import { InputError } from './InputError';
+import { InputError, requireFiniteResult } from './InputError';
 import { lockRates, type LockRate } from './lockRates';
 import { rateBands, type RateBand } from './rateBands';
 import { checkLookOptions, type LookOptions } from './lookOptions';
@@ -77,7 +77,7 @@ export function rateMapSeries(parts: Part[], range: Range, opts?: RateMapOptions
   if (!Number.isInteger(points) || points < 2 || points > MAX_RATE_MAP_POINTS) {
     throw new InputError(
       'points',
-      `The rate map needs a whole number of points from 2 to ${MAX_RATE_MAP_POINTS} (got ${String(points)}).`,
+      `The rate map needs a whole number of points from 2 to ${MAX_RATE_MAP_POINTS} (got ${typeof points === 'number' ? points : typeof points}).`,
     );
   }
   const log = opts?.log ?? false;
@@ -89,6 +89,14 @@ export function rateMapSeries(parts: Part[], range: Range, opts?: RateMapOptions
   // rateBands checks every part and the range and throws InputError naming the bad one.
   const bands = rateBands(parts, range, { ...look, sampler });
   const { minHz, maxHz } = range;
+  // Pitches per sample at the lowest rate must be a number: a part at 10 rev/s seen at
+  // 1e-320 Hz would overflow every apparent speed on the map.
+  for (const part of parts) {
+    requireFiniteResult(
+      (part.symmetry * Math.abs(part.speedHz) * (1 + (part.tolerance ?? 0))) / minHz,
+      'lowest rate',
+    );
+  }
   const grid = rateGrid(minHz, maxHz, points, log);
   // Room for the grid and two more entries a step (an edge adds three, a lock one); the
   // columns grow if a map needs more.
@@ -101,7 +109,10 @@ export function rateMapSeries(parts: Part[], range: Range, opts?: RateMapOptions
   const { rates, apparentRpm, resolvedFromHz } = columns.finish();
 
   const maxImages = sampler === 'frames' ? 1 : look.maxImages;
-  const step = log ? Math.pow(maxHz / minHz, 1 / (points - 1)) - 1 : (maxHz - minHz) / (points - 1);
+  // The ratio of one grid step (log) from logarithms: maxHz/minHz itself can overflow.
+  const step = log
+    ? Math.expm1((Math.log(maxHz) - Math.log(minHz)) / (points - 1))
+    : (maxHz - minHz) / (points - 1);
   const locks = parts.map((part, j) => {
     const from = resolvedFromHz[j];
     if (from >= maxHz) return [];
@@ -123,13 +134,23 @@ export function rateMapSeries(parts: Part[], range: Range, opts?: RateMapOptions
   return { rates, apparentRpm, locks, bands, resolvedFromHz };
 }
 
-/** `points` rates from minHz to maxHz, both ends exact, evenly spaced in rate or in log(rate). */
+/**
+ * `points` rates from minHz to maxHz, both ends exact, evenly spaced in rate or in log(rate).
+ * Written so that no intermediate overflows, however far apart the ends (1e-300 to 1e300 Hz).
+ */
 function rateGrid(minHz: number, maxHz: number, points: number, log: boolean): Float64Array {
   const grid = new Float64Array(points);
   const last = points - 1;
+  const logMin = Math.log(minHz);
+  const logSpan = Math.log(maxHz) - logMin;
   const ratio = maxHz / minHz;
   for (let i = 0; i <= last; i++) {
-    grid[i] = log ? minHz * Math.pow(ratio, i / last) : minHz + ((maxHz - minHz) * i) / last;
+    const t = i / last;
+    grid[i] = log
+      ? Number.isFinite(ratio)
+        ? minHz * Math.pow(ratio, t)
+        : Math.exp(logMin + logSpan * t)
+      : minHz + (maxHz - minHz) * t;
   }
   grid[0] = minHz;
   grid[last] = maxHz;
@@ -239,10 +260,11 @@ class SeriesBuilder {
       // Edges s = F/(k + ½) in [a, b)  ⇔  k in (F/b − ½, F/a − ½].
       const kLow = Math.floor(overB - 0.5) + 1;
       const kHigh = Math.floor(overA - 0.5);
-      if (kHigh > kLow) {
+      // Past 2^53 pitches a sample, k + 1 equals k: as crowded as can be.
+      if (kHigh > kLow || !(overA < Number.MAX_SAFE_INTEGER)) {
         this.stepState[j] = STEP_CROWDED;
         if (this.resolvedFromHz[j] < b) this.resolvedFromHz[j] = b;
-        this.add(log ? Math.sqrt(a * b) : (a + b) / 2, GAP, j);
+        this.add(log ? Math.sqrt(a) * Math.sqrt(b) : a + (b - a) / 2, GAP, j);
         continue;
       }
       if (kHigh === kLow) {

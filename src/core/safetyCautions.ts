@@ -1,4 +1,4 @@
-import { requireFinite } from './InputError';
+import { InputError, requireFinite } from './InputError';
 
 /** What a result could lead someone to trust, to pick the cautions that apply (physics.md §10). */
 export interface CautionContext {
@@ -29,6 +29,7 @@ export function cautionFlags(context: CautionContext): {
   safety: boolean;
   photosensitivity: boolean;
 } {
+  checkContext(context);
   const sweep = context.flashSweepHz;
   return {
     safety: context.apparentStillness === true,
@@ -45,7 +46,8 @@ export function cautionFlags(context: CautionContext): {
  * important first. The planning-aid caution always applies.
  * Sources: OSHA 29 CFR 1910.147 and ISO 14118 (lockout, prevention of unexpected start-up);
  * WCAG 2.x success criterion 2.3.1 (three flashes per second).
- * Throws InputError for a flash rate or sweep end that is not a finite number.
+ * Throws InputError for a context that is not an object, flash rates that are not a list, or
+ * a flash rate or sweep end that is not a finite number.
  * @example safetyCautions({ flashRatesHz: [100] }).length // 1 (only the planning-aid caution)
  */
 /** physics.md §10, first rule: apparent stillness is never a reason to reach in. */
@@ -65,8 +67,22 @@ export const PLANNING_AID_CAUTION =
   "This is a planning aid: local codes, the machine maker's instructions and licensed practice come first.";
 
 export function safetyCautions(context: CautionContext = {}): string[] {
-  (context.flashRatesHz ?? []).forEach((r, i) => requireFinite(r, `flash rate ${i + 1}`));
+  if (typeof context !== 'object' || context === null) {
+    throw new InputError(
+      'cautions',
+      'The cautions need an object saying what the result shows (it may be empty).',
+    );
+  }
+  const rates = context.flashRatesHz ?? [];
+  if (!Array.isArray(rates)) {
+    throw new InputError('flash rates', 'The flash rates must be a list of numbers.');
+  }
+  rates.forEach((r, i) => requireFinite(r, `flash rate ${i + 1}`));
   if (context.flashSweepHz !== undefined) {
+    const sweep: unknown = context.flashSweepHz;
+    if (typeof sweep !== 'object' || sweep === null) {
+      throw new InputError('sweep', 'The sweep must give its lowest and highest rate.');
+    }
     requireFinite(context.flashSweepHz.minHz, 'lowest rate of the sweep');
     requireFinite(context.flashSweepHz.maxHz, 'highest rate of the sweep');
   }
@@ -76,4 +92,21 @@ export function safetyCautions(context: CautionContext = {}): string[] {
   if (flags.photosensitivity) out.push(FLASHING_CAUTION);
   out.push(PLANNING_AID_CAUTION);
   return out;
+}
+
+/** The shape of a caution context, or InputError (a wrongly typed argument, not a TypeError). */
+function checkContext(context: unknown): asserts context is CautionContext {
+  if (typeof context !== 'object' || context === null) {
+    throw new InputError(
+      'cautions',
+      'The cautions need an object saying what the result shows (it may be empty).',
+    );
+  }
+  const { flashRatesHz, flashSweepHz } = context as Record<string, unknown>;
+  if (flashRatesHz !== undefined && !Array.isArray(flashRatesHz)) {
+    throw new InputError('flash rates', 'The flash rates must be a list of numbers.');
+  }
+  if (flashSweepHz !== undefined && (typeof flashSweepHz !== 'object' || flashSweepHz === null)) {
+    throw new InputError('sweep', 'The sweep must give its lowest and highest rate.');
+  }
 }

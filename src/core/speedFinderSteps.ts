@@ -1,6 +1,7 @@
 import { InputError, requireBetween, requirePositive, requireWhole } from './InputError';
 import { checkRange, MAX_IMAGES_LIMIT, MAX_SYMMETRY, type Look, type Range } from './types';
 import { findSpeed, type StrobeReading } from './findSpeed';
+import { mostTellingRate } from './tellingRate';
 import { apparentMotion, type ApparentMotion } from './apparentMotion';
 import { motorSpeedHz } from './drives';
 import { hzToFpm, hzToRpm } from './units';
@@ -90,8 +91,8 @@ export interface SpeedFinderOptions {
   matchTolerance?: number;
 }
 
-/** Candidates whose predicted views are compared when choosing a rate that separates them. */
-const COMPARED = 6;
+/** Candidates whose predicted views are compared when choosing a rate that separates them (as findSpeed). */
+const COMPARED = 8;
 
 /**
  * The usual strobe procedure, one step at a time (physics.md §7): start at the top of the
@@ -99,7 +100,11 @@ const COMPARED = 6;
  * still for the first time; that rate F1 is the pattern rate n·f. Confirm at 2·F1, where
  * exactly two images must stand still (at 2/3·F1 when 2·F1 is beyond the strobe; r = 3/2 shows
  * two images too). Coming down from the start rate, a faster speed would have stood still as a
- * single image above F1 first, so it is ruled out; what is left is the speed found.
+ * single image above F1 first, so it is ruled out; what is left is the speed found. When
+ * several speeds are still left (an expected range, a sweep that did not start high enough),
+ * the next rate is the most telling one over the strobe's whole range (mostTellingRate), and
+ * the instruction, the table's predictions and the rate all come from apparentMotion at that
+ * one rate, so they agree.
  * Built on findSpeed (every consistent speed) and apparentMotion (what each shows).
  *
  * Units: rates in Hz, speeds in rev/s; the words use flashes per minute and rpm.
@@ -170,7 +175,7 @@ export function speedFinderSteps(
     };
   }
 
-  const finding = findSpeed(readings, n, expect, { rateRange: strobe, matchTolerance: tol });
+  const finding = findSpeed(readings, n, expect, { matchTolerance: tol, proposeNext: false });
   if (finding.candidates.length === 0) {
     return {
       ...base,
@@ -200,7 +205,10 @@ export function speedFinderSteps(
   if (firstSingleHz === undefined) {
     plan = comeDown(lead, n, readings, strobe);
   } else {
-    const confirmHz = [2 * firstSingleHz, (2 / 3) * firstSingleHz].find(inRange);
+    // The two-image check for the likeliest speed: n·f/s = ½ or 3/2 (physics.md §3), that is
+    // twice (or two thirds of) its pattern rate, the first single image when the sweep found it.
+    const leadHz = n * lead.speedHz;
+    const confirmHz = [2 * leadHz, (2 / 3) * leadHz].find(inRange);
     const check: CheckState =
       confirmHz === undefined
         ? 'no-room'
@@ -210,11 +218,15 @@ export function speedFinderSteps(
     // With an expected range, only the speeds inside it compete; otherwise all that are left.
     const inside = live.filter((c) => c.expected);
     const rivals = expect && inside.length > 0 ? inside : live;
-    if (confirmHz !== undefined && !tried(confirmHz)) {
+    const last = () =>
+      done(lead, n, firstSingleHz, confirmHz, check, expect, rivals.length, live.length);
+    if (rivals.length > 1) {
+      // Several speeds are left: the most telling rate, not a check that assumes one of them.
+      plan = separate(rivals, n, strobe, tried, tol) ?? last();
+    } else if (confirmHz !== undefined && !tried(confirmHz)) {
       plan = confirm(lead, n, firstSingleHz, confirmHz);
     } else {
-      const last = done(lead, n, firstSingleHz, confirmHz, check, expect, rivals.length);
-      plan = rivals.length > 1 ? (separate(rivals, n, inRange, tried) ?? last) : last;
+      plan = last();
     }
   }
 
@@ -357,7 +369,14 @@ function comeDown(lead: StepCandidate, n: number, readings: StrobeReading[], str
 }
 
 function confirm(lead: StepCandidate, n: number, firstSingleHz: number, confirmHz: number) {
-  const how = confirmHz > firstSingleHz ? 'twice' : 'two thirds of';
+  const near = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * b;
+  const how = near(confirmHz, 2 * firstSingleHz)
+    ? `twice the single-image rate ${fpm(firstSingleHz)}`
+    : near(confirmHz, (2 / 3) * firstSingleHz)
+      ? `two thirds of the single-image rate ${fpm(firstSingleHz)}`
+      : confirmHz > n * lead.speedHz
+        ? `twice ${fpm(n * lead.speedHz)}, the single-image rate of ${rpm(lead.speedHz)}`
+        : `two thirds of ${fpm(n * lead.speedHz)}, the single-image rate of ${rpm(lead.speedHz)}`;
   const look =
     n === 1
       ? 'two marks half a turn apart'
@@ -366,7 +385,7 @@ function confirm(lead: StepCandidate, n: number, firstSingleHz: number, confirmH
     stage: 'confirm' as const,
     rateHz: confirmHz,
     instruction:
-      `Now set ${fpm(confirmHz)} (${how} the single-image rate ${fpm(firstSingleHz)}). If the part turns at ` +
+      `Now set ${fpm(confirmHz)} (${how}). If the part turns at ` +
       `${rpm(lead.speedHz)}, ${look} stand still there. Record what you see; a single image there means the ` +
       'part turns faster and the search goes on.',
   };
@@ -375,37 +394,53 @@ function confirm(lead: StepCandidate, n: number, firstSingleHz: number, confirmH
 function separate(
   rivals: StepCandidate[],
   n: number,
-  inRange: (s: number) => boolean,
+  strobe: Range,
   tried: (s: number) => boolean,
+  tol: number,
 ): { stage: SpeedFinderStage; rateHz: number; instruction: string } | undefined {
   const compared = rivals.slice(0, COMPARED);
-  const key = (p: StepPrediction) => `${p.look}:${p.images}`;
-  let best: { rateHz: number; distinct: number } | undefined;
-  for (const c of compared) {
-    const G = n * c.speedHz;
-    for (const s of [2 * G, G, G / 2, (2 / 3) * G, 3 * G, G / 3]) {
-      if (!inRange(s) || tried(s)) continue;
-      const keys = compared.map((x) => key(predict(x.speedHz, n, s)));
-      const distinct = new Set(keys).size;
-      if (keys.slice(1).every((k) => k !== keys[0])) {
-        return { stage: 'separate', rateHz: s, instruction: separateInstruction(s, compared, n) };
-      }
-      if (!best || distinct > best.distinct) best = { rateHz: s, distinct };
-    }
-  }
-  if (!best || best.distinct < 2) return undefined;
+  // physics.md §7: the most telling rate over the strobe's whole range.
+  const best = mostTellingRate(
+    compared.map((c) => n * c.speedHz),
+    n,
+    strobe,
+    tried,
+    tol,
+  );
+  if (!best) return undefined;
   return {
     stage: 'separate',
     rateHz: best.rateHz,
-    instruction: separateInstruction(best.rateHz, compared, n),
+    instruction: separateInstruction(best.rateHz, compared, rivals.length, n, best.separatesTop),
   };
 }
 
-function separateInstruction(s: number, compared: StepCandidate[], n: number): string {
-  const views = compared
-    .map((c) => `at ${rpm(c.speedHz)}: ${predict(c.speedHz, n, s).text}`)
-    .join('; ');
-  return `Several speeds still fit. Set ${fpm(s)} and compare what you see with each (${views}). Record it.`;
+function separateInstruction(
+  s: number,
+  compared: StepCandidate[],
+  rivals: number,
+  n: number,
+  separatesTop: boolean,
+): string {
+  const predictions = compared.map((c) => ({ c, view: predict(c.speedHz, n, s) }));
+  const views = predictions.map(({ c, view }) => `at ${rpm(c.speedHz)}: ${view.text}`).join('; ');
+  const which =
+    rivals > compared.length
+      ? `the ${compared.length} likeliest of the ${rivals} speeds that still fit`
+      : `the ${rivals} speeds that still fit`;
+  let text = `Set ${fpm(s)} and compare what you see with ${which} (${views}).`;
+  // A group of images, or one image drifting slower than 60 rpm, can be brought to a stop.
+  const stands = predictions.some(
+    ({ view }) => view.look === 'still' || view.images > 1 || Math.abs(view.apparentRpm) < 60,
+  );
+  text += stands
+    ? ' Where images stand still or drift slowly, small changes of rate stop them: record that rate and how many images.'
+    : ' Nothing is expected to stand still there: the way the part seems to move tells the speeds apart.';
+  if (!separatesTop) {
+    text +=
+      " No rate in the strobe's range shows the likeliest speed differently from every other; this one tells the most of them apart.";
+  }
+  return text;
 }
 
 function done(
@@ -416,6 +451,7 @@ function done(
   check: CheckState,
   expect: Range | undefined,
   rivals: number,
+  live: number,
 ) {
   let text = `The part turns at ${rpm(lead.speedHz)} (single image at ${fpm(firstSingleHz)}`;
   text +=
@@ -425,8 +461,10 @@ function done(
         ? "; the two-image check does not fit in the strobe's range)."
         : `; the check at ${fpm(confirmHz ?? 0)} did not show two images, and this is the speed that fits every reading).`;
   if (rivals > 1) {
-    text +=
-      " Other speeds in the table fit the readings too and no rate in the strobe's range tells them apart; the one given is the slowest.";
+    text += ` ${rivals - 1} other ${rivals === 2 ? 'speed' : 'speeds'} in the table fit the readings too and no rate in the strobe's range tells them apart; the one given is the slowest.`;
+  } else if (live > rivals) {
+    const others = live - rivals;
+    text += ` ${others} ${others === 1 ? 'speed' : 'speeds'} outside the expected range fit the readings too (see the table).`;
   }
   if (expect && !lead.expected) {
     text +=

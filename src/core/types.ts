@@ -41,6 +41,14 @@ export function checkPart(part: unknown, field = 'part'): Required<Part> {
   const symmetry = requireWhole(p.symmetry, 'features (blades, spokes)', 1, MAX_SYMMETRY);
   const tolerance =
     p.tolerance === undefined ? 0 : requireBetween(p.tolerance, 'speed tolerance', 0, 0.5);
+  // Twice the fastest pattern rate (the Nyquist rate of §2) must be a number: a speed of 1e308
+  // rev/s would overflow it and every result built on it.
+  if (!Number.isFinite(2 * symmetry * Math.abs(speedHz) * (1 + tolerance))) {
+    throw new InputError(
+      'speed',
+      `The speed (${speedHz} rev/s) is too large to work with: check the units (rpm, Hz, rad/s).`,
+    );
+  }
   return { speedHz, symmetry, tolerance };
 }
 

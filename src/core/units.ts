@@ -38,11 +38,14 @@ export const mToIn = (m: number): number => finite(requireFinite(m, 'length') / 
 
 /**
  * Reads a number as people type it: "1780", "1,780", "1 780", "29.97", "29,97", "1.780,5",
- * "-3", "+2.5", "1e3", with an optional unit after it ("1780 rpm"), which is ignored here
+ * "-3", "+2.5", "1e3", "2½", with an optional unit after it ("1780 rpm"), which is ignored here
  * (see parseQuantity). A comma followed by exactly three digits and no decimal point is a
  * thousands separator, unless only zeros stand before it ("0,125" is 0.125); otherwise a
  * lone comma is the decimal mark. When both marks appear, the last one is the decimal mark.
- * Throws InputError naming `field` for empty text or text that is not a number.
+ * Spaces and apostrophes group thousands only as groups of three digits ("1 780"): two
+ * numbers in one field ("1780 1800", "1780, 1800", "1780 rpm 1800") are refused, never run
+ * together. A fraction sign after a whole number counts as its fraction ("2½" is 2.5).
+ * Throws InputError naming `field` for empty text, text that is not a number, or two numbers.
  * @example parseNumber('1,780 rpm') // 1780
  */
 export function parseNumber(text: string, field = 'value'): number {
@@ -52,22 +55,71 @@ export function parseNumber(text: string, field = 'value'): number {
 const NUMBER =
   /^\s*([+\-−]?)\s*((?:\d[\d\s\u00a0\u202f.,']*)?\d|\d*[.,]\d+)(?:[eE]([+-]?\d+))?\s*(.*?)\s*$/u;
 
+/** Unicode fraction signs people type or paste (Unicode "Number Forms" block), by value. */
+const FRACTIONS: Record<string, number> = {
+  '¼': 1 / 4,
+  '½': 1 / 2,
+  '¾': 3 / 4,
+  '⅓': 1 / 3,
+  '⅔': 2 / 3,
+  '⅕': 1 / 5,
+  '⅖': 2 / 5,
+  '⅗': 3 / 5,
+  '⅘': 4 / 5,
+  '⅙': 1 / 6,
+  '⅚': 5 / 6,
+  '⅛': 1 / 8,
+  '⅜': 3 / 8,
+  '⅝': 5 / 8,
+  '⅞': 7 / 8,
+};
+const WITH_FRACTION = /^\s*([+\-−]?)\s*(\d*)\s*([¼½¾⅓⅔⅕⅖⅗⅘⅙⅚⅛⅜⅝⅞])\s*(.*?)\s*$/u;
+
 function splitNumber(text: string, field: string): { value: number; unit: string } {
   if (typeof text !== 'string') throw new InputError(field, `${field} must be typed as text.`);
   if (text.trim() === '') throw new InputError(field, `${field} is empty: type a number.`);
+  const shown = text.slice(0, 24);
+  const twoNumbers = () =>
+    new InputError(field, `"${shown}" holds more than one number: type one number for ${field}.`);
+  const withFraction = WITH_FRACTION.exec(text);
+  if (withFraction) {
+    const [, signText, whole, sign, unit] = withFraction;
+    if (/\d/.test(unit)) throw twoNumbers();
+    const sign1 = signText === '-' || signText === '−' ? -1 : 1;
+    return { value: sign1 * (Number(whole || '0') + FRACTIONS[sign]), unit };
+  }
   const m = NUMBER.exec(text);
-  if (!m) throw new InputError(field, `"${text.slice(0, 24)}" is not a number for ${field}.`);
+  if (!m) throw new InputError(field, `"${shown}" is not a number for ${field}.`);
+  // A digit after the number ("1780 rpm 1800", "1780-1800") is a second number.
+  if (/\d/.test(m[4])) throw twoNumbers();
   const sign = m[1] === '-' || m[1] === '−' ? -1 : 1;
-  const digits = normaliseDigits(m[2], text, field);
+  const digits = normaliseDigits(m[2], text, field, twoNumbers);
   const exponent = m[3] ? Number(m[3]) : 0;
   const value = sign * Number(digits) * Math.pow(10, exponent);
-  if (!Number.isFinite(value))
-    throw new InputError(field, `"${text.slice(0, 24)}" is too large for ${field}.`);
+  if (!Number.isFinite(value)) throw new InputError(field, `"${shown}" is too large for ${field}.`);
   return { value, unit: m[4] };
 }
 
-function normaliseDigits(raw: string, text: string, field: string): string {
-  const s = raw.replace(/[\s\u00a0\u202f']/g, '');
+function normaliseDigits(
+  raw: string,
+  text: string,
+  field: string,
+  twoNumbers: () => InputError,
+): string {
+  // Spaces and apostrophes group thousands: 1 to 3 digits, then groups of exactly three (the
+  // last may carry the decimals). Anything else is two numbers typed side by side.
+  const groups = raw.split(/[\s\u00a0\u202f']+/);
+  if (
+    groups.length > 1 &&
+    !(
+      /^\d{1,3}$/.test(groups[0]) &&
+      groups.slice(1, -1).every((g) => /^\d{3}$/.test(g)) &&
+      /^\d{3}(?:[.,]\d+)?$/.test(groups[groups.length - 1])
+    )
+  ) {
+    throw twoNumbers();
+  }
+  const s = groups.join('');
   const lastDot = s.lastIndexOf('.');
   const lastComma = s.lastIndexOf(',');
   let out: string;
@@ -129,8 +181,10 @@ const UNITS: Record<QuantityKind, Record<string, number>> = {
 
 /**
  * Reads a number with an optional unit and returns it in the core unit of `kind`; text
- * without a unit takes `defaultUnit`. "1/250" in a time field reads as 1/250 s.
- * Throws InputError for text that is not a number or a unit that does not fit the kind.
+ * without a unit takes `defaultUnit`. "1/250" in a time field reads as 1/250 s. Two numbers
+ * in one field ("1780 1800") are refused.
+ * Throws InputError for text that is not a number, two numbers, a unit that does not fit the
+ * kind, or arguments of the wrong type (an unknown kind, a default unit that is not text).
  * @example parseQuantity('1,780 rpm', 'speed', 'rpm') // 29.666666666666668 (rev/s)
  */
 export function parseQuantity(
@@ -139,6 +193,18 @@ export function parseQuantity(
   defaultUnit: string,
   field: string = kind,
 ): number {
+  if (typeof field !== 'string') {
+    throw new InputError('field', 'The name of the field must be text.');
+  }
+  if (typeof kind !== 'string' || !Object.prototype.hasOwnProperty.call(UNITS, kind)) {
+    throw new InputError(
+      field,
+      `${field}: "${typeof kind === 'string' ? kind : typeof kind}" is not a kind of quantity; use ${Object.keys(UNITS).join(', ')}.`,
+    );
+  }
+  if (typeof defaultUnit !== 'string') {
+    throw new InputError(field, `${field}: the default unit must be text, e.g. "rpm".`);
+  }
   const table = UNITS[kind];
   if (kind === 'time' && typeof text === 'string') {
     const frac = /^\s*1\s*\/\s*(\d+(?:[.,]\d+)?)\s*(s)?\s*$/i.exec(text);
@@ -165,7 +231,13 @@ export function parseQuantity(
   return finite(value * factor, field);
 }
 
-/** Unit words a kind accepts, for help text. */
+/** Unit words a kind accepts, for help text. Throws InputError for an unknown kind. */
 export function unitsFor(kind: QuantityKind): string[] {
+  if (typeof kind !== 'string' || !Object.prototype.hasOwnProperty.call(UNITS, kind)) {
+    throw new InputError(
+      'kind',
+      `"${typeof kind === 'string' ? kind : typeof kind}" is not a kind of quantity; use ${Object.keys(UNITS).join(', ')}.`,
+    );
+  }
   return Object.keys(UNITS[kind]);
 }

@@ -13,10 +13,12 @@ import {
   flickerLimits,
   flickerRisk,
   lightHarmonics,
+  isSettableBand,
   lockRates,
   rateBands,
   ratesForApparent,
   rollingSkewDegrees,
+  settingStepHz,
   svm,
   type ApparentMotion,
   type FlickerRisk,
@@ -75,8 +77,9 @@ export interface BandSummary {
   partial: boolean;
   /** The band holding the current rate, when the rate lies in the span. */
   current?: RateBand;
-  /** Safe bands nearest the current rate, ascending. */
+  /** Safe bands nearest the current rate, ascending: only bands at least one setting step wide. */
   safeNearby: RateBand[];
+  /** Safe bands a person can set (at least one setting step wide), in the span searched. */
   safeCount: number;
 }
 
@@ -121,6 +124,8 @@ export interface CheckResult {
   motion: ApparentMotion;
   verdict: Verdict;
   locks: SuggestedRate[];
+  /** Why some lock-in rates near the current one are not suggested, when some are not. */
+  locksNote?: string;
   creep: CreepRate[];
   creepRpm: number;
   /** Why no creep rate is offered, when none is. */
@@ -329,9 +334,9 @@ function nearbyLocks(
   rateHz: number,
   range: Range,
   sampler: Sampler,
-): SuggestedRate[] {
+): { locks: SuggestedRate[]; note?: string } {
   const patternHz = part.symmetry * Math.abs(part.speedHz);
-  if (patternHz === 0) return [];
+  if (patternHz === 0) return { locks: [] };
   const maxImages = sampler === 'flash' ? Math.min(look.maxImages, SUGGESTED_MAX_IMAGES) : 1;
   const anchor = clampTo(range, rateHz);
   const { found } = searchAround(
@@ -343,13 +348,36 @@ function nearbyLocks(
     (l) => l.rateHz,
     LOCKS_PER_SIDE,
   );
-  return nearest(found, rateHz, (l) => l.rateHz, LOCKS_PER_SIDE).map((l) => ({
+  // physics.md §4: a lock is offered only when the rates that freeze it (its tolerance band
+  // widened by the still threshold, n·stillHz·q/p) make a band a person can set and hold.
+  const step = settingStepHz(sampler);
+  const stillHz = part.symmetry * look.stillHz;
+  const holdable = found.filter((l) =>
+    isSettableBand(
+      { fromHz: l.lowHz - (stillHz * l.q) / l.p, toHz: l.highHz + (stillHz * l.q) / l.p },
+      step,
+      l.rateHz,
+    ),
+  );
+  const locks = nearest(holdable, rateHz, (l) => l.rateHz, LOCKS_PER_SIDE).map((l) => ({
     rateHz: l.rateHz,
     images: l.images,
     lowHz: l.lowHz,
     highHz: l.highHz,
     side: sideOf(l.rateHz, rateHz),
   }));
+  // Left out only where one of the nearest locks would otherwise have been shown.
+  const dropped = nearest(found, rateHz, (l) => l.rateHz, LOCKS_PER_SIDE).some(
+    (l) => !holdable.includes(l),
+  );
+  if (!dropped) return { locks };
+  const unit = sampler === 'frames' ? '0.01 frames/s' : 'one flash per minute';
+  return {
+    locks,
+    note:
+      `Some lock-in rates near here freeze the part over less than ${unit}: too narrow to set and ` +
+      `hold, so they are left out. A speed tolerance widens them; the rate map shows every lock.`,
+  };
 }
 
 function creepRates(
@@ -374,7 +402,8 @@ function creepRates(
     range,
     gapHz / anchor,
     (span) => gapHz * (1 / span.minHz - 1 / span.maxHz) + 1,
-    (span) => ratesForApparent(part, wanted, span),
+    // physics.md §4: only rates where this sampler shows one image creeping forward.
+    (span) => ratesForApparent(part, wanted, span, { sampler }),
     (r) => r.rateHz,
     1,
   );
@@ -390,7 +419,7 @@ function creepRates(
     };
   return {
     rates,
-    note: `No rate in the range makes it creep forward at ${formatNumber(creepRpm)} rpm.`,
+    note: `No rate in the range shows it as one image creeping forward at ${formatNumber(creepRpm)} rpm.`,
   };
 }
 
@@ -401,9 +430,11 @@ function bandSummary(
   sampler: Sampler,
 ): BandSummary {
   const patternHz = part.symmetry * Math.abs(part.speedHz);
-  const stillPatternHz = part.symmetry * look.stillHz;
-  const loHz = Math.max(0, patternHz * (1 - part.tolerance) - stillPatternHz);
-  const hiHz = patternHz * (1 + part.tolerance) + stillPatternHz;
+  // rateBands' spans reach the nearly-still margin below a lock and the image-group margin above.
+  const belowHz = part.symmetry * Math.max(look.stillHz, look.nearlyStillHz);
+  const aboveHz = Math.max(part.symmetry * look.stillHz, look.groupSpacingsPerS);
+  const loHz = Math.max(0, patternHz * (1 - part.tolerance) - belowHz);
+  const hiHz = patternHz * (1 + part.tolerance) + aboveHz;
   const qMax = sampler === 'flash' ? look.maxImages : 1;
   const cost = (span: Range) => bandWork(loHz, hiHz, qMax, span);
   let span = range;
@@ -420,7 +451,9 @@ function bandSummary(
   const fits = span.minHz < span.maxHz && (patternHz === 0 || cost(span) <= WORK_LIMIT);
   const all = fits ? rateBands([part], span, { sampler }) : [];
   const current = all.find((b) => b.fromHz <= rateHz && rateHz <= b.toHz);
-  const safe = all.filter((b) => b.safe);
+  // physics.md §4: a band narrower than one setting step is not offered.
+  const step = settingStepHz(sampler);
+  const safe = all.filter((b) => b.safe && isSettableBand(b, step));
   const wide = safe.filter(
     (b) => b.toHz - b.fromHz >= MIN_USEFUL_BAND * Math.sqrt(b.fromHz * b.toHz),
   );
@@ -537,7 +570,7 @@ export function computeCheck(s: Setup): CheckResult {
     part,
     motion,
     verdict,
-    locks: nearbyLocks(part, rateHz, range, sampler),
+    ...lockSuggestions(nearbyLocks(part, rateHz, range, sampler)),
     creep: creep.rates,
     creepRpm: s.creepRpm,
     creepNote: creep.note,
@@ -548,6 +581,12 @@ export function computeCheck(s: Setup): CheckResult {
     showPhotosensitivity: flashes && cautionFlags({ flashRatesHz: [rateHz] }).photosensitivity,
     notes,
   };
+}
+
+function lockSuggestions(found: { locks: SuggestedRate[]; note?: string }) {
+  return found.note === undefined
+    ? { locks: found.locks }
+    : { locks: found.locks, locksNote: found.note };
 }
 
 /** A check result, or the reason the core refused the set-up. */

@@ -133,8 +133,11 @@ describe('the speed finder at phone size', () => {
     // Six blades (the Check screen's default fan has six).
     expect(await page.getByLabel('Blades or marks on the part').inputValue()).toBe('6');
 
-    // Coming down from 12,000 fpm, the first single image stands at 1780 fpm.
+    // Coming down from 12,000 fpm, the first single image stands at 1780 fpm. The count seen is
+    // always chosen by the technician (physics.md §7: never filled in from a prediction).
     await typeInto(page, 'Rate where it stood still', '1780');
+    expect(await page.getByLabel('Images standing still', { exact: true }).inputValue()).toBe('');
+    await page.getByLabel('Images standing still', { exact: true }).selectOption('1');
     await page.getByRole('button', { name: 'Add reading' }).click();
     await expect
       .poll(() => instruction.innerText())

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { apparentMotion } from '../../src/core/apparentMotion';
+import { lockRates } from '../../src/core/lockRates';
 import { defaultLookOptions } from '../../src/core/lookOptions';
 import {
   anyFinite,
@@ -227,6 +228,78 @@ describe('apparentMotion: precedence of physics.md §2', () => {
   it('follows a custom still threshold', () => {
     const m = apparentMotion(oneMark(30), 30000 / 1001, { sampler: 'frames', stillHz: 0.05 });
     expect(m.look).toBe('still'); // 30/1001 ≈ 0.03 rev/s < 0.05
+  });
+});
+
+describe('apparentMotion: which group stands still, and nearly still (physics.md §2–§4)', () => {
+  const gear = { speedHz: 1780 / 60, symmetry: 60 };
+
+  it('shows a 60-tooth gear at 1780 rpm under 13.92 flashes/s as 8 images, the group with the smallest drift', () => {
+    // physics.md §3: 60·29.667/13.92 = 127.8736 pitches a flash. The 8-image group 1023/8
+    // drifts |1780 − 1023·13.92/8|/60 = 0.02 rpm, the 7-image group 895/7 drifts
+    // |1780 − 895·13.92/7|/60 = 0.229 rpm: both at or below 0.25 rpm, the 8 images stand still.
+    const seen = apparentMotion(gear, 13.92);
+    expect([seen.look, seen.images, seen.p, seen.q]).toEqual(['still', 8, 1023, 8]);
+    expect(Math.abs(seen.driftHz) * 60).toBeCloseTo(0.02, 9);
+    // The contract's own figure: 13.9198 flashes/s shows 8 images, not 7.
+    expect(apparentMotion(gear, 13.9198)).toMatchObject({ look: 'still', images: 8 });
+  });
+
+  it('reports at every lock lockRates lists the image count it lists', () => {
+    // physics.md §3: the count apparentMotion reports equals lockRates' (here around 13.92 flashes/s).
+    const locks = lockRates(gear, { minHz: 13, maxHz: 15 });
+    expect(locks.length).toBeGreaterThan(20);
+    for (const lock of locks) {
+      expect(apparentMotion(gear, lock.rateHz).images, `${lock.p}/${lock.q}`).toBe(lock.q);
+    }
+  });
+
+  it('reads a drift equal to the still threshold as still: 3000.25 rpm at 50 frames/s', () => {
+    // physics.md §2: thresholds are inclusive with a relative slack of about 1e-12;
+    // 3000.25/60 − 50 = 0.25/60 rev/s, exactly the 0.25 rpm threshold.
+    for (const sampler of ['frames', 'flash'] as const) {
+      expect(apparentMotion({ speedHz: 3000.25 / 60, symmetry: 1 }, 50, { sampler })).toMatchObject(
+        {
+          look: 'still',
+          images: 1,
+        },
+      );
+    }
+    // A hair beyond it is forward.
+    expect(
+      apparentMotion({ speedHz: 3000.26 / 60, symmetry: 1 }, 50, { sampler: 'frames' }).look,
+    ).toBe('forward');
+  });
+
+  it('marks a forward creep below 6 rpm nearly still, and one at 6 rpm or more not', () => {
+    // physics.md §4: nearly still below 6 rpm (one turn in 10 s or longer).
+    const mark = { speedHz: 30, symmetry: 1 };
+    // 30 rev/s under 29.95 flashes/s: 0.05 rev/s = 3 rpm forward.
+    expect(apparentMotion(mark, 29.95)).toMatchObject({ look: 'forward', nearlyStill: true });
+    // under 29.8 flashes/s: 0.2 rev/s = 12 rpm forward.
+    expect(apparentMotion(mark, 29.8)).toMatchObject({ look: 'forward', nearlyStill: false });
+    // exactly 6 rpm (0.1 rev/s at 29.9 flashes/s) is not below the threshold.
+    expect(apparentMotion(mark, 29.9)).toMatchObject({ look: 'forward', nearlyStill: false });
+    // backward creeps and still views are nearly still too; a faithful view never is.
+    expect(apparentMotion(mark, 30.05)).toMatchObject({ look: 'backward', nearlyStill: true });
+    expect(apparentMotion(mark, 30)).toMatchObject({ look: 'still', nearlyStill: true });
+    expect(apparentMotion({ speedHz: 0.05, symmetry: 1 }, 100)).toMatchObject({
+      look: 'true',
+      nearlyStill: false,
+    });
+  });
+
+  it('takes the nearly-still threshold from the options, never below the still threshold', () => {
+    const mark = { speedHz: 30, symmetry: 1 };
+    expect(apparentMotion(mark, 29.95, { nearlyStillHz: 0.01 }).nearlyStill).toBe(false);
+    expect(apparentMotion(mark, 29.8, { nearlyStillHz: 0.5 }).nearlyStill).toBe(true);
+    // A nearly-still threshold under the still one acts as the still one.
+    const look = { stillHz: 0.1, nearlyStillHz: 0.01 };
+    expect(apparentMotion(mark, 29.95, look)).toMatchObject({ look: 'still', nearlyStill: true });
+    expect(apparentMotion(mark, 29.85, look)).toMatchObject({
+      look: 'forward',
+      nearlyStill: false,
+    });
   });
 });
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { cameraPlan, standardFrameRates, type CameraAbilities } from '../../src/core/cameraPlan';
 import { anyFinite, bad, expectInputError, finiteOrInputError } from './expectInputError';
-import { lookOf, sceneOf } from './simulator';
+import { replay, sceneOf } from './simulator';
 
 const wheel = { speedHz: 2, symmetry: 12 }; // Wikipedia, "Stroboscopic effect": 12 spokes at 2 rev/s
 const fan = { speedHz: 1770 / 60, symmetry: 6 }; // Engineering ToolBox typical 4-pole 60 Hz full-load speed, 6 blades
@@ -318,7 +318,7 @@ describe('cameraPlan: every condition of the goal, and what blocks it (issue 8 i
     expect(plan.needs.lookRateCount).toBe(8);
     expect(plan.needs.lookRates.filter((r) => r.offered).map((r) => r.rateHz)).toEqual([25]);
     // Independent check: an exact replay of the frames shows each of them still (test/core/simulator).
-    for (const hz of expected) expect(lookOf(sceneOf(100, 2, hz, 'frames'))).toBe('still');
+    for (const hz of expected) expect(replay(sceneOf(100, 2, hz, 'frames')).look).toBe('still');
     expect(plan.span).toEqual({ minHz: 24, maxHz: 240 });
   });
 
@@ -404,7 +404,7 @@ describe('cameraPlan: every condition of the goal, and what blocks it (issue 8 i
     expect(rates[0]).toBeCloseTo(29.5, 12);
     for (const hz of rates) {
       expect(hz).toBeGreaterThanOrEqual(10);
-      expect(lookOf(sceneOf(30, 1, hz, 'frames'))).toBe('forward');
+      expect(replay(sceneOf(30, 1, hz, 'frames')).look).toBe('forward');
     }
   });
 
@@ -440,7 +440,7 @@ describe('cameraPlan: every condition of the goal, and what blocks it (issue 8 i
             expect(s.reaches && s.blocks.length === 0).toBe(true);
             // The contract's conditions, checked from the numbers (physics.md §5; cameraPlan's defaults).
             if (kind === 'freeze') {
-              expect(lookOf(sceneOf(speedHz, symmetry, s.frameRate, 'frames'))).toBe('still');
+              expect(replay(sceneOf(speedHz, symmetry, s.frameRate, 'frames')).look).toBe('still');
               expect(s.blurDegrees).toBeLessThanOrEqual(2);
               expect(s.skewPitches).toBeLessThan(1);
             }

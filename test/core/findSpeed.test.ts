@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { findSpeed } from '../../src/core/findSpeed';
 import { apparentMotion } from '../../src/core/apparentMotion';
+import { replay, sceneOf } from './simulator';
 import {
   anyPositive,
   bad,
@@ -106,6 +107,98 @@ describe('findSpeed: ranking and the next rate', () => {
     });
     expect(found.nextRateHz).toBeGreaterThanOrEqual(5);
     expect(found.nextRateHz).toBeLessThanOrEqual(100);
+  });
+});
+
+describe('findSpeed: an expected range is enumerated, never capped away (physics.md §7)', () => {
+  it('lists every speed of a 60-tooth gear in 29–30 rev/s from one image at 10 flashes/s', () => {
+    // Reported case. n·f = k·F with k from ⌈60·29/10⌉ = 174 to ⌊60·30/10⌋ = 180: seven speeds,
+    // k/6 rev/s = 29, 29.17, …, 30 (physics.md §7).
+    const found = findSpeed([single(10)], 60, { minHz: 29, maxHz: 30 });
+    const inside = found.candidates.filter((c) => c.expected);
+    expect(inside.map((c) => c.speedHz * 6)).toEqual(
+      [174, 175, 176, 177, 178, 179, 180].map((k) => expect.closeTo(k, 9)),
+    );
+    // They come first; slower speeds outside the range follow.
+    expect(found.candidates.slice(0, 7).every((c) => c.expected)).toBe(true);
+    expect(found.candidates.length).toBeGreaterThan(7);
+    for (const c of inside) {
+      expect(apparentMotion({ speedHz: c.speedHz, symmetry: 60 }, 10)).toMatchObject({
+        look: 'still',
+        images: 1,
+      });
+    }
+  });
+
+  it('returns every speed inside the range even when there are more than the list holds', () => {
+    // One mark, a single image at 1 flash/s, expected 10–60 rev/s: k = 10…60, 51 speeds (> 40).
+    const found = findSpeed([single(1)], 1, { minHz: 10, maxHz: 60 });
+    expect(found.candidates.filter((c) => c.expected)).toHaveLength(51);
+  });
+
+  it('refuses, with a message, an expected range holding more speeds than can be tested', () => {
+    expectInputError(
+      () => findSpeed([single(0.001)], 1000, { minHz: 1, maxHz: 1e6 }),
+      'expected speed range',
+      'narrow it',
+    );
+  });
+});
+
+describe('findSpeed: the next rate is searched over the whole strobe range (physics.md §7)', () => {
+  const strobe = { minHz: 30 / 60, maxHz: 12000 / 60 };
+
+  it('after single images at 1500 and 1000 flashes/min proposes a rate where the candidates look different, not 3000', () => {
+    // Reported case: at 3000 flashes/min (50 Hz) every candidate 50, 100, 150, 200 rev/s shows one
+    // still image (n·f/s whole), so it tells nothing.
+    const found = findSpeed([single(25), single(1000 / 60)], 1, undefined, { rateRange: strobe });
+    expect(found.candidates.map((c) => c.speedHz)).toEqual([50, 100, 150, 200]);
+    expect(found.nextPurpose).toBe('separate');
+    expect(found.nextRateHz).not.toBeCloseTo(50, 9);
+    // Brute-force replay (test/core/simulator.ts) of each candidate at the rate proposed: the
+    // likeliest (50 rev/s) looks unlike every other.
+    const views = found.candidates.map((c) => {
+      const v = replay(sceneOf(c.speedHz, 1, found.nextRateHz!, 'flash'));
+      return `${v.images}:${v.look}`;
+    });
+    expect(views.slice(1)).not.toContain(views[0]);
+    // Within the strobe's range and a whole number of flashes per minute (settable).
+    expect(found.nextRateHz! * 60).toBe(Math.round(found.nextRateHz! * 60));
+  });
+
+  it('after single images at 30 and 20 flashes/s finds a rate in a 1–35 Hz strobe that tells 60 rev/s from 120', () => {
+    // Reported case: the old search said no rate helps. 24 flashes/s, for one, shows 2 images at
+    // 60 rev/s (r = 5/2) and 1 at 120 rev/s (r = 5), physics.md §3.
+    expect(replay(sceneOf(60, 1, 24, 'flash')).images).toBe(2);
+    expect(replay(sceneOf(120, 1, 24, 'flash')).images).toBe(1);
+    const found = findSpeed([single(30), single(20)], 1, undefined, {
+      rateRange: { minHz: 1, maxHz: 35 },
+    });
+    expect(found.nextPurpose).toBe('separate');
+    const s = found.nextRateHz!;
+    expect(s).toBeGreaterThanOrEqual(1);
+    expect(s).toBeLessThanOrEqual(35);
+    const at = (speedHz: number) => {
+      const v = replay(sceneOf(speedHz, 1, s, 'flash'));
+      return `${v.images}:${v.look}`;
+    };
+    expect(at(60)).not.toBe(at(120));
+  });
+
+  it('says no rate helps only when none in the range tells any two candidates apart', () => {
+    // A strobe that only reaches 59.9–60.1 flashes/s: 60, 120, 180 and 240 rev/s all show one
+    // image drifting slowly there, whichever speed it is.
+    const found = findSpeed([single(30), single(20)], 1, undefined, {
+      rateRange: { minHz: 59.9, maxHz: 60.1 },
+    });
+    expect(found.candidates).toHaveLength(4);
+    expect(found.nextRateHz).toBeUndefined();
+  });
+
+  it('leaves the next rate out when asked to', () => {
+    expect(findSpeed([single(30), single(20)], 1, undefined, { proposeNext: false })).toEqual({
+      candidates: findSpeed([single(30), single(20)], 1).candidates,
+    });
   });
 });
 

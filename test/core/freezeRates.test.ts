@@ -63,7 +63,11 @@ describe('stillRates: where parts can look still', () => {
           const m = apparentMotion(part, rateHz, { sampler });
           const holding = spans.filter((x) => x.fromHz < rateHz && rateHz < x.toHz);
           expect(m.look === 'still').toBe(holding.length > 0);
-          if (holding.length > 0) expect(m.images).toBe(Math.min(...holding.map((x) => x.images)));
+          // physics.md §3: of the groups standing still, the one with the smallest drift
+          // |n·f − (p/q)·s| is seen (ties to the smaller q).
+          const drift = (x: StillSpan) => Math.abs(symmetry * speedHz - (x.p * rateHz) / x.images);
+          const seen = [...holding].sort((a, b) => drift(a) - drift(b) || a.images - b.images)[0];
+          if (seen) expect(m.images).toBe(seen.images);
           return true;
         },
       ),
@@ -175,7 +179,7 @@ describe('freezeRates: freeze one part while no other looks still', () => {
     expect(apparentMotion(chain[0], 58, { maxImages: 2 }).look).not.toBe('still');
   });
 
-  it('gives exactly the target’s single-image spans minus every other part’s still spans', () => {
+  it('gives the target’s single-image spans minus every other part’s still spans, each piece that holds its nominal lock and is a step wide', () => {
     fc.assert(
       fc.property(
         fc.array(
@@ -190,20 +194,81 @@ describe('freezeRates: freeze one part while no other looks still', () => {
         fc.array(fc.double({ min: 5, max: 120, noNaN: true }), { minLength: 20, maxLength: 20 }),
         (parts: Part[], sampler, rates) => {
           const range = { minHz: 5, maxHz: 120 };
+          const step = sampler === 'flash' ? 1 / 60 : 0.01; // physics.md §4 default steps
           const bands = freezeRates(parts, 0, range, { sampler });
           const own = stillRates([parts[0]], range, { sampler: 'frames' }); // single images only
           const others = stillRates(parts.slice(1), range, { sampler });
+          const F = parts[0].symmetry * Math.abs(parts[0].speedHz);
           for (let i = 1; i < bands.length; i++)
             expect(bands[i].fromHz).toBeGreaterThanOrEqual(bands[i - 1].toHz);
+          for (const b of bands) {
+            // physics.md §4: contains the nominal lock, at least one setting step wide.
+            expect(b.lockRateHz).toBeCloseTo(F / b.p, 9);
+            expect(b.fromHz).toBeLessThanOrEqual(b.lockRateHz);
+            expect(b.toHz).toBeGreaterThanOrEqual(b.lockRateHz);
+            expect(b.toHz - b.fromHz).toBeGreaterThanOrEqual(step * (1 - 1e-9));
+          }
           for (const s of rates) {
             if (nearEdge([...bands, ...own, ...others], s)) continue;
-            expect(inside(bands, s), `${s} Hz`).toBe(inside(own, s) && !inside(others, s));
+            const free = inside(own, s) && !inside(others, s);
+            if (inside(bands, s)) expect(free, `${s} Hz`).toBe(true);
+            else if (free) {
+              // The piece of own − others around s: left out only when it misses its nominal
+              // lock or is narrower than a step.
+              const span = own.find((x) => x.fromHz < s && s < x.toHz)!;
+              const from = Math.max(
+                span.fromHz,
+                ...others.filter((x) => x.toHz <= s).map((x) => x.toHz),
+              );
+              const to = Math.min(
+                span.toHz,
+                ...others.filter((x) => x.fromHz >= s).map((x) => x.fromHz),
+              );
+              const p = span.dense ? Math.max(span.p, Math.ceil(F / to)) : span.p;
+              const holdsLock = from <= F / p && F / p <= to;
+              expect(
+                holdsLock && to - from >= step * (1 + 1e-9),
+                `${s} Hz in [${from}, ${to}]`,
+              ).toBe(false);
+            }
           }
           return true;
         },
       ),
-      { seed: SEED, numRuns: 100 },
+      { seed: SEED, numRuns: 200 },
     );
+  });
+
+  it('does not offer the piece of a 3-jaw chuck’s still span cut off from its nominal lock: at 2000 rpm it would show the chuck turning backward', () => {
+    // Reported case, whole machine: a 3-jaw chuck at 2000 rpm ±1 % (lock 100 flashes/s) beside a
+    // 6-blade fan at 990 rpm ±1 % (lock 99 flashes/s, still up to 99.99 + 6·0.25/60 = 100.015).
+    // The chuck is still for some speed in its tolerance up to 101 + 3·0.25/60 = 101.0125 flashes/s,
+    // but the piece above the fan's span misses 100 flashes/s: at the nominal 2000 rpm the chuck
+    // turns backward there (n·f/s = 100/100.5 < 1, physics.md §2).
+    const chuck = { speedHz: 2000 / 60, symmetry: 3, tolerance: 0.01 };
+    const fan = { speedHz: 990 / 60, symmetry: 6, tolerance: 0.01 };
+    const range = { minHz: 90, maxHz: 110 };
+    const spans = stillRates([chuck], range, { sampler: 'frames' });
+    const fanSpans = stillRates([fan], range);
+    expect(spans.find((x) => x.p === 1)!.toHz).toBeCloseTo(101.0125, 9);
+    expect(fanSpans.find((x) => x.p === 1 && x.images === 1)!.toHz).toBeCloseTo(100.015, 9);
+    expect(apparentMotion(chuck, 100.5).look).toBe('backward');
+    expect(freezeRates([fan, chuck], 1, range)).toEqual([]);
+  });
+
+  it('does not offer a sliver narrower than one flash per minute, even round the nominal lock', () => {
+    // One mark at 1800 rpm exactly (physics.md §4: default step 1 flash/min): its still span is
+    // 1800 ± 0.25 flashes/min wide (the still threshold), half a step: not settable on the dial.
+    const mark = { speedHz: 30, symmetry: 1 };
+    const range = { minHz: 25, maxHz: 35 };
+    expect(stillRates([mark], range, { sampler: 'frames' })).toHaveLength(1);
+    expect(freezeRates([mark], 0, range)).toEqual([]);
+    // A finer dial (0.1 flash per minute) can hold it.
+    const fine = freezeRates([mark], 0, range, { settingStepHz: 0.1 / 60 });
+    expect(fine).toHaveLength(1);
+    expect(fine[0].lockRateHz).toBe(30);
+    // A camera steps by 0.01 frames/s: the 0.0083 frames/s span is a sliver there too.
+    expect(freezeRates([mark], 0, range, { sampler: 'frames' })).toEqual([]);
   });
 
   it('reports lock order 0 for a target slower than the still threshold', () => {
@@ -235,7 +300,7 @@ describe('noStillRates: rates at which no part looks still', () => {
     expect(bands[1].toHz).toBe(25);
   });
 
-  it('is the exact complement of the still spans', () => {
+  it('is the complement of the still spans, less the gaps narrower than one setting step', () => {
     fc.assert(
       fc.property(
         fc.array(
@@ -249,11 +314,25 @@ describe('noStillRates: rates at which no part looks still', () => {
         fc.array(fc.double({ min: 5, max: 150, noNaN: true }), { minLength: 20, maxLength: 20 }),
         (parts: Part[], rates) => {
           const range = { minHz: 5, maxHz: 150 };
+          const step = 1 / 60; // physics.md §4: one flash per minute
           const free = noStillRates(parts, range);
           const spans: StillSpan[] = stillRates(parts, range);
+          for (const b of free) expect(b.toHz - b.fromHz).toBeGreaterThanOrEqual(step * (1 - 1e-9));
           for (const s of rates) {
             if (nearEdge([...free, ...spans], s)) continue;
-            expect(inside(free, s), `${s} Hz`).toBe(!inside(spans, s));
+            if (inside(spans, s)) {
+              expect(inside(free, s), `${s} Hz`).toBe(false);
+              continue;
+            }
+            const from = Math.max(
+              range.minHz,
+              ...spans.filter((x) => x.toHz <= s).map((x) => x.toHz),
+            );
+            const to = Math.min(
+              range.maxHz,
+              ...spans.filter((x) => x.fromHz >= s).map((x) => x.fromHz),
+            );
+            expect(inside(free, s), `${s} Hz in a gap of ${to - from} Hz`).toBe(to - from >= step);
           }
           return true;
         },
@@ -293,6 +372,7 @@ describe('stillRates, freezeRates, noStillRates: bad input', () => {
     expectInputError(() => stillRates([wheel], { minHz: 10, maxHz: 1 }), 'rate range', 'empty');
     expectInputError(() => freezeRates([wheel], 0, range, { sampler: bad('video') }), 'sampler');
     expectInputError(() => noStillRates([wheel], range, { maxImages: 0 }), 'largest image count');
+    expectInputError(() => freezeRates([wheel], 0, range, { settingStepHz: 0 }), 'setting step');
   });
 });
 

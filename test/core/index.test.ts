@@ -61,6 +61,7 @@ describe('core index: result shapes of core-api.md', () => {
         faithful: expect.any(Boolean),
         images: expect.any(Number),
         look: expect.stringMatching(/^(true|forward|backward|still|unclear)$/),
+        nearlyStill: expect.any(Boolean),
       }),
     );
     // Default sampler 'flash' (core-api.md): r = 1/2 shows two images standing still only under a flash.
@@ -81,16 +82,25 @@ describe('core index: result shapes of core-api.md', () => {
     );
   });
 
-  it('ratesForApparent gives rateHz and k, ascending by rate', () => {
-    const rates = core.ratesForApparent({ speedHz: 30, symmetry: 1 }, 0.5, { minHz: 1, maxHz: 40 });
+  it('ratesForApparent gives rateHz and k, ascending by rate, and takes the sampler', () => {
+    const rates = core.ratesForApparent(
+      { speedHz: 30, symmetry: 1 },
+      0.5,
+      { minHz: 1, maxHz: 40 },
+      { sampler: 'frames' },
+    );
     expect(rates[0]).toEqual({ rateHz: expect.any(Number), k: expect.any(Number) });
     expect(rates.map((r) => r.rateHz)).toEqual(
       [...rates.map((r) => r.rateHz)].sort((a, b) => a - b),
     );
   });
 
-  it('rateBands gives fromHz, toHz, safe and reason for the parts together', () => {
-    const bands = core.rateBands([fan, { speedHz: 24.5, symmetry: 1 }], { minHz: 1, maxHz: 200 });
+  it('rateBands gives fromHz, toHz, safe and reason for the parts together, and takes nearlyStillHz', () => {
+    const bands = core.rateBands(
+      [fan, { speedHz: 24.5, symmetry: 1 }],
+      { minHz: 1, maxHz: 200 },
+      { sampler: 'flash', nearlyStillHz: 0.1 },
+    );
     for (const b of bands) {
       expect(b).toEqual(
         expect.objectContaining({
@@ -113,6 +123,16 @@ describe('core index: result shapes of core-api.md', () => {
     );
     expect(found.candidates[0]).toEqual(expect.objectContaining({ speedHz: 60 }));
     expect(typeof found.nextRateHz).toBe('number');
+    const inStrobe = core.findSpeed(
+      [
+        { rateHz: 30, images: 1 },
+        { rateHz: 20, images: 1 },
+      ],
+      1,
+      undefined,
+      { rateRange: { minHz: 1, maxHz: 35 } },
+    );
+    expect(inStrobe.nextRateHz).toBeLessThanOrEqual(35);
     expect(
       core.findSpeed([{ rateHz: 30, images: 1 }], 1, { minHz: 20, maxHz: 40 }).candidates[0]
         .speedHz,

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { lockRates } from '../../src/core/lockRates';
+import { coprimeCount, lockRates } from '../../src/core/lockRates';
+import { gcd } from '../../src/core/gcd';
 import { apparentMotion } from '../../src/core/apparentMotion';
 import { bad, expectInputError, finiteOrInputError, notNumbers } from './expectInputError';
 
@@ -155,6 +156,86 @@ describe('lockRates: range ends and tolerance bands', () => {
           );
         },
       ),
+    );
+  });
+});
+
+describe('lockRates: large numbers (issue 8, item 10)', () => {
+  /** The locks p/q of a range by brute force over p (physics.md §3's definition), for checking. */
+  function bruteForce(F: number, minHz: number, maxHz: number, maxImages: number) {
+    const out: Array<{ p: number; q: number }> = [];
+    for (let q = 1; q <= maxImages; q++) {
+      for (let p = Math.ceil((F * q) / maxHz); p <= Math.floor((F * q) / minHz); p++) {
+        if (gcd(p, q) === 1) out.push({ p, q });
+      }
+    }
+    return out;
+  }
+
+  it('keeps p exact beyond 32-bit integers: 5e9 pattern pitches a second seen near 1 flash/s', () => {
+    // n·|f| = 5e9 Hz; s = F/p in [1, 1 + 1e-9] for p = 4 999 999 995 … 5 000 000 000 (above 2^31).
+    const locks = lockRates(
+      { speedHz: 5e9, symmetry: 1 },
+      { minHz: 1, maxHz: 1 + 1e-9 },
+      { maxImages: 1 },
+    );
+    expect(locks.map((l) => l.p)).toEqual([
+      5e9, 4999999999, 4999999998, 4999999997, 4999999996, 4999999995,
+    ]);
+    expect(locks[0].rateHz).toBe(1);
+    for (const l of locks) expect(l.rateHz).toBeCloseTo(5e9 / l.p, 15);
+    // Every image count up to 8, against a brute-force count.
+    const all = lockRates({ speedHz: 5e9, symmetry: 1 }, { minHz: 1, maxHz: 1 + 1e-9 });
+    const expected = bruteForce(5e9, 1, 1 + 1e-9, 8);
+    expect(all.map((l) => `${l.p}/${l.q}`).sort()).toEqual(
+      expected.map((l) => `${l.p}/${l.q}`).sort(),
+    );
+  });
+
+  it('lists a large range whose locks in lowest terms fit the limit: 154 000 of them, counted exactly', () => {
+    // One mark at 7000 rev/s over 0.5–1 flash/s: p from 7000·q to 14 000·q, only p coprime to q.
+    // The old count took every p (252 000, over the 200 000 limit) and refused the range.
+    const locks = lockRates({ speedHz: 7000, symmetry: 1 }, { minHz: 0.5, maxHz: 1 });
+    const expected = bruteForce(7000, 0.5, 1, 8).length;
+    expect(locks.length).toBe(expected);
+    expect(expected).toBeGreaterThan(150_000);
+    expect(expected).toBeLessThan(200_000);
+  });
+
+  it('says how many locks a refused range holds, all image counts together', () => {
+    // 7000·22 locks a second of 1/s span; twice the span is past the 200 000 limit.
+    const error = expectInputError(
+      () => lockRates({ speedHz: 14000, symmetry: 1 }, { minHz: 0.5, maxHz: 1 }),
+      'rate range',
+    );
+    const total = [1, 2, 3, 4, 5, 6, 7, 8].reduce(
+      (n, q) => n + coprimeCount(14000 * q, 28000 * q, q),
+      0,
+    );
+    expect(error.message).toContain(`about ${total.toLocaleString('en')} lock-in rates`);
+  });
+
+  it('counts the whole numbers coprime to q in a span by inclusion–exclusion, as a brute force does', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 5000 }),
+        fc.integer({ min: 0, max: 500 }),
+        fc.integer({ min: 1, max: 64 }),
+        (a, span, q) => {
+          let n = 0;
+          for (let p = a; p <= a + span; p++) if (gcd(p, q) === 1) n++;
+          expect(coprimeCount(a, a + span, q)).toBe(n);
+        },
+      ),
+      { seed: 1949, numRuns: 300 },
+    );
+  });
+
+  it('refuses, with a message, a range so low that p passes 2^53 and cannot be counted exactly', () => {
+    expectInputError(
+      () => lockRates({ speedHz: 1e12, symmetry: 1000 }, { minHz: 1e-6, maxHz: 1.0000001e-6 }),
+      'rate range',
+      'raise the lowest rate',
     );
   });
 });

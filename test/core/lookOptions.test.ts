@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkLookOptions, defaultLookOptions } from '../../src/core/lookOptions';
+import { checkLookOptions, defaultLookOptions, THRESHOLD_SLACK } from '../../src/core/lookOptions';
 import { bad, expectInputError } from './expectInputError';
 
 describe('defaultLookOptions', () => {
@@ -13,6 +13,16 @@ describe('defaultLookOptions', () => {
     expect(defaultLookOptions.unclearStep).toBe(0.45);
     expect(defaultLookOptions.maxImages).toBe(8);
     expect(defaultLookOptions.groupSpacingsPerS).toBe(1);
+  });
+
+  it('reads an aliased view slower than 6 rpm as nearly still: one turn in 10 s or longer (a documented judgement, physics.md §4)', () => {
+    expect(defaultLookOptions.nearlyStillHz * 60).toBeCloseTo(6, 12);
+    expect(1 / defaultLookOptions.nearlyStillHz).toBeCloseTo(10, 12); // seconds a turn
+  });
+
+  it('compares thresholds with a relative slack below 1e-12 but far above one rounding (physics.md §2)', () => {
+    expect(THRESHOLD_SLACK).toBeLessThan(1e-12);
+    expect(THRESHOLD_SLACK).toBeGreaterThan(100 * Number.EPSILON);
   });
 
   it('cannot be changed by a caller', () => {
@@ -54,6 +64,13 @@ describe('checkLookOptions', () => {
     'rejects a largest image count of %s (allowed 1 to 64)',
     (maxImages) => {
       expectInputError(() => checkLookOptions(bad({ maxImages })), 'largest image count');
+    },
+  );
+
+  it.each([[0], [-1], [NaN], ['6 rpm']])(
+    'rejects a nearly-still threshold of %s',
+    (nearlyStillHz) => {
+      expectInputError(() => checkLookOptions(bad({ nearlyStillHz })), 'nearly-still threshold');
     },
   );
 

@@ -11,10 +11,13 @@ function bandInside(bands: RateBand[], s: number): RateBand | undefined {
   return bands.find((b) => s > b.fromHz * (1 + 1e-9) && s < b.toHz * (1 - 1e-9));
 }
 
-/** What apparentMotion says: does this rate mislead about this part? */
+/**
+ * What apparentMotion says: does this rate mislead about this part? physics.md §4: safe is
+ * faithful, or forward as one image at the nearly-still threshold (6 rpm) or faster.
+ */
 function misleads(part: Part, s: number, sampler: Sampler): boolean {
-  const look = apparentMotion(part, s, { sampler }).look;
-  return look === 'still' || look === 'backward' || look === 'unclear';
+  const m = apparentMotion(part, s, { sampler });
+  return !(m.look === 'true' || (m.look === 'forward' && m.images === 1 && !m.nearlyStill));
 }
 
 /** The bands start at minHz, end at maxHz, each begins where the last ended, and none runs backwards. */
@@ -57,17 +60,22 @@ describe('rateBands: the camera case', () => {
       { minHz: 1, maxHz: 100 },
       { sampler: 'frames' },
     );
-    const band = bandInside(bands, 15)!; // r = 0.667: backward; the band runs on down to the freeze at r = 1
+    const band = bandInside(bands, 15)!; // r = 0.667: backward; the band runs on down past the freeze at r = 1
     expect(band.safe).toBe(false);
     expect(band.reason).toBe(
-      'Part 1 looks backward or its direction is unclear; part 1 looks still.',
+      'Part 1 looks backward or its direction is unclear; part 1 looks still; part 1 can creep ' +
+        'forward slower than 6 rpm (nearly still).',
     );
     expect(band.causes).toEqual([
       { part: 0, kind: 'backward', images: 1 },
       { part: 0, kind: 'still', images: 1 },
+      { part: 0, kind: 'nearly-still', images: 1 },
     ]);
-    expect(band.fromHz).toBeLessThanOrEqual(10);
+    // physics.md §4: the margin below the freeze at 10 frames/s ends where the mark creeps
+    // forward at 6 rpm = 0.1 rev/s: 10 − 0.1 = 9.9 frames/s.
+    expect(band.fromHz).toBeCloseTo(9.9, 12);
     expect(band.toHz).toBe(20);
+    expect(band.promise).toBe('Can look still, nearly still, doubled or backward');
   });
 });
 
@@ -104,6 +112,71 @@ describe('rateBands: the strobe case', () => {
   });
 });
 
+describe('rateBands: the nearly-still margin (physics.md §4)', () => {
+  // Reported case: a 3-jaw chuck at 2000 rpm ±1 % under a strobe.
+  const chuck = { speedHz: 2000 / 60, symmetry: 3, tolerance: 0.01 };
+  const strobe = { minHz: 30 / 60, maxHz: 12000 / 60 };
+
+  it('a 3-jaw chuck at 2000 rpm ±1 % is not safe at 5939 flashes/min, where at 1980 rpm it creeps at 0.33 rpm', () => {
+    const bands = rateBands([chuck], strobe, { sampler: 'flash' });
+    const at = bands.find((b) => b.fromHz <= 5939 / 60 && 5939 / 60 <= b.toHz)!;
+    expect(at.safe).toBe(false);
+    expect(at.causes).toContainEqual({ part: 0, kind: 'nearly-still', images: 1 });
+    // At 1980 rpm (inside ±1 %): 3·33/98.983 = 1.000168 pitches a flash, a forward creep of
+    // 0.000168·98.983/3 rev/s = 0.33 rpm (physics.md §2): below 6 rpm, nearly still.
+    const seen = apparentMotion({ speedHz: 1980 / 60, symmetry: 3 }, 5939 / 60);
+    expect(seen.look).toBe('forward');
+    expect(seen.apparentHz * 60).toBeCloseTo(1 / 3, 9);
+    expect(seen.nearlyStill).toBe(true);
+  });
+
+  it('keeps the safe band below the 100 flashes/s lock until the slowest speed creeps forward at 6 rpm', () => {
+    // physics.md §4: the edge is where the apparent speed at the worst speed within tolerance
+    // falls to the threshold: s = n·|f|·(1 − u) − n·0.1 rev/s = 99 − 0.3 = 98.7 flashes/s (5922 fpm).
+    const bands = rateBands([chuck], { minHz: 90, maxHz: 99.5 }, { sampler: 'flash' });
+    const safeBelow = bands.filter((b) => b.safe).at(-1)!;
+    expect(safeBelow.toHz).toBeCloseTo(98.7, 12);
+    expect(safeBelow.promise).toBe('Seen turning its true way');
+    expect(safeBelow.reason).toBe(
+      'Every part is seen turning its true way: at its true speed, or forward as one image at ' +
+        '6 rpm or faster (slower than it really turns).',
+    );
+    // Just inside the safe band the slowest speed creeps forward at just over 6 rpm; just outside, under it.
+    const slowest = { speedHz: 1980 / 60, symmetry: 3 };
+    expect(apparentMotion(slowest, 98.7 * (1 - 1e-9))).toMatchObject({
+      look: 'forward',
+      nearlyStill: false,
+    });
+    expect(apparentMotion(slowest, 98.7 * (1 + 1e-9))).toMatchObject({
+      look: 'forward',
+      nearlyStill: true,
+    });
+  });
+
+  it('takes the nearly-still threshold from the options', () => {
+    // With 1 rpm instead of 6: the edge moves to 99 − 3/60 = 98.95 flashes/s.
+    const bands = rateBands([chuck], { minHz: 90, maxHz: 99.5 }, { nearlyStillHz: 1 / 60 });
+    expect(bands.filter((b) => b.safe).at(-1)!.toHz).toBeCloseTo(98.95, 12);
+    expectInputError(
+      () => rateBands([chuck], strobe, { nearlyStillHz: 0 }),
+      'nearly-still threshold',
+    );
+  });
+
+  it('calls a flash rate where several images drift misleading: not one image', () => {
+    // One mark at 10 rev/s under 7.6 flashes/s: near the lock 4/3 three images creep as a group
+    // (|3·10 − 4·7.6| = 0.4 image spacings a second, under 1: apparentMotion counts 3 images).
+    const mark = { speedHz: 10, symmetry: 1 };
+    const seen = apparentMotion(mark, 7.6);
+    expect([seen.images, seen.look]).toEqual([3, 'forward']);
+    const band = rateBands([mark], { minHz: 5, maxHz: 9 }).find(
+      (b) => b.fromHz <= 7.6 && 7.6 <= b.toHz,
+    )!;
+    expect(band.safe).toBe(false);
+    expect(band.causes).toContainEqual({ part: 0, kind: 'images', images: 3 });
+  });
+});
+
 describe('rateBands: special parts', () => {
   it('calls every rate misleading for a part slower than the still threshold', () => {
     const bands = rateBands([{ speedHz: 0.001, symmetry: 1 }], { minHz: 1, maxHz: 100 });
@@ -120,7 +193,8 @@ describe('rateBands: special parts', () => {
         fromHz: 1,
         toHz: 100,
         safe: true,
-        reason: 'Every part shows its true direction of turning.',
+        promise: 'Seen at its true speed',
+        reason: 'Every part is seen turning at its true speed and in its true direction.',
         causes: [],
       },
     ]);
@@ -191,7 +265,7 @@ describe('rateBands: relations that hold for every input', () => {
     );
   });
 
-  it('calls a rate safe only when every speed within the tolerance shows its true direction', () => {
+  it('calls a rate safe only when every speed within the tolerance is seen moving its true way, at 6 rpm or more', () => {
     fc.assert(
       fc.property(
         partArb,

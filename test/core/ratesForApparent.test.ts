@@ -24,10 +24,16 @@ describe('ratesForApparent: worked examples', () => {
     expect(seen.look).toBe('backward');
   });
 
-  it('lists every sub-multiple k that is still valid, ascending by rate', () => {
+  it('lists every sub-multiple k that is still valid on camera, ascending by rate', () => {
     // a = 0.5: valid while |k·0.5/29.5| < 0.5, i.e. k ≤ 29; rates 29.5/k.
-    const rates = ratesForApparent(oneMark(30), 0.5, { minHz: 1, maxHz: 40 });
-    expect(rates.map((r) => r.k)).toEqual(Array.from({ length: 29 }, (_, i) => 29 - i));
+    const rates = ratesForApparent(
+      oneMark(30),
+      0.5,
+      { minHz: 1, maxHz: 40 },
+      { sampler: 'frames' },
+    );
+    // k = 27…29 step 0.458, 0.475, 0.492 pitch per frame: direction unclear (physics.md §2).
+    expect(rates.map((r) => r.k)).toEqual(Array.from({ length: 26 }, (_, i) => 26 - i));
     for (const { rateHz, k } of rates) {
       expect(rateHz).toBeCloseTo(29.5 / k, 12);
       expect(apparentMotion(oneMark(30), rateHz, { sampler: 'frames' }).apparentHz).toBeCloseTo(
@@ -50,10 +56,38 @@ describe('ratesForApparent: worked examples', () => {
 
   it('works for a part turning in the negative direction', () => {
     const part = oneMark(-10);
-    const rates = ratesForApparent(part, 2, { minHz: 1, maxHz: 100 });
+    const rates = ratesForApparent(part, 1, { minHz: 1, maxHz: 100 });
     expect(rates.length).toBeGreaterThan(0);
-    for (const { rateHz } of rates)
-      expect(apparentMotion(part, rateHz).apparentHz).toBeCloseTo(2, 9);
+    for (const { rateHz } of rates) {
+      const seen = apparentMotion(part, rateHz);
+      expect(seen.apparentHz).toBeCloseTo(1, 9);
+      // +1 rev/s against a speed of −10: turning backward, as one image (physics.md §4).
+      expect([seen.look, seen.images]).toEqual(['backward', 1]);
+    }
+  });
+
+  it('under a flash, drops the sub-multiples where several images show (physics.md §4)', () => {
+    // physics.md §4: keep only rates where the flash shows ONE image moving as wanted. Under a
+    // flash the slow sub-multiples of 29.5 flashes/s put one mark at 30 rev/s close to a p/q
+    // with q ≥ 2 (k = 22: 30·22/29.5 = 22.37 ≈ 179/8, eight images standing still).
+    const flash = ratesForApparent(oneMark(30), 0.5, { minHz: 1, maxHz: 40 });
+    const frames = ratesForApparent(
+      oneMark(30),
+      0.5,
+      { minHz: 1, maxHz: 40 },
+      { sampler: 'frames' },
+    );
+    expect(flash.length).toBeGreaterThan(0);
+    expect(flash.length).toBeLessThan(frames.length);
+    for (const { rateHz } of frames) {
+      const seen = apparentMotion(oneMark(30), rateHz);
+      const kept = flash.some((r) => r.rateHz === rateHz);
+      expect(kept, `${rateHz} flashes/s: ${seen.images} images, ${seen.look}`).toBe(
+        seen.images === 1 && seen.look === 'forward',
+      );
+    }
+    const at22 = apparentMotion(oneMark(30), 29.5 / 22);
+    expect([at22.look, at22.images]).toEqual(['still', 8]);
   });
 });
 
@@ -65,9 +99,13 @@ describe('ratesForApparent: the validity limit |k·a/(f − a)| < 0.5', () => {
   });
 
   it('stops just before the half-pitch step: k = 2 for a = 2 at 10 rev/s would give −2, not 2', () => {
-    expect(ratesForApparent(oneMark(10), 2, { minHz: 1, maxHz: 100 })).toEqual([
-      { rateHz: 8, k: 1 },
-    ]);
+    expect(
+      ratesForApparent(oneMark(10), 2, { minHz: 1, maxHz: 100 }, { sampler: 'frames' }),
+    ).toEqual([{ rateHz: 8, k: 1 }]);
+    // Under a flash 8 flashes/s is the lock 5/4 (10/8 = 1.25): four images stand still, so
+    // no rate shows one image creeping at 2 rev/s (physics.md §3, §4).
+    expect(ratesForApparent(oneMark(10), 2, { minHz: 1, maxHz: 100 })).toEqual([]);
+    expect(apparentMotion(oneMark(10), 8)).toMatchObject({ look: 'still', images: 4 });
     expect(apparentMotion(oneMark(10), 4, { sampler: 'frames' }).apparentHz).toBeCloseTo(-2, 12);
   });
 
@@ -135,8 +173,71 @@ describe('ratesForApparent: the validity limit |k·a/(f − a)| < 0.5', () => {
   });
 });
 
+describe('ratesForApparent: only rates that really show the wanted motion (physics.md §4)', () => {
+  // Reported case: a 6-blade fan at 1780 rpm, wanted 0.5 rev/s backward, strobe 30–12000 flashes/min.
+  const fan = { speedHz: 1780 / 60, symmetry: 6 };
+  const strobe = { minHz: 0.5, maxHz: 200 };
+
+  it('a 6-blade fan at 1780 rpm made to turn backward at 0.5 rev/s gets only rates showing one image turning backward', () => {
+    const rates = ratesForApparent(fan, -0.5, strobe);
+    expect(rates.length).toBeGreaterThan(0);
+    for (const { rateHz } of rates) {
+      const seen = apparentMotion(fan, rateHz, { sampler: 'flash' });
+      // physics.md §4: one image, a clear direction, the wanted motion.
+      expect([seen.images, seen.look], `${rateHz} flashes/s`).toEqual([1, 'backward']);
+      expect(seen.apparentHz).toBeCloseTo(-0.5, 9);
+    }
+    // s = n·|f − a|/k (physics.md §4): 6·(29.667 + 0.5)/20 = 9.05 flashes/s is the lock 20/3,
+    // three images standing still there: not offered.
+    expect(apparentMotion(fan, 9.05)).toMatchObject({ look: 'still', images: 3 });
+    expect(rates.some((r) => r.k === 20)).toBe(false);
+  });
+
+  it('on camera keeps every rate where the single frame-to-frame step shows the motion', () => {
+    const rates = ratesForApparent(fan, -0.5, strobe, { sampler: 'frames' });
+    const flash = ratesForApparent(fan, -0.5, strobe, { sampler: 'flash' });
+    expect(rates.length).toBeGreaterThan(flash.length);
+    for (const { rateHz } of rates) {
+      expect(apparentMotion(fan, rateHz, { sampler: 'frames' })).toMatchObject({
+        images: 1,
+        look: 'backward',
+      });
+    }
+  });
+
+  it('never offers a rate where the direction is unclear', () => {
+    // One mark at 30 rev/s, wanted 0.5 rev/s forward: k = 27…29 pass the validity limit
+    // |k·a/(f − a)| < 0.5 but step 0.458–0.492 pitch per sample, direction unclear from 0.45
+    // (physics.md §2); every rate kept has |step| < 0.45.
+    for (const sampler of ['flash', 'frames'] as const) {
+      for (const { rateHz } of ratesForApparent(
+        oneMark(30),
+        0.5,
+        { minHz: 1, maxHz: 40 },
+        { sampler },
+      )) {
+        const seen = apparentMotion(oneMark(30), rateHz, { sampler });
+        expect(seen.look).toBe('forward');
+        expect(Math.abs(seen.step)).toBeLessThan(0.45);
+      }
+    }
+  });
+
+  it('gives nothing for a wanted speed at or below the still threshold: it would look still, not turn', () => {
+    // 0.2 rpm is below the 0.25 rpm still threshold (physics.md §2).
+    expect(ratesForApparent(oneMark(30), 0.2 / 60, { minHz: 20, maxHz: 40 })).toEqual([]);
+  });
+});
+
 describe('ratesForApparent: bad input', () => {
   const range = { minHz: 20, maxHz: 40 };
+
+  it('rejects an unknown sampler', () => {
+    expectInputError(
+      () => ratesForApparent(oneMark(30), 0.5, range, bad({ sampler: 'video' })),
+      'sampler',
+    );
+  });
 
   it.each(notNumbers.map((v) => [v]))('rejects a wanted apparent speed of %s', (a) => {
     expectInputError(() => ratesForApparent(oneMark(30), bad(a), range), 'wanted apparent speed');

@@ -15,6 +15,7 @@ import { describe, expect, it, vi } from 'vitest';
 import {
   apparentMotion,
   defaultLookOptions,
+  freezeRates,
   lockRates,
   rateBands,
   ratesForApparent,
@@ -33,8 +34,7 @@ import {
   eyeFrom,
   frac,
   minus,
-  lookOf,
-  misleads,
+  safeView,
   over,
   plus,
   replay,
@@ -96,17 +96,22 @@ const NUDGES: Fraction[] = [40n, 46n, 52n].flatMap((k) => [
   frac(2n ** k + 1n, 2n ** k),
 ]);
 const ONE = frac(1);
-/** Inputs of the replay to nudge: the rate, the still threshold, the unclear step, or rate and still together. */
+/**
+ * Inputs of the replay to nudge: the rate, the still threshold, the unclear step, the
+ * nearly-still threshold, or rate and still together.
+ */
 interface Perturbation {
   rate: Fraction;
   still: Fraction;
   unclear: Fraction;
+  nearly: Fraction;
 }
 const PERTURBATIONS: Perturbation[] = [
-  ...NUDGES.map((rate) => ({ rate, still: ONE, unclear: ONE })),
-  ...NUDGES.map((still) => ({ rate: ONE, still, unclear: ONE })),
-  ...NUDGES.map((unclear) => ({ rate: ONE, still: ONE, unclear })),
-  ...NUDGES.flatMap((rate) => NUDGES.map((still) => ({ rate, still, unclear: ONE }))),
+  ...NUDGES.map((rate) => ({ rate, still: ONE, unclear: ONE, nearly: ONE })),
+  ...NUDGES.map((still) => ({ rate: ONE, still, unclear: ONE, nearly: ONE })),
+  ...NUDGES.map((unclear) => ({ rate: ONE, still: ONE, unclear, nearly: ONE })),
+  ...NUDGES.map((nearly) => ({ rate: ONE, still: ONE, unclear: ONE, nearly })),
+  ...NUDGES.flatMap((rate) => NUDGES.map((still) => ({ rate, still, unclear: ONE, nearly: ONE }))),
 ];
 
 function sceneAt(part: Part, rate: Fraction, sampler: Sampler): Scene {
@@ -142,6 +147,8 @@ function discreteDifferences(core: ApparentMotion, view: ReplayView): string[] {
   if (core.faithful !== view.faithful) out.push(`faithful ${core.faithful} vs ${view.faithful}`);
   if (core.images !== view.images) out.push(`images ${core.images} vs ${view.images}`);
   if (core.look !== view.look) out.push(`look ${core.look} vs ${view.look}`);
+  if (core.nearlyStill !== view.nearlyStill)
+    out.push(`nearlyStill ${core.nearlyStill} vs ${view.nearlyStill}`);
   // The group reported (still, creeping, or the single image): its lock p/q. A single image
   // exactly half a pitch on has two nearest whole pitches, so p may be either.
   const halfPitch = core.q === 1 && view.group.q === 1 && Math.abs(core.step) === 0.5;
@@ -199,6 +206,7 @@ function expectAgreement(
           ...eye,
           stillHz: times(eye.stillHz, n.still),
           unclearStep: times(eye.unclearStep, n.unclear),
+          nearlyStillHz: times(eye.nearlyStillHz, n.nearly),
         };
         return (
           discreteDifferences(core, replay(sceneAt(part, times(rate, n.rate), sampler), nudgedEye))
@@ -267,7 +275,7 @@ const offArb = fc.tuple(fc.boolean(), logUniform(1e-8, 3e-2)).map(([down, v]) =>
  * A part and a rate: generic, a film rate, placed at or next to a lock p/q (q up to 12, beyond
  * the 8 looked for), or placed a relative `edge` away from one of the look's decision
  * boundaries (documented thresholds): the unclear step, the still threshold of a p/q group,
- * the creep limit of a q-image group, the Nyquist rate.
+ * the creep limit of a q-image group, the nearly-still threshold, the Nyquist rate.
  */
 const sceneArb = fc.record({
   speedHz: speedArb,
@@ -281,6 +289,7 @@ const sceneArb = fc.record({
     'unclear-edge',
     'still-edge',
     'creep-edge',
+    'nearly-edge',
     'nyquist-edge',
   ),
   genericRate: logUniform(0.05, 1e5),
@@ -316,6 +325,11 @@ function rateOf(c: SceneCase): number {
       // the q-image group creeps ±groupSpacingsPerS·(1 + edge) spacings/s: |q·n·f − p·s| = that
       const q = Math.max(2, Math.min(8, c.q));
       const rate = (q * F + side * defaultLookOptions.groupSpacingsPerS * (1 + c.edge)) / c.p;
+      return rate > 0 ? rate : c.genericRate;
+    }
+    case 'nearly-edge': {
+      // one image seen at ±nearlyStillHz·(1 + edge): n·f − k·s = ±n·nearlyStillHz·(1 + edge)
+      const rate = (F + side * c.symmetry * defaultLookOptions.nearlyStillHz * (1 + c.edge)) / c.k;
       return rate > 0 ? rate : c.genericRate;
     }
     default: // 'nyquist-edge'
@@ -422,6 +436,7 @@ describe('apparentMotion agrees with the replay', () => {
       unclearStep: fc.double({ min: 0.3, max: 0.5, noNaN: true }),
       maxImages: fc.integer({ min: 1, max: 12 }),
       groupSpacingsPerS: logUniform(0.2, 5),
+      nearlyStillHz: logUniform(1e-3, 1),
     });
     fc.assert(
       fc.property(sceneArb, lookArb, (c, look) => {
@@ -548,6 +563,37 @@ describe('lockRates agrees with the replay', () => {
     );
   });
 
+  it('shows, in apparentMotion and in the exact replay, the image count it lists at every lock', () => {
+    // physics.md §3: "The image count that apparentMotion reports must equal the one lockRates
+    // lists." At each listed rate the replay (smallest drift among the still groups, ties to
+    // the smaller q) must show q images standing still, and so must apparentMotion.
+    fc.assert(
+      fc.property(lockCaseArb, (c) => {
+        const part = { speedHz: c.speedHz, symmetry: c.symmetry, tolerance: c.tolerance };
+        const F = c.symmetry * Math.abs(c.speedHz);
+        const range = { minHz: F * c.lowFactor, maxHz: F * c.lowFactor * c.span };
+        const eye = { ...documentedEye, maxImages: c.maxImages };
+        const locks = lockRates(part, range, { maxImages: c.maxImages });
+        // Every lock of small lists; a spread of 200 of longer ones, the first and last included.
+        const every = Math.max(1, Math.ceil(locks.length / 200));
+        const problems: string[] = [];
+        locks.forEach((lock, i) => {
+          if (i % every !== 0 && i !== locks.length - 1) return;
+          const view = replay(sceneAt(part, exactValue(lock.rateHz), 'flash'), eye);
+          const core = apparentMotion(part, lock.rateHz, { maxImages: c.maxImages });
+          if (view.look !== 'still' || view.images !== lock.q || core.images !== lock.q) {
+            problems.push(
+              `lock ${lock.p}/${lock.q} at ${lock.rateHz} Hz: replay ${view.images} (${view.look}), ` +
+                `apparentMotion ${core.images} (${core.look})`,
+            );
+          }
+        });
+        expect(problems, `${c.symmetry} features at ${c.speedHz} rev/s`).toEqual([]);
+      }),
+      { ...settings, numRuns: 3000 },
+    );
+  });
+
   it('misses no lock with q ≤ maxImages in the range (every p/q scanned exactly)', () => {
     fc.assert(
       fc.property(lockCaseArb, (c) => {
@@ -635,6 +681,7 @@ describe('ratesForApparent agrees with the replay', () => {
     useRaw: fc.boolean(),
     lowFactor: logUniform(0.01, 2),
     span: logUniform(1.01, 40),
+    sampler: samplerArb,
   });
   function setUp(c: typeof apparentCaseArb extends fc.Arbitrary<infer T> ? T : never) {
     const apparentHz = c.useRaw ? c.raw : c.wanted * c.speedHz;
@@ -643,19 +690,32 @@ describe('ratesForApparent agrees with the replay', () => {
     const range: Range = { minHz: gap * c.lowFactor, maxHz: gap * c.lowFactor * c.span };
     return { part: { speedHz: c.speedHz, symmetry: c.symmetry }, apparentHz, range };
   }
+  /** physics.md §4: the look that shows the wanted motion (a = 0: still). */
+  const wantedLook = (speedHz: number, apparentHz: number) =>
+    apparentHz === 0
+      ? 'still'
+      : Math.sign(apparentHz) === Math.sign(speedHz)
+        ? 'forward'
+        : 'backward';
+  /** The replay shows one image with the wanted look, its direction clear. */
+  const oneImageLooks = (view: ReplayView, look: string) =>
+    !view.stepIsTie && view.images === 1 && view.look === look;
 
-  it('returns only rates at which the replay shows the wanted apparent speed', () => {
+  it('returns only rates at which the replay shows one image moving as wanted, for the sampler', () => {
     fc.assert(
       fc.property(apparentCaseArb, (c) => {
         const { part, apparentHz, range } = setUp(c);
-        const rates = ratesForApparent(part, apparentHz, range);
+        const rates = ratesForApparent(part, apparentHz, range, { sampler: c.sampler });
+        const look = wantedLook(part.speedHz, apparentHz);
         for (let i = 0; i < rates.length; i++) {
           const { rateHz, k } = rates[i];
           if (i > 0) expect(rateHz).toBeGreaterThan(rates[i - 1].rateHz);
           expect(rateHz).toBeGreaterThanOrEqual(range.minHz * (1 - 1e-12));
           expect(rateHz).toBeLessThanOrEqual(range.maxHz * (1 + 1e-12));
-          const view = replay(sceneAt(part, exactValue(rateHz), 'frames'));
+          const view = replay(sceneAt(part, exactValue(rateHz), c.sampler));
           expect(view.stepIsTie).toBe(false);
+          // physics.md §4: one image (no group of several stands still or drifts), a clear direction.
+          expect([view.images, view.look], `${c.sampler} at ${rateHz} Hz`).toEqual([1, look]);
           const seen = toNumber(view.apparentHz);
           expect(Math.abs(seen - apparentHz)).toBeLessThanOrEqual(
             1e-12 * (Math.abs(part.speedHz) + Math.abs(apparentHz)),
@@ -668,11 +728,33 @@ describe('ratesForApparent agrees with the replay', () => {
     );
   });
 
-  it('misses no rate in the range at which the replay shows the wanted apparent speed', () => {
+  it('reproduces every rate it returns in apparentMotion: one image, the wanted motion', () => {
     fc.assert(
       fc.property(apparentCaseArb, (c) => {
         const { part, apparentHz, range } = setUp(c);
-        const rates = ratesForApparent(part, apparentHz, range);
+        const look = wantedLook(part.speedHz, apparentHz);
+        for (const { rateHz } of ratesForApparent(part, apparentHz, range, {
+          sampler: c.sampler,
+        })) {
+          const seen = apparentMotion(part, rateHz, { sampler: c.sampler });
+          expect([seen.images, seen.look], `${c.sampler} at ${rateHz} Hz`).toEqual([1, look]);
+          if (look !== 'still') {
+            expect(Math.abs(seen.apparentHz - apparentHz)).toBeLessThanOrEqual(
+              1e-9 * (Math.abs(part.speedHz) + Math.abs(apparentHz)),
+            );
+          }
+        }
+      }),
+      { ...settings, numRuns: 3000 },
+    );
+  });
+
+  it('misses no rate in the range at which the replay shows one image moving as wanted', () => {
+    fc.assert(
+      fc.property(apparentCaseArb, (c) => {
+        const { part, apparentHz, range } = setUp(c);
+        const rates = ratesForApparent(part, apparentHz, range, { sampler: c.sampler });
+        const look = wantedLook(part.speedHz, apparentHz);
         const f = exactValue(part.speedHz);
         const a = exactValue(apparentHz);
         const gap = times(frac(part.symmetry), absolute(minus(f, a)));
@@ -681,23 +763,32 @@ describe('ratesForApparent agrees with the replay', () => {
           hi: times(exactValue(range.maxHz), exactValue(1 - 1e-12)),
         };
         let found = 0;
+        let edge = 0;
         // A sampler whose period lets the pattern cover its true travel minus the wanted travel
-        // in K whole pitches: s = n·|f − a|/K. Keep those where the replay really sees a.
+        // in K whole pitches: s = n·|f − a|/K. Keep those where the replay really shows it.
         for (let K = 1; ; K++) {
           const rate = over(gap, frac(K));
           if (compare(rate, inside.lo) < 0) break;
           if (compare(rate, inside.hi) > 0) continue;
-          const view = replay(sceneAt(part, rate, 'frames'));
-          if (view.stepIsTie || compare(view.apparentHz, a) !== 0) continue;
-          found++;
           const rateHz = toNumber(rate);
+          // The core is given the double nearest the rate: a threshold within a hair of it may
+          // fall either way there (see the note at the top).
+          const atDouble = replay(sceneAt(part, exactValue(rateHz), c.sampler));
+          const exact = replay(sceneAt(part, rate, c.sampler));
+          if (!oneImageLooks(exact, look) || compare(exact.apparentHz, a) !== 0) continue;
+          if (!oneImageLooks(atDouble, look)) {
+            edge++;
+            continue;
+          }
+          found++;
           expect(
             rates.some((r) => r.k === K && Math.abs(r.rateHz - rateHz) <= 1e-12 * rateHz),
             `rate ${rateHz} Hz (K = ${K}) missing`,
           ).toBe(true);
         }
         expect(rates.length).toBeGreaterThanOrEqual(found);
-        expect(rates.length).toBeLessThanOrEqual(found + 2); // at most one more at each end of the range
+        // at most one more at each end of the range, and those a hair from a threshold
+        expect(rates.length).toBeLessThanOrEqual(found + edge + 2);
       }),
       settings,
     );
@@ -714,7 +805,9 @@ const SCAN = 16;
  * critical points inside it (every lock p/q, where a group stands still; k − ¼ pitch per
  * sample, inside each bin where one image turns backward or its direction is unclear;
  * physics.md §2–§3), then a fine scan. Any misleading stretch of speeds that overlaps the
- * interval contains one of its critical points or one of its ends.
+ * interval contains one of its critical points or one of its ends: around each whole k the
+ * stretch from k − 1 + unclearStep (unclear, backward, still) to k plus the nearly-still
+ * margin holds the lock k/1; a group of q images drifting (not one image) holds its lock p/q.
  */
 function* speedsToTry(part: Required<Part>, rate: Fraction, qMax: number): Generator<Fraction> {
   const f = exactValue(part.speedHz);
@@ -740,13 +833,23 @@ function* speedsToTry(part: Required<Part>, rate: Fraction, qMax: number): Gener
   for (let i = 1; i < SCAN; i++) yield plus(low, times(minus(high, low), frac(i, SCAN)));
 }
 
-/** For each part, a speed within its tolerance that the replay shows misleadingly at this rate, if any. */
+/**
+ * For each part, a speed within its tolerance that the replay shows misleadingly at this rate,
+ * if any: physics.md §4, anything but faithful or forward as one image at the nearly-still
+ * threshold or faster (safeView).
+ */
 function misleadingViews(parts: Array<Required<Part>>, rate: Fraction, sampler: Sampler, eye: Eye) {
   const qMax = sampler === 'flash' ? eye.maxImages : 1;
   return parts.map((part) => {
     for (const speed of speedsToTry(part, rate, qMax)) {
-      const look = lookOf({ speedHz: speed, symmetry: part.symmetry, rateHz: rate, sampler }, eye);
-      if (misleads(look)) return { speedHz: toNumber(speed), look };
+      const view = replay({ speedHz: speed, symmetry: part.symmetry, rateHz: rate, sampler }, eye);
+      if (!safeView(view)) {
+        const look = view.nearlyStill && view.look === 'forward' ? 'nearly still' : view.look;
+        return {
+          speedHz: toNumber(speed),
+          look: view.images > 1 ? `${view.images} images, ${look}` : look,
+        };
+      }
     }
     return undefined;
   });
@@ -774,7 +877,7 @@ describe('rateBands agrees with the replay', () => {
     spot: fc.double({ min: 0, max: 1, noNaN: true }),
   });
 
-  it('labels bands truly: no speed within tolerance misleads in a safe band, some speed does in a misleading one', () => {
+  it('labels bands truly: every speed within tolerance is seen faithfully or forward at 6 rpm or more as one image in a safe band; some speed misleads in a misleading one', () => {
     fc.assert(
       fc.property(bandCaseArb, (c) => {
         const F = c.parts[0].symmetry * Math.abs(c.parts[0].speedHz);
@@ -864,6 +967,59 @@ describe('rateBands agrees with the replay', () => {
         const band = flash.find((b) => b.fromHz <= lockHz && lockHz <= b.toHz)!;
         expect(band.safe).toBe(false);
         expect(misleadingView([part], exactValue(lockHz), 'flash', documentedEye)).toBeDefined();
+      }),
+      settings,
+    );
+  });
+});
+
+// ------------------------------------------------------------------ freezeRates
+
+describe('freezeRates agrees with the replay', () => {
+  const partArb = fc.record({
+    speedHz: speedArb.filter((f) => Math.abs(f) > 0.01),
+    symmetry: symmetryArb,
+    tolerance: toleranceArb,
+  });
+  const machineArb = fc.record({
+    parts: fc.array(partArb, { minLength: 1, maxLength: 3 }),
+    sampler: samplerArb,
+    lowFactor: logUniform(0.05, 3),
+    span: logUniform(1.05, 10),
+  });
+
+  it('offers only bands that hold the nominal lock, a setting step wide, where the replay freezes the part and no other part stands still', () => {
+    // physics.md §4: a suggested freeze band contains the part's nominal lock and is at least
+    // one setting step wide (1 flash/min, 0.01 frames/s).
+    fc.assert(
+      fc.property(machineArb, (c) => {
+        const F = c.parts[0].symmetry * Math.abs(c.parts[0].speedHz);
+        const range = { minHz: F * c.lowFactor, maxHz: F * c.lowFactor * c.span };
+        let bands;
+        try {
+          bands = freezeRates(c.parts, 0, range, { sampler: c.sampler });
+        } catch (error) {
+          // Too many still spans to list (a fast part over a wide range) is refused with a message.
+          if ((error as Error).name === 'InputError') return;
+          throw error;
+        }
+        const step = c.sampler === 'flash' ? 1 / 60 : 0.01;
+        for (const band of bands) {
+          const where = `${c.sampler} band [${band.fromHz}, ${band.toHz}]`;
+          expect(band.toHz - band.fromHz, where).toBeGreaterThanOrEqual(step * (1 - 1e-9));
+          if (band.p === 0) continue; // a part at or below the still threshold: still everywhere
+          expect(band.lockRateHz, where).toBeGreaterThanOrEqual(band.fromHz * (1 - 1e-12));
+          expect(band.lockRateHz, where).toBeLessThanOrEqual(band.toHz * (1 + 1e-12));
+          // At the nominal lock the replay shows the part at its nominal speed as one still image.
+          const rate = exactValue(band.lockRateHz);
+          const target = replay(sceneAt(c.parts[0], rate, c.sampler));
+          expect([target.look, target.images], where).toEqual(['still', 1]);
+          // No other part, at its nominal speed, stands still there.
+          c.parts.slice(1).forEach((part, i) => {
+            const other = replay(sceneAt(part, rate, c.sampler));
+            expect(other.look, `${where}: part ${i + 2}`).not.toBe('still');
+          });
+        }
       }),
       settings,
     );

@@ -109,18 +109,22 @@ export interface Eye {
   maxImages: number;
   /** A creeping group of q images is still seen as q images below this many image spacings per second. */
   groupSpacingsPerS: Fraction;
+  /** An aliased view seen moving slower than this (rev/s) is nearly still (physics.md §4). */
+  nearlyStillHz: Fraction;
 }
 
 /**
- * The defaults documented in physics.md §2–§3 and src/core/lookOptions.ts: still below
+ * The defaults documented in physics.md §2–§4 and src/core/lookOptions.ts: still at or below
  * 0.25 rpm = 1/240 rev/s, direction unclear from 0.45 pitch per sample, up to 8 images,
- * a creeping group still counted as images below 1 image spacing per second.
+ * a creeping group still counted as images below 1 image spacing per second, nearly still
+ * below 6 rpm = 1/10 rev/s.
  */
 export const documentedEye: Eye = Object.freeze({
   stillHz: frac(1, 240),
   unclearStep: frac(45, 100),
   maxImages: 8,
   groupSpacingsPerS: frac(1),
+  nearlyStillHz: frac(1, 10),
 });
 
 /** Thresholds given as doubles (as the core receives them), taken exactly. */
@@ -129,12 +133,14 @@ export function eyeFrom(o: {
   unclearStep: number;
   maxImages: number;
   groupSpacingsPerS: number;
+  nearlyStillHz: number;
 }): Eye {
   return {
     stillHz: exactValue(o.stillHz),
     unclearStep: exactValue(o.unclearStep),
     maxImages: o.maxImages,
     groupSpacingsPerS: exactValue(o.groupSpacingsPerS),
+    nearlyStillHz: exactValue(o.nearlyStillHz),
   };
 }
 
@@ -278,6 +284,11 @@ export interface ReplayView {
   images: number;
   look: Look;
   /**
+   * Aliased (look not 'true') and seen moving slower than the nearly-still threshold: the
+   * reported group's drift (the single image's apparent speed when q = 1). Still is nearly still.
+   */
+  nearlyStill: boolean;
+  /**
    * The group reported: the still or creeping group of q images, else the single image (q = 1).
    * Its flashes land p whole pitches on per cycle of q (p/q is the lock), and it drifts at
    * driftHz rev/s (the single image: its apparent speed).
@@ -292,15 +303,10 @@ export interface ReplayView {
  * pitch), 'forward' (same sign as the speed) or 'backward'.
  */
 export function replay(scene: Scene, eye: Eye = documentedEye): ReplayView {
-  return read(scene, eye, true);
+  return read(scene, eye);
 }
 
-/** Only the look (no count of creeping images, which never changes the look): for long scans. */
-export function lookOf(scene: Scene, eye: Eye = documentedEye): Look {
-  return read(scene, eye, false).look;
-}
-
-function read(scene: Scene, eye: Eye, countCreepingImages: boolean): ReplayView {
+function read(scene: Scene, eye: Eye): ReplayView {
   const film = new PatternReplay(scene);
   const { symmetry: n, rateHz: s, speedHz: f } = scene;
   const Q = film.Q;
@@ -320,17 +326,30 @@ function read(scene: Scene, eye: Eye, countCreepingImages: boolean): ReplayView 
     faithful,
   };
 
+  // physics.md §3: of the groups whose drift is at or below the still threshold, the one with
+  // the smallest drift stands still; ties go to the smaller q (a group of 2q flashes near p/q
+  // drifts exactly as the group of q, so it never beats it).
   const stillUpTo = scene.sampler === 'flash' ? eye.maxImages : 1;
+  let still: { q: number; drift: Fraction } | undefined;
   for (let q = 1; q <= stillUpTo; q++) {
-    const driftHz = film.groupDriftHz(q);
-    if (compare(absolute(driftHz), eye.stillHz) < 0) {
-      return { ...base, images: q, look: 'still', group: film.group(q) };
+    const drift = absolute(film.groupDriftHz(q));
+    if (compare(drift, eye.stillHz) <= 0 && (!still || compare(drift, still.drift) < 0)) {
+      still = { q, drift };
     }
+  }
+  if (still) {
+    return {
+      ...base,
+      images: still.q,
+      look: 'still',
+      nearlyStill: true,
+      group: film.group(still.q),
+    };
   }
 
   let images = 1;
   let group = { p: wholePitches < 0n ? -wholePitches : wholePitches, q: 1, driftHz: apparentHz };
-  if (countCreepingImages && scene.sampler === 'flash') {
+  if (scene.sampler === 'flash') {
     for (let q = 2; q <= eye.maxImages; q++) {
       if (
         compare(film.groupCreepSpacingsPerS(q), eye.groupSpacingsPerS) < 0 &&
@@ -342,14 +361,24 @@ function read(scene: Scene, eye: Eye, countCreepingImages: boolean): ReplayView 
       }
     }
   }
-  if (faithful) return { ...base, images, group, look: 'true' };
+  if (faithful) return { ...base, images, group, look: 'true', nearlyStill: false };
+  // The nearest double of max(nearlyStillHz, stillHz): nothing slower than still is "nearly" still.
+  const nearlyBelow =
+    compare(eye.nearlyStillHz, eye.stillHz) >= 0 ? eye.nearlyStillHz : eye.stillHz;
+  const nearlyStill = compare(absolute(group.driftHz), nearlyBelow) < 0;
   if (compare(absolute(step), eye.unclearStep) >= 0) {
-    return { ...base, images, group, look: 'unclear' };
+    return { ...base, images, group, look: 'unclear', nearlyStill };
   }
-  return { ...base, images, group, look: signOf(step) === signOf(f) ? 'forward' : 'backward' };
+  const look = signOf(step) === signOf(f) ? 'forward' : 'backward';
+  return { ...base, images, group, look, nearlyStill };
 }
 
-/** True for the looks that mislead (physics.md §4): still, backward, direction unclear. */
-export function misleads(look: Look): boolean {
-  return look === 'still' || look === 'backward' || look === 'unclear';
+/**
+ * physics.md §4's safe view: faithful, or forward with one image at or above the nearly-still
+ * threshold. Everything else (still, nearly still, backward, unclear, several images) misleads.
+ */
+export function safeView(view: ReplayView): boolean {
+  return (
+    view.look === 'true' || (view.look === 'forward' && view.images === 1 && !view.nearlyStill)
+  );
 }

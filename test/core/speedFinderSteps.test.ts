@@ -2,6 +2,9 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { motorExpectedRange, speedFinderSteps } from '../../src/core/speedFinderSteps';
 import { bad, expectInputError, finiteOrInputError } from './expectInputError';
+import { replay, sceneOf } from './simulator';
+import { plainNumber } from '../../src/core/plainNumber';
+import type { SpeedFinderStep } from '../../src/core/speedFinderSteps';
 
 // A strobe covering 30 to 12 000 flashes per minute (common practice for hand-held strobes).
 const strobe = { minHz: 0.5, maxHz: 200 };
@@ -98,9 +101,12 @@ describe('speedFinderSteps: the usual procedure', () => {
     expect(step.candidates.filter((c) => !c.ruledOut).map((c) => c.speedHz)).toEqual([F1]);
   });
 
-  it('moves the search up when a single image appears at twice a first single image that was missed', () => {
+  it('moves the search up when a single image appears at twice a first single image that was missed, and looks for the most telling rate', () => {
     // Started at 1200 flashes/min (20 Hz), below the true 1770: the first single image was at 885.
-    // At twice that, 1770, a single image shows, so the search goes on at 3540.
+    // At twice that, 1770, a single image shows: 885 rpm is out, but 1770, 3540, 5310 … rpm all
+    // fit and none would have stood still higher up. The check at 3540 flashes/min would show two
+    // images for 1770 and for 5310 rpm alike (r = ½, 3/2), so the next rate is the most telling
+    // one over the strobe's range instead (physics.md §7).
     const step = speedFinderSteps(
       {
         readings: [
@@ -112,22 +118,45 @@ describe('speedFinderSteps: the usual procedure', () => {
       },
       { sweptFromHz: 20 },
     );
-    expect(step.stage).toBe('confirm');
-    expect(step.rateHz).toBe(59);
     expect(step.candidates.some((c) => c.speedHz === F1 / 2)).toBe(false);
+    expect(step.stage).toBe('separate');
+    const views = step.candidates.filter((c) => !c.ruledOut).map((c) => c.atNextRate!.text);
+    expect(new Set(views).size).toBeGreaterThan(1);
   });
 
   it('confirms at two thirds of the rate when twice the rate is beyond the strobe', () => {
-    // r = n·f/s = 3/2 is the lock p/q = 3/2: two images stand still (physics.md §3).
+    // r = n·f/s = 3/2 is the lock p/q = 3/2: two images stand still (physics.md §3). The motor's
+    // expected range (4 poles, 60 Hz) leaves 1770 rpm alone to check.
     const step = speedFinderSteps({
       readings: [{ rateHz: F1, images: 1 }],
       symmetry: 1,
       strobeRange: { minHz: 1, maxHz: 40 },
+      expect: motorExpectedRange(60, 4),
     });
     expect(step.stage).toBe('confirm');
     expect(step.rateHz).toBeCloseTo((2 / 3) * F1, 12);
     expect(step.instruction).toMatch(/two thirds of the single-image rate/);
     expect(step.candidates[0].atNextRate).toMatchObject({ images: 2, look: 'still' });
+  });
+
+  it('does not check at twice a single image that is not the likeliest speed’s own: 1500 and 1000 flashes/min', () => {
+    // Reported case: single images at 1500 and 1000 flashes/min, one mark. Coming down from
+    // 12000, every speed that fits (3000, 6000, 9000, 12000 rpm) would have stood still higher
+    // up, so the sweep tells nothing; at 3000 flashes/min all four show one image (r whole), so
+    // that rate tells nothing either. The step proposes a rate where they look different.
+    const step = speedFinderSteps({
+      readings: [
+        { rateHz: 25, images: 1 },
+        { rateHz: 1000 / 60, images: 1 },
+      ],
+      symmetry: 1,
+      strobeRange: strobe,
+    });
+    expect(step.candidates.map((c) => c.rpm)).toEqual([3000, 6000, 9000, 12000]);
+    expect(step.stage).toBe('separate');
+    expect(step.rateFpm).not.toBeCloseTo(3000, 6);
+    const texts = step.candidates.map((c) => c.atNextRate!.text);
+    expect(texts.slice(1)).not.toContain(texts[0]);
   });
 
   it('keeps coming down after a double image and points at half its rate for the single image', () => {
@@ -144,7 +173,8 @@ describe('speedFinderSteps: the usual procedure', () => {
 
   it('proposes a rate that tells apart the speeds still left, with what each shows there', () => {
     // Came down from 25 Hz only: 1200 and 3600 rpm both fit a single image at 20 Hz and two at 40 Hz.
-    // At 60 Hz, 1200 rpm shows three images (r = 1/3) and 3600 rpm a single one (r = 1).
+    // At 30 Hz (3/2 of 20 Hz, the first simple multiple not yet tried that tells them apart),
+    // 1200 rpm shows three images (r = 2/3) and 3600 rpm a single one (r = 2), physics.md §3.
     const step = speedFinderSteps(
       {
         readings: [
@@ -158,12 +188,14 @@ describe('speedFinderSteps: the usual procedure', () => {
       { sweptFromHz: 25 },
     );
     expect(step.stage).toBe('separate');
-    expect(step.rateHz).toBe(60);
+    expect(step.rateHz).toBe(30);
     const views = Object.fromEntries(
       step.candidates.slice(0, 2).map((c) => [c.rpm, c.atNextRate?.text]),
     );
     expect(views).toEqual({ 1200: '3 images stand still', 3600: 'a single image stands still' });
-    expect(step.instruction).toMatch(/Several speeds still fit/);
+    expect(step.instruction).toMatch(
+      /^Set 1800 flashes\/min and compare what you see with the 2 speeds that still fit/,
+    );
   });
 
   it('divides the single-image rate by the number of blades', () => {
@@ -212,6 +244,88 @@ describe('speedFinderSteps: the usual procedure', () => {
     expect(high.stage).toBe('done');
     expect(high.cautions.join(' ')).toMatch(/lock out/);
     expect(high.cautions.join(' ')).not.toMatch(/photosensitive epilepsy/);
+  });
+});
+
+describe('speedFinderSteps: the words agree with the table (issue 8 (d))', () => {
+  /** Checks one step: every speed the instruction names and every view it states are the table's. */
+  function expectConsistent(step: SpeedFinderStep, where: string) {
+    const likeliest = step.candidates.find((c) => c.likeliest);
+    const live = step.candidates.filter((c) => !c.ruledOut);
+    const rpmText = (rpm: number) => `${plainNumber(rpm)} rpm`;
+    if (step.stage === 'confirm') {
+      // "If the part turns at X rpm, two marks … stand still": X is the likeliest, and the
+      // table predicts two images for it at that rate.
+      expect(step.instruction, where).toContain(`If the part turns at ${rpmText(likeliest!.rpm)},`);
+      expect(likeliest!.atNextRate, where).toMatchObject({ images: 2, look: 'still' });
+    }
+    if (step.stage === 'separate') {
+      // Every "at X rpm: view" in the instruction is a live row of the table, with its view.
+      const named = [...step.instruction.matchAll(/at ([\d.]+ rpm): /g)].map((m) => m[1]);
+      expect(named.length, where).toBeGreaterThan(1);
+      for (const rpm of named) {
+        const row = live.find((c) => rpmText(c.rpm) === rpm);
+        expect(row, `${where}: ${rpm} named but not a live row`).toBeDefined();
+        expect(step.instruction, where).toContain(`at ${rpm}: ${row!.atNextRate!.text}`);
+      }
+    }
+    if (step.stage === 'done') {
+      expect(step.instruction, where).toContain(`The part turns at ${rpmText(likeliest!.rpm)}`);
+      const others = /(\d+) other speeds? in the table fit/.exec(step.instruction);
+      if (others) expect(Number(others[1]) + 1, where).toBeLessThanOrEqual(live.length);
+    }
+    // The likeliest is never a ruled-out row.
+    if (likeliest) expect(likeliest.ruledOut, where).toBe(false);
+  }
+
+  it('keeps the instruction, the rate and every prediction in the table in step, reading after reading', () => {
+    // A technician follows the steps for a part of random true speed: each reading is what the
+    // brute-force replay (test/core/simulator.ts) shows at the rate proposed, when images stand still.
+    const strobeRange = { minHz: 0.5, maxHz: 200 };
+    fc.assert(
+      fc.property(
+        fc.double({ min: 2, max: 150, noNaN: true }),
+        fc.constantFrom(1, 2, 3, 6),
+        (speedHz, symmetry) => {
+          const G = symmetry * speedHz;
+          // Coming down from 200 flashes/s, the first single image is at G/k, the highest under 200.
+          const readings = [{ rateHz: G / Math.ceil(G / strobeRange.maxHz), images: 1 }];
+          for (let i = 0; i < 5; i++) {
+            const step = speedFinderSteps({ readings, symmetry, strobeRange });
+            expectConsistent(step, `${speedHz} rev/s, ${symmetry} features, step ${i + 1}`);
+            if (step.rateHz === undefined) break;
+            const view = replay(sceneOf(speedHz, symmetry, step.rateHz, 'flash'));
+            if (view.look !== 'still') break;
+            readings.push({ rateHz: step.rateHz, images: view.images });
+          }
+        },
+      ),
+      { seed: 1949, numRuns: 200 },
+    );
+  });
+
+  it('keeps them in step for any two single images a technician records, not only a clean sweep', () => {
+    // Single images at G/k1 and G/k2 (any two sub-multiples, as in the reported 1500 and 1000
+    // flashes/min): the sweep from the top may rule nothing out; the words must still match.
+    const strobeRange = { minHz: 0.5, maxHz: 200 };
+    fc.assert(
+      fc.property(
+        fc.double({ min: 2, max: 150, noNaN: true }),
+        fc.constantFrom(1, 2, 3, 6),
+        fc.integer({ min: 1, max: 6 }),
+        fc.integer({ min: 1, max: 4 }),
+        (speedHz, symmetry, k1, gap) => {
+          const G = symmetry * speedHz;
+          const readings = [k1, k1 + gap].map((k) => ({ rateHz: G / k, images: 1 }));
+          fc.pre(
+            readings.every((r) => r.rateHz >= strobeRange.minHz && r.rateHz <= strobeRange.maxHz),
+          );
+          const step = speedFinderSteps({ readings, symmetry, strobeRange });
+          expectConsistent(step, `${speedHz} rev/s, ${symmetry} features, k = ${k1}, ${k1 + gap}`);
+        },
+      ),
+      { seed: 1949, numRuns: 300 },
+    );
   });
 });
 

@@ -162,7 +162,8 @@ describe('readField', () => {
         '<b>1</b>',
         '--1',
         '1..2',
-        '½',
+        '1780 1800',
+        '2½ 3',
       ]) {
         const r = readField(garbage, reader);
         expect(r.ok, `"${garbage}"`).toBe(false);
@@ -175,6 +176,21 @@ describe('readField', () => {
         }
       }
     }
+  });
+
+  test('refuses two numbers in one field and reads a fraction sign as its value (issue 8, item 10)', () => {
+    // "1780 1800" once read as 17,801,800 rpm; "2½" as 2.
+    const twice = readField('1780 1800', (t: string) => readSpeedRpm(t, 'rpm'));
+    expect(twice.ok).toBe(false);
+    if (!twice.ok) expect(twice.message).toMatch(/one number/);
+    expect(readField('2½', (t: string) => readSpeedRpm(t, 'rpm'))).toEqual({
+      ok: true,
+      value: 2.5,
+    });
+    expect(readField('1 780', (t: string) => readSpeedRpm(t, 'rpm'))).toEqual({
+      ok: true,
+      value: 1780,
+    });
   });
 
   test('lets errors that are not input errors through', () => {

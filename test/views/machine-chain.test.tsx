@@ -5,7 +5,7 @@
 // is replaced by a recorder here; the real chart is drawn in Chromium by the browser tests.
 // Invented scenario: the kiln 3 extract fan of the (fictional) Harrowgate Tile Works.
 import 'fake-indexeddb/auto';
-import { cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
+import { act, cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test, vi } from 'vitest';
 import {
   beltSpeedHz,
@@ -148,8 +148,11 @@ describe('the whole machine', () => {
     const bands = freezeRates(parts, 1, { minHz: 0.5, maxHz: 200 });
     const shown = freezeBandsShown(bands, 6);
     const table = screen.getByTestId('freeze-table');
+    expect(bands.length).toBeGreaterThan(1);
     expect(table.querySelector('caption')!.textContent).toBe(
-      `${bands.length} bands; 6 shown (highest first), all in the CSV`,
+      bands.length > 6
+        ? `${bands.length} bands; 6 shown (highest first), all in the CSV`
+        : `${bands.length} bands (highest first)`,
     );
     const rows = within(table).getAllByRole('row').slice(1);
     expect(rows.map((r) => within(r).getByRole('button').textContent)).toEqual(
@@ -163,6 +166,30 @@ describe('the whole machine', () => {
       /^The Check screen now uses 3,492 fpm\./,
     );
     expect(screen.getByTestId('chain-speed-table').textContent).toMatch(/Fan.*Looks still/);
+  });
+
+  test('offers no freeze band cut off from the chosen part’s nominal lock: the chuck beside a fan', () => {
+    // Reported case (physics.md §4): a 3-jaw chuck at 2000 rpm ±1 % and a 6-blade fan at 990 rpm
+    // ±1 % under a strobe of 5400–6600 flashes/min. The fan stands still up to 6000.9 flashes/min,
+    // over the chuck's lock at 6000; what is left of the chuck's still span above it misses the
+    // lock: at 2000 rpm the chuck turns backward there. Nothing is offered, and the screen says why.
+    act(() =>
+      replaceSetup({
+        ...defaultSetup,
+        parts: [
+          { name: 'Fan', speedRpm: 990, features: 6, tolerancePercent: 1 },
+          { name: 'Chuck', speedRpm: 2000, features: 3, tolerancePercent: 1 },
+        ],
+        activePart: 1,
+        strobe: { rateFpm: 6000, minFpm: 5400, maxFpm: 6600 },
+      }),
+    );
+    const parts = deriveParts(setup.value);
+    expect(freezeRates(parts, 1, { minHz: 90, maxHz: 110 })).toEqual([]);
+    expect(screen.queryByTestId('freeze-table')).toBeNull();
+    expect(screen.getByTestId('no-freeze').textContent).toMatch(
+      /^No band in the range listed freezes Chuck round the lock of its nominal speed, one flash per minute wide or more/,
+    );
   });
 
   test('bands where no part looks still are the core’s, widest first', () => {

@@ -122,6 +122,7 @@ describe('misleadingSpansPx', () => {
     fromHz,
     toHz,
     safe,
+    promise: '',
     reason: '',
     causes: [],
   });

@@ -102,9 +102,10 @@ describe('the speed finder', () => {
     expect(second).toMatch(
       /593\.3 rpm.*Ruled out.*3560 flashes\/min on the way down.*a single image stands still/,
     );
-    // The next reading's row starts at the proposed rate and the image count the likeliest speed gives there.
+    // The next reading's row starts at the proposed rate; the image count is left to the
+    // technician, never filled in from the prediction (physics.md §7).
     expect(field('Rate where it stood still').value).toBe('3560');
-    expect((screen.getByLabelText('Images standing still') as HTMLSelectElement).value).toBe('2');
+    expect((screen.getByLabelText('Images standing still') as HTMLSelectElement).value).toBe('');
   });
 
   test('two images at twice the rate confirm the speed, ready to save', () => {
@@ -164,6 +165,36 @@ describe('the speed finder', () => {
       expect(instruction()).toBe(before);
       expect(document.body.textContent!.replace(/"[^"]*"/g, '')).not.toMatch(/NaN|Infinity/);
     }
+  });
+
+  test('never fills in the images seen from a prediction: a reading added without choosing a count is refused', () => {
+    // Reported case: after 1780 fpm with 1 image the count was pre-filled with the prediction 2,
+    // so a reading added at 3000 fpm went in as 2 images unseen.
+    record('1780', 1);
+    expect((screen.getByLabelText('Images standing still') as HTMLSelectElement).value).toBe('');
+    type('Rate where it stood still', '3000');
+    fireEvent.click(screen.getByRole('button', { name: 'Add reading' }));
+    expect(readings.value).toHaveLength(1);
+    expect(screen.getByTestId('reading-refused').textContent).toMatch(
+      /Choose how many images you saw standing still first; nothing was added/,
+    );
+    // After a reading is added the count is empty again.
+    record('3560', 2);
+    expect(readings.value.map((r) => r.images)).toEqual([1, 2]);
+    expect((screen.getByLabelText('Images standing still') as HTMLSelectElement).value).toBe('');
+  });
+
+  test('the table caption counts the speeds still in the running apart from those the sweep rules out', () => {
+    // Reported case: "8 speeds fit every reading" stood above 7 rows marked ruled out.
+    record('1780', 1);
+    const live = rows().filter((r) => !r.includes('Ruled out')).length;
+    const out = rows().filter((r) => r.includes('Ruled out')).length;
+    expect(out).toBeGreaterThan(0);
+    expect(
+      within(screen.getByTestId('candidate-table')).getByText(/^\d+ speeds? fits?/).textContent,
+    ).toBe(
+      `${live} ${live === 1 ? 'speed fits' : 'speeds fit'} the readings and the sweep; ${out} more ${out === 1 ? 'fits' : 'fit'} the readings but ${out === 1 ? 'is' : 'are'} ruled out; likeliest first`,
+    );
   });
 
   test('garbage in the new reading adds nothing and says so', () => {

@@ -19,11 +19,11 @@ function setupWith(change: Partial<Setup> & { part?: Partial<Setup['parts'][numb
   return s;
 }
 
-/** One mark at 3600 rpm (60 rev/s) under a strobe at `fpm`. */
-function disc(fpm: number, extra: Partial<Setup> = {}): Setup {
+/** One mark at 3600 rpm (60 rev/s), ± `tolerancePercent`, under a strobe at `fpm`. */
+function disc(fpm: number, extra: Partial<Setup> = {}, tolerancePercent = 0): Setup {
   return setupWith({
     ...extra,
-    part: { speedRpm: 3600, features: 1, tolerancePercent: 0 },
+    part: { speedRpm: 3600, features: 1, tolerancePercent },
     samplerKind: 'strobe',
     strobe: { rateFpm: fpm, minFpm: 30, maxFpm: 12000 },
   });
@@ -191,7 +191,7 @@ describe('the cautions', () => {
 
 describe('rates to try', () => {
   test('lists the nearest single- and double-image rates on each side, as lockRates gives them', () => {
-    const s = disc(3000);
+    const s = disc(3000, {}, 1);
     const r = computeCheck(s);
     // Suggestions stop at two images (check.ts, SUGGESTED_MAX_IMAGES): the ones a technician sets.
     const all = lockRates(corePart(s), { minHz: 0.5, maxHz: 200 }, { maxImages: 2 });
@@ -207,16 +207,45 @@ describe('rates to try', () => {
   });
 
   test('marks the lock at the current rate as here', () => {
-    const r = computeCheck(disc(3600));
+    const r = computeCheck(disc(3600, {}, 1));
     const here = r.locks.find((l) => l.side === 'here');
     expect(here?.rateHz).toBe(60);
     expect(here?.images).toBe(1);
+  });
+
+  test('leaves out a lock whose freezing band is narrower than one flash per minute, and says why', () => {
+    // physics.md §4: a suggested rate is at least one setting step wide. One mark at exactly
+    // 3600 rpm (no tolerance) freezes within 0.25 rpm of each single-image lock: 0.5 flash/min
+    // wide, left out. The double image at 7200 flashes/min drifts half as fast for the same
+    // rate error: 2 · 2 · 0.25 = 1 flash/min wide, exactly one step, and kept.
+    const r = computeCheck(disc(3000));
+    expect(r.locks.map((l) => [l.rateHz, l.images])).toEqual([[120, 2]]);
+    expect(r.locksNote).toMatch(/less than one flash per minute/);
+    // With ±1 % the same locks are 2 % of their rate wide, and listed.
+    const wide = computeCheck(disc(3000, {}, 1));
+    expect(wide.locks.length).toBeGreaterThan(0);
+    expect(wide.locksNote).toBeUndefined();
   });
 
   test('a camera only suggests single-image rates', () => {
     const r = computeCheck(setupWith({ samplerKind: 'camera' }));
     expect(r.locks.length).toBeGreaterThan(0);
     expect(r.locks.every((l) => l.images === 1)).toBe(true);
+  });
+
+  test('the creep rates show one image creeping forward under the sampler in use (physics.md §4)', () => {
+    // The default fan, 6 blades at 1770 rpm, creeping at 2 rpm under a strobe: every rate offered
+    // shows one image creeping forward, never a group of images standing still.
+    const r = computeCheck(setupWith({ creepRpm: 2 }));
+    expect(r.creep.length).toBeGreaterThan(0);
+    for (const c of r.creep) {
+      expect(apparentMotion(corePart(setupWith({})), c.rateHz, { sampler: 'flash' })).toMatchObject(
+        {
+          images: 1,
+          look: 'forward',
+        },
+      );
+    }
   });
 
   test('the creep rate shows the part creeping forward at the wanted speed', () => {
@@ -251,6 +280,23 @@ describe('safe bands', () => {
     expect(r.bands.all).toEqual(bands);
     expect(r.bands.partial).toBe(false);
     expect(r.bands.safeNearby.every((b) => b.safe)).toBe(true);
+    // physics.md §4: every band suggested is at least one flash per minute wide.
+    expect(r.bands.safeNearby.every((b) => (b.toHz - b.fromHz) * 60 >= 1)).toBe(true);
+  });
+
+  test('keep the nearly-still margin: a 3-jaw chuck at 2000 rpm ±1 % is not safe at 5939 flashes/min', () => {
+    // Reported case: at 1980 rpm (inside ±1 %) the chuck creeps at 0.33 rpm there (physics.md §4).
+    const s = setupWith({
+      part: { speedRpm: 2000, features: 3, tolerancePercent: 1 },
+      samplerKind: 'strobe',
+      strobe: { rateFpm: 5939, minFpm: 30, maxFpm: 12000 },
+    });
+    const r = computeCheck(s);
+    expect(r.bands.current?.safe).toBe(false);
+    expect(r.bands.current?.causes).toContainEqual({ part: 0, kind: 'nearly-still', images: 1 });
+    expect(r.bands.safeNearby.some((b) => b.fromHz <= 5939 / 60 && 5939 / 60 <= b.toHz)).toBe(
+      false,
+    );
   });
 
   test('find the band holding the current rate', () => {
@@ -275,7 +321,7 @@ describe('safe bands', () => {
 
   test('a range too dense to list is searched around the rate only, quickly, and says so', () => {
     const s = setupWith({
-      part: { speedRpm: 100_000, features: 500, tolerancePercent: 0 },
+      part: { speedRpm: 100_000, features: 500, tolerancePercent: 1 },
       samplerKind: 'strobe',
     });
     const r = computeCheck(s);

@@ -101,7 +101,10 @@ export function joinSoundWithStrobe(
   if (!Array.isArray(sound)) {
     throw new InputError('sound', 'The sound estimate is missing: analyse a recording first.');
   }
-  const n = requireWhole(opts?.symmetry, 'features (blades, teeth)', 1, MAX_SYMMETRY);
+  if (typeof opts !== 'object' || opts === null) {
+    throw new InputError('options', 'Say how many features (blades, teeth) the part has.');
+  }
+  const n = requireWhole(opts.symmetry, 'features (blades, teeth)', 1, MAX_SYMMETRY);
   const rateRange =
     opts.rateRange === undefined ? undefined : checkRange(opts.rateRange, 'strobe range');
   const tol = requireBetween(opts.strobeTolerance ?? STROBE_TOLERANCE, 'strobe tolerance', 0, 0.1);
@@ -110,6 +113,9 @@ export function joinSoundWithStrobe(
     speedHz: requirePositive(c?.speedHz, `speed of sound candidate ${i + 1}`),
     precisionHz: requireNonNegative(c?.precisionHz, `precision of sound candidate ${i + 1}`),
   }));
+  if (strobe !== undefined && !Array.isArray(strobe)) {
+    throw new InputError('strobe', 'The strobe candidates must be a list (or left out).');
+  }
   const seen = (strobe ?? []).map((c, i) =>
     requirePositive(c?.speedHz, `speed of strobe candidate ${i + 1}`),
   );

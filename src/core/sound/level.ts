@@ -1,4 +1,4 @@
-import { InputError } from '../InputError';
+import { InputError, requireWhole } from '../InputError';
 
 /** Loudness and health of a recording, from its samples (full scale = ±1). */
 export interface RecordingLevel {
@@ -29,15 +29,19 @@ const FULL_SCALE = 0.999;
  * number or lies beyond ±1000, so that no NaN or overflow reaches the spectrum.
  * @example recordingLevel(new Float32Array([0.5, -0.5])).rmsDbfs // -6.02…
  */
-export function recordingLevel(
-  samples: ArrayLike<number>,
-  from = 0,
-  to = samples.length,
-): RecordingLevel {
+export function recordingLevel(samples: ArrayLike<number>, from = 0, to?: number): RecordingLevel {
+  if (typeof samples !== 'object' || samples === null || !Number.isSafeInteger(samples.length)) {
+    throw new InputError(
+      'recording',
+      'The recording holds no samples: record again or pick a file.',
+    );
+  }
+  requireWhole(from, 'first sample', 0, samples.length);
+  const end = requireWhole(to ?? samples.length, 'last sample', from, samples.length);
   let peak = 0;
   let sumSquares = 0;
   let fullScale = 0;
-  for (let i = from; i < to; i++) {
+  for (let i = from; i < end; i++) {
     const x = samples[i];
     if (typeof x !== 'number' || !(Math.abs(x) <= MAX_SAMPLE)) {
       throw new InputError(
@@ -50,7 +54,7 @@ export function recordingLevel(
     if (a >= FULL_SCALE) fullScale++;
     sumSquares += x * x;
   }
-  const count = Math.max(1, to - from);
+  const count = Math.max(1, end - from);
   const rms = Math.sqrt(sumSquares / count);
   const rmsDbfs = rms > 0 ? Math.max(-400, 20 * Math.log10(rms)) : -400;
   const fullScaleFraction = fullScale / count;

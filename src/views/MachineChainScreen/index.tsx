@@ -244,7 +244,7 @@ export function MachineChainScreen(_props: Props) {
         {freezeShown.length === 0 ? (
           <p class={style.quiet} data-testid="no-freeze">
             {rates
-              ? `No rate in the range listed freezes ${partLabel(s, target)} without another part looking still too.`
+              ? `No band in the range listed freezes ${partLabel(s, target)} round the lock of its nominal speed, ${stepWords(r.sampler)} wide or more, without another part looking still too.`
               : 'Not worked out yet.'}
           </p>
         ) : (
@@ -338,6 +338,11 @@ function RateButton({
 function lookAt(p: DerivedPart, rateHz: number, sampler: 'flash' | 'frames'): string {
   const part = { speedHz: p.speedHz, symmetry: p.symmetry, tolerance: p.tolerance };
   return verdictOf(apparentMotion(part, rateHz, { sampler }), part).headline;
+}
+
+/** physics.md §4: the setting step a suggested band must span, in words. */
+function stepWords(sampler: 'flash' | 'frames'): string {
+  return sampler === 'frames' ? '0.01 frames/s' : 'one flash per minute';
 }
 
 function freezeWords(b: FreezeBand, samples: 'flashes' | 'frames'): string {

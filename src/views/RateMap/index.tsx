@@ -229,7 +229,7 @@ export function RateMap(props: Props) {
         ))}
         <li>
           <span class={`${style.swatch} ${style.misleadingSwatch}`} aria-hidden="true" />
-          Misleading rates
+          Can look still, nearly still, doubled or backward
         </li>
         <li>
           <span class={style.dot} aria-hidden="true" />

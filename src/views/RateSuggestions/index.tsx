@@ -47,7 +47,9 @@ export function RateSuggestions({ class: extra }: Props) {
             <p class={style.none}>
               {r.part.speedHz === 0
                 ? 'The part is not turning.'
-                : 'None near this rate in the range.'}
+                : r.locksNote
+                  ? 'None near this rate that can be set and held.'
+                  : 'None near this rate in the range.'}
             </p>
           ) : (
             <ul class={style.list} data-testid="lock-list">
@@ -57,6 +59,11 @@ export function RateSuggestions({ class: extra }: Props) {
                 </li>
               ))}
             </ul>
+          )}
+          {r.locksNote && (
+            <p class={style.help} data-testid="locks-note">
+              {r.locksNote}
+            </p>
           )}
         </NotCurrent>
         <p class={style.help}>
@@ -102,8 +109,8 @@ export function RateSuggestions({ class: extra }: Props) {
           )}
         </NotCurrent>
         <p class={style.help}>
-          The part seems to turn forward at {formatNumber(r.creepRpm)} rpm: slow enough to inspect,
-          and its direction stays right.
+          The part is seen as one image turning forward at {formatNumber(r.creepRpm)} rpm: slow
+          enough to inspect, and its direction stays right. It is still turning at full speed.
         </p>
       </div>
     </Panel>

@@ -26,6 +26,24 @@ export function candidateStatus(c: StepCandidate): string {
 }
 
 /**
+ * The table's caption, in step with its rows: how many speeds are still in the running, and how
+ * many fit the readings but the sweep rules out.
+ * @example candidateCaption([]) // '0 speeds fit every reading; likeliest first'
+ */
+export function candidateCaption(candidates: readonly StepCandidate[]): string {
+  const ruledOut = candidates.filter((c) => c.ruledOut).length;
+  const left = candidates.length - ruledOut;
+  const speeds = (n: number) => `${n} ${n === 1 ? 'speed' : 'speeds'}`;
+  if (ruledOut === 0) {
+    return `${speeds(left)} ${left === 1 ? 'fits' : 'fit'} every reading; likeliest first`;
+  }
+  return (
+    `${speeds(left)} ${left === 1 ? 'fits' : 'fit'} the readings and the sweep; ` +
+    `${ruledOut} more ${ruledOut === 1 ? 'fits' : 'fit'} the readings but ${ruledOut === 1 ? 'is' : 'are'} ruled out; likeliest first`
+  );
+}
+
+/**
  * The candidates and the readings behind them as CSV (RFC 4180 via the core's csvTable): one row
  * per candidate speed, then the readings, so the file stands alone.
  * @example finderCsv([], [], undefined) // 'speed (rpm),status,why,at next rate\r\n'

@@ -19,7 +19,7 @@ import { Panel } from '../Panel';
 import { ReportBar } from '../ReportBar';
 import { ResultTable, type ResultColumn } from '../ResultTable';
 import { ToolLayout } from '../ToolLayout';
-import { candidateStatus, finderCsv, STAGE_TITLES } from './finder-words';
+import { candidateCaption, candidateStatus, finderCsv, STAGE_TITLES } from './finder-words';
 import { ReadingsPanel } from './readings-panel';
 import { SavePanel } from './save-panel';
 import { FinderSetupPanel } from './setup-panel';
@@ -43,7 +43,6 @@ export function SpeedFinderScreen(_props: Props) {
   const [applied, setApplied] = useState<number | null>(null);
   const rate = (hz: number) => formatRate(hz, 'strobe', unit);
   const expectedRpm = safeExpectedRpm();
-  const likeliest = step?.candidates.find((c) => c.likeliest);
 
   // The procedure sweeps the strobe's whole range: stillness that is not real, and flashing in
   // the seizure range, apply throughout (physics.md §10). Both always show on this screen.
@@ -102,7 +101,7 @@ export function SpeedFinderScreen(_props: Props) {
 
   const entries = (
     <>
-      <ReadingsPanel proposedFpm={step?.rateFpm} proposedImages={likeliest?.atNextRate?.images} />
+      <ReadingsPanel proposedFpm={step?.rateFpm} />
       <FinderSetupPanel expectedRpm={expectedRpm} />
     </>
   );
@@ -138,7 +137,7 @@ export function SpeedFinderScreen(_props: Props) {
         ) : (
           <>
             <ResultTable
-              caption={`${candidates.length} ${candidates.length === 1 ? 'speed fits' : 'speeds fit'} every reading; likeliest first`}
+              caption={candidateCaption(candidates)}
               columns={columns}
               rows={candidates.slice(0, SHOWN_CANDIDATES)}
               rowKey={(c) => String(c.speedHz)}

@@ -19,8 +19,6 @@ import style from './style.module.css';
 interface Props {
   /** The rate the procedure proposes now, flashes per minute: the new reading starts there. */
   proposedFpm?: number;
-  /** The image count the likeliest speed would show there. */
-  proposedImages?: number;
 }
 
 const IMAGE_CHOICES = Array.from({ length: MAX_IMAGES_SEEN }, (_, i) => i + 1);
@@ -29,7 +27,7 @@ const IMAGE_CHOICES = Array.from({ length: MAX_IMAGES_SEEN }, (_, i) => i + 1);
  * The readings so far (each editable, each removable) and a row to add the next one: the rate
  * at which the image stood still and how many images stood there.
  */
-export function ReadingsPanel({ proposedFpm, proposedImages }: Props) {
+export function ReadingsPanel({ proposedFpm }: Props) {
   const unit = flashUnit.value;
   const list = readings.value;
   const toText = (fpm: number) => numberForField(unit === 'fpm' ? fpm : fpm / 60);
@@ -81,7 +79,7 @@ export function ReadingsPanel({ proposedFpm, proposedImages }: Props) {
           ))}
         </ol>
       )}
-      <NewReading proposedFpm={proposedFpm} proposedImages={proposedImages} />
+      <NewReading proposedFpm={proposedFpm} />
       {list.length > 0 && (
         <button type="button" class={style.quietButton} onClick={clearReadings}>
           Start again (clear all readings)
@@ -94,7 +92,8 @@ export function ReadingsPanel({ proposedFpm, proposedImages }: Props) {
 interface ImagesProps {
   id: string;
   label: string;
-  value: number;
+  /** The count chosen; undefined until the technician chooses one (a new reading). */
+  value: number | undefined;
   onChange: (images: number) => void;
 }
 
@@ -107,9 +106,17 @@ function ImagesChoice({ id, label, value, onChange }: ImagesProps) {
       <select
         id={id}
         class={style.select}
-        value={String(value)}
-        onChange={(e) => onChange(Number((e.currentTarget as HTMLSelectElement).value))}
+        value={value === undefined ? '' : String(value)}
+        onChange={(e) => {
+          const text = (e.currentTarget as HTMLSelectElement).value;
+          if (text !== '') onChange(Number(text));
+        }}
       >
+        {value === undefined && (
+          <option value="" disabled aria-label="not chosen yet">
+            ?
+          </option>
+        )}
         {IMAGE_CHOICES.map((n) => (
           <option key={n} value={String(n)} aria-label={imagesLabel(n)}>
             {n}
@@ -121,21 +128,22 @@ function ImagesChoice({ id, label, value, onChange }: ImagesProps) {
 }
 
 /**
- * The next reading, added with a button: its rate starts at the proposed one. Text that is not
- * a rate keeps its message beside the field, and nothing is added.
+ * The next reading, added with a button: its rate starts at the proposed one, and the image
+ * count is left for the technician to choose every time. What they saw is never filled in
+ * from a prediction (physics.md §7): a reading recorded with a predicted count would lead the
+ * search astray. Text that is not a rate, or no count chosen, keeps its message and adds nothing.
  */
-function NewReading({ proposedFpm, proposedImages }: Props) {
+function NewReading({ proposedFpm }: Props) {
   const unit = flashUnit.value;
   const [rateFpm, setRateFpm] = useState(proposedFpm ?? NaN);
-  const [images, setImages] = useState(proposedImages ?? 1);
-  const [refused, setRefused] = useState(false);
+  const [images, setImages] = useState<number | undefined>(undefined);
+  const [refused, setRefused] = useState<'rate' | 'images' | null>(null);
 
-  // A new proposal fills the row again; typing does not.
+  // A new proposal fills the rate again; typing does not. The count is never filled in.
   useEffect(() => {
     if (proposedFpm !== undefined) setRateFpm(proposedFpm);
-    setImages(proposedImages ?? 1);
-    setRefused(false);
-  }, [proposedFpm, proposedImages]);
+    setRefused(null);
+  }, [proposedFpm]);
 
   const read = (text: string) => readFlashRateFpm(text, unit, 'rate');
 
@@ -148,11 +156,16 @@ function NewReading({ proposedFpm, proposedImages }: Props) {
     );
     const reading = readField(input?.value ?? '', read);
     if (!reading.ok) {
-      setRefused(true);
+      setRefused('rate');
       return;
     }
-    setRefused(false);
+    if (images === undefined) {
+      setRefused('images');
+      return;
+    }
+    setRefused(null);
     addReading(reading.value, images);
+    setImages(undefined);
   };
 
   return (
@@ -166,7 +179,7 @@ function NewReading({ proposedFpm, proposedImages }: Props) {
         read={read}
         onValue={(fpm) => {
           setRateFpm(fpm);
-          setRefused(false);
+          setRefused(null);
         }}
         unit={unit === 'fpm' ? 'fpm' : 'Hz'}
       />
@@ -174,14 +187,19 @@ function NewReading({ proposedFpm, proposedImages }: Props) {
         id="new-reading-images"
         label="Images standing still"
         value={images}
-        onChange={setImages}
+        onChange={(n) => {
+          setImages(n);
+          setRefused(null);
+        }}
       />
       <button type="submit" class={style.primary}>
         Add reading
       </button>
       {refused && (
         <p class={style.message} role="alert" data-testid="reading-refused">
-          Type the rate where the image stood still first; nothing was added.
+          {refused === 'rate'
+            ? 'Type the rate where the image stood still first; nothing was added.'
+            : 'Choose how many images you saw standing still first; nothing was added.'}
         </p>
       )}
     </form>
