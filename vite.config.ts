@@ -9,7 +9,7 @@ export default defineConfig({
   plugins: [
     preact(),
     VitePWA({
-      // A new version waits for the user's go-ahead (src/views/UpdateNotice); registration is
+      // A new version waits for the user's go-ahead (src/app/update-notice); registration is
       // done by the useRegisterSW hook, so no extra script is injected.
       registerType: 'prompt',
       injectRegister: false,
@@ -55,11 +55,10 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'unit',
+          // Every folder of test/ but the real-browser tests and the benchmarks.
           include: [
-            'test/core/**/*.test.ts',
-            'test/state/**/*.test.{ts,tsx}',
-            'test/views/**/*.test.{ts,tsx}',
-            'test/render/**/*.test.ts',
+            'test/*.test.ts',
+            'test/{app,audio,core,render,screens,state,ui,words}/**/*.test.{ts,tsx}',
           ],
           environment: 'node',
         },

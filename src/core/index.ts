@@ -1,20 +1,29 @@
 // The public face of the core (../shared/design/core-api.md): re-exports only.
-export { InputError } from './InputError';
-export type { Part, Range, Sampler, Look } from './types';
-export { MAX_SYMMETRY, MAX_IMAGES_LIMIT } from './types';
-export { defaultLookOptions, THRESHOLD_SLACK, type LookOptions } from './lookOptions';
-export { DEFAULT_SETTING_STEP_HZ, settingStepHz, isSettableBand } from './settableBands';
-export { apparentMotion, type ApparentMotion, type ApparentMotionOptions } from './apparentMotion';
-export { lockRates, type LockRate } from './lockRates';
-export { ratesForApparent } from './ratesForApparent';
-export { rateBands, type RateBand, type RateBandCause, type RateBandOptions } from './rateBands';
+export { InputError } from './basics/InputError';
+export type { Part, Range, Sampler, Look } from './basics/types';
+export { MAX_SYMMETRY, MAX_IMAGES_LIMIT } from './basics/types';
+export { defaultLookOptions, THRESHOLD_SLACK, type LookOptions } from './physics/lookOptions';
+export { DEFAULT_SETTING_STEP_HZ, settingStepHz, isSettableBand } from './physics/settableBands';
+export {
+  apparentMotion,
+  type ApparentMotion,
+  type ApparentMotionOptions,
+} from './physics/apparentMotion';
+export { lockRates, type LockRate } from './physics/lockRates';
+export { ratesForApparent } from './physics/ratesForApparent';
+export {
+  rateBands,
+  type RateBand,
+  type RateBandCause,
+  type RateBandOptions,
+} from './physics/rateBands';
 export {
   rateMapSeries,
   defaultRateMapPoints,
   MAX_RATE_MAP_POINTS,
   type RateMapSeries,
   type RateMapOptions,
-} from './rateMapSeries';
+} from './physics/rateMapSeries';
 export {
   findSpeed,
   type StrobeReading,
@@ -22,7 +31,7 @@ export {
   type SpeedFinding,
   type FindSpeedOptions,
   type Prediction,
-} from './findSpeed';
+} from './physics/findSpeed';
 export {
   blurDegrees,
   blurPitches,
@@ -30,7 +39,7 @@ export {
   shutterAngleFromExposure,
   flashArcBlurM,
   rollingSkewDegrees,
-} from './exposure';
+} from './formulas/exposure';
 export {
   flickerRisk,
   flickerLimits,
@@ -44,7 +53,7 @@ export {
   type LightComponent,
   type LightShape,
   type LightWave,
-} from './flicker';
+} from './formulas/flicker';
 export {
   synchronousSpeedHz,
   motorSpeedHz,
@@ -53,18 +62,18 @@ export {
   gearSpeedHz,
   wheelSpeedHz,
   tyreDiameterM,
-} from './drives';
+} from './formulas/drives';
 export {
   foldedHz,
   lowPassGainDb,
   rcCutoffHz,
   converterRangeDb,
   orderForAttenuation,
-} from './logger';
-export * from './units';
-export { gcd } from './gcd';
+} from './formulas/logger';
+export * from './formulas/units';
+export { gcd } from './basics/gcd';
 // Field tools (issue 5): speed finder steps, whole machine, lighting, camera, logger, reports.
-export { plainNumber } from './plainNumber';
+export { plainNumber } from './basics/plainNumber';
 export {
   safetyCautions,
   cautionFlags,
@@ -74,7 +83,7 @@ export {
   SEIZURE_RISK_LOW_HZ,
   SEIZURE_RISK_HIGH_HZ,
   type CautionContext,
-} from './safetyCautions';
+} from './plans/safetyCautions';
 export {
   speedFinderSteps,
   motorExpectedRange,
@@ -84,7 +93,7 @@ export {
   type SpeedFinderOptions,
   type StepCandidate,
   type StepPrediction,
-} from './speedFinderSteps';
+} from './plans/speedFinderSteps';
 export {
   driveChain,
   type ChainRoot,
@@ -92,7 +101,7 @@ export {
   type ChainPartSpec,
   type ChainSpec,
   type ChainPart,
-} from './driveChain';
+} from './plans/driveChain';
 export {
   stillRates,
   freezeRates,
@@ -100,7 +109,7 @@ export {
   type StillSpan,
   type FreezeBand,
   type StillRateOptions,
-} from './freezeRates';
+} from './plans/freezeRates';
 export {
   lightingCheck,
   type Lamp,
@@ -108,7 +117,7 @@ export {
   type LightingVerdict,
   type PartUnderLight,
   type LightingCheck,
-} from './lightingCheck';
+} from './plans/lightingCheck';
 export {
   cameraPlan,
   standardFrameRates,
@@ -122,7 +131,7 @@ export {
   type CameraNeeds,
   type LookRate,
   MAX_LOOK_RATES,
-} from './cameraPlan';
+} from './plans/cameraPlan';
 export {
   loggerPlan,
   niceSampleRateHz,
@@ -133,9 +142,9 @@ export {
   type LoggerProposal,
   type LoggerPlan,
   type LoggerPlanOptions,
-} from './loggerPlan';
-export { csv, csvField, csvTable, type CsvValue, type CsvColumn } from './csv';
-export { MAX_WORK_ITEMS } from './workLimit';
+} from './plans/loggerPlan';
+export { csv, csvField, csvTable, type CsvValue, type CsvColumn } from './basics/csv';
+export { MAX_WORK_ITEMS } from './basics/workLimit';
 // Hear the speed (issue 12): the spectrum of a recording, the speeds it holds, and their join
 // with strobe readings.
 export {

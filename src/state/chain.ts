@@ -21,9 +21,14 @@ import {
   type Sampler,
 } from '../core';
 import { check } from './check';
-import { MAX_SPEED_RPM } from '../lib/fields';
-import { formatNumber } from '../lib/format';
-import { partLabel, type PartDrive, type PartSpec, type Setup, type WheelSpec } from './model';
+import {
+  MAX_SPEED_RPM,
+  partLabel,
+  type PartDrive,
+  type PartSpec,
+  type Setup,
+  type WheelSpec,
+} from './model';
 import { keepLastGood } from './outcome';
 import { defaultMotor, setup } from './setup';
 import { DataError, MAX_PARTS } from './validate';
@@ -137,7 +142,7 @@ export function withChainSpeeds(s: Setup): Setup {
     if (!(Math.abs(rpm) <= MAX_SPEED_RPM)) {
       throw new InputError(
         `speed of ${partLabel(s, i)}`,
-        `${partLabel(s, i)} would turn at more than ${formatNumber(MAX_SPEED_RPM)} rpm: check the drives and sizes before it.`,
+        `${partLabel(s, i)} would turn at more than ${MAX_SPEED_RPM.toLocaleString('en-US')} rpm: check the drives and sizes before it.`,
       );
     }
     const tolerancePercent = part.drive ? derived[i].tolerance * 100 : part.tolerancePercent;

@@ -30,7 +30,7 @@ import {
 } from '../core';
 import { defaultSetup, type SamplerKind, type Setup } from './model';
 import { flickerHzOf, lightWaveOf, samplerRateHz, setup } from './setup';
-import { formatNumber } from '../lib/format';
+import { formatNumber } from '../words/format';
 
 /** What the viewer reads, in the words the screen uses for its headline. */
 export type VerdictKind =

@@ -3,6 +3,11 @@
 // naturally; conversion to core units (rev/s, Hz, s) happens in computed views.
 
 export type SpeedUnit = 'rpm' | 'Hz' | 'rad/s';
+
+/** Fastest speed a field accepts: beyond any machine part a person checks with a strobe or camera. */
+export const MAX_SPEED_RPM = 1_000_000;
+/** Fastest sampler a field accepts, Hz: strobes reach a few kHz, high-speed cameras far more. */
+export const MAX_RATE_HZ = 1_000_000;
 export type SamplerKind = 'camera' | 'strobe' | 'lighting';
 
 /** A turning part. */

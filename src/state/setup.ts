@@ -1,5 +1,5 @@
 // The set-up on screen right now, as one signal, with one setter per field. Setters take
-// values already checked by the field readers (src/lib/fields.ts) and always build a new
+// values already checked by the field readers (src/ui/fields.ts) and always build a new
 // object, so every computed view that reads `setup` follows at once.
 import { computed, effect, signal } from '@preact/signals';
 import { motorSpeedHz, type LightWave } from '../core';

@@ -9,7 +9,7 @@ import {
   type Range,
   type SpeedFinderStep,
 } from '../core';
-import { formatNumber } from '../lib/format';
+import { formatNumber } from '../words/format';
 import {
   deriveParts,
   speedSourceOf,

@@ -8,9 +8,9 @@ import { afterEach, describe, expect, inject, test } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { beltSpeedHz, driveChain, freezeRates, motorSpeedHz } from '../../src/core';
-import { formatNumber } from '../../src/lib/format';
-import { formatRate } from '../../src/lib/rates';
-import { freezeRateToSet } from '../../src/views/MachineChainScreen/band-lists';
+import { formatNumber } from '../../src/words/format';
+import { formatRate } from '../../src/words/rates';
+import { freezeRateToSet } from '../../src/screens/whole-machine/band-lists';
 import { openApp, openBrowser, typeInto, type Session } from './browser';
 
 let session: Session | undefined;

@@ -13,8 +13,8 @@ import {
   lockRates,
   safetyCautions,
 } from '../../src/core';
-import { formatPrecise, numberForField } from '../../src/lib/format';
-import { lookWords } from '../../src/lib/lookWords';
+import { formatPrecise, numberForField } from '../../src/words/format';
+import { lookWords } from '../../src/words/look';
 import { defaultCameraEntries, frameRatesOf } from '../../src/state/cameraPlanning';
 import { corePart } from '../../src/state/check';
 import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';

@@ -10,7 +10,7 @@ import {
   flickerRisk,
   rollingSkewDegrees,
 } from '../../src/core';
-import { formatNumber, formatRpmWithDirection } from '../../src/lib/format';
+import { formatNumber, formatRpmWithDirection } from '../../src/words/format';
 import { openApp, openBrowser, typeInto, type Session } from './browser';
 
 let session: Session | undefined;

@@ -5,7 +5,7 @@ import { afterEach, describe, expect, inject, test } from 'vitest';
 import { mkdirSync } from 'node:fs';
 import type { Locator, Page } from 'playwright-core';
 import { apparentMotion, lockRates, type Part, type Range } from '../../src/core';
-import { formatRpmWithDirection } from '../../src/lib/format';
+import { formatRpmWithDirection } from '../../src/words/format';
 import { openApp, openBrowser, typeInto, type Session } from './browser';
 
 let session: Session | undefined;
@@ -21,12 +21,12 @@ const shots = 'test-output/screenshots';
 // tolerance), under a strobe that runs from 30 to 12,000 flashes a minute (the default range).
 const mark: Required<Part> = { speedHz: 10, symmetry: 1, tolerance: 0.01 };
 const strobeRange: Range = { minHz: 30 / 60, maxHz: 12000 / 60 };
-/** A tap this close to a lock marker takes the lock's rate (src/views/RateMap/chart.ts). */
+/** A tap this close to a lock marker takes the lock's rate (src/ui/rate-map/chart.ts). */
 const SNAP_PX = 6;
 
 /**
  * The plot area once the chart on it is drawn on `axis` for the test rig's mark (the widget
- * marks its plot box with what the chart shows: src/views/RateMap). uPlot's overlay takes the
+ * marks its plot box with what the chart shows: src/ui/rate-map). uPlot's overlay takes the
  * taps and spans exactly the plotted rates. The chart is drawn after the page paints, so every
  * measurement and tap goes through this locator, which waits for that drawing.
  */

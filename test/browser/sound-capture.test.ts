@@ -1,5 +1,5 @@
 // The sound capture module (src/audio) in real Chromium, fed by its fake microphone: a WAV of
-// a 6-blade fan at 1750 rpm with 100 Hz hum (test/sound) plays as the microphone
+// a 6-blade fan at 1750 rpm with 100 Hz hum (test/helpers/sound) plays as the microphone
 // (--use-fake-device-for-media-stream --use-file-for-fake-audio-capture). The module is not
 // on any app screen yet, so a small page that only loads it is built here, into test-output/,
 // with Vite (as the app is: the worklet bundled as its own file, loaded from the page's origin).
@@ -12,8 +12,8 @@ import { build, preview, type PreviewServer } from 'vite';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CHROMIUM } from './browser';
 import { freePort } from './server';
-import { fanAt1750Rpm } from '../sound/machineSound';
-import { writeWav } from '../sound/wav';
+import { fanAt1750Rpm } from '../helpers/sound/machineSound';
+import { writeWav } from '../helpers/sound/wav';
 
 const root = resolve(import.meta.dirname, '../..');
 const work = resolve(root, 'test-output/sound-capture');

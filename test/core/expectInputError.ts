@@ -2,7 +2,7 @@
 // an Error whose `field` says which input is wrong and whose message names it.
 import { expect } from 'vitest';
 import fc from 'fast-check';
-import { InputError } from '../../src/core/InputError';
+import { InputError } from '../../src/core/basics/InputError';
 
 /** Lets a test pass input of the wrong type on purpose. */
 export const bad = (value: unknown): never => value as never;

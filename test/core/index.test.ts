@@ -1,7 +1,7 @@
 // The public face of the core must match core-api.md: every name exported, results shaped as
 // documented, bad input throwing InputError (an Error) that names the field.
 import { describe, expect, it } from 'vitest';
-import * as core from '../../src/core/index';
+import * as core from '../../src/core';
 import { bad, inputErrorOf } from './expectInputError';
 
 // Every function core-api.md lists, by name.

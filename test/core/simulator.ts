@@ -114,7 +114,7 @@ export interface Eye {
 }
 
 /**
- * The defaults documented in physics.md §2–§4 and src/core/lookOptions.ts: still at or below
+ * The defaults documented in physics.md §2–§4 and src/core/physics/lookOptions.ts: still at or below
  * 0.25 rpm = 1/240 rev/s, direction unclear from 0.45 pitch per sample, up to 8 images,
  * a creeping group still counted as images below 1 image spacing per second, nearly still
  * below 6 rpm = 1/10 rev/s.

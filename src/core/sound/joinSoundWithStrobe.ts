@@ -4,9 +4,9 @@ import {
   requireNonNegative,
   requirePositive,
   requireWhole,
-} from '../InputError';
-import { apparentMotion } from '../apparentMotion';
-import { checkRange, MAX_SYMMETRY, type Look, type Range } from '../types';
+} from '../basics/InputError';
+import { apparentMotion } from '../physics/apparentMotion';
+import { checkRange, MAX_SYMMETRY, type Look, type Range } from '../basics/types';
 import {
   CLEAR_SHARE,
   TIED_SHARE,

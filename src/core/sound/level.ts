@@ -1,4 +1,4 @@
-import { InputError, requireWhole } from '../InputError';
+import { InputError, requireWhole } from '../basics/InputError';
 
 /** Loudness and health of a recording, from its samples (full scale = ±1). */
 export interface RecordingLevel {

@@ -4,7 +4,7 @@
 // release 2020, no open defects touching the transform), is typed, and is faster than a
 // transform of our own would be: 65 536 real points in under a millisecond here.
 import FFT from 'fft.js';
-import { InputError, requireBetween } from '../InputError';
+import { InputError, requireBetween } from '../basics/InputError';
 import { hannWindow } from './window';
 import { decimate } from './decimate';
 import { recordingLevel, type RecordingLevel } from './level';

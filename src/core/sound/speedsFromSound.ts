@@ -1,6 +1,6 @@
-import { InputError, requireWhole } from '../InputError';
-import { checkRange, MAX_SYMMETRY, type Range } from '../types';
-import { requireWorkable } from '../workLimit';
+import { InputError, requireWhole } from '../basics/InputError';
+import { checkRange, MAX_SYMMETRY, type Range } from '../basics/types';
+import { requireWorkable } from '../basics/workLimit';
 import { findHum, type HumLine } from './hum';
 import type { SpectrumPeak } from './peaks';
 import type { SoundSpectrum } from './spectrum';

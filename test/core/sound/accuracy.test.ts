@@ -1,5 +1,5 @@
 /**
- * The tone finder against synthetic machines (test/sound/machineCases.ts): random blade or
+ * The tone finder against synthetic machines (test/helpers/sound/machineCases.ts): random blade or
  * tooth counts and speeds (300–3600 rpm), blade-pass harmonics and shaft lines with random
  * phases and amplitudes, a missing fundamental in some, a driving motor's own lines in some,
  * 50 or 60 Hz hum always (the supply told to the finder in half the cases), the speed
@@ -17,8 +17,8 @@
  */
 import { describe, expect, it, vi } from 'vitest';
 import { soundSpectrum, speedsFromSound, type SoundSpeeds } from '../../../src/core';
-import { seededRandom } from '../../sound/machineSound';
-import { machineCase, type MachineCase } from '../../sound/machineCases';
+import { seededRandom } from '../../helpers/sound/machineSound';
+import { machineCase, type MachineCase } from '../../helpers/sound/machineCases';
 
 // Hundreds of 4 s recordings synthesised and analysed; the limit only stops a hung run.
 vi.setConfig({ testTimeout: 300_000 });

@@ -11,7 +11,7 @@ import {
   type SoundSpeedCandidate,
 } from '../../../src/core';
 import { bad, expectInputError, finiteOrInputError, notNumbers } from '../expectInputError';
-import { fanAt1750Rpm } from '../../sound/machineSound';
+import { fanAt1750Rpm } from '../../helpers/sound/machineSound';
 
 const FS = 48_000;
 const fanSpectrum = soundSpectrum(fanAt1750Rpm(FS, 4), FS);

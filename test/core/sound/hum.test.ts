@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { soundSpectrum } from '../../../src/core';
 import { findHum } from '../../../src/core/sound/hum';
-import { machineSound, seededRandom } from '../../sound/machineSound';
+import { machineSound, seededRandom } from '../../helpers/sound/machineSound';
 
 const FS = 44_100;
 const line = (order: number, amplitude: number) => ({ order, amplitude, phase: order });

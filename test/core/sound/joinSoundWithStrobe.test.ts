@@ -14,7 +14,7 @@ import {
   speedsFromSound,
   type SoundSpeedCandidate,
 } from '../../../src/core';
-import { fanAt1750Rpm, machineSound, seededRandom } from '../../sound/machineSound';
+import { fanAt1750Rpm, machineSound, seededRandom } from '../../helpers/sound/machineSound';
 
 const FAN_HZ = 1750 / 60;
 const fan = speedsFromSound(soundSpectrum(fanAt1750Rpm(48_000, 4), 48_000), { symmetry: 6 });

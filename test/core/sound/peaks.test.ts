@@ -8,7 +8,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { soundSpectrum, type SoundSpectrum } from '../../../src/core';
-import { machineSound, noiseOf, seededRandom } from '../../sound/machineSound';
+import { machineSound, noiseOf, seededRandom } from '../../helpers/sound/machineSound';
 
 const strongest = (s: SoundSpectrum) => s.peaks.reduce((a, b) => (b.levelDb > a.levelDb ? b : a));
 

@@ -18,7 +18,7 @@ import {
   noiseOf,
   seededRandom,
   type MachineSoundSpec,
-} from '../../sound/machineSound';
+} from '../../helpers/sound/machineSound';
 
 const FAN_HZ = 1750 / 60;
 

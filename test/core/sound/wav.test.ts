@@ -1,5 +1,5 @@
 /**
- * The WAV test helper (test/sound/wav.ts) that feeds Chromium's fake microphone: its header
+ * The WAV test helper (test/helpers/sound/wav.ts) that feeds Chromium's fake microphone: its header
  * against the RIFF WAVE layout (Microsoft & IBM, "Multimedia Programming Interface and Data
  * Specifications 1.0", 1991), and the fan read back through the sound core.
  */
@@ -8,8 +8,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { soundSpectrum, speedsFromSound } from '../../../src/core';
-import { fanAt1750Rpm } from '../../sound/machineSound';
-import { readWav, wavBytes, writeWav } from '../../sound/wav';
+import { fanAt1750Rpm } from '../../helpers/sound/machineSound';
+import { readWav, wavBytes, writeWav } from '../../helpers/sound/wav';
 
 describe('wavBytes', () => {
   it('writes the canonical 44-byte header of 16-bit mono PCM', () => {

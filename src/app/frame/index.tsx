@@ -1,0 +1,82 @@
+import type { ComponentChildren } from 'preact';
+import { useEffect, useRef } from 'preact/hooks';
+import { currentScreen, openScreen, type ScreenId } from '../../state/navigation';
+import style from './style.module.css';
+
+interface Props {
+  /** Messages across the top: updates, storage, how the session opened. */
+  notices?: ComponentChildren;
+  children: ComponentChildren;
+}
+
+const TABS: ReadonlyArray<{ id: ScreenId; label: string }> = [
+  { id: 'check', label: 'Check' },
+  { id: 'machines', label: 'Machines' },
+  { id: 'lighting', label: 'Lighting' },
+  { id: 'camera-plan', label: 'Camera' },
+  { id: 'logger', label: 'Logger' },
+  { id: 'speed-finder', label: 'Speed finder' },
+  { id: 'machine-chain', label: 'Whole machine' },
+];
+
+/** The page: our mark and name, the tab bar, notices, and the open screen. */
+export function AppFrame({ notices, children }: Props) {
+  const screen = currentScreen.value;
+  const tabBar = useRef<HTMLElement>(null);
+  // On a phone the tab row scrolls sideways: keep the open tab in view.
+  useEffect(() => {
+    const open = tabBar.current?.querySelector<HTMLElement>('[aria-current="page"]');
+    open?.scrollIntoView?.({ block: 'nearest', inline: 'nearest' });
+  }, [screen]);
+  return (
+    <div class={style.frame}>
+      <header class={style.header}>
+        <div class={style.brand}>
+          <svg class={style.mark} viewBox="0 0 512 512" aria-hidden="true">
+            <g transform="translate(256 256)">
+              <circle r="168" fill="none" stroke="currentColor" stroke-width="40" />
+              <path
+                d="M0 0V-138"
+                stroke="currentColor"
+                stroke-width="34"
+                stroke-linecap="round"
+                opacity="0.25"
+                transform="rotate(-64)"
+              />
+              <path
+                d="M0 0V-138"
+                stroke="currentColor"
+                stroke-width="38"
+                stroke-linecap="round"
+                opacity="0.45"
+                transform="rotate(-32)"
+              />
+              <path d="M0 0V-140" stroke="var(--accent)" stroke-width="50" stroke-linecap="round" />
+              <circle r="44" fill="var(--accent)" />
+            </g>
+          </svg>
+          <span class={style.name}>Trueturn</span>
+        </div>
+        <nav class={style.tabs} aria-label="Screens" ref={tabBar}>
+          {TABS.map((t) => (
+            <button
+              key={t.id}
+              type="button"
+              class={style.tab}
+              aria-current={t.id === screen ? 'page' : undefined}
+              onClick={() => openScreen(t.id)}
+            >
+              {t.label}
+            </button>
+          ))}
+        </nav>
+      </header>
+      {notices && (
+        <div class={style.notices} data-print="hide">
+          {notices}
+        </div>
+      )}
+      <main class={style.main}>{children}</main>
+    </div>
+  );
+}

@@ -1,0 +1,85 @@
+// The preview and the rate map, fed from the set-up on screen. Both load after the first paint
+// (lazy-widgets.ts); until then a placeholder of about their size holds their place.
+import { check, checkProblem } from '../../state/check';
+import { problemsAmong } from '../../state/fieldProblems';
+import { VERDICT_FIELDS } from './field-ids';
+import { flashUnit, setSamplerRateHz, setup } from '../../state/setup';
+import { Panel } from '../../ui/panel';
+import { widgets as lazyWidgets } from './lazy-widgets';
+import { previewInputOf, rateMapInputOf } from './widget-inputs';
+import style from './style.module.css';
+
+/**
+ * The screen shows the stillness caution: for an aliased view, and while the verdict is
+ * withdrawn (nothing then says the view is true).
+ */
+function screenShowsSafety(): boolean {
+  return (
+    check.value.showSafety ||
+    problemsAmong(VERDICT_FIELDS).length > 0 ||
+    checkProblem.value !== undefined
+  );
+}
+
+/**
+ * The part being checked as the sampler shows it, beside the part as it really turns. Its
+ * stillness caution is left to the screen's own cautions whenever those show (they do for every
+ * verdict that is not to be trusted); otherwise the preview gives it itself.
+ */
+export function CheckPreview() {
+  const result = check.value;
+  const input = previewInputOf(result, setup.value);
+  const { module: widgets, failed } = lazyWidgets.use();
+  return (
+    <Panel title="Preview" id="preview">
+      {input === null ? (
+        <p class={style.quiet}>Steady light samples nothing: the part looks as it really turns.</p>
+      ) : widgets ? (
+        <widgets.Preview {...input} showCautions={!screenShowsSafety()} />
+      ) : (
+        <div class={style.previewPlaceholder} data-testid="preview-placeholder">
+          <div class={style.square} />
+          <div class={style.square} />
+          <p class={style.placeholderText}>
+            {failed
+              ? 'The preview could not be loaded: reload the page to try again.'
+              : 'Loading the preview…'}
+          </p>
+        </div>
+      )}
+    </Panel>
+  );
+}
+
+/**
+ * Every part's apparent speed over the sampler's range. Tapping or dragging it sets the rate
+ * through the same setter as the suggested rates, so the rate field follows.
+ */
+export function CheckRateMap() {
+  const result = check.value;
+  const input = rateMapInputOf(result, setup.value);
+  const { module: widgets, failed } = lazyWidgets.use();
+  return (
+    <Panel title="Rate map" id="rate-map">
+      {widgets ? (
+        <widgets.RateMap
+          {...input}
+          onRateChange={setSamplerRateHz}
+          flashUnit={flashUnit.value}
+          showCautions={!screenShowsSafety()}
+        />
+      ) : (
+        <div class={style.mapPlaceholder} data-testid="rate-map-placeholder">
+          <div class={style.mapToolbar} />
+          <div class={style.mapPlot}>
+            <p class={style.placeholderText}>
+              {failed
+                ? 'The rate map could not be loaded: reload the page to try again.'
+                : 'Loading the rate map…'}
+            </p>
+          </div>
+        </div>
+      )}
+    </Panel>
+  );
+}

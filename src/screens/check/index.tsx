@@ -1,0 +1,96 @@
+import type { ComponentChildren } from 'preact';
+import { check, checkProblem } from '../../state/check';
+import { problemsAmong } from '../../state/fieldProblems';
+import { CameraReadout } from './camera-readout';
+import { Cautions } from '../../ui/cautions';
+import { KeepShare } from './keep-share';
+import { LightingReadout } from '../../ui/lighting-readout';
+import { NotCurrent } from '../../ui/not-current';
+import { PartForm } from '../../ui/part-form';
+import { RateSuggestions } from './rate-suggestions';
+import { SafeBands } from './safe-bands';
+import { SamplerForm } from './sampler-form';
+import { VerdictPanel } from './verdict-panel';
+import { CheckPreview, CheckRateMap } from './connected-widgets';
+import { RESULT_FIELDS, VERDICT_FIELDS } from './field-ids';
+import style from './style.module.css';
+
+interface Props {
+  /**
+   * Slot under the cautions for a moving picture of what the viewer sees: by default the
+   * preview of the set-up; null leaves it out.
+   */
+  preview?: ComponentChildren;
+  /**
+   * Slot under the entries for a chart of the rate range: by default the rate map, which sets
+   * the rate when tapped; null leaves it out.
+   */
+  chart?: ComponentChildren;
+}
+
+/**
+ * The check screen: enter the part and what looks at it, and see at once what the viewer
+ * will see, which rates to use and which to avoid. On a phone one column, verdict first and
+ * pinned to the top, its cautions right under it; on a desktop, entries on the left and
+ * results on the right. The rate map sits under the rate it sets; the preview sits under the
+ * cautions that go with it. While an entry is refused, the verdict is withdrawn and every
+ * result worked out from it is marked not current (physics.md §10).
+ */
+export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap /> }: Props) {
+  const refusal = checkProblem.value;
+  const r = check.value;
+  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
+  const stale = problemsAmong(RESULT_FIELDS);
+  return (
+    <div class={style.screen}>
+      <div class={style.verdict}>
+        <VerdictPanel />
+      </div>
+      <div class={style.warnings}>
+        {/* With the verdict withdrawn nothing says the view is true: keep the stillness caution. */}
+        <Cautions
+          show={{
+            safety: r.showSafety || withdrawn,
+            photosensitivity: r.showPhotosensitivity,
+          }}
+        />
+        {r.notes.length > 0 && (
+          <NotCurrent problems={stale} refusal={refusal}>
+            <ul class={style.notes} data-testid="check-notes">
+              {r.notes.map((n) => (
+                <li key={n}>{n}</li>
+              ))}
+            </ul>
+          </NotCurrent>
+        )}
+      </div>
+      <div class={style.entries}>
+        <PartForm />
+        <SamplerForm />
+        {chart && (
+          <div class={style.slot}>
+            <NotCurrent problems={stale} refusal={refusal}>
+              {chart}
+            </NotCurrent>
+          </div>
+        )}
+      </div>
+      <div class={style.results}>
+        {preview && (
+          <div class={style.slot}>
+            <NotCurrent problems={stale} refusal={refusal}>
+              {preview}
+            </NotCurrent>
+          </div>
+        )}
+        <RateSuggestions />
+        <NotCurrent problems={stale} refusal={refusal}>
+          <SafeBands />
+          <CameraReadout />
+          <LightingReadout />
+        </NotCurrent>
+        <KeepShare />
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,145 @@
+import { formatNumber, numberForField } from '../../../words/format';
+import { readCreepRpm } from '../../../ui/fields';
+import { formatRate, formatRateSpan } from '../../../words/rates';
+import { check, checkProblem, type CreepRate, type SuggestedRate } from '../../../state/check';
+import { problemsAmong } from '../../../state/fieldProblems';
+import { CREEP_FIELDS, RESULT_FIELDS } from '../field-ids';
+import { NotCurrent } from '../../../ui/not-current';
+import { flashUnit, setCreepRpm, setSamplerRateHz, setup } from '../../../state/setup';
+import { NumberField } from '../../../ui/number-field';
+import { Panel } from '../../../ui/panel';
+import style from './style.module.css';
+
+interface Props {
+  class?: string;
+}
+
+const LOOK_WORDS: Record<CreepRate['look'], string> = {
+  true: 'true motion',
+  forward: 'creeping forward',
+  backward: 'turning backward',
+  still: 'looks still',
+  unclear: 'direction unclear',
+};
+
+function imagesText(images: number): string {
+  return images === 1 ? '1 image' : `${images} images`;
+}
+
+/** Rates worth tapping: the nearest lock-in rates, and the rate for a slow forward creep. */
+export function RateSuggestions({ class: extra }: Props) {
+  const r = check.value;
+  const unit = flashUnit.value;
+  const kind = r.samplerKind;
+  const rate = (hz: number) => formatRate(hz, kind, unit);
+  const span = (fromHz: number, toHz: number) => formatRateSpan(fromHz, toHz, kind, unit);
+  const tolerance = r.part.tolerance > 0;
+  // Rates worked out from a refused entry are marked not current, out of reach (physics.md §10).
+  const refusal = checkProblem.value;
+  return (
+    <Panel title="Rates to try" id="suggestions" class={extra}>
+      <div class={style.block}>
+        <h3 class={style.subtitle}>
+          {r.sampler === 'frames' ? 'Rates that freeze it' : 'Lock-in rates nearby'}
+        </h3>
+        <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={refusal}>
+          {r.locks.length === 0 ? (
+            <p class={style.none}>
+              {r.part.speedHz === 0
+                ? 'The part is not turning.'
+                : r.locksNote
+                  ? 'None near this rate that can be set and held.'
+                  : 'None near this rate in the range.'}
+            </p>
+          ) : (
+            <ul class={style.list} data-testid="lock-list">
+              {r.locks.map((l) => (
+                <li key={`${l.rateHz}-${l.images}`}>
+                  <LockButton lock={l} rate={rate} span={span} tolerance={tolerance} />
+                </li>
+              ))}
+            </ul>
+          )}
+          {r.locksNote && (
+            <p class={style.help} data-testid="locks-note">
+              {r.locksNote}
+            </p>
+          )}
+        </NotCurrent>
+        <p class={style.help}>
+          {r.sampler === 'frames'
+            ? 'At these frame rates each frame catches the features in the same place.'
+            : 'At these rates the features stand still; several images mean the pattern shows up to that many times over.'}{' '}
+          Tap a rate to use it.
+        </p>
+      </div>
+      <div class={style.block}>
+        <h3 class={style.subtitle}>Slow creep forward</h3>
+        <NumberField
+          id="creep"
+          label="Creep speed wanted"
+          value={setup.value.creepRpm}
+          toText={numberForField}
+          read={readCreepRpm}
+          onValue={setCreepRpm}
+          unit="rpm"
+        />
+        <NotCurrent problems={problemsAmong(CREEP_FIELDS)} refusal={refusal}>
+          {r.creep.length > 0 ? (
+            <ul class={style.list} data-testid="creep-list">
+              {r.creep.map((c) => (
+                <li key={c.rateHz}>
+                  <button
+                    type="button"
+                    class={style.rate}
+                    data-side={c.side}
+                    onClick={() => setSamplerRateHz(c.rateHz)}
+                  >
+                    <span class={style.value}>{rate(c.rateHz)}</span>
+                    <span class={style.what}>
+                      {c.images > 1 ? `${imagesText(c.images)}, ` : ''}
+                      {LOOK_WORDS[c.look]}
+                    </span>
+                  </button>
+                </li>
+              ))}
+            </ul>
+          ) : (
+            <p class={style.none}>{r.creepNote}</p>
+          )}
+        </NotCurrent>
+        <p class={style.help}>
+          The part is seen as one image turning forward at {formatNumber(r.creepRpm)} rpm: slow
+          enough to inspect, and its direction stays right. It is still turning at full speed.
+        </p>
+      </div>
+    </Panel>
+  );
+}
+
+interface LockProps {
+  lock: SuggestedRate;
+  rate: (hz: number) => string;
+  span: (fromHz: number, toHz: number) => string;
+  tolerance: boolean;
+}
+
+function LockButton({ lock, rate, span, tolerance }: LockProps) {
+  const here = lock.side === 'here';
+  return (
+    <button
+      type="button"
+      class={style.rate}
+      data-side={lock.side}
+      aria-current={here ? 'true' : undefined}
+      onClick={() => setSamplerRateHz(lock.rateHz)}
+    >
+      <span class={style.value}>{rate(lock.rateHz)}</span>
+      <span class={style.what}>
+        {imagesText(lock.images)}
+        {here ? ' · this rate' : ''}
+      </span>
+      {tolerance && <span class={style.span}>± tolerance: {span(lock.lowHz, lock.highHz)}</span>}
+    </button>
+  );
+}

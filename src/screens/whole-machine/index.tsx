@@ -1,0 +1,359 @@
+import { useState } from 'preact/hooks';
+import { apparentMotion, cautionFlags, type CautionContext, type FreezeBand } from '../../core';
+import { formatNumber } from '../../words/format';
+import { openScreen } from '../../state/navigation';
+import { formatRate, formatRateSpan } from '../../words/rates';
+import {
+  chain,
+  editChain,
+  machineRates,
+  syncChainSpeeds,
+  withDrivenPart,
+  type DerivedPart,
+} from '../../state/chain';
+import { check, verdictOf } from '../../state/check';
+import { partLabel, type SamplerKind } from '../../state/model';
+import { openMachineName } from '../../state/openMachine';
+import { flashUnit, setSamplerKind, setSamplerRateHz, setup } from '../../state/setup';
+import { MAX_PARTS } from '../../state/validate';
+import { Cautions } from '../../ui/cautions';
+import { ChoiceGroup } from '../../ui/choice-group';
+import { Panel } from '../../ui/panel';
+import { RateMap } from '../../ui/rate-map';
+import { ReportBar } from '../../ui/report-bar';
+import { ResultTable, type ResultColumn } from '../../ui/result-table';
+import { ToolLayout } from '../../ui/tool-layout';
+import {
+  freezeBandsShown,
+  freezeRateToSet,
+  middleHz,
+  noStillBandsShown,
+  type RateSpan,
+} from './band-lists';
+import { machineCsv } from './chain-csv';
+import { PartCard, speedWords } from './part-card';
+import style from './style.module.css';
+
+interface Props {}
+
+/** Bands listed per table; the CSV holds them all. */
+const SHOWN_BANDS = 6;
+
+const SAMPLERS: ReadonlyArray<{ value: SamplerKind; label: string }> = [
+  { value: 'strobe', label: 'Strobe' },
+  { value: 'camera', label: 'Camera' },
+  { value: 'lighting', label: 'Lighting' },
+];
+
+/**
+ * The whole machine: parts linked by drives (motor → belt → fan, gear stages, a wheel from its
+ * ground speed), each part's speed carried along the chain with its tolerance; rates that
+ * freeze a chosen part while no other looks still, and rates at which no part looks still.
+ */
+export function MachineChainScreen(_props: Props) {
+  const s = setup.value;
+  const parts = chain.result.value ?? [];
+  const chainProblem = chain.problem.value;
+  const rates = machineRates.result.value;
+  const ratesProblem = machineRates.problem.value;
+  const r = check.value;
+  const unit = flashUnit.value;
+  const kind = s.samplerKind;
+  const target = s.parts[s.activePart] ? s.activePart : 0;
+  const [editProblem, setEditProblem] = useState<string | null>(null);
+  const [addFrom, setAddFrom] = useState<number | null>(null);
+  const [applied, setApplied] = useState<number | null>(null);
+  const rate = (hz: number) => formatRate(hz, kind, unit);
+  const span = (b: RateSpan) => formatRateSpan(b.fromHz, b.toHz, kind, unit);
+
+  // Tapping a rate sets it on the check screen, whose part then shows the chain's speed too.
+  const useRate = (hz: number) => {
+    setSamplerRateHz(hz);
+    syncChainSpeeds();
+    setApplied(hz);
+  };
+  const pickTarget = (index: number) => editChain((x) => ({ ...x, activePart: index }));
+  const driver = addFrom !== null && addFrom < s.parts.length ? addFrom : s.parts.length - 1;
+  const addPart = () => {
+    try {
+      editChain((x) => withDrivenPart(x, driver));
+      setEditProblem(null);
+    } catch (error) {
+      setEditProblem(error instanceof Error ? error.message : String(error));
+    }
+  };
+
+  // Freeze bands make parts look still; a strobe or flickering light flashes through the range.
+  const cautions: CautionContext = {
+    apparentStillness: true,
+    ...(r.sampler === 'flash' ? { flashSweepHz: r.range } : {}),
+  };
+
+  const partColumns: ReadonlyArray<ResultColumn<DerivedPart>> = [
+    {
+      label: 'Part',
+      // One element: on a phone each child of a cell takes a grid cell of its own.
+      cell: (p) => (
+        <span>
+          <strong>{p.name}</strong> (
+          {p.symmetry === 1 ? '1 mark' : `${formatNumber(p.symmetry)} features`})
+          {p.index === target && <span class={style.tag}> · to freeze</span>}
+        </span>
+      ),
+    },
+    { label: 'Speed', cell: (p) => speedWords(p) },
+    { label: `At ${rate(r.rateHz)}`, cell: (p) => lookAt(p, r.rateHz, r.sampler) },
+  ];
+
+  const summary = (
+    <Panel title="Speeds of the machine" id="chain-speeds">
+      <ResultTable
+        caption={`${parts.length} ${parts.length === 1 ? 'part' : 'parts'}, each speed carried along its drives with its tolerance`}
+        columns={partColumns}
+        rows={parts}
+        rowKey={(p) => String(p.index)}
+        testId="chain-speed-table"
+      />
+    </Panel>
+  );
+
+  const warnings = (
+    <>
+      <Cautions show={cautionFlags(cautions)} />
+      {editProblem && (
+        <p class={style.problem} role="alert" data-testid="chain-problem">
+          {editProblem} Nothing was changed.
+        </p>
+      )}
+    </>
+  );
+
+  const entries = (
+    <Panel title="Parts and drives" id="chain-parts">
+      <ol class={style.cards}>
+        {s.parts.map((_, i) => (
+          <PartCard
+            key={i}
+            setup={s}
+            index={i}
+            derived={parts[i]?.index === i ? parts[i] : undefined}
+            onProblem={setEditProblem}
+          />
+        ))}
+      </ol>
+      <div class={style.addRow} data-print="hide">
+        <label class={style.label} for="chain-add-from">
+          Add a part driven by
+        </label>
+        <div class={style.inputRow}>
+          <select
+            id="chain-add-from"
+            class={style.select}
+            value={String(driver)}
+            onChange={(e) => setAddFrom(Number((e.currentTarget as HTMLSelectElement).value))}
+          >
+            {s.parts.map((_, i) => (
+              <option key={i} value={String(i)}>
+                {i + 1}. {partLabel(s, i)}
+              </option>
+            ))}
+          </select>
+          <button
+            type="button"
+            class={style.primary}
+            onClick={addPart}
+            disabled={s.parts.length >= MAX_PARTS}
+          >
+            Add part
+          </button>
+        </div>
+      </div>
+    </Panel>
+  );
+
+  const freezeShown = rates ? freezeBandsShown(rates.freeze, SHOWN_BANDS) : [];
+  const noStillShown = rates ? noStillBandsShown(rates.noStill, SHOWN_BANDS) : [];
+  const freezeColumns: ReadonlyArray<ResultColumn<FreezeBand>> = [
+    { label: 'Rates', cell: (b) => span(b) },
+    {
+      label: 'Single image',
+      cell: (b) => freezeWords(b, r.sampler === 'flash' ? 'flashes' : 'frames'),
+    },
+    {
+      label: 'Use',
+      cell: (b) => (
+        <RateButton hz={freezeRateToSet(b)} label={rate(freezeRateToSet(b))} onUse={useRate} />
+      ),
+    },
+  ];
+  const noStillColumns: ReadonlyArray<ResultColumn<RateSpan>> = [
+    { label: 'Rates', cell: (b) => span(b) },
+    {
+      label: 'Use',
+      cell: (b) => <RateButton hz={middleHz(b)} label={rate(middleHz(b))} onUse={useRate} />,
+    },
+  ];
+
+  const results = (
+    <>
+      <Panel title="Rates for the whole machine" id="chain-rates">
+        <div class={style.nameField}>
+          <label class={style.label} for="chain-target">
+            Part to freeze
+          </label>
+          <select
+            id="chain-target"
+            class={style.select}
+            value={String(target)}
+            onChange={(e) => pickTarget(Number((e.currentTarget as HTMLSelectElement).value))}
+          >
+            {s.parts.map((_, i) => (
+              <option key={i} value={String(i)}>
+                {i + 1}. {partLabel(s, i)}
+              </option>
+            ))}
+          </select>
+        </div>
+        <ChoiceGroup
+          legend="Seen by"
+          name="chain-sampler"
+          options={SAMPLERS}
+          value={kind}
+          onChange={setSamplerKind}
+        />
+        <p class={style.quiet}>
+          Over {formatRateSpan(r.range.minHz, r.range.maxHz, kind, unit)}; the Check screen's rate
+          is {rate(r.rateHz)}. Tap a rate to use it there.
+        </p>
+        {rates && rates.listed?.minHz !== rates.range.minHz && (
+          <p class={style.problem} data-testid="listed-note">
+            {rates.listed
+              ? `Bands are listed from ${rate(rates.listed.minHz)} up: below it these parts stand still at too many rates to list.`
+              : 'These parts stand still at too many rates in this range to list them: choose a faster sampler range.'}
+          </p>
+        )}
+        {applied !== null && (
+          <p class={style.applied} role="status" data-testid="chain-applied">
+            The Check screen now uses {rate(applied)}.{' '}
+            <button type="button" class={style.link} onClick={() => openScreen('check')}>
+              Open the Check screen
+            </button>
+          </p>
+        )}
+        <h3 class={style.subtitle}>Freeze {partLabel(s, target)}, no other part still</h3>
+        {freezeShown.length === 0 ? (
+          <p class={style.quiet} data-testid="no-freeze">
+            {rates
+              ? `No band in the range listed freezes ${partLabel(s, target)} round the lock of its nominal speed, ${stepWords(r.sampler)} wide or more, without another part looking still too.`
+              : 'Not worked out yet.'}
+          </p>
+        ) : (
+          <ResultTable
+            caption={bandCaption(rates?.freeze.length ?? 0, freezeShown.length, 'highest first')}
+            columns={freezeColumns}
+            rows={freezeShown}
+            rowKey={(b) => `${b.fromHz}-${b.toHz}`}
+            testId="freeze-table"
+          />
+        )}
+        <h3 class={style.subtitle}>No part looks still</h3>
+        {noStillShown.length === 0 ? (
+          <p class={style.quiet} data-testid="no-no-still">
+            {rates
+              ? 'Some part can look still at every rate in the range listed.'
+              : 'Not worked out yet.'}
+          </p>
+        ) : (
+          <ResultTable
+            caption={bandCaption(
+              rates?.noStill.length ?? 0,
+              noStillShown.length,
+              'widest shown, highest first',
+            )}
+            columns={noStillColumns}
+            rows={noStillShown}
+            rowKey={(b) => `${b.fromHz}-${b.toHz}`}
+            testId="no-still-table"
+          />
+        )}
+        <p class={style.quiet}>
+          Parts may still look slow or backward in these bands: the Check screen and the rate map
+          show how each looks.
+        </p>
+      </Panel>
+      <Panel title="Rate map" id="chain-map">
+        <RateMap
+          parts={parts.map((p) => ({
+            name: p.name,
+            speedHz: p.speedHz,
+            symmetry: p.symmetry,
+            tolerance: p.tolerance,
+          }))}
+          range={r.range}
+          rateHz={r.rateHz}
+          onRateChange={useRate}
+          samplerKind={kind}
+          flashUnit={unit}
+          showCautions={false}
+        />
+      </Panel>
+      <ReportBar
+        title="Whole machine"
+        machineName={openMachineName.value}
+        cautions={cautions}
+        csv={() => machineCsv(parts, rates, kind, unit)}
+      />
+    </>
+  );
+
+  return (
+    <ToolLayout
+      testId="machine-chain-screen"
+      summary={summary}
+      warnings={warnings}
+      entries={entries}
+      results={results}
+      withdraw={{ refusal: chainProblem ?? ratesProblem }}
+    />
+  );
+}
+
+function RateButton({
+  hz,
+  label,
+  onUse,
+}: {
+  hz: number;
+  label: string;
+  onUse: (hz: number) => void;
+}) {
+  return (
+    <button type="button" class={style.rateButton} onClick={() => onUse(hz)}>
+      {label}
+    </button>
+  );
+}
+
+/** How the part looks at the rate, in the check screen's words. */
+function lookAt(p: DerivedPart, rateHz: number, sampler: 'flash' | 'frames'): string {
+  const part = { speedHz: p.speedHz, symmetry: p.symmetry, tolerance: p.tolerance };
+  return verdictOf(apparentMotion(part, rateHz, { sampler }), part).headline;
+}
+
+/** physics.md §4: the setting step a suggested band must span, in words. */
+function stepWords(sampler: 'flash' | 'frames'): string {
+  return sampler === 'frames' ? '0.01 frames/s' : 'one flash per minute';
+}
+
+function freezeWords(b: FreezeBand, samples: 'flashes' | 'frames'): string {
+  if (b.p === 0) return 'Turns too slowly to look anything but still';
+  const order = b.p === 1 ? `one pitch between ${samples}` : `${b.p} pitches between ${samples}`;
+  return b.dense ? `${order}; where exactly depends on the actual speed` : order;
+}
+
+function bandCaption(total: number, shown: number, order: string): string {
+  const all = `${total} ${total === 1 ? 'band' : 'bands'}`;
+  return shown < total
+    ? `${all}; ${shown} shown (${order}), all in the CSV`
+    : `${all} (${order.replace(/^widest shown, /, '')})`;
+}

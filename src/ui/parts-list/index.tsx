@@ -1,0 +1,109 @@
+import { useState } from 'preact/hooks';
+import { formatNumber } from '../../words/format';
+import { useFollowingText } from '../followingText';
+import { partLabel } from '../../state/model';
+import { addPart, removePart, renamePart, selectPart } from '../../state/parts';
+import { setup } from '../../state/setup';
+import { DataError } from '../../state/validate';
+import { Panel } from '../panel';
+import style from './style.module.css';
+
+interface Props {
+  class?: string;
+  /** Heading of the panel. */
+  title?: string;
+}
+
+function messageOf(error: unknown): string {
+  if (error instanceof DataError) return error.message;
+  throw error;
+}
+
+/**
+ * The parts of the current set-up: pick the one to edit (the part form below edits it), add
+ * one, rename or remove the chosen one. Every screen shares the same list.
+ */
+export function PartsList({ class: extra, title = 'Parts' }: Props) {
+  const s = setup.value;
+  const active = s.parts[s.activePart] ? s.activePart : 0;
+  const chosen = s.parts[active];
+  const [problem, setProblem] = useState<string | null>(null);
+  // Another part chosen, or its name changed elsewhere: the field follows, in the same render.
+  const { text: name, edit } = useFollowingText(
+    `${active} ${chosen.name}`,
+    (shown) => shown === chosen.name,
+    () => chosen.name,
+  );
+
+  const act = (action: () => void) => {
+    try {
+      action();
+      setProblem(null);
+    } catch (error) {
+      setProblem(messageOf(error));
+    }
+  };
+
+  const onName = (event: Event) => {
+    const next = (event.currentTarget as HTMLInputElement).value;
+    edit(next, null);
+    act(() => renamePart(active, next));
+  };
+
+  return (
+    <Panel title={title} id="parts-list" class={extra}>
+      <ul class={style.list} data-testid="parts-list">
+        {s.parts.map((p, i) => (
+          <li key={i}>
+            <button
+              type="button"
+              class={style.part}
+              aria-pressed={i === active ? 'true' : 'false'}
+              onClick={() => act(() => selectPart(i))}
+            >
+              <span class={style.name}>{partLabel(s, i)}</span>
+              <span class={style.facts}>
+                {formatNumber(p.speedRpm)} rpm · {p.features}{' '}
+                {p.features === 1 ? 'mark' : 'blades or marks'} · ±
+                {formatNumber(p.tolerancePercent)} %
+              </span>
+            </button>
+          </li>
+        ))}
+      </ul>
+      <div class={style.field}>
+        <label class={style.label} for="part-name">
+          Name of the chosen part
+        </label>
+        <input
+          id="part-name"
+          class={style.input}
+          type="text"
+          autoComplete="off"
+          value={name}
+          onInput={onName}
+          aria-invalid={problem ? 'true' : undefined}
+          aria-describedby={problem ? 'parts-problem' : undefined}
+        />
+      </div>
+      <div class={style.actions}>
+        <button type="button" class={style.button} onClick={() => act(addPart)}>
+          Add a part
+        </button>
+        <button
+          type="button"
+          class={style.button}
+          onClick={() => act(() => removePart(active))}
+          disabled={s.parts.length <= 1}
+        >
+          Remove the chosen part
+        </button>
+      </div>
+      {problem && (
+        <p id="parts-problem" class={style.problem} role="alert">
+          {problem}
+        </p>
+      )}
+    </Panel>
+  );
+}

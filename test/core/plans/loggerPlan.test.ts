@@ -1,0 +1,321 @@
+import { describe, expect, it } from 'vitest';
+import FFT from 'fft.js';
+import fc from 'fast-check';
+import {
+  ALIAS_AFTER_CONVERTER_NOTE,
+  loggerPlan,
+  niceSampleRateHz,
+} from '../../../src/core/plans/loggerPlan';
+import { lowPassGainDb } from '../../../src/core/formulas/logger';
+import { anyFinite, bad, expectInputError, finiteOrInputError } from '../expectInputError';
+
+const SEED = 1949;
+const none = { kind: 'none' as const };
+/** Half power, the Butterworth response at its cutoff: 10·log10(2) = 3.0103 dB. */
+const HALF_POWER_DB = 10 * Math.log10(2);
+
+describe('loggerPlan: where each component lands', () => {
+  it('folds a 20 Hz shaft sampled 18 times a second to 2 Hz', () => {
+    // Common practice (physics.md check sources): 20 Hz sampled at 18 or 22 samples/s looks like 2 Hz.
+    const plan = loggerPlan({ shaftHz: 20 }, 18, none, 12);
+    expect(plan.components[0]).toMatchObject({
+      label: '1× shaft',
+      hz: 20,
+      aliases: true,
+      pass: false,
+    });
+    expect(plan.components[0].foldedHz).toBeCloseTo(2, 12);
+    expect(loggerPlan({ shaftHz: 20 }, 22, none, 12).components[0].foldedHz).toBeCloseTo(2, 12);
+    expect(plan.components[0].text).toMatch(/folds to 2 Hz and shows as a false tone/);
+  });
+
+  it('shows nothing above 500 Hz at 1000 samples a second: a 750 Hz tone lands at 250 Hz', () => {
+    // Common practice (physics.md check sources): 1000 samples/s show nothing above 500 Hz.
+    const plan = loggerPlan(
+      { shaftHz: 25, extraTones: [{ label: 'bearing tone', hz: 750 }] },
+      1000,
+      none,
+      16,
+    );
+    expect(plan.nyquistHz).toBe(500);
+    const tone = plan.components.find((c) => c.label === 'bearing tone');
+    expect(tone).toMatchObject({
+      hz: 750,
+      foldedHz: 250,
+      aliases: true,
+      neededDb: 98.08,
+      pass: false,
+    });
+  });
+
+  it('lists blade pass and gear mesh at n·f and z·f', () => {
+    const plan = loggerPlan(
+      { shaftHz: 25, harmonics: 2, blades: [7], gearTeeth: [23] },
+      5000,
+      none,
+      12,
+    );
+    expect(plan.components.map((c) => [c.label, c.hz])).toEqual([
+      ['1× shaft', 25],
+      ['2× shaft', 50],
+      ['blade pass (7 blades)', 175],
+      ['gear mesh (23 teeth)', 575],
+    ]);
+  });
+
+  it('puts the folded gear mesh where an FFT of the sampled signal finds it', () => {
+    // Independent check (physics.md): sample cos(2π·575·t) at 512/s for 1 s, take a 512-point FFT
+    // (fft.js, a general-purpose FFT from the registry); the peak bin is the folded frequency.
+    const fs = 512;
+    const plan = loggerPlan({ shaftHz: 25, gearTeeth: [23] }, fs, none, 12);
+    const mesh = plan.components[1];
+    expect(mesh.foldedHz).toBeCloseTo(63, 9);
+    const fft = new FFT(fs);
+    const input = Array.from({ length: fs }, (_, k) => Math.cos((2 * Math.PI * 575 * k) / fs));
+    const out = fft.createComplexArray() as number[];
+    fft.realTransform(out, input);
+    let peak = 0;
+    let best = -1;
+    for (let bin = 0; bin <= fs / 2; bin++) {
+      const power = out[2 * bin] ** 2 + out[2 * bin + 1] ** 2;
+      if (power > best) {
+        best = power;
+        peak = bin;
+      }
+    }
+    expect(peak).toBe(Math.round(mesh.foldedHz)); // bins are 1 Hz wide
+  });
+
+  it('needs 6.02·bits + 1.76 dB against an alias and gives an RC filter −3.01 dB at its cutoff', () => {
+    // Analog Devices MT-001: 16 bits = 98.08 dB. Butterworth / RC: −10·log10(2) dB at fc = 1/(2πRC).
+    const fcHz = 1 / (2 * Math.PI * 1000 * 1e-6); // 1 kΩ, 1 µF: 159.15 Hz
+    const plan = loggerPlan(
+      { shaftHz: fcHz },
+      1000,
+      { kind: 'rc', resistanceOhm: 1000, capacitanceF: 1e-6 },
+      16,
+    );
+    expect(plan.rangeDb).toBeCloseTo(98.08, 12);
+    expect(plan.cutoffHz).toBeCloseTo(159.15494309189535, 9);
+    expect(plan.order).toBe(1);
+    expect(plan.components[0].gainDb).toBeCloseTo(-HALF_POWER_DB, 9);
+    expect(plan.components[0].pass).toBe(true);
+  });
+
+  it('passes a component at a Butterworth cutoff and fails one just beyond it', () => {
+    // Order 4, fc 100 Hz: −3.01 dB at 100 Hz; at 101 Hz −10·log10(1 + 1.01^8) = −3.187 dB.
+    const filter = { kind: 'butterworth' as const, order: 4, cutoffHz: 100 };
+    expect(loggerPlan({ shaftHz: 100 }, 1000, filter, 12).components[0].pass).toBe(true);
+    const beyond = loggerPlan({ shaftHz: 101 }, 1000, filter, 12).components[0];
+    expect(beyond.gainDb).toBeCloseTo(-10 * Math.log10(1 + Math.pow(1.01, 8)), 12);
+    expect(beyond.pass).toBe(false);
+    expect(beyond.text).toMatch(/beyond the filter's cutoff/);
+  });
+
+  it('says plainly that filtering after the converter cannot remove an alias, and flags a missing filter', () => {
+    const plan = loggerPlan({ shaftHz: 25, harmonics: 10 }, 1000, none, 16);
+    expect(plan.notes).toContain(ALIAS_AFTER_CONVERTER_NOTE);
+    expect(ALIAS_AFTER_CONVERTER_NOTE).toMatch(/after the converter cannot remove an alias/);
+    expect(plan.notes.join(' ')).toMatch(
+      /There is no anti-alias filter: anything in the signal above 500 Hz folds/,
+    );
+    // Nothing listed aliases, but content from fs − fmax = 750 Hz up folds onto 0–250 Hz unfiltered.
+    expect(plan.components.every((c) => !c.aliases && c.pass)).toBe(true);
+    expect(plan.guard).toEqual({ hz: 750, attenuationDb: 0, enough: false });
+    expect(plan.allPass).toBe(false);
+  });
+});
+
+describe('loggerPlan: the proposal', () => {
+  it('proposes 1600 samples/s and an order-8 Butterworth for harmonics to 250 Hz at 16 bits (doc example)', () => {
+    const { proposal } = loggerPlan({ shaftHz: 25, harmonics: 10 }, 1000, none, 16);
+    expect(proposal).toMatchObject({ sampleHz: 1600, order: 8 });
+    expect(proposal?.cutoffHz).toBeCloseTo(299.2, 1);
+    expect(proposal?.droopDb).toBeCloseTo(0.238, 3);
+    expect(proposal?.aliasRejectionDb).toBeCloseTo(104.7, 1);
+    expect(proposal?.why).toMatch(/Sample at 1600 Hz behind a Butterworth low-pass of order 8/);
+  });
+
+  it('passes every check when its own proposal is used', () => {
+    const tones = { shaftHz: 25, harmonics: 4, blades: [7], gearTeeth: [23] };
+    const { proposal } = loggerPlan(tones, 500, none, 12);
+    if (!proposal) throw new Error('expected a proposal');
+    const again = loggerPlan(
+      tones,
+      proposal.sampleHz,
+      { kind: 'butterworth', order: proposal.order, cutoffHz: proposal.cutoffHz },
+      12,
+    );
+    expect(again.allPass).toBe(true);
+    expect(again.guard.enough).toBe(true);
+  });
+
+  it('meets the droop and the converter range, at the smallest nice rate and the lowest order that can', () => {
+    // Checked against lowPassGainDb alone: for each order the best cutoff is the lowest that keeps
+    // the droop (found by bisection), and a rate works when that cutoff buries fs − fmax.
+    const NICE = [
+      100, 120, 125, 128, 160, 200, 240, 250, 256, 320, 400, 480, 500, 512, 640, 800, 960,
+    ];
+    const niceBelow = (hz: number) => {
+      let best = 0;
+      for (let e = -3; e <= 7; e++)
+        for (const m of NICE) {
+          const r = e >= 0 ? m * 10 ** e : m / 10 ** -e;
+          if (r < hz * (1 - 1e-12) && r > best) best = r;
+        }
+      return best;
+    };
+    const bestCutoff = (fmax: number, order: number, droopDb: number) => {
+      let lo = fmax / 1e3;
+      let hi = fmax * 1e3;
+      for (let i = 0; i < 200; i++) {
+        const mid = Math.sqrt(lo * hi);
+        if (-lowPassGainDb(fmax, mid, order) > droopDb) lo = mid;
+        else hi = mid;
+      }
+      return hi;
+    };
+    const works = (fs: number, fmax: number, order: number, droopDb: number, rangeDb: number) =>
+      -lowPassGainDb(fs - fmax, bestCutoff(fmax, order, droopDb), order) >= rangeDb * (1 - 1e-9);
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1, max: 500, noNaN: true }),
+        fc.integer({ min: 1, max: 20 }),
+        fc.integer({ min: 8, max: 24 }),
+        fc.double({ min: 0.1, max: 3, noNaN: true }),
+        (shaftHz, harmonics, bits, droop) => {
+          const plan = loggerPlan({ shaftHz, harmonics }, 100, none, bits, {
+            passbandDroopDb: droop,
+          });
+          const p = plan.proposal;
+          if (!p) throw new Error('expected a proposal');
+          const fmax = shaftHz * harmonics;
+          expect(niceSampleRateHz(p.sampleHz)).toBe(p.sampleHz);
+          expect(-lowPassGainDb(fmax, p.cutoffHz, p.order)).toBeLessThanOrEqual(droop * (1 + 1e-9));
+          expect(-lowPassGainDb(p.sampleHz - fmax, p.cutoffHz, p.order)).toBeGreaterThanOrEqual(
+            plan.rangeDb * (1 - 1e-9),
+          );
+          const below = niceBelow(p.sampleHz);
+          for (let m = 1; m <= 8; m++)
+            expect(works(below, fmax, m, droop, plan.rangeDb), `order ${m} at ${below} Hz`).toBe(
+              false,
+            );
+          if (p.order > 1)
+            expect(works(p.sampleHz, fmax, p.order - 1, droop, plan.rangeDb)).toBe(false);
+          return true;
+        },
+      ),
+      { seed: SEED, numRuns: 200 },
+    );
+  });
+
+  it('proposes nothing, and says why, when the fastest rate allowed is too slow', () => {
+    const plan = loggerPlan({ shaftHz: 25, harmonics: 10 }, 1000, none, 16, { maxSampleHz: 1000 });
+    expect(plan.proposal).toBeUndefined();
+    expect(plan.notes.join(' ')).toMatch(/No Butterworth filter up to order 8/);
+  });
+});
+
+describe('niceSampleRateHz', () => {
+  it('rounds up to the rates loggers commonly offer', () => {
+    expect(niceSampleRateHz(1000)).toBe(1000);
+    expect(niceSampleRateHz(1297)).toBe(1600);
+    expect(niceSampleRateHz(2500)).toBe(2500);
+    expect(niceSampleRateHz(2501)).toBe(2560); // 2.56 × 1 kHz bandwidth, the vibration-analyser family
+    expect(niceSampleRateHz(44100)).toBe(48000);
+    expect(niceSampleRateHz(9.7)).toBe(10);
+    expect(niceSampleRateHz(0.05)).toBe(0.05);
+  });
+
+  it('rejects a rate at or below zero', () => {
+    expectInputError(() => niceSampleRateHz(0), 'sample rate');
+  });
+});
+
+describe('loggerPlan: bad input', () => {
+  const tones = { shaftHz: 25 };
+
+  it('rejects a missing machine, a shaft speed at or below zero, and counts that are not whole', () => {
+    expectInputError(() => loggerPlan(bad(null), 1000, none, 16), 'machine', 'shaft speed');
+    expectInputError(() => loggerPlan({ shaftHz: 0 }, 1000, none, 16), 'shaft speed');
+    expectInputError(() => loggerPlan({ ...tones, harmonics: 0 }, 1000, none, 16), 'harmonics');
+    expectInputError(
+      () => loggerPlan({ ...tones, blades: [6.5] }, 1000, none, 16),
+      'blade count 1',
+    );
+    expectInputError(
+      () => loggerPlan({ ...tones, gearTeeth: bad(23) }, 1000, none, 16),
+      'tooth counts',
+      'list',
+    );
+    expectInputError(
+      () => loggerPlan({ ...tones, extraTones: [{ label: 'x', hz: -5 }] }, 1000, none, 16),
+      'added tone 1',
+    );
+  });
+
+  it('rejects a sample rate at or below zero and bits outside 1 to 64', () => {
+    expectInputError(() => loggerPlan(tones, 0, none, 16), 'sample rate');
+    expectInputError(() => loggerPlan(tones, 1000, none, 0), 'converter bits');
+    expectInputError(() => loggerPlan(tones, 1000, none, 12.5), 'converter bits');
+  });
+
+  it('rejects an unknown filter, a cutoff at or below zero, an order outside 1 to 20 and a bad RC', () => {
+    expectInputError(() => loggerPlan(tones, 1000, bad({ kind: 'bessel' }), 16), 'filter');
+    expectInputError(
+      () => loggerPlan(tones, 1000, { kind: 'butterworth', order: 4, cutoffHz: 0 }, 16),
+      'cutoff frequency',
+    );
+    expectInputError(
+      () => loggerPlan(tones, 1000, { kind: 'butterworth', order: 30, cutoffHz: 100 }, 16),
+      'filter order',
+    );
+    expectInputError(
+      () => loggerPlan(tones, 1000, { kind: 'rc', resistanceOhm: 1000 }, 16),
+      'capacitance',
+    );
+  });
+
+  it('rejects bad options', () => {
+    expectInputError(
+      () => loggerPlan(tones, 1000, none, 16, { passbandDroopDb: 6 }),
+      'passband loss allowed (dB)',
+    );
+    expectInputError(
+      () => loggerPlan(tones, 1000, none, 16, { maxOrder: 0 }),
+      'highest filter order',
+    );
+    expectInputError(
+      () => loggerPlan(tones, 1000, none, 16, { maxSampleHz: -1 }),
+      'fastest sample rate',
+    );
+  });
+});
+
+describe('loggerPlan: never NaN or Infinity', () => {
+  it('returns finite numbers or throws InputError for any tones, rate, filter and bits', () => {
+    fc.assert(
+      fc.property(
+        anyFinite(),
+        fc.integer({ min: 1, max: 200 }),
+        fc.array(fc.integer({ min: 1, max: 1000 }), { maxLength: 2 }),
+        anyFinite(),
+        fc.oneof(
+          fc.constant({ kind: 'none' as const }),
+          anyFinite().map((cutoffHz) => ({ kind: 'rc' as const, cutoffHz })),
+          fc.record({
+            kind: fc.constant('butterworth' as const),
+            order: fc.integer({ min: 1, max: 20 }),
+            cutoffHz: anyFinite(),
+          }),
+        ),
+        fc.integer({ min: 1, max: 64 }),
+        (shaftHz, harmonics, blades, sampleHz, filter, bits) =>
+          finiteOrInputError(() =>
+            loggerPlan({ shaftHz, harmonics, blades }, sampleHz, filter, bits),
+          ),
+      ),
+      { seed: SEED, numRuns: 500 },
+    );
+  });
+});

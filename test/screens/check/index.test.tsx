@@ -1,0 +1,276 @@
+// @vitest-environment happy-dom
+import 'fake-indexeddb/auto';
+import { cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
+import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
+import {
+  apparentMotion,
+  blurDegrees,
+  exposureFromShutterAngle,
+  rollingSkewDegrees,
+} from '../../../src/core';
+import { App } from '../../../src/app/app';
+import { formatNumber, formatRpmWithDirection } from '../../../src/words/format';
+import { formatRate } from '../../../src/words/rates';
+import { openScreen } from '../../../src/state/navigation';
+import { check } from '../../../src/state/check';
+import { defaultSetup } from '../../../src/state/model';
+import { flashUnit, replaceSetup, setup, speedUnit, startSession } from '../../../src/state/setup';
+
+beforeAll(async () => {
+  await startSession();
+});
+
+beforeEach(() => {
+  replaceSetup(defaultSetup);
+  speedUnit.value = 'rpm';
+  flashUnit.value = 'fpm';
+  openScreen('check');
+  render(<App />);
+});
+
+afterEach(cleanup);
+
+function field(label: string): HTMLInputElement {
+  return screen.getByLabelText(label, { exact: true }) as HTMLInputElement;
+}
+
+function type(label: string, text: string) {
+  fireEvent.input(field(label), { target: { value: text } });
+}
+
+function verdict(): string {
+  return screen.getByTestId('verdict').firstChild?.textContent ?? '';
+}
+
+describe('the check screen', () => {
+  test('opens on the default set-up: a 6-blade fan at 1770 rpm under a strobe at 1770 fpm looks still', () => {
+    expect(verdict()).toBe('Looks still');
+    expect(screen.getByTestId('true-speed').textContent).toBe('1,770 rpm');
+    expect(screen.getByTestId('safety-notice')).toBeTruthy();
+    // 29.5 flashes per second lies between 3 and 60 (physics.md §10).
+    expect(screen.getByTestId('photosensitivity-notice')).toBeTruthy();
+  });
+
+  test('follows every keystroke: a disc at 3600 rpm under 3660 fpm turns backward at 60 rpm', () => {
+    // Wikipedia, "Stroboscopic effect": 60 rev/s lit at 61 flashes/s seems to turn backwards at 1 rev/s.
+    type('Speed', '3600');
+    type('Blades or marks', '1');
+    type('Flash rate', '3660');
+    expect(verdict()).toBe('Turning backward');
+    const m = apparentMotion({ speedHz: 60, symmetry: 1 }, 61);
+    expect(screen.getByTestId('apparent-speed').textContent).toBe(
+      formatRpmWithDirection(m.apparentHz * 60, 1),
+    );
+    expect(screen.getByTestId('apparent-speed').textContent).toBe('60 rpm backward');
+    expect(screen.getByTestId('true-speed').textContent).toBe('3,600 rpm');
+  });
+
+  test('the verdict sits in a polite live region', () => {
+    const region = screen.getByTestId('verdict').parentElement!;
+    expect(region.getAttribute('role')).toBe('status');
+    expect(region.getAttribute('aria-live')).toBe('polite');
+    expect(region.textContent).toContain('Looks still');
+  });
+
+  test('bad text gets a message beside its field, keeps the set-up, and withdraws the verdict', () => {
+    const before = check.value;
+    type('Speed', 'fast');
+    expect(field('Speed').getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByRole('alert').textContent).toMatch(/not a number/);
+    expect(setup.value.parts[0].speedRpm).toBe(1770);
+    expect(check.value).toBe(before);
+    // physics.md §10: a verdict from inputs no longer valid is withdrawn where it stands.
+    expect(verdict()).toBe('No verdict until Speed is fixed');
+    type('Speed', '1770');
+    expect(verdict()).toBe('Looks still');
+  });
+
+  test('a speed made invalid after a good one withdraws the verdict where it stands and marks every list not current', () => {
+    // Issue 8 item 3: fan 1750 rpm, 6 blades, strobe 1748 flashes/min; then "1750x".
+    type('Speed', '1750');
+    type('Flash rate', '1748');
+    expect(verdict()).toBe('Creeping forward');
+    type('Speed', '1750x');
+    const panel = screen.getByTestId('verdict').closest('section')!;
+    expect(panel.textContent).not.toMatch(/Creeping|1,750 rpm/);
+    expect(verdict()).toBe('No verdict until Speed is fixed');
+    expect(within(panel).getByText(/Speed: "x" is not a unit for speed/)).toBeTruthy();
+    // Every list worked out from the speed says so, and is out of reach while it does.
+    const marks = screen.getAllByTestId('not-current');
+    expect(marks.length).toBeGreaterThanOrEqual(4); // rate map, preview, locks, creep, bands
+    for (const m of marks) expect(m.textContent).toMatch(/^Not current: fix Speed first/);
+    const locks = screen.getByTestId('lock-list').closest('[data-current]')!;
+    expect(locks.getAttribute('data-current')).toBe('false');
+    // The fix button takes the cursor to the field.
+    fireEvent.click(within(panel).getByRole('button', { name: 'Fix Speed' }));
+    expect(document.activeElement).toBe(field('Speed'));
+    type('Speed', '1750');
+    expect(verdict()).toBe('Creeping forward');
+    expect(screen.queryAllByTestId('not-current')).toHaveLength(0);
+  });
+
+  test('"17OO" typed key by key never shows the verdict for 17 rpm once the text is refused', () => {
+    // Issue 8 item 3: the letter O typed for a zero.
+    const seen: string[] = [];
+    for (const text of ['1', '17', '17O', '17OO']) {
+      type('Speed', text);
+      seen.push(verdict());
+    }
+    expect(seen[1]).toBe('True motion'); // 17 rpm under 1770 fpm: faithful (Shannon 1949)
+    expect(seen.slice(2)).toEqual([
+      'No verdict until Speed is fixed',
+      'No verdict until Speed is fixed',
+    ]);
+    expect(screen.getByTestId('verdict').closest('section')!.textContent).not.toMatch(/17 rpm/);
+  });
+
+  test('a bad creep speed marks only the creep list not current; the verdict stands', () => {
+    type('Creep speed wanted', 'slow');
+    expect(verdict()).toBe('Looks still');
+    const marks = screen.getAllByTestId('not-current');
+    expect(marks).toHaveLength(1);
+    expect(marks[0].textContent).toMatch(/fix Creep speed wanted/);
+    expect(marks[0].parentElement!.querySelector('[data-testid="lock-list"]')).toBeNull();
+  });
+
+  test('a bad tolerance keeps the verdict but marks the lists not current', () => {
+    // The verdict reads the nominal speed only; lock bands and safe bands read the tolerance.
+    type('Tolerance', '-1');
+    expect(verdict()).toBe('Looks still');
+    expect(screen.getAllByTestId('not-current')[0].textContent).toMatch(/fix Tolerance/);
+  });
+
+  test('nothing on screen says NaN or Infinity, whatever is typed', () => {
+    for (const text of ['', 'abc', 'NaN', '1e999', '-', '0', '-0', '1e-320', '99999999999']) {
+      for (const label of [
+        'Speed',
+        'Blades or marks',
+        'Tolerance',
+        'Flash rate',
+        'Lowest rate',
+        'Highest rate',
+        'Creep speed wanted',
+      ]) {
+        type(label, text);
+      }
+      const shown = document.body.textContent!.replace(/"[^"]*"/g, '');
+      expect(shown, text).not.toMatch(/NaN|Infinity/);
+    }
+  });
+
+  test('tapping a suggested lock-in rate sets the flash rate', () => {
+    type('Speed', '3600');
+    type('Blades or marks', '1');
+    type('Flash rate', '3500');
+    const list = screen.getByTestId('lock-list');
+    const single = within(list)
+      .getAllByRole('button')
+      .find((b) => b.textContent?.startsWith('3,600 fpm'));
+    expect(single).toBeTruthy();
+    fireEvent.click(single!);
+    expect(setup.value.strobe.rateFpm).toBeCloseTo(3600, 9);
+    expect(field('Flash rate').value).toBe('3600');
+    expect(verdict()).toBe('Looks still');
+  });
+
+  test('tapping the creep rate makes the part creep forward at the wanted speed', () => {
+    type('Speed', '1800');
+    type('Blades or marks', '1');
+    type('Flash rate', '2000');
+    type('Creep speed wanted', '30');
+    const button = within(screen.getByTestId('creep-list'))
+      .getAllByRole('button')
+      .find((b) => b.textContent?.startsWith('1,770 fpm'));
+    fireEvent.click(button!);
+    // physics.md §4 worked check: f = 30 rev/s, creep 0.5 rev/s → 29.5 flashes/s = 1770 fpm.
+    expect(setup.value.strobe.rateFpm).toBeCloseTo(1770, 9);
+    expect(verdict()).toBe('Creeping forward');
+    // physics.md §4: a creep asked for is still an aliased view; the lock-out caution goes with it.
+    expect(screen.getByTestId('safety-notice')).toBeTruthy();
+  });
+
+  test('the creep of issue 8 carries the lock-out caution: 6 blades at 1750 rpm under 1748 flashes/min', () => {
+    // physics.md §2: a = f − k·s/n = (1750 − 1748)/60 rev/s = 2 rpm forward (k = 6).
+    type('Speed', '1750');
+    type('Flash rate', '1748');
+    expect(verdict()).toBe('Creeping forward');
+    expect(screen.getByTestId('apparent-speed').textContent).toBe('2 rpm forward');
+    expect(screen.getByTestId('safety-notice').textContent).toMatch(/lock out the machine/);
+  });
+
+  test('a strobe rate can be typed in Hz', () => {
+    fireEvent.change(screen.getByLabelText('Flash rate unit'), { target: { value: 'Hz' } });
+    expect(field('Flash rate').value).toBe('29.5');
+    type('Flash rate', '30');
+    expect(setup.value.strobe.rateFpm).toBe(1800);
+  });
+
+  test('the lowest strobe rate must stay below the highest', () => {
+    type('Lowest rate', '20000');
+    expect(screen.getByRole('alert').textContent).toMatch(/below the highest/);
+    expect(setup.value.strobe.minFpm).toBe(30);
+  });
+
+  test('a camera shows blur per frame and the rolling-shutter bend from the core', () => {
+    fireEvent.click(screen.getByLabelText('Camera'));
+    const t = exposureFromShutterAngle(180, 30000 / 1001);
+    const blur = blurDegrees(1770 / 60, t);
+    expect(screen.getByTestId('blur').textContent).toContain(`${formatNumber(blur)}°`);
+    const skew = rollingSkewDegrees(1770 / 60, 0.025);
+    expect(screen.getByTestId('skew').textContent).toContain(
+      `${formatNumber(skew)}° top to bottom`,
+    );
+    expect(screen.queryByTestId('photosensitivity-notice')).toBeNull();
+    // 2.95 pitches of blur per frame: the verdict says the blades cannot be made out.
+    expect(screen.getByTestId('smear-note').textContent).toMatch(/even disc/);
+    type('Shutter angle', '1');
+    expect(screen.queryByTestId('smear-note')).toBeNull();
+  });
+
+  test('a camera preset sets the frame rate exactly', () => {
+    fireEvent.click(screen.getByLabelText('Camera'));
+    fireEvent.change(screen.getByLabelText('Frame rate preset'), {
+      target: { value: String(24000 / 1001) },
+    });
+    expect(setup.value.camera.frameRate).toBe(24000 / 1001);
+    expect(field('Frame rate').value).toBe('23.97602');
+  });
+
+  test('exposure can be given as 1/x s', () => {
+    fireEvent.click(screen.getByLabelText('Camera'));
+    fireEvent.click(screen.getByLabelText('As a time'));
+    type('Exposure time', '1000');
+    expect(setup.value.camera.exposure).toEqual({ mode: 'time', seconds: 1 / 1000 });
+  });
+
+  test('lighting shows its flicker risk and visibility', () => {
+    fireEvent.click(screen.getByLabelText('Lighting'));
+    expect(screen.getByTestId('flicker-risk').textContent).toBe('Above the low-risk line');
+    type('Modulation (percent flicker)', '0');
+    expect(verdict()).toBe('Steady light: true motion');
+    expect(screen.queryByTestId('safety-notice')).toBeNull();
+  });
+
+  test('the speed can come from a motor', () => {
+    fireEvent.click(screen.getByLabelText('Speed from an induction motor'));
+    // Default motor: 4 poles on 50 Hz with 3 % slip: 1500 · 0.97 = 1455 rpm (IEC 60034-1 table for 1500).
+    expect(setup.value.parts[0].speedRpm).toBeCloseTo(1455, 9);
+    expect(field('Speed').value).toBe('1455');
+    type('Poles', '3');
+    // Other alerts (a storage notice) may be on screen too: the poles message must be among them.
+    expect(
+      screen
+        .getAllByRole('alert')
+        .map((a) => a.textContent)
+        .join(' '),
+    ).toMatch(/pairs/);
+  });
+
+  test('the speed can be typed in Hz', () => {
+    fireEvent.change(screen.getByLabelText('Speed unit'), { target: { value: 'Hz' } });
+    expect(field('Speed').value).toBe('29.5');
+    type('Speed', '30');
+    expect(setup.value.parts[0].speedRpm).toBe(1800);
+    expect(formatRate(check.value.rateHz, 'strobe', 'fpm')).toBe('1,770 fpm');
+  });
+});

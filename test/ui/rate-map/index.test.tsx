@@ -1,0 +1,201 @@
+// @vitest-environment happy-dom
+// The chart library draws on a real canvas, which happy-dom lacks: the uPlot adapter is
+// replaced by a recorder here; the real chart is checked in Chromium by the browser tests.
+import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/preact';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import type { RateChart, RateChartOptions } from '../../../src/ui/rate-map/chart';
+import type { RateMapSeries } from '../../../src/core';
+
+interface Made {
+  options: RateChartOptions;
+  series: RateMapSeries;
+  rateHz: number;
+  chart: RateChart & { rates: number[]; updates: number; destroyed: boolean };
+}
+const made: Made[] = [];
+/** When set, the next chart fails as it would in a browser with no 2D canvas. */
+let noCanvas = false;
+
+vi.mock('../../../src/ui/rate-map/chart', () => ({
+  createRateChart: (
+    _holder: HTMLElement,
+    options: RateChartOptions,
+    series: RateMapSeries,
+    rateHz: number,
+  ) => {
+    if (noCanvas) throw new Error('This browser gives no 2D canvas to draw the rate map on.');
+    const chart = {
+      rates: [] as number[],
+      updates: 0,
+      destroyed: false,
+      update() {
+        chart.updates++;
+      },
+      setRate(r: number) {
+        chart.rates.push(r);
+      },
+      resize() {},
+      destroy() {
+        chart.destroyed = true;
+      },
+    };
+    made.push({ options, series, rateHz, chart });
+    return chart;
+  },
+}));
+
+const { RateMap } = await import('../../../src/ui/rate-map');
+
+// A fictional bottling line: a 6-blade fan and a 4-spoke pulley under a strobe.
+const parts = [
+  { name: 'Cooling fan', speedHz: 1780 / 60, symmetry: 6 },
+  { name: 'Drive pulley', speedHz: 980 / 60, symmetry: 4 },
+];
+const range = { minHz: 1, maxHz: 1000 };
+
+beforeEach(() => {
+  made.length = 0;
+  noCanvas = false;
+});
+afterEach(cleanup);
+
+describe('RateMap', () => {
+  it('loads the chart with every part’s column, the range and the current rate, on a log axis for a wide range', async () => {
+    render(
+      <RateMap
+        parts={parts}
+        range={range}
+        rateHz={88}
+        onRateChange={() => {}}
+        samplerKind="strobe"
+      />,
+    );
+    await waitFor(() => expect(made).toHaveLength(1));
+    const { options, series, rateHz } = made[0];
+    expect(series.apparentRpm).toHaveLength(2);
+    expect(options.log).toBe(true);
+    expect(options.range).toEqual(range);
+    expect(options.rateTitle).toBe('Flash rate, fpm');
+    expect(options.rateTick(10)).toBe('600');
+    expect(rateHz).toBe(88);
+    expect(screen.getByText('Cooling fan')).toBeTruthy();
+    expect(screen.getByText('Drive pulley')).toBeTruthy();
+  });
+
+  it('hands a tapped rate to onRateChange and moves the cursor when the rate comes back', async () => {
+    const picked: number[] = [];
+    const { rerender } = render(
+      <RateMap
+        parts={parts}
+        range={range}
+        rateHz={88}
+        onRateChange={(r) => picked.push(r)}
+        samplerKind="strobe"
+      />,
+    );
+    await waitFor(() => expect(made).toHaveLength(1));
+    made[0].options.onPick(123.4);
+    expect(picked).toEqual([123.4]);
+    rerender(
+      <RateMap
+        parts={parts}
+        range={range}
+        rateHz={123.4}
+        onRateChange={(r) => picked.push(r)}
+        samplerKind="strobe"
+      />,
+    );
+    expect(made[0].chart.rates).toContain(123.4);
+    expect(made).toHaveLength(1);
+  });
+
+  it('rebuilds the chart on a linear axis when the log axis is turned off', async () => {
+    render(
+      <RateMap
+        parts={parts}
+        range={range}
+        rateHz={88}
+        onRateChange={() => {}}
+        samplerKind="strobe"
+      />,
+    );
+    await waitFor(() => expect(made).toHaveLength(1));
+    fireEvent.click(screen.getByLabelText('Logarithmic rate axis'));
+    await waitFor(() => expect(made).toHaveLength(2));
+    expect(made[0].chart.destroyed).toBe(true);
+    expect(made[1].options.log).toBe(false);
+  });
+
+  it('sets the rate from the keyboard, as a slider in the sampler’s unit', async () => {
+    const picked: number[] = [];
+    render(
+      <RateMap
+        parts={parts}
+        range={{ minHz: 20, maxHz: 120 }}
+        rateHz={30}
+        onRateChange={(r) => picked.push(r)}
+        samplerKind="camera"
+      />,
+    );
+    const slider = screen.getByRole('slider');
+    expect(slider.getAttribute('aria-valuetext')).toBe('30 fps');
+    fireEvent.keyDown(slider, { key: 'ArrowRight' });
+    expect(picked[0]).toBeCloseTo(31, 12); // 1 % of the 100 fps span, linear for a 6:1 range
+  });
+
+  it('says so, and keeps the legend, where the browser cannot draw the chart', async () => {
+    noCanvas = true;
+    render(
+      <RateMap
+        parts={parts}
+        range={range}
+        rateHz={88}
+        onRateChange={() => {}}
+        samplerKind="strobe"
+      />,
+    );
+    await waitFor(() =>
+      expect(screen.getByText('This browser cannot draw the rate map.')).toBeTruthy(),
+    );
+    expect(made).toHaveLength(0);
+    expect(screen.getByText('Cooling fan')).toBeTruthy();
+  });
+
+  it('says what is wrong with an empty range instead of drawing', () => {
+    render(
+      <RateMap
+        parts={parts}
+        range={{ minHz: 100, maxHz: 10 }}
+        rateHz={50}
+        onRateChange={() => {}}
+        samplerKind="strobe"
+      />,
+    );
+    expect(screen.getByRole('alert').textContent).toMatch(/range is empty/);
+    expect(screen.queryByRole('slider')).toBeNull();
+  });
+
+  it('warns that parts looking still are still turning, unless the screen shows it beside the map', () => {
+    const { rerender } = render(
+      <RateMap
+        parts={parts}
+        range={range}
+        rateHz={88}
+        onRateChange={() => {}}
+        samplerKind="strobe"
+      />,
+    );
+    expect(screen.getByText(/still turning at full speed/)).toBeTruthy();
+    rerender(
+      <RateMap
+        parts={parts}
+        range={range}
+        rateHz={88}
+        onRateChange={() => {}}
+        samplerKind="strobe"
+        showCautions={false}
+      />,
+    );
+    expect(screen.queryByText(/still turning at full speed/)).toBeNull();
+  });
+});
