@@ -1,21 +1,12 @@
 import type { ComponentChildren } from 'preact';
-import { currentScreen, type ScreenId } from '../state/navigation';
+import { currentScreen } from '../state/navigation';
+import { sessionMessage, storageOpened } from '../state/session';
 import { storageMessage, storageStatus } from '../state/storage';
-import { sessionMessage, storageOpened } from '../state/setup';
-import { AppFrame } from './frame';
 import { Banner } from './banner';
-import { CheckScreen } from '../screens/check';
-import { MachinesScreen } from '../screens/machines';
-import { lazyModule } from '../ui/lazyModule';
+import { AppFrame } from './frame';
+import { screenEntry, toolScreens, type ScreenEntry } from './screen-list';
 import './theme/global.css';
 import './theme/print.css';
-
-/**
- * The five field tools load after the first paint, keeping the first screen's JavaScript small;
- * the service worker precaches their chunk, so they open offline too. main.tsx asks for them
- * once the first screen is up, so a tap on their tab rarely waits.
- */
-export const toolScreens = lazyModule(() => import('./tool-screens'));
 
 interface Props {
   /** The service-worker notice (main.tsx passes it; tests leave it out). */
@@ -27,6 +18,7 @@ export function App({ updateNotice }: Props) {
   const session = sessionMessage.value;
   const status = storageStatus.value;
   const problem = storageMessage.value;
+  const entry = screenEntry(currentScreen.value);
   const notices = (
     <>
       {updateNotice}
@@ -55,22 +47,27 @@ export function App({ updateNotice }: Props) {
       )}
     </>
   );
-  return <AppFrame notices={notices}>{screenFor(currentScreen.value)}</AppFrame>;
+  return (
+    <AppFrame notices={notices} current={entry.id}>
+      <Screen key={entry.id} entry={entry} />
+    </AppFrame>
+  );
 }
 
-/** The screen for a tab; the check screen is the home screen. */
-function screenFor(id: ScreenId) {
-  switch (id) {
-    case 'machines':
-      return <MachinesScreen />;
-    case 'check':
-      return <CheckScreen />;
-    default:
-      return <ToolScreen id={id} />;
+/** The open screen: at once from the first chunk, or once the tools chunk has loaded. */
+function Screen({ entry }: { entry: ScreenEntry }) {
+  if ('now' in entry.screen) {
+    const Now = entry.screen.now;
+    return <Now />;
   }
+  return <LaterScreen pick={entry.screen.later} />;
 }
 
-function ToolScreen({ id }: { id: Exclude<ScreenId, 'check' | 'machines'> }) {
+function LaterScreen({
+  pick,
+}: {
+  pick: Extract<ScreenEntry['screen'], { later: unknown }>['later'];
+}) {
   const { module: tools, failed } = toolScreens.use();
   if (failed) {
     return (
@@ -80,16 +77,6 @@ function ToolScreen({ id }: { id: Exclude<ScreenId, 'check' | 'machines'> }) {
     );
   }
   if (!tools) return <p aria-busy="true">Opening…</p>;
-  switch (id) {
-    case 'lighting':
-      return <tools.LightingScreen />;
-    case 'camera-plan':
-      return <tools.CameraPlanScreen />;
-    case 'logger':
-      return <tools.LoggerScreen />;
-    case 'speed-finder':
-      return <tools.SpeedFinderScreen />;
-    case 'machine-chain':
-      return <tools.MachineChainScreen />;
-  }
+  const Later = pick(tools);
+  return <Later />;
 }

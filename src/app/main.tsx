@@ -1,6 +1,7 @@
 import { render } from 'preact';
-import { App, toolScreens } from './app';
-import { startSession } from '../state/setup';
+import { startSession } from '../state/session';
+import { App } from './app';
+import { toolScreens } from './screen-list';
 import { ServiceWorkerNotice } from './update-notice/connected';
 
 render(<App updateNotice={<ServiceWorkerNotice />} />, document.getElementById('app')!);

@@ -1,4 +1,4 @@
-// The public face of the core (../shared/design/core-api.md): re-exports only.
+// The public face of the core (DEVELOPERS.md, "The core's public face"): re-exports only.
 export { InputError } from './basics/InputError';
 export type { Part, Range, Sampler, Look } from './basics/types';
 export { MAX_SYMMETRY, MAX_IMAGES_LIMIT } from './basics/types';
@@ -9,7 +9,7 @@ export {
   type ApparentMotion,
   type ApparentMotionOptions,
 } from './physics/apparentMotion';
-export { lockRates, type LockRate } from './physics/lockRates';
+export { lockRates, lockCountBound, type LockRate } from './physics/lockRates';
 export { ratesForApparent } from './physics/ratesForApparent';
 export {
   rateBands,
@@ -72,18 +72,16 @@ export {
 } from './formulas/logger';
 export * from './formulas/units';
 export { gcd } from './basics/gcd';
-// Field tools (issue 5): speed finder steps, whole machine, lighting, camera, logger, reports.
+// Field tools: speed finder steps, whole machine, lighting, camera, logger, reports.
 export { plainNumber } from './basics/plainNumber';
 export {
-  safetyCautions,
+  cautionCodes,
   cautionFlags,
-  STILLNESS_CAUTION,
-  FLASHING_CAUTION,
-  PLANNING_AID_CAUTION,
   SEIZURE_RISK_LOW_HZ,
   SEIZURE_RISK_HIGH_HZ,
+  type CautionCode,
   type CautionContext,
-} from './plans/safetyCautions';
+} from './plans/cautions';
 export {
   speedFinderSteps,
   motorExpectedRange,
@@ -93,6 +91,8 @@ export {
   type SpeedFinderOptions,
   type StepCandidate,
   type StepPrediction,
+  type StepGuide,
+  type CheckState,
 } from './plans/speedFinderSteps';
 export {
   driveChain,
@@ -117,6 +117,7 @@ export {
   type LightingVerdict,
   type PartUnderLight,
   type LightingCheck,
+  type LightingRemedy,
 } from './plans/lightingCheck';
 export {
   cameraPlan,
@@ -135,7 +136,9 @@ export {
 export {
   loggerPlan,
   niceSampleRateHz,
-  ALIAS_AFTER_CONVERTER_NOTE,
+  type ComponentSource,
+  type LoggerNote,
+  type LoggerPlanInput,
   type MachineTones,
   type AntiAliasFilter,
   type LoggerComponent,
@@ -145,7 +148,7 @@ export {
 } from './plans/loggerPlan';
 export { csv, csvField, csvTable, type CsvValue, type CsvColumn } from './basics/csv';
 export { MAX_WORK_ITEMS } from './basics/workLimit';
-// Hear the speed (issue 12): the spectrum of a recording, the speeds it holds, and their join
+// Hear the speed: the spectrum of a recording, the speeds it holds, and their join
 // with strobe readings.
 export {
   soundSpectrum,

@@ -11,7 +11,7 @@ import type { PixelTables } from './pixelTables';
 // so the share of any interval [a, b] that blades cover, which is what a pixel integrates while
 // the part sweeps past it during an exposure, is (covered(b) − covered(a)) / (b − a).
 // An exposure of a whole number of pitches therefore gives exactly `duty` everywhere: the even
-// ring of a long exposure (physics.md §5).
+// ring of a long exposure (docs/physics.md §5).
 
 /**
  * Blade length inside [0, x], in pitches, for blades of width `duty` (0…1 pitch) at every whole number.

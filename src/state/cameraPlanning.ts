@@ -1,10 +1,9 @@
 // The camera planner's entries (what the camera can do, the goal) and its ranked settings,
-// from the core's cameraPlan (physics.md §2–§5). The part is the set-up's chosen part; "Open
+// from the core's cameraPlan (docs/physics.md §2–§5). The part is the set-up's chosen part; "Open
 // in check" copies a setting into the set-up's camera.
 import { batch, computed, signal } from '@preact/signals';
 import {
   cameraPlan,
-  STILLNESS_CAUTION,
   standardFrameRates,
   type CameraAbilities,
   type CameraGoal,
@@ -12,8 +11,8 @@ import {
   type CameraSetting,
   type CautionContext,
 } from '../core';
+import { activeCorePart } from './model';
 import { keepLastGood } from './outcome';
-import { corePart } from './check';
 import {
   setExposureSeconds,
   setFrameRate,
@@ -88,16 +87,20 @@ export const abilities = computed<CameraAbilities>(() => ({
 
 /** The ranked settings for the current entries and part, kept at the last good plan. */
 export const cameraPlanning = keepLastGood<CameraPlan>(() =>
-  cameraPlan(abilities.value, corePart(setup.value), goalOf(goalKind.value, setup.value.creepRpm)),
+  cameraPlan(
+    abilities.value,
+    activeCorePart(setup.value),
+    goalOf(goalKind.value, setup.value.creepRpm),
+  ),
 );
 
 /**
- * Cautions of a plan (physics.md §4, §10): the stillness caution whenever the plan can show an
+ * Cautions of a plan (docs/physics.md §4, §10): the stillness caution whenever the plan can show an
  * aliased view (a freeze or creep by intent, or any setting that is not the true motion), as
  * the core's own cautions for the plan say.
  */
 export function cameraCautions(plan: CameraPlan): CautionContext {
-  return { apparentStillness: plan.cautions.includes(STILLNESS_CAUTION) };
+  return { apparentStillness: plan.cautions.includes('stillness') };
 }
 
 /**

@@ -1,7 +1,7 @@
 // The drive chains of a set-up (the whole-machine screen). A part without a drive starts a
 // chain: its speed is typed, or comes from a motor or a wheel. A part with a drive is turned by
 // an earlier part through a belt, a gear pair or a shared shaft. The core's driveChain carries
-// speeds and tolerances along (physics.md §8); this file turns set-ups into its input and
+// speeds and tolerances along (docs/physics.md §8); this file turns set-ups into its input and
 // writes what it gives back into the parts, so the check screen and saved machines keep it.
 import {
   defaultLookOptions,
@@ -19,6 +19,7 @@ import {
   type FreezeBand,
   type Range,
   type Sampler,
+  lockCountBound,
 } from '../core';
 import { check } from './check';
 import {
@@ -28,6 +29,8 @@ import {
   type PartSpec,
   type Setup,
   type WheelSpec,
+  activeIndex,
+  corePartOf,
 } from './model';
 import { keepLastGood } from './outcome';
 import { defaultMotor, setup } from './setup';
@@ -55,7 +58,7 @@ export function speedSourceOf(part: PartSpec): SpeedSource {
 
 /** The core's chain start for a part without a drive. */
 export function chainRootOf(part: PartSpec): ChainRoot {
-  const tolerance = part.tolerancePercent / 100;
+  const { speedHz, tolerance } = corePartOf(part);
   if (part.wheel) {
     const { groundSpeed, unit, tyreSize } = part.wheel;
     const groundSpeedMps = unit === 'mph' ? mphToMps(groundSpeed) : kmhToMps(groundSpeed);
@@ -71,7 +74,7 @@ export function chainRootOf(part: PartSpec): ChainRoot {
       tolerance,
     };
   }
-  return { kind: 'fixed', speedHz: part.speedRpm / 60, tolerance };
+  return { kind: 'fixed', speedHz, tolerance };
 }
 
 /** The core's link for a drive (pulley diameters in metres). */
@@ -307,7 +310,7 @@ export function syncChainSpeeds(): void {
 /** The current set-up's parts with their speed bands, kept at the last good value when the core refuses a chain. */
 export const chain = keepLastGood(() => deriveParts(setup.value));
 
-/** What the whole-machine screen lists for a sampler's range (physics.md §4, several parts). */
+/** What the whole-machine screen lists for a sampler's range (docs/physics.md §4, several parts). */
 export interface MachineRates {
   /** The part to freeze (its index in the set-up). */
   target: number;
@@ -329,10 +332,9 @@ export interface MachineRates {
 export const MAX_LISTED_SPANS = 100_000;
 
 /**
- * The top of `range` in which listing every part's still spans stays within `budget`: a part of
- * pattern rate F has about F·(1/min − 1/max)·q(q + 1)/2 locks with up to q images in [min, max]
- * (physics.md §3), so the bottom is raised until their sum fits. Null when even the top rate
- * is too costly.
+ * The top of `range` in which listing every part's still spans stays within `budget`: the
+ * bottom is raised until the locks of all parts (the core's lockCountBound, docs/physics.md §3)
+ * fit. Null when even the top rate is too costly.
  * @example listedRange([{ speedHz: 29.5, symmetry: 6 }], { minHz: 0.5, maxHz: 200 }, 'frames', 1e5) // { minHz: 0.5, maxHz: 200 }
  */
 export function listedRange(
@@ -342,9 +344,17 @@ export function listedRange(
   budget = MAX_LISTED_SPANS,
 ): Range | null {
   const q = sampler === 'flash' ? defaultLookOptions.maxImages : 1;
-  const perInverseHz =
-    parts.reduce((sum, p) => sum + p.symmetry * Math.abs(p.speedHz) * (1 + (p.tolerance ?? 0)), 0) *
-    ((q * (q + 1)) / 2);
+  // Locks per 1/Hz of span, for the fastest pattern rate of every part summed: the count over
+  // [min, max] is this times (1/min − 1/max), which the bottom below solves for the budget.
+  const fastestHz = parts.reduce(
+    (sum, p) => sum + p.symmetry * Math.abs(p.speedHz) * (1 + (p.tolerance ?? 0)),
+    0,
+  );
+  const perInverseHz = lockCountBound(
+    { lowHz: fastestHz, highHz: fastestHz },
+    { minHz: 1, maxHz: Infinity },
+    q,
+  );
   if (perInverseHz === 0) return range;
   const lowest = 1 / (budget / perInverseHz + 1 / range.maxHz);
   const minHz = Math.max(range.minHz, lowest);
@@ -378,10 +388,5 @@ export function machineRatesFor(
 export const machineRates = keepLastGood(() => {
   const s = setup.value;
   const r = check.value;
-  return machineRatesFor(
-    deriveParts(s),
-    s.parts[s.activePart] ? s.activePart : 0,
-    r.range,
-    r.sampler,
-  );
+  return machineRatesFor(deriveParts(s), activeIndex(s), r.range, r.sampler);
 });

@@ -1,6 +1,6 @@
 // Fields whose text cannot be read right now. A result worked out from the last good value of
 // such a field is no longer what the user is looking at, so it must be withdrawn where it stands
-// (physics.md §10). Every number field reports here under its id; screens ask for the fields
+// (docs/physics.md §10). Every number field reports here under its id; screens ask for the fields
 // their answer depends on.
 import { signal, type ReadonlySignal } from '@preact/signals';
 

@@ -1,5 +1,5 @@
 // The lighting check of the current set-up: its lamp (mains, flicker, modulation) against every
-// part, by the core's lightingCheck (physics.md §6).
+// part, by the core's lightingCheck (docs/physics.md §6).
 import {
   lightingCheck,
   type CautionContext,
@@ -7,7 +7,7 @@ import {
   type LightingCheck,
   type LitPart,
 } from '../core';
-import type { Setup } from './model';
+import { type Setup, corePartOf } from './model';
 import { keepLastGood } from './outcome';
 import { lightWaveOf, setup } from './setup';
 
@@ -24,16 +24,11 @@ export function lampOf(s: Setup): Lamp {
 
 /** Every part of the set-up in core units (rev/s, relative tolerance), with its name. */
 export function litPartsOf(s: Setup): LitPart[] {
-  return s.parts.map((p) => ({
-    name: p.name,
-    speedHz: p.speedRpm / 60,
-    symmetry: p.features,
-    tolerance: p.tolerancePercent / 100,
-  }));
+  return s.parts.map((p) => ({ name: p.name, ...corePartOf(p) }));
 }
 
 /**
- * The cautions a lighting result calls for (physics.md §4, §10): stillness that is not real when
+ * The cautions a lighting result calls for (docs/physics.md §4, §10): stillness that is not real when
  * a flickering light shows any part other than as it truly turns (still, slowed, several images,
  * backward, unclear); the seizure range for the flicker rate.
  */

@@ -1,5 +1,5 @@
 // The data-logger planner's entries (the machine's tones, sample rate, anti-alias filter,
-// converter bits) and its plan, from the core's loggerPlan (physics.md §9). The shaft speed is
+// converter bits) and its plan, from the core's loggerPlan (docs/physics.md §9). The shaft speed is
 // the set-up's chosen part; the rest lives here for the session.
 import { batch, computed, signal } from '@preact/signals';
 import {
@@ -9,7 +9,7 @@ import {
   type LoggerProposal,
   type MachineTones,
 } from '../core';
-import type { PartSpec } from './model';
+import { corePartOf, type PartSpec } from './model';
 import { keepLastGood } from './outcome';
 import { activePart } from './setup';
 
@@ -78,20 +78,23 @@ export function bladesFor(part: PartSpec, typed: number[] | null): number[] {
   return part.features > 1 ? [part.features] : [];
 }
 
+/** What the planner's entries say of the machine's tones. */
+export interface ToneEntries {
+  harmonics: number;
+  /** Blade counts typed; null: the part's own. */
+  blades: number[] | null;
+  gearTeeth: number[];
+  extraTonesHz: number[];
+}
+
 /** The machine's tones for the core; the shaft runs at the part's speed, either way round. */
-export function tonesOf(
-  part: PartSpec,
-  typed: number[] | null,
-  n: number,
-  teeth: number[],
-  tones: number[],
-): MachineTones {
+export function tonesOf(part: PartSpec, entries: ToneEntries): MachineTones {
   return {
-    shaftHz: Math.abs(part.speedRpm) / 60,
-    harmonics: n,
-    blades: bladesFor(part, typed),
-    gearTeeth: teeth,
-    extraTones: tones.map((hz, i) => ({ label: `added tone ${i + 1}`, hz })),
+    shaftHz: Math.abs(corePartOf(part).speedHz),
+    harmonics: entries.harmonics,
+    blades: bladesFor(part, entries.blades),
+    gearTeeth: entries.gearTeeth,
+    extraTones: entries.extraTonesHz.map((hz) => ({ hz })),
   };
 }
 
@@ -110,18 +113,17 @@ export const filter = computed<AntiAliasFilter>(() => {
 
 /** The plan for the current entries, kept at the last good plan when the core refuses one. */
 export const loggerPlanning = keepLastGood<LoggerPlan>(() =>
-  loggerPlan(
-    tonesOf(
-      activePart.value,
-      bladeCounts.value,
-      harmonics.value,
-      gearTeeth.value,
-      extraTonesHz.value,
-    ),
-    sampleHz.value,
-    filter.value,
-    converterBits.value,
-  ),
+  loggerPlan({
+    tones: tonesOf(activePart.value, {
+      harmonics: harmonics.value,
+      blades: bladeCounts.value,
+      gearTeeth: gearTeeth.value,
+      extraTonesHz: extraTonesHz.value,
+    }),
+    sampleHz: sampleHz.value,
+    filter: filter.value,
+    bits: converterBits.value,
+  }),
 );
 
 /** Takes the proposal: its sample rate and a Butterworth filter of its order and cutoff. */

@@ -1,6 +1,7 @@
 // The shapes the app keeps: what the user set up, and the machines they saved.
 // Plain data in user-facing units (rpm, flashes per minute, percent), so a saved file reads
-// naturally; conversion to core units (rev/s, Hz, s) happens in computed views.
+// naturally; the converters at the end of this file are the one way to the core's units.
+import type { Part, Sampler } from '../core';
 
 export type SpeedUnit = 'rpm' | 'Hz' | 'rad/s';
 
@@ -73,7 +74,7 @@ export interface LightingSpec {
   /** Percent flicker, 100·(Lmax − Lmin)/(Lmax + Lmin). */
   modulationPercent: number;
   /**
-   * The light's shape over a flicker period (physics.md §6): a sine (the default, and what
+   * The light's shape over a flicker period (docs/physics.md §6): a sine (the default, and what
    * older set-ups assumed), rectangular PWM, or the full-wave rectified sine of a plain driver.
    */
   waveform?: LightWaveform;
@@ -103,6 +104,42 @@ export interface Setup {
 /** What a part is called on screen and in messages: its name, or its place in the list. */
 export function partLabel(s: Setup, index: number): string {
   return s.parts[index]?.name.trim() || `Part ${index + 1}`;
+}
+
+/**
+ * The place of the part every screen works on: `activePart`, or the first part when it points
+ * nowhere (a set-up edited elsewhere). The one rule for it: nothing else falls back on its own.
+ */
+export function activeIndex(s: Setup): number {
+  return s.parts[s.activePart] ? s.activePart : 0;
+}
+
+/** The part every screen works on (see activeIndex). */
+export function activePartOf(s: Setup): PartSpec {
+  return s.parts[activeIndex(s)];
+}
+
+/**
+ * The one converter from a part as the set-up keeps it (rpm, features, ± percent) to the core's
+ * part (rev/s, symmetry, relative tolerance): the set-up's `features` is the core's `symmetry`.
+ * @example corePartOf({ name: 'Fan', speedRpm: 1770, features: 6, tolerancePercent: 1 }) // { speedHz: 29.5, symmetry: 6, tolerance: 0.01 }
+ */
+export function corePartOf(part: PartSpec): Required<Part> {
+  return {
+    speedHz: part.speedRpm / 60,
+    symmetry: part.features,
+    tolerance: part.tolerancePercent / 100,
+  };
+}
+
+/** The core's part for the part every screen works on. */
+export function activeCorePart(s: Setup): Required<Part> {
+  return corePartOf(activePartOf(s));
+}
+
+/** How the set-up's kind of sampler looks: a camera takes frames, a strobe or lighting flashes. */
+export function samplerOf(kind: SamplerKind): Sampler {
+  return kind === 'camera' ? 'frames' : 'flash';
 }
 
 /** A saved machine: a named set-up. */

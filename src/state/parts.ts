@@ -2,7 +2,7 @@
 // remove one, rename one. The per-field setters of the chosen part live in setup.ts; these
 // only change the list, and every change goes through the same checks as a saved file.
 import { editChain, withoutPart } from './chain';
-import type { PartSpec } from './model';
+import { type PartSpec, activePartOf } from './model';
 import { setup } from './setup';
 import { DataError, MAX_NAME_CHARS, MAX_PARTS, validateSetup } from './validate';
 
@@ -27,7 +27,7 @@ export function addPart(): void {
       `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`,
     );
   }
-  const like = s.parts[s.activePart] ?? s.parts[0];
+  const like = activePartOf(s);
   const part: PartSpec = {
     name: freeName(s.parts),
     speedRpm: like.speedRpm,

@@ -1,11 +1,8 @@
 // The set-up on screen right now, as one signal, with one setter per field. Setters take
 // values already checked by the field readers (src/ui/fields.ts) and always build a new
 // object, so every computed view that reads `setup` follows at once.
-import { computed, effect, signal } from '@preact/signals';
+import { computed, signal } from '@preact/signals';
 import { motorSpeedHz, type LightWave } from '../core';
-import { loadMachines } from './machines';
-import { decodeShareFragment } from './shareLink';
-import { loadCurrentSetup, openStore, saveCurrentSetup } from './storage';
 import {
   DEFAULT_DUTY_PERCENT,
   defaultSetup,
@@ -15,6 +12,8 @@ import {
   type SamplerKind,
   type Setup,
   type SpeedUnit,
+  activeIndex,
+  activePartOf,
 } from './model';
 
 /** A deep copy, so no two set-ups share nested objects. */
@@ -31,10 +30,7 @@ export const speedUnit = signal<SpeedUnit>('rpm');
 export const flashUnit = signal<'fpm' | 'Hz'>('fpm');
 
 /** The part being checked. */
-export const activePart = computed<PartSpec>(() => {
-  const s = setup.value;
-  return s.parts[s.activePart] ?? s.parts[0];
-});
+export const activePart = computed<PartSpec>(() => activePartOf(setup.value));
 
 /** Replaces the whole set-up (opening a machine, a share link, a stored session). */
 export function replaceSetup(next: Setup): void {
@@ -43,7 +39,7 @@ export function replaceSetup(next: Setup): void {
 
 function updatePart(change: (part: PartSpec) => PartSpec): void {
   const s = setup.value;
-  const index = s.parts[s.activePart] ? s.activePart : 0;
+  const index = activeIndex(s);
   const parts = s.parts.map((p, i) => (i === index ? change({ ...p }) : p));
   setup.value = { ...s, parts };
 }
@@ -68,7 +64,7 @@ export function setTolerancePercent(tolerancePercent: number): void {
 export const defaultMotor = { mainsHz: 50, poles: 4, slipPercent: 3 } as const;
 
 /**
- * Takes the speed from an induction motor: (1 − slip)·120·fm/P rpm (physics.md §8),
+ * Takes the speed from an induction motor: (1 − slip)·120·fm/P rpm (docs/physics.md §8),
  * keeping the direction the part had. `undefined` goes back to a typed speed.
  */
 export function setMotor(motor: PartSpec['motor'] | undefined): void {
@@ -183,87 +179,4 @@ export function setSamplerRateHz(rateHz: number): void {
   if (s.samplerKind === 'camera') setFrameRate(rateHz);
   else if (s.samplerKind === 'strobe') setStrobeRateFpm(rateHz * 60);
   else updateLighting({ flicker: 'custom', customHz: rateHz });
-}
-
-// --- The session: where the set-up on screen comes from, and keeping it across reloads ----
-
-/** The saved machine the set-up was opened from (null = none, or it was deleted). */
-export const openMachineId = signal<string | null>(null);
-
-/** A message about how the session opened (a refused share link), for the top of the screen. */
-export const sessionMessage = signal<{ kind: 'info' | 'problem'; text: string } | null>(null);
-
-/** True once storage has been opened (or found unusable), so its status is worth showing. */
-export const storageOpened = signal(false);
-
-/** Where the starting set-up comes from: the page address, and the last set-up kept on the device. */
-export interface SessionSources {
-  /** The page address fragment (location.hash). */
-  hash: string;
-  /** Reads the share fragment (src/state/shareLink.ts). */
-  decodeShare: (hash: string) => { ok: true; setup: Setup } | { ok: false; error: string | null };
-  /** The set-up kept from the last visit, if any (src/state/storage.ts). */
-  loadLast: () => Promise<Setup | null>;
-  /** Removes the share data from the address once read, so a reload does not reopen it over later changes. */
-  clearHash: () => void;
-}
-
-/**
- * Picks the starting set-up: a share link wins; a refused link shows its message and the
- * default set-up; otherwise the set-up from the last visit, else the default. A set-up the
- * user already changed (it is no longer `untouched`, the one the page opened with) is left alone.
- */
-export async function openSession(
-  sources: SessionSources,
-  untouched: Setup = setup.peek(),
-): Promise<void> {
-  const shared = sources.decodeShare(sources.hash);
-  if (shared.ok) {
-    replaceSetup(shared.setup);
-    openMachineId.value = null;
-    sessionMessage.value = {
-      kind: 'info',
-      text: 'Opened a shared set-up. Save it as a machine to keep it.',
-    };
-    sources.clearHash();
-    return;
-  }
-  if (shared.error !== null) {
-    replaceSetup(defaultSetup);
-    sessionMessage.value = {
-      kind: 'problem',
-      text: `${shared.error} The default set-up is shown instead.`,
-    };
-    sources.clearHash();
-    return;
-  }
-  const last = await sources.loadLast();
-  if (last && setup.peek() === untouched) replaceSetup(last);
-}
-
-/**
- * Opens the session for real: storage, the share link in the address, the last set-up;
- * then keeps every change of the set-up on the device, and loads the saved machines.
- */
-export async function startSession(): Promise<void> {
-  // What the page opened with: anything typed while storage opens must win over the last visit,
-  // and must be kept from the first keystroke (a reload a moment later must not lose it). Until
-  // something changes, nothing is written, so the last visit's set-up is there to be read.
-  const untouched = setup.peek();
-  effect(() => {
-    const current = setup.value;
-    if (current !== untouched) void saveCurrentSetup(current);
-  });
-  await openStore();
-  storageOpened.value = true;
-  await openSession(
-    {
-      hash: location.hash,
-      decodeShare: decodeShareFragment,
-      loadLast: loadCurrentSetup,
-      clearHash: () => history.replaceState(history.state, '', location.pathname + location.search),
-    },
-    untouched,
-  );
-  await loadMachines();
 }

@@ -1,5 +1,5 @@
 // The speed finder: what the technician recorded at the strobe, what they expect, and the next
-// step of the usual procedure from the core's speedFinderSteps (physics.md §7). The readings
+// step of the usual procedure from the core's speedFinderSteps (docs/physics.md §7). The readings
 // live here, outside the screen, so changing tabs loses none of them.
 import { computed, signal } from '@preact/signals';
 import {
@@ -9,7 +9,6 @@ import {
   type Range,
   type SpeedFinderStep,
 } from '../core';
-import { formatNumber } from '../words/format';
 import {
   deriveParts,
   speedSourceOf,
@@ -18,9 +17,10 @@ import {
   withSpeedSource,
 } from './chain';
 import { saveMachine, updateMachine } from './machines';
-import { partLabel, type Machine, type Setup } from './model';
+import { partLabel, type Machine, type Setup, activeIndex } from './model';
 import { keepLastGood } from './outcome';
-import { activePart, openMachineId, setSamplerKind, setStrobeRateFpm, setup } from './setup';
+import { activePart, setSamplerKind, setStrobeRateFpm, setup } from './setup';
+import { openMachineId } from './session';
 
 /** A reading: at rateFpm flashes per minute, `images` images stood still (1 = a single image). */
 export interface RecordedReading {
@@ -130,37 +130,39 @@ export function applyRateToStrobe(rateHz: number): void {
   setStrobeRateFpm(rateHz * 60);
 }
 
-const rpmText = (rpm: number) => `${formatNumber(rpm)} rpm`;
+/** One change the speed found makes to the set-up (src/words/speedFinder.ts says it in words). */
+export type SpeedChange =
+  | { kind: 'speed'; part: string; fromRpm: number; toRpm: number }
+  | { kind: 'leaves-motor' | 'leaves-wheel'; part: string }
+  | { kind: 'leaves-drive'; part: string; driver: string }
+  | { kind: 'features'; part: string; from: number; to: number }
+  | { kind: 'driven-speed'; part: string; fromRpm: number; toRpm: number };
 
 /**
- * The set-up with the chosen part turning at the speed found, and what changed, in words. A
- * strobe cannot tell direction, so the part keeps its own; the speed is now a measured (typed)
- * one, no longer taken from a motor, a drive or a wheel; parts it drives follow it.
- * @example withMeasuredSpeed(defaultSetup, 29.5, 6).changes // ['Fan: speed 1,770 rpm → 1,770 rpm.']
+ * The set-up with the chosen part turning at the speed found, and what changed. A strobe
+ * cannot tell direction, so the part keeps its own; the speed is now a measured (typed) one,
+ * no longer taken from a motor, a drive or a wheel; parts it drives follow it.
+ * @example withMeasuredSpeed(defaultSetup, 29.5, 6).changes // [{ kind: 'speed', part: 'Fan', fromRpm: 1770, toRpm: 1770 }]
  */
 export function withMeasuredSpeed(
   s: Setup,
   speedHz: number,
   features: number,
-): { setup: Setup; changes: string[] } {
-  const index = s.parts[s.activePart] ? s.activePart : 0;
+): { setup: Setup; changes: SpeedChange[] } {
+  const index = activeIndex(s);
   const before = s.parts[index];
-  const name = partLabel(s, index);
+  const part = partLabel(s, index);
   const sign = before.speedRpm < 0 ? -1 : 1;
   const rpm = sign * speedHz * 60;
-  const changes = [`${name}: speed ${rpmText(before.speedRpm)} → ${rpmText(rpm)}.`];
+  const changes: SpeedChange[] = [{ kind: 'speed', part, fromRpm: before.speedRpm, toRpm: rpm }];
   const source = speedSourceOf(before);
-  if (source === 'motor')
-    changes.push(`${name} no longer takes its speed from the motor nameplate.`);
-  if (source === 'wheel')
-    changes.push(`${name} no longer takes its speed from the ground speed and tyre size.`);
+  if (source === 'motor') changes.push({ kind: 'leaves-motor', part });
+  if (source === 'wheel') changes.push({ kind: 'leaves-wheel', part });
   if (source === 'drive' && before.drive) {
-    changes.push(
-      `${name} is no longer worked out from the drive from ${partLabel(s, before.drive.from)}.`,
-    );
+    changes.push({ kind: 'leaves-drive', part, driver: partLabel(s, before.drive.from) });
   }
   if (features !== before.features)
-    changes.push(`${name}: features ${before.features} → ${features}.`);
+    changes.push({ kind: 'features', part, from: before.features, to: features });
   let next = withPartFields(withSpeedSource(s, index, 'typed'), index, { speedRpm: rpm, features });
   try {
     next = withChainSpeeds(next);
@@ -168,9 +170,12 @@ export function withMeasuredSpeed(
     next.parts.forEach((p, i) => {
       const was = beforeParts[i].speedHz * 60;
       if (i !== index && p.drive && Math.abs(p.speedRpm - was) > 1e-9 * Math.abs(was)) {
-        changes.push(
-          `${partLabel(next, i)}, driven from it: speed ${rpmText(was)} → ${rpmText(p.speedRpm)}.`,
-        );
+        changes.push({
+          kind: 'driven-speed',
+          part: partLabel(next, i),
+          fromRpm: was,
+          toRpm: p.speedRpm,
+        });
       }
     });
   } catch (error) {
@@ -183,16 +188,22 @@ export function withMeasuredSpeed(
 /** Where to keep the speed found: the machine open now, a new machine, or only the set-up on screen. */
 export type SaveTarget = { kind: 'open' } | { kind: 'new'; name: string } | { kind: 'setup' };
 
+/** What saving the speed found did: the changes, and the machine it went to (null: the set-up only). */
+export interface SavedSpeed {
+  changes: SpeedChange[];
+  machineName: string | null;
+}
+
 /**
- * Puts the speed found into the set-up on screen and keeps it as asked. Resolves to the
- * sentences to show. Throws DataError, changing nothing, for a machine name or set-up the
- * saved list refuses, or an open machine that was deleted meanwhile.
+ * Puts the speed found into the set-up on screen and keeps it as asked. Throws DataError,
+ * changing nothing, for a machine name or set-up the saved list refuses, or an open machine
+ * that was deleted meanwhile.
  */
 export async function saveFoundSpeed(
   speedHz: number,
   features: number,
   target: SaveTarget,
-): Promise<string[]> {
+): Promise<SavedSpeed> {
   const { setup: next, changes } = withMeasuredSpeed(setup.peek(), speedHz, features);
   let machine: Machine | null = null;
   if (target.kind === 'open') {
@@ -205,8 +216,5 @@ export async function saveFoundSpeed(
     openMachineId.value = machine.id;
   }
   setup.value = next;
-  const where = machine
-    ? `Saved to "${machine.name}".`
-    : 'Changed in the set-up on the Check screen only (no machine saved).';
-  return [...changes, where];
+  return { changes, machineName: machine ? machine.name : null };
 }

@@ -1,5 +1,6 @@
 // Rates in the words of each sampler: frames per second for a camera, flashes per minute
 // (or Hz) for a strobe, Hz for lighting flicker.
+import type { Sampler } from '../core';
 import type { SamplerKind } from '../state/model';
 import { formatPrecise, NO_VALUE } from './format';
 
@@ -36,4 +37,13 @@ export function formatRateSpan(
 ): string {
   const unit = rateUnit(kind, flashUnit);
   return `${formatPrecise(rateNumber(fromHz, kind, flashUnit))} – ${formatPrecise(rateNumber(toHz, kind, flashUnit))} ${unit}`;
+}
+
+/**
+ * The smallest change of rate a person can set (docs/physics.md §4, §12), in words: a band
+ * offered must be at least this wide.
+ * @example settingStepWords('frames') // "0.01 frames/s"
+ */
+export function settingStepWords(sampler: Sampler): string {
+  return sampler === 'frames' ? '0.01 frames/s' : 'one flash per minute';
 }

@@ -5,13 +5,8 @@ import { afterEach, describe, expect, test } from 'vitest';
 import { App } from '../../src/app/app';
 import { defaultSetup, type Setup } from '../../src/state/model';
 import { decodeShareFragment, encodeShareFragment } from '../../src/state/shareLink';
-import {
-  openSession,
-  replaceSetup,
-  sessionMessage,
-  setup,
-  startSession,
-} from '../../src/state/setup';
+import { replaceSetup, setup } from '../../src/state/setup';
+import { openSession, sessionMessage, startSession } from '../../src/state/session';
 
 afterEach(cleanup);
 

@@ -4,7 +4,7 @@ import { cleanup, configure, fireEvent, render, screen, waitFor } from '@testing
 import { afterEach, beforeAll, describe, expect, test } from 'vitest';
 import { App } from '../../src/app/app';
 import { machines } from '../../src/state/machines';
-import { startSession } from '../../src/state/setup';
+import { startSession } from '../../src/state/session';
 
 beforeAll(async () => {
   expect(globalThis.indexedDB).toBeUndefined();

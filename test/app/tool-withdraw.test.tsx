@@ -1,15 +1,17 @@
 // @vitest-environment happy-dom
-// physics.md §10 on the tool screens: while an entry a tool's answer reads is refused, the answer
+// docs/physics.md §10 on the tool screens: while an entry a tool's answer reads is refused, the answer
 // is withdrawn where it stood and its results are marked not current; a draft entry the answer
 // does not read (the speed finder's next reading, not yet added) leaves the answer standing.
 import 'fake-indexeddb/auto';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
-import { App, toolScreens } from '../../src/app/app';
+import { App } from '../../src/app/app';
+import { toolScreens } from '../../src/app/screen-list';
 import { openScreen } from '../../src/state/navigation';
 import { defaultSetup } from '../../src/state/model';
 import { clearReadings, defaultExpectation, expectation } from '../../src/state/speedFinder';
-import { replaceSetup, startSession } from '../../src/state/setup';
+import { replaceSetup } from '../../src/state/setup';
+import { startSession } from '../../src/state/session';
 import { field, type } from '../helpers/screen-queries';
 
 beforeAll(async () => {

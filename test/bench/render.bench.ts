@@ -1,4 +1,4 @@
-// Budgets of issue 4 for the preview renderer and the rate map's data, run by `npm run bench`.
+// Budgets for the preview renderer and the rate map's data, run by `npm run bench`.
 import { rateMapSeries, type Part } from '../../src/core';
 import { PreviewRenderer } from '../../src/render/preview';
 import type { PreviewScene } from '../../src/render/scene';

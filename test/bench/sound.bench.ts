@@ -1,4 +1,4 @@
-// Budgets of issue 12 (hear the speed), run by `npm run bench`: the whole analysis of a 4 s
+// Budgets of the speed from sound, run by `npm run bench`: the whole analysis of a 4 s
 // recording at 48 kHz within 40 ms, and the tone finder's cost as the expected range widens.
 import { soundSpectrum, speedsFromSound } from '../../src/core';
 import { fanAt1750Rpm } from '../helpers/sound/machineSound';

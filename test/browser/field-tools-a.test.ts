@@ -70,7 +70,7 @@ async function noSidewaysScroll(page: Page): Promise<number> {
 /**
  * Types each garbage text into the field: a message beside it, nothing reads NaN. `unchanged`
  * keeps its text; with `withdrawn`, the screen's answer is withdrawn and `unchanged` says it is
- * not current while the text is refused (physics.md §10), and both come back as they were once
+ * not current while the text is refused (docs/physics.md §10), and both come back as they were once
  * the good text is back.
  */
 async function refusesGarbage(
@@ -134,7 +134,7 @@ describe('the speed finder at phone size', () => {
     expect(await page.getByLabel('Blades or marks on the part').inputValue()).toBe('6');
 
     // Coming down from 12,000 fpm, the first single image stands at 1780 fpm. The count seen is
-    // always chosen by the technician (physics.md §7: never filled in from a prediction).
+    // always chosen by the technician (docs/physics.md §7: never filled in from a prediction).
     await typeInto(page, 'Rate where it stood still', '1780');
     expect(await page.getByLabel('Images standing still', { exact: true }).inputValue()).toBe('');
     await page.getByLabel('Images standing still', { exact: true }).selectOption('1');
@@ -155,7 +155,7 @@ describe('the speed finder at phone size', () => {
     await page.getByRole('button', { name: 'Add reading' }).click();
     expect(await page.getByTestId('reading-refused').isVisible()).toBe(true);
     expect(await page.getByTestId('reading-list').locator('li').count()).toBe(1);
-    // Garbage in a recorded reading withdraws the step until it is fixed (physics.md §10); then it is back as it was.
+    // Garbage in a recorded reading withdraws the step until it is fixed (docs/physics.md §10); then it is back as it was.
     await refusesGarbage(
       page,
       page.getByLabel('Reading 1: rate', { exact: true }),

@@ -5,21 +5,16 @@
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { mkdirSync, readFileSync } from 'node:fs';
-import {
-  ALIAS_AFTER_CONVERTER_NOTE,
-  cameraPlan,
-  lightingCheck,
-  loggerPlan,
-  lockRates,
-  safetyCautions,
-} from '../../src/core';
+import { cameraPlan, lightingCheck, loggerPlan, lockRates } from '../../src/core';
 import { formatPrecise, numberForField } from '../../src/words/format';
+import { safetyCautions } from '../../src/words/cautions';
 import { lookWords } from '../../src/words/look';
+import { lightingSummary } from '../../src/words/lighting';
+import { ALIAS_AFTER_CONVERTER_NOTE, componentLabel } from '../../src/words/logger';
 import { defaultCameraEntries, frameRatesOf } from '../../src/state/cameraPlanning';
-import { corePart } from '../../src/state/check';
 import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';
 import { lampOf, lightingCautions, litPartsOf } from '../../src/state/lighting';
-import type { Setup } from '../../src/state/model';
+import { type Setup, activeCorePart } from '../../src/state/model';
 import { defaultLoggerEntries, tonesOf } from '../../src/state/loggerPlanning';
 import { openApp, openBrowser, typeInto, type Session } from './browser';
 
@@ -63,7 +58,7 @@ async function openExampleOn(page: Page, tab: string): Promise<void> {
 
 /**
  * Types each garbage text into each field: the field is marked, a message stands beside it, the
- * answer is withdrawn where it stood and names the field to fix (physics.md §10), and nothing
+ * answer is withdrawn where it stood and names the field to fix (docs/physics.md §10), and nothing
  * reads NaN or Infinity. Then the good text goes back, and so does the answer as it was.
  */
 async function refuseGarbage(page: Page, labels: string[], watched: string) {
@@ -171,7 +166,9 @@ describe('the field tools in a real browser, at phone size', () => {
 
     // The fictional cooler fan under 100 Hz flicker at 30 %: the core's own verdict and words.
     const first = lightingCheck(lampOf(exampleSetup), litPartsOf(exampleSetup));
-    await expect.poll(() => page.getByTestId('lighting-summary').innerText()).toBe(first.summary);
+    await expect
+      .poll(() => page.getByTestId('lighting-summary').innerText())
+      .toBe(lightingSummary(first));
     const table = page.getByTestId('lighting-table');
     const rows = table.locator('tbody tr');
     expect(await rows.count()).toBe(exampleSetup.parts.length);
@@ -193,7 +190,9 @@ describe('the field tools in a real browser, at phone size', () => {
       litPartsOf(withChuck(exampleSetup)),
     );
     expect(second.parts[2].worstLook).toBe('still');
-    await expect.poll(() => page.getByTestId('lighting-summary').innerText()).toBe(second.summary);
+    await expect
+      .poll(() => page.getByTestId('lighting-summary').innerText())
+      .toBe(lightingSummary(second));
     expect(await page.getByTestId('lighting-hazard').isVisible()).toBe(true);
     expect(await rows.nth(2).getByTestId('hazard-flag').innerText()).toBe('HAZARD');
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
@@ -252,7 +251,7 @@ describe('the field tools in a real browser, at phone size', () => {
       exposuresS: defaultCameraEntries.exposuresS,
       readoutS: defaultCameraEntries.readoutMs / 1000,
     };
-    const part = corePart(exampleSetup);
+    const part = activeCorePart(exampleSetup);
     const none = cameraPlan(camera, part, { kind: 'freeze' });
     expect(none.settings).toHaveLength(0);
     await expect
@@ -263,7 +262,7 @@ describe('the field tools in a real browser, at phone size', () => {
     expect(await rows.first().innerText()).toContain(
       `${formatPrecise(none.nearMisses[0].frameRate)} fps`,
     );
-    // The single-image rates of physics.md §3, n·|f|/p, are named as the way out.
+    // The single-image rates of docs/physics.md §3, n·|f|/p, are named as the way out.
     const freezing = lockRates(
       { ...part, tolerance: 0 },
       { minHz: 1, maxHz: 1000 },
@@ -274,7 +273,7 @@ describe('the field tools in a real browser, at phone size', () => {
     await phoneShot(page, 'field-tools-b-camera-none-phone.png');
 
     // A camera that offers that rate, with a global shutter, freezes the fan (a phone's 25 ms
-    // readout turns it 360·16.9·0.025 = 152°, over three blade pitches: broken, physics.md §5).
+    // readout turns it 360·16.9·0.025 = 152°, over three blade pitches: broken, docs/physics.md §5).
     await typeInto(page, 'Other frame rates', numberForField(top));
     await typeInto(page, 'Rolling readout time', '0');
     const typed = Number(numberForField(top));
@@ -339,22 +338,33 @@ describe('the field tools in a real browser, at phone size', () => {
     await openExampleOn(page, 'Logger');
 
     const fan = exampleSetup.parts[exampleSetup.activePart];
-    const tones = (harmonicsCount: number) => tonesOf(fan, null, harmonicsCount, [], []);
-    const atFirst = loggerPlan(tones(defaultLoggerEntries.harmonics), 1000, { kind: 'none' }, 16);
+    const tones = (harmonicsCount: number) =>
+      tonesOf(fan, { harmonics: harmonicsCount, blades: null, gearTeeth: [], extraTonesHz: [] });
+    const atFirst = loggerPlan({
+      tones: tones(defaultLoggerEntries.harmonics),
+      sampleHz: 1000,
+      filter: { kind: 'none' },
+      bits: 16,
+    });
     const rows = page.getByTestId('logger-table').locator('tbody tr');
     await expect.poll(() => rows.count()).toBe(atFirst.components.length);
     for (let i = 0; i < atFirst.components.length; i++) {
       const c = atFirst.components[i];
       const text = await rows.nth(i).innerText();
-      expect(text).toContain(c.label);
+      expect(text).toContain(componentLabel(c));
       expect(text).toContain(`${formatPrecise(c.foldedHz)} Hz`);
     }
     expect(await page.getByTestId('alias-note').innerText()).toBe(ALIAS_AFTER_CONVERTER_NOTE);
 
     // At 200 samples/s the 8-blade pass (135.3 Hz) is above 100 Hz and folds to 200 − 135.3 = 64.7 Hz.
     await typeInto(page, 'Sample rate', '200');
-    const slow = loggerPlan(tones(defaultLoggerEntries.harmonics), 200, { kind: 'none' }, 16);
-    const pass = slow.components.find((c) => c.label.startsWith('blade pass'))!;
+    const slow = loggerPlan({
+      tones: tones(defaultLoggerEntries.harmonics),
+      sampleHz: 200,
+      filter: { kind: 'none' },
+      bits: 16,
+    });
+    const pass = slow.components.find((c) => c.source === 'blades')!;
     expect(pass.foldedHz).toBeCloseTo(200 - (8 * fan.speedRpm) / 60, 9);
     const bladeRow = rows.filter({ hasText: 'blade pass (8 blades)' });
     await expect.poll(() => bladeRow.innerText()).toContain(`${formatPrecise(pass.foldedHz)} Hz`);
@@ -378,12 +388,16 @@ describe('the field tools in a real browser, at phone size', () => {
     await expect
       .poll(() => page.getByLabel('Order', { exact: true }).inputValue())
       .toBe(String(slow.proposal!.order));
-    const clean = loggerPlan(
-      tones(defaultLoggerEntries.harmonics),
-      slow.proposal!.sampleHz,
-      { kind: 'butterworth', order: slow.proposal!.order, cutoffHz: slow.proposal!.cutoffHz },
-      16,
-    );
+    const clean = loggerPlan({
+      tones: tones(defaultLoggerEntries.harmonics),
+      sampleHz: slow.proposal!.sampleHz,
+      filter: {
+        kind: 'butterworth',
+        order: slow.proposal!.order,
+        cutoffHz: slow.proposal!.cutoffHz,
+      },
+      bits: 16,
+    });
     expect(clean.allPass).toBe(true);
     await phoneShot(page, 'field-tools-b-logger-phone.png');
 

@@ -34,7 +34,7 @@ async function shownText(page: Page): Promise<string> {
   return text.replace(/"[^"]*"/g, '');
 }
 
-/** Fields the verdict reads: garbage in one withdraws the verdict (physics.md §10); the others leave it. */
+/** Fields the verdict reads: garbage in one withdraws the verdict (docs/physics.md §10); the others leave it. */
 const VERDICT_LABELS = new Set([
   'Speed',
   'Blades or marks',

@@ -51,7 +51,7 @@ describe('the main flow', () => {
     await typeInto(page, 'Flash rate', '3540');
     await expect.poll(() => verdict.innerText()).toMatch(/^Creeping forward/);
     expect(await page.getByTestId('apparent-speed').innerText()).toBe('60 rpm forward');
-    // physics.md §4: a creep forward is an aliased view too; the lock-out caution goes with it.
+    // docs/physics.md §4: a creep forward is an aliased view too; the lock-out caution goes with it.
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
     expect(await page.getByTestId('photosensitivity-notice').isVisible()).toBe(true);
 

@@ -1,4 +1,4 @@
-// Never a false all-clear (issue 8), in a real Chromium against the built app: the lock-out
+// Never a false all-clear, in a real Chromium against the built app: the lock-out
 // caution stands beside every aliased verdict on the first screen of a phone, and a verdict
 // whose input has been made invalid is withdrawn where it stands. Screenshots of the screens
 // this touches go to test-output/screenshots/.
@@ -17,7 +17,7 @@ afterEach(async () => {
 
 const shots = 'test-output/screenshots';
 
-/** The fan of issue 8: 6 blades at 1750 rpm under a strobe at 1748 flashes a minute. */
+/** A fan close to a freeze: 6 blades at 1750 rpm under a strobe at 1748 flashes a minute. */
 async function typeCreepCase(page: Page): Promise<void> {
   await typeInto(page, 'Speed', '1750');
   await typeInto(page, 'Blades or marks', '6');
@@ -35,7 +35,7 @@ async function toTop(page: Page): Promise<void> {
 
 describe('never a false all-clear', () => {
   test('the creep of 6 blades at 1750 rpm under 1748 flashes/min shows the lock-out caution on the first phone screen, under the verdict', async () => {
-    // physics.md §2: a = (1750 − 1748)/60 rev/s = 2 rpm forward; §4: aliased, so §10's caution goes with it.
+    // docs/physics.md §2: a = (1750 − 1748)/60 rev/s = 2 rpm forward; §4: aliased, so §10's caution goes with it.
     const m = apparentMotion({ speedHz: 1750 / 60, symmetry: 6 }, 1748 / 60);
     expect(m.look).toBe('forward');
     expect(m.faithful).toBe(false);
@@ -121,7 +121,7 @@ describe('never a false all-clear', () => {
     { name: 'desktop', width: 1280, height: 800 },
   ] as const) {
     for (const scheme of ['light', 'dark'] as const) {
-      test(`screens of issue 8 at ${size.name} size in ${scheme}: creep, withdrawn verdict, camera plan, lighting`, async () => {
+      test(`screens that must never give a false all-clear at ${size.name} size in ${scheme}: creep, withdrawn verdict, camera plan, lighting`, async () => {
         mkdirSync(shots, { recursive: true });
         session = await openBrowser({
           width: size.width,
@@ -146,15 +146,15 @@ describe('never a false all-clear', () => {
         await typeInto(page, 'Blades or marks', '2');
         await expect.poll(() => page.getByTestId('verdict').innerText()).not.toMatch(/^No/);
 
-        // The propeller of issue 8 item 7 in the camera plan: blur and readout named.
+        // A propeller in the camera plan: blur and readout named.
         await page.getByRole('button', { name: 'Camera', exact: true }).click();
-        await page.getByTestId('camera-plan-screen').waitFor();
+        await page.getByTestId('camera-screen').waitFor();
         await typeInto(page, 'Shutter speeds', '500 1000 2000 4000');
         await expect
           .poll(() => page.getByTestId('plan-blocked').innerText())
           .toMatch(/Rolling shutter: needs a readout of 5 ms or shorter/);
         await toTop(page);
-        await shot('camera-plan');
+        await shot('camera');
 
         // A PWM lamp in the lighting check.
         await page.getByRole('button', { name: 'Lighting', exact: true }).click();

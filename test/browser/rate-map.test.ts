@@ -197,7 +197,7 @@ describe('the rate map on the check screen', () => {
       .poll(() => page.getByLabel('Flash rate', { exact: true }).inputValue())
       .toBe('600');
     expect(await mapRateHz(page)).toBeCloseTo(10, 12);
-    // physics.md §3: one flash per turn freezes a single mark.
+    // docs/physics.md §3: one flash per turn freezes a single mark.
     expect(apparentMotion(mark, 10).look).toBe('still');
     expect(await page.getByTestId('verdict').innerText()).toMatch(/^Looks still/);
     expect(await page.getByTestId('safety-notice').isVisible()).toBe(true);
@@ -246,7 +246,7 @@ describe('the preview on the check screen', () => {
     const preview = page.locator('section[aria-label="Preview of the turning part"]');
     await preview.waitFor();
     await preview.scrollIntoViewIfNeeded();
-    // The default strobe flashes 29.5 times a second, so the preview opened paused (physics.md §10).
+    // The default strobe flashes 29.5 times a second, so the preview opened paused (docs/physics.md §10).
     await preview.getByRole('button', { name: 'Play' }).click();
     await expect
       .poll(() => preview.getByRole('button', { name: 'Pause' }).getAttribute('aria-pressed'))

@@ -1,4 +1,4 @@
-// Shared checks for the core's bad-input contract (core-api.md): bad input throws InputError,
+// Shared checks for the core's bad-input contract (DEVELOPERS.md, "The core's public face"): bad input throws InputError,
 // an Error whose `field` says which input is wrong and whose message names it.
 import { expect } from 'vitest';
 import fc from 'fast-check';

@@ -1,4 +1,4 @@
-// Hostile and odd input to the core (issue 8, item 10; core-api.md): every exported function
+// Hostile and odd input to the core (the contract in DEVELOPERS.md): every exported function
 // either returns only finite numbers or throws InputError, an Error that names the field and
 // says what to type. Never NaN, never Infinity, never a TypeError or a hang. Seeded, so a
 // failure reproduces.
@@ -212,7 +212,7 @@ describe('hostile input: every other exported function', () => {
   });
 });
 
-describe('hostile input: the reported cases (issue 8, item 10)', () => {
+describe('hostile input: cases met in use', () => {
   it('refuses "1780 1800" typed as a speed: two numbers, not 17,801,800 rpm', () => {
     expectInputError(() => core.parseQuantity('1780 1800', 'speed', 'rpm'), 'speed', 'one number');
     expectInputError(() => core.parseQuantity('1780, 1800', 'speed', 'rpm'), 'speed', 'one number');
@@ -267,7 +267,7 @@ describe('hostile input: the reported cases (issue 8, item 10)', () => {
     );
   });
 
-  it('throws InputError, not TypeError, for wrongly typed arguments to parseQuantity and safetyCautions', () => {
+  it('throws InputError, not TypeError, for wrongly typed arguments to parseQuantity and cautionCodes', () => {
     expectInputError(
       () => core.parseQuantity('1780', 'bogus' as never, 'rpm', 'speed'),
       'speed',
@@ -275,13 +275,13 @@ describe('hostile input: the reported cases (issue 8, item 10)', () => {
     );
     expectInputError(() => core.parseQuantity('1780', 'speed', 5 as never), 'speed', 'unit');
     expectInputError(() => core.parseQuantity(1780 as never, 'speed', 'rpm'), 'speed', 'text');
-    expectInputError(() => core.safetyCautions(null as never), 'cautions');
+    expectInputError(() => core.cautionCodes(null as never), 'cautions');
     expectInputError(
-      () => core.safetyCautions({ flashRatesHz: '5' as never }),
+      () => core.cautionCodes({ flashRatesHz: '5' as never }),
       'flash rates',
       'list',
     );
-    expectInputError(() => core.safetyCautions({ flashSweepHz: null as never }), 'sweep');
+    expectInputError(() => core.cautionCodes({ flashSweepHz: null as never }), 'sweep');
     expectInputError(() => core.cautionFlags(undefined as never), 'cautions');
   });
 });

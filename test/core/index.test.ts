@@ -1,10 +1,10 @@
-// The public face of the core must match core-api.md: every name exported, results shaped as
+// The public face of the core must match its contract (DEVELOPERS.md, "The core's public face"): every name exported, results shaped as
 // documented, bad input throwing InputError (an Error) that names the field.
 import { describe, expect, it } from 'vitest';
 import * as core from '../../src/core';
 import { bad, inputErrorOf } from './expectInputError';
 
-// Every function core-api.md lists, by name.
+// Every function the contract lists, by name.
 const documentedFunctions = [
   'apparentMotion',
   'lockRates',
@@ -48,7 +48,7 @@ describe('core index', () => {
   });
 });
 
-describe('core index: result shapes of core-api.md', () => {
+describe('core index: result shapes of the contract', () => {
   const fan = { speedHz: 10, symmetry: 3 };
 
   it('apparentMotion gives ratio, step, apparentHz, faithful, images and look', () => {
@@ -64,7 +64,7 @@ describe('core index: result shapes of core-api.md', () => {
         nearlyStill: expect.any(Boolean),
       }),
     );
-    // Default sampler 'flash' (core-api.md): r = 1/2 shows two images standing still only under a flash.
+    // Default sampler 'flash' (the contract): r = 1/2 shows two images standing still only under a flash.
     expect(core.apparentMotion(fan, 60).images).toBe(2);
     expect(core.apparentMotion(fan, 60, { sampler: 'frames' }).images).toBe(1);
   });
@@ -145,7 +145,7 @@ describe('core index: result shapes of core-api.md', () => {
     expect(core.rollingSkewDegrees(10, 0.03)).toBe(108);
     expect(core.flickerRisk(120, 5)).toBe('low-risk');
     expect(core.synchronousSpeedHz(60, 4)).toBe(30);
-    expect(core.tyreDiameterM('205/55R16')).toBe(0.6319); // core-api.md: '205/55R16' → 0.6319
+    expect(core.tyreDiameterM('205/55R16')).toBe(0.6319); // the contract's example: '205/55R16' → 0.6319
     expect(core.foldedHz(20, 18)).toBe(2);
     expect(core.lowPassGainDb(100, 100, 1)).toBeCloseTo(-3.0103, 4);
   });

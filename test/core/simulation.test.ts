@@ -1,5 +1,5 @@
 /**
- * The core's central relations (physics.md §2–§4) checked against an independent,
+ * The core's central relations (docs/physics.md §2–§4) checked against an independent,
  * brute-force replay (./simulator.ts): positions of the pattern at each sample, in exact
  * fractions, read by nearest-neighbour matching and by grouping flashes. Thousands of
  * random cases per property (fast-check), with a fixed seed so that any failure reproduces.
@@ -341,7 +341,7 @@ function rateOf(c: SceneCase): number {
 
 describe('the brute-force replay', () => {
   it('uses the documented look thresholds of the core', () => {
-    // physics.md §2: 0.25 rpm, 0.45 pitch; §3: 8 images; lookOptions.ts: 1 spacing per second.
+    // docs/physics.md §2: 0.25 rpm, 0.45 pitch; §3: 8 images; lookOptions.ts: 1 spacing per second.
     expect(toNumber(documentedEye.stillHz)).toBeCloseTo(defaultLookOptions.stillHz, 15);
     expect(toNumber(documentedEye.unclearStep)).toBe(defaultLookOptions.unclearStep);
     expect(documentedEye.maxImages).toBe(defaultLookOptions.maxImages);
@@ -361,7 +361,7 @@ describe('the brute-force replay', () => {
     const wheel = replay({ speedHz: frac(2), symmetry: 12, rateHz: frac(24), sampler: 'frames' });
     expect(wheel.look).toBe('still');
     expect(wheel.images).toBe(1);
-    // physics.md §2: exactly half a turn per flash is two images standing still.
+    // docs/physics.md §2: exactly half a turn per flash is two images standing still.
     const half = replay({ speedHz: frac(10), symmetry: 1, rateHz: frac(20), sampler: 'flash' });
     expect([half.look, half.images, half.stepIsTie, half.faithful]).toEqual([
       'still',
@@ -447,7 +447,7 @@ describe('apparentMotion agrees with the replay', () => {
   });
 
   it('counts q images standing still under a flash when n·f/s is exactly p/q, and only q = 1 freezes frames', () => {
-    // physics.md §3: at r = p/q the pattern occupies q distinct positions and repeats every q
+    // docs/physics.md §3: at r = p/q the pattern occupies q distinct positions and repeats every q
     // samples. Integer speed and rate make r exact: s = n·q·m/2^k, f = ±p·m/2^k.
     fc.assert(
       fc.property(
@@ -564,7 +564,7 @@ describe('lockRates agrees with the replay', () => {
   });
 
   it('shows, in apparentMotion and in the exact replay, the image count it lists at every lock', () => {
-    // physics.md §3: "The image count that apparentMotion reports must equal the one lockRates
+    // docs/physics.md §3: "The image count that apparentMotion reports must equal the one lockRates
     // lists." At each listed rate the replay (smallest drift among the still groups, ties to
     // the smaller q) must show q images standing still, and so must apparentMotion.
     fc.assert(
@@ -690,7 +690,7 @@ describe('ratesForApparent agrees with the replay', () => {
     const range: Range = { minHz: gap * c.lowFactor, maxHz: gap * c.lowFactor * c.span };
     return { part: { speedHz: c.speedHz, symmetry: c.symmetry }, apparentHz, range };
   }
-  /** physics.md §4: the look that shows the wanted motion (a = 0: still). */
+  /** docs/physics.md §4: the look that shows the wanted motion (a = 0: still). */
   const wantedLook = (speedHz: number, apparentHz: number) =>
     apparentHz === 0
       ? 'still'
@@ -714,7 +714,7 @@ describe('ratesForApparent agrees with the replay', () => {
           expect(rateHz).toBeLessThanOrEqual(range.maxHz * (1 + 1e-12));
           const view = replay(sceneAt(part, exactValue(rateHz), c.sampler));
           expect(view.stepIsTie).toBe(false);
-          // physics.md §4: one image (no group of several stands still or drifts), a clear direction.
+          // docs/physics.md §4: one image (no group of several stands still or drifts), a clear direction.
           expect([view.images, view.look], `${c.sampler} at ${rateHz} Hz`).toEqual([1, look]);
           const seen = toNumber(view.apparentHz);
           expect(Math.abs(seen - apparentHz)).toBeLessThanOrEqual(
@@ -804,7 +804,7 @@ const SCAN = 16;
  * Speeds worth trying for a part at one rate: both ends of the tolerance interval, the
  * critical points inside it (every lock p/q, where a group stands still; k − ¼ pitch per
  * sample, inside each bin where one image turns backward or its direction is unclear;
- * physics.md §2–§3), then a fine scan. Any misleading stretch of speeds that overlaps the
+ * docs/physics.md §2–§3), then a fine scan. Any misleading stretch of speeds that overlaps the
  * interval contains one of its critical points or one of its ends: around each whole k the
  * stretch from k − 1 + unclearStep (unclear, backward, still) to k plus the nearly-still
  * margin holds the lock k/1; a group of q images drifting (not one image) holds its lock p/q.
@@ -835,7 +835,7 @@ function* speedsToTry(part: Required<Part>, rate: Fraction, qMax: number): Gener
 
 /**
  * For each part, a speed within its tolerance that the replay shows misleadingly at this rate,
- * if any: physics.md §4, anything but faithful or forward as one image at the nearly-still
+ * if any: docs/physics.md §4, anything but faithful or forward as one image at the nearly-still
  * threshold or faster (safeView).
  */
 function misleadingViews(parts: Array<Required<Part>>, rate: Fraction, sampler: Sampler, eye: Eye) {
@@ -957,7 +957,7 @@ describe('rateBands agrees with the replay', () => {
           misleadingView([part], exactValue(nyquist * 3), 'frames', documentedEye),
         ).toBeUndefined();
 
-        // physics.md §4: under a flash the multi-image locks stay misleading at any rate.
+        // docs/physics.md §4: under a flash the multi-image locks stay misleading at any rate.
         const lockHz = F * q;
         const flash = rateBands(
           [part],
@@ -989,7 +989,7 @@ describe('freezeRates agrees with the replay', () => {
   });
 
   it('offers only bands that hold the nominal lock, a setting step wide, where the replay freezes the part and no other part stands still', () => {
-    // physics.md §4: a suggested freeze band contains the part's nominal lock and is at least
+    // docs/physics.md §4: a suggested freeze band contains the part's nominal lock and is at least
     // one setting step wide (1 flash/min, 0.01 frames/s).
     fc.assert(
       fc.property(machineArb, (c) => {

@@ -2,7 +2,7 @@
  * A brute-force stroboscope for the tests (no test cases here).
  *
  * It replays where a turning pattern stands at each sample, with exact fractions (BigInt),
- * and reads the view off that replay the way physics.md §2–§3 says an observer does:
+ * and reads the view off that replay the way docs/physics.md §2–§3 says an observer does:
  * - each feature is matched to the nearest feature of the next sample (the perceived step);
  * - the view is faithful when that nearest feature is the very feature that moved there;
  * - under a flash, flashes q apart form a group of q images; the group looks still when its
@@ -109,12 +109,12 @@ export interface Eye {
   maxImages: number;
   /** A creeping group of q images is still seen as q images below this many image spacings per second. */
   groupSpacingsPerS: Fraction;
-  /** An aliased view seen moving slower than this (rev/s) is nearly still (physics.md §4). */
+  /** An aliased view seen moving slower than this (rev/s) is nearly still (docs/physics.md §4). */
   nearlyStillHz: Fraction;
 }
 
 /**
- * The defaults documented in physics.md §2–§4 and src/core/physics/lookOptions.ts: still at or below
+ * The defaults documented in docs/physics.md §2–§4 and src/core/physics/lookOptions.ts: still at or below
  * 0.25 rpm = 1/240 rev/s, direction unclear from 0.45 pitch per sample, up to 8 images,
  * a creeping group still counted as images below 1 image spacing per second, nearly still
  * below 6 rpm = 1/10 rev/s.
@@ -297,7 +297,7 @@ export interface ReplayView {
 }
 
 /**
- * Replays the scene and reads the look with the precedence of physics.md §2:
+ * Replays the scene and reads the look with the precedence of docs/physics.md §2:
  * a still group of q ≤ maxImages images (frames: q = 1 only) reads 'still'; otherwise a
  * faithful view reads 'true'; otherwise the single-image step reads 'unclear' (≥ unclearStep
  * pitch), 'forward' (same sign as the speed) or 'backward'.
@@ -326,7 +326,7 @@ function read(scene: Scene, eye: Eye): ReplayView {
     faithful,
   };
 
-  // physics.md §3: of the groups whose drift is at or below the still threshold, the one with
+  // docs/physics.md §3: of the groups whose drift is at or below the still threshold, the one with
   // the smallest drift stands still; ties go to the smaller q (a group of 2q flashes near p/q
   // drifts exactly as the group of q, so it never beats it).
   const stillUpTo = scene.sampler === 'flash' ? eye.maxImages : 1;
@@ -374,7 +374,7 @@ function read(scene: Scene, eye: Eye): ReplayView {
 }
 
 /**
- * physics.md §4's safe view: faithful, or forward with one image at or above the nearly-still
+ * docs/physics.md §4's safe view: faithful, or forward with one image at or above the nearly-still
  * threshold. Everything else (still, nearly still, backward, unclear, several images) misleads.
  */
 export function safeView(view: ReplayView): boolean {

@@ -1,4 +1,4 @@
-// Pixel checks on rendered frames (issue 4): locks, blur, rolling readout, direction, fading.
+// Pixel checks on rendered frames: locks, blur, rolling readout, direction, fading.
 import { describe, expect, it } from 'vitest';
 import { apparentMotion, blurPitches, InputError, rollingSkewDegrees } from '../../src/core';
 import { PreviewRenderer } from '../../src/render/preview';
@@ -81,7 +81,7 @@ describe('blur of a pitch or more gives an even ring', () => {
   const features = 6;
   const speedHz = 30;
   const duty = bladeDutyFor(features, probeLook);
-  /** Exposure that sweeps `pitches` pitches: blurPitches is n·|f|·t (physics.md §5). */
+  /** Exposure that sweeps `pitches` pitches: blurPitches is n·|f|·t (docs/physics.md §5). */
   const exposureFor = (pitches: number) => pitches / (features * speedHz);
 
   it('sweeps the pitches asked for (the core agrees: 6 blades at 30 rev/s for 1/180 s is one pitch)', () => {

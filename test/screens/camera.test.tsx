@@ -16,10 +16,10 @@ import {
   shutterAnglesDeg,
   standardLabelsOn,
 } from '../../src/state/cameraPlanning';
-import { corePart } from '../../src/state/check';
-import { defaultSetup, type Setup } from '../../src/state/model';
-import { replaceSetup, setup, startSession } from '../../src/state/setup';
-import { CameraPlanScreen, cameraCsv } from '../../src/screens/camera';
+import { defaultSetup, type Setup, activeCorePart } from '../../src/state/model';
+import { replaceSetup, setup } from '../../src/state/setup';
+import { startSession } from '../../src/state/session';
+import { CameraScreen, cameraCsv } from '../../src/screens/camera';
 import { field, tableRows, type } from '../helpers/screen-queries';
 
 beforeAll(async () => {
@@ -29,8 +29,8 @@ beforeAll(async () => {
 beforeEach(() => {
   replaceSetup(defaultSetup);
   resetCameraEntries();
-  openScreen('camera-plan');
-  render(<CameraPlanScreen />);
+  openScreen('camera');
+  render(<CameraScreen />);
 });
 
 afterEach(cleanup);
@@ -49,7 +49,7 @@ function wheel(): Setup {
 describe('the camera plan screen', () => {
   test('a 12-spoke wheel at 2 rev/s freezes at 24 frames/s, and 24 fps heads the table', () => {
     act(() => replaceSetup(wheel()));
-    const plan = cameraPlan(abilities.value, corePart(setup.value), { kind: 'freeze' });
+    const plan = cameraPlan(abilities.value, activeCorePart(setup.value), { kind: 'freeze' });
     expect(plan.settings.length).toBeGreaterThan(0);
     expect(plan.settings.every((s) => s.frameRate === 24)).toBe(true);
     expect(screen.getByTestId('plan-headline').textContent).toBe(
@@ -60,7 +60,7 @@ describe('the camera plan screen', () => {
     expect(first.textContent).toContain('Looks still');
     expect(first.textContent).toContain(formatExposure(plan.settings[0].exposureS));
     expect(rows()).toHaveLength(plan.settings.length);
-    // Freezing always brings the caution that the part still turns (physics.md §10).
+    // Freezing always brings the caution that the part still turns (docs/physics.md §10).
     expect(screen.getByTestId('safety-notice')).toBeTruthy();
   });
 
@@ -87,7 +87,7 @@ describe('the camera plan screen', () => {
   });
 
   test('when nothing freezes the default fan, the screen says which rates would and lists the near misses', () => {
-    // 6 blades at 1770 rpm pass 177 times a second; 177/k fps would freeze it (physics.md §3), none is a camera rate.
+    // 6 blades at 1770 rpm pass 177 times a second; 177/k fps would freeze it (docs/physics.md §3), none is a camera rate.
     expect(screen.getByTestId('plan-headline').textContent).toBe(
       'No setting of this camera reaches the goal',
     );
@@ -103,7 +103,7 @@ describe('the camera plan screen', () => {
     const plan = cameraPlanning.result.value!;
     expect(plan.settings).toHaveLength(0);
     expect(rows()).toHaveLength(plan.nearMisses.length);
-    // Every setting in the table is one of the camera's own rates (issue 8 item 6).
+    // Every setting in the table is one of the camera's own rates.
     for (const s of plan.nearMisses) expect(abilities.value.frameRatesHz).toContain(s.frameRate);
     expect(rows().length).toBeGreaterThan(0);
   });
@@ -112,7 +112,7 @@ describe('the camera plan screen', () => {
     type('Other frame rates', '59 88.5');
     expect(otherRatesHz.value).toEqual([59, 88.5]);
     // The phone's 25 ms readout turns the fan 360·29.5·0.025 = 265.5°, 4.4 blade pitches: the
-    // blades break into pieces (physics.md §5), so nothing freezes yet, and the screen says why.
+    // blades break into pieces (docs/physics.md §5), so nothing freezes yet, and the screen says why.
     expect(screen.getByTestId('plan-headline').textContent).toBe(
       'No setting of this camera reaches the goal',
     );
@@ -131,7 +131,7 @@ describe('the camera plan screen', () => {
   });
 
   test('freezing a 2-blade propeller at 6000 rpm with a phone at 180°: every sub-multiple is listed and the blur and readout are named', () => {
-    // Issue 8 item 7. 200 passes a second; in 24–240 fps the sub-multiples are 200/k, k = 1…8 (physics.md §3).
+    // 200 passes a second; in 24–240 fps the sub-multiples are 200/k, k = 1…8 (docs/physics.md §3).
     act(() =>
       replaceSetup({
         ...structuredClone(defaultSetup),
@@ -144,7 +144,7 @@ describe('the camera plan screen', () => {
     expect(text).toContain(
       'between 24 and 240 fps: 200 fps, 100 fps, 66.667 fps, 50 fps, 40 fps, 33.333 fps, 28.571 fps, 25 fps. The camera offers 25 fps.',
     );
-    // 180° at 25 fps is 1/50 s; 2° of turn at 100 rev/s needs 1/18,000 s (physics.md §5).
+    // 180° at 25 fps is 1/50 s; 2° of turn at 100 rev/s needs 1/18,000 s (docs/physics.md §5).
     expect(text).toMatch(
       /Sharpness: no setting of this camera meets it\. Sharp features need an exposure of 1\/18,000 s or shorter/,
     );
@@ -181,7 +181,7 @@ describe('the camera plan screen', () => {
     expect(screen.getByTestId('plan-headline').textContent).toBe(
       'No setting of this camera reaches the goal',
     );
-    // physics.md §4: s = n·|f − a|/k = 12 · (2 − 1/30) / k = 23.6/k frames/s shows a 2 rpm
+    // docs/physics.md §4: s = n·|f − a|/k = 12 · (2 − 1/30) / k = 23.6/k frames/s shows a 2 rpm
     // forward turn: below the phone's slowest rate, so no rate it offers does.
     expect(screen.getByTestId('plan-none').textContent).toContain(
       'No frame rate between 24 and 240 fps shows that slow forward turn.',
@@ -207,7 +207,7 @@ describe('the camera plan screen', () => {
     const before = cameraPlanning.result.value;
     expect(before?.nearMisses.every((s) => s.frameRate === 240)).toBe(true);
     fireEvent.click(screen.getByLabelText('240'));
-    // physics.md §10: the answer is withdrawn with the core's words; the table stays, marked not current.
+    // docs/physics.md §10: the answer is withdrawn with the core's words; the table stays, marked not current.
     expect(screen.getByTestId('withdrawn').textContent).toMatch(/at least one frame rate/);
     expect(screen.getByTestId('not-current')).toBeTruthy();
     expect(cameraPlanning.result.value).toBe(before);

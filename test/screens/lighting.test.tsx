@@ -6,8 +6,10 @@ import { flickerLimits, lightingCheck, svm } from '../../src/core';
 import { formatNumber, formatPercent } from '../../src/words/format';
 import { lampOf, lighting, litPartsOf } from '../../src/state/lighting';
 import { defaultSetup, type Setup } from '../../src/state/model';
-import { replaceSetup, setup, speedUnit, startSession } from '../../src/state/setup';
-import { LightingScreen, lightingCsv } from '../../src/screens/lighting';
+import { replaceSetup, setup, speedUnit } from '../../src/state/setup';
+import { startSession } from '../../src/state/session';
+import { LightingScreen, lightingCsv, partRowsOf } from '../../src/screens/lighting';
+import { lightingSummary, partWords } from '../../src/words/lighting';
 import { field, tableRows, type } from '../helpers/screen-queries';
 
 beforeAll(async () => {
@@ -35,14 +37,14 @@ function onePart(name: string, speedRpm: number, features: number, tolerancePerc
 
 describe('the lighting check screen', () => {
   test('the default fan under 100 Hz flicker turns backward where people can see it: a hazard, shouted', () => {
-    // physics.md §2: r = 6 · 29.5 / 100 = 1.77, k = 2, e = −0.23 pitch, a = e·s/n = −3.833 rev/s = −230 rpm.
+    // docs/physics.md §2: r = 6 · 29.5 / 100 = 1.77, k = 2, e = −0.23 pitch, a = e·s/n = −3.833 rev/s = −230 rpm.
     const expected = lightingCheck(lampOf(setup.value), litPartsOf(setup.value));
     expect(expected.parts[0].look).toBe('backward');
     expect(expected.parts[0].apparentRpm).toBeCloseTo(-230, 9);
     expect(screen.getByTestId('lighting-headline').textContent).toBe(
       'Hazard: a part can look still or backward',
     );
-    expect(screen.getByTestId('lighting-summary').textContent).toBe(expected.summary);
+    expect(screen.getByTestId('lighting-summary').textContent).toBe(lightingSummary(expected));
     // Said once, loudly, at the top: the answer box is the alert, naming the part.
     const shout = screen.getByTestId('lighting-hazard');
     expect(shout.getAttribute('role')).toBe('alert');
@@ -52,9 +54,9 @@ describe('the lighting check screen', () => {
     expect(row.getAttribute('data-state')).toBe('hazard');
     expect(row.textContent).toContain('Turns backward (230 rpm)');
     expect(within(row).getByTestId('hazard-flag').textContent).toBe('HAZARD');
-    expect(row.textContent).toContain(expected.parts[0].text);
+    expect(row.textContent).toContain(partWords(expected.parts[0], expected));
     expect(screen.getByTestId('safety-notice')).toBeTruthy();
-    // 100 flashes a second lies above the 3–60 range of physics.md §10.
+    // 100 flashes a second lies above the 3–60 range of docs/physics.md §10.
     expect(screen.queryByTestId('photosensitivity-notice')).toBeNull();
   });
 
@@ -189,16 +191,7 @@ describe('the lighting check screen', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Add a part' }));
     type('Name of the chosen part', 'Pulley, drive side');
     const result = lighting.result.value!;
-    const text = lightingCsv(
-      result,
-      result.parts.map((part, i) => ({
-        part,
-        speedRpm: setup.value.parts[i].speedRpm,
-        features: setup.value.parts[i].features,
-        tolerancePercent: setup.value.parts[i].tolerancePercent,
-      })),
-      30,
-    );
+    const text = lightingCsv(result, partRowsOf(result, setup.value), 30);
     const lines = text.split('\r\n');
     expect(lines[0]).toMatch(/^part,speed \(rpm\),blades or marks/);
     expect(lines[1]).toMatch(/^Fan,1770,6,1,100,30,elevated,/);
@@ -214,7 +207,7 @@ describe('the lighting check screen', () => {
   });
 
   test('the hazard is said once: one answer box naming it, then the single stillness caution, no third box', () => {
-    // Issue 8 item 9: the same hazard was shown in three stacked boxes (answer, shout, caution).
+    // The same hazard once stood in three stacked boxes (answer, shout, caution).
     const panel = screen.getByRole('region', { name: 'Under this light' });
     expect([...panel.children].map((e) => e.tagName)).toEqual(['H2', 'DIV']);
     expect(panel.querySelector('[data-testid="lighting-hazard"]')).toBe(panel.children[1]);
@@ -228,7 +221,7 @@ describe('the lighting check screen', () => {
   });
 
   test('at 0 % modulation no part looks still: a two-jaw chuck at 3000 rpm shows its true motion', () => {
-    // Steady light samples nothing (physics.md §6); at 30 % the same chuck stands still under 100 Hz.
+    // Steady light samples nothing (docs/physics.md §6); at 30 % the same chuck stands still under 100 Hz.
     act(() => replaceSetup(onePart('Chuck', 3000, 2)));
     expect(rows()[0].textContent).toContain('Looks still');
     type('Modulation (percent flicker)', '0');

@@ -2,7 +2,8 @@
 import 'fake-indexeddb/auto';
 import { act, cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
-import { ALIAS_AFTER_CONVERTER_NOTE, loggerPlan, lowPassGainDb, rcCutoffHz } from '../../src/core';
+import { loggerPlan, lowPassGainDb, rcCutoffHz } from '../../src/core';
+import { ALIAS_AFTER_CONVERTER_NOTE, proposalWords } from '../../src/words/logger';
 import { formatNumber, formatPrecise } from '../../src/words/format';
 import {
   bladeCounts,
@@ -14,7 +15,8 @@ import {
   sampleHz,
 } from '../../src/state/loggerPlanning';
 import { defaultSetup, type Setup } from '../../src/state/model';
-import { replaceSetup, setup, startSession } from '../../src/state/setup';
+import { replaceSetup, setup } from '../../src/state/setup';
+import { startSession } from '../../src/state/session';
 import { LoggerScreen, loggerCsv } from '../../src/screens/logger';
 import { field, tableRows, type } from '../helpers/screen-queries';
 
@@ -49,7 +51,7 @@ function shaft(rpm: number): Setup {
 
 describe('the data logger screen', () => {
   test('20 Hz sampled 18 times a second lands at 2 Hz: an alias with no filter, marked as failing', () => {
-    // physics.md, facts of the trade (common practice): a 20 Hz signal sampled at 18/s looks like 2 Hz.
+    // docs/physics.md, facts of the trade (common practice): a 20 Hz signal sampled at 18/s looks like 2 Hz.
     act(() => replaceSetup(shaft(1200)));
     type('Shaft harmonics', '1');
     type('Sample rate', '18');
@@ -82,16 +84,21 @@ describe('the data logger screen', () => {
   test('the core doc example: 25 Hz shaft to 10×, 16 bits, 1000 samples/s, no filter; its proposal applied with one tap makes the record clean', () => {
     act(() => replaceSetup(shaft(1500)));
     type('Shaft harmonics', '10');
-    const plan = loggerPlan({ shaftHz: 25, harmonics: 10 }, 1000, { kind: 'none' }, 16);
+    const plan = loggerPlan({
+      tones: { shaftHz: 25, harmonics: 10 },
+      sampleHz: 1000,
+      filter: { kind: 'none' },
+      bits: 16,
+    });
     expect(plan.proposal?.sampleHz).toBe(1600);
     expect(plan.proposal?.order).toBe(8);
-    expect(screen.getByTestId('logger-proposal-text').textContent).toBe(plan.proposal!.why);
+    expect(screen.getByTestId('logger-proposal-text').textContent).toBe(proposalWords(plan));
     // Nothing aliases at 1000 samples/s, but nothing stops higher content from folding in.
     expect(rows().every((r) => r.textContent?.includes('No'))).toBe(true);
     // fs − fmax = 1000 − 250 = 750 Hz folds onto the band: said once, in the guard line.
     expect(screen.getByTestId('logger-guard').textContent).toContain('750 Hz or above');
     expect(screen.getByTestId('logger-guard').textContent).toContain('not enough');
-    expect(plan.notes.some((n) => n.startsWith('Content at 750 Hz and above folds'))).toBe(true);
+    expect(plan.notes).toContain('guard-short');
     expect(screen.getByTestId('logger-notes').textContent).not.toContain('Content at 750 Hz');
     fireEvent.click(screen.getByRole('button', { name: 'Use this sample rate and filter' }));
     expect(sampleHz.value).toBe(1600);
@@ -176,7 +183,7 @@ describe('the data logger screen', () => {
   test('a shaft that does not turn: the core refuses it and the last table stays with its message', () => {
     const before = loggerPlanning.result.value;
     type('Shaft speed', '0');
-    // physics.md §10: the answer is withdrawn with the core's words; the table stays, marked not current.
+    // docs/physics.md §10: the answer is withdrawn with the core's words; the table stays, marked not current.
     expect(screen.getByTestId('withdrawn').textContent).toMatch(/shaft speed/);
     expect(screen.getByTestId('not-current')).toBeTruthy();
     expect(loggerPlanning.result.value).toBe(before);

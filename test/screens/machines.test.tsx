@@ -15,7 +15,8 @@ import { currentScreen, openScreen } from '../../src/state/navigation';
 import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';
 import { exportAll, machines } from '../../src/state/machines';
 import { defaultSetup } from '../../src/state/model';
-import { openMachineId, replaceSetup, setup, startSession } from '../../src/state/setup';
+import { replaceSetup, setup } from '../../src/state/setup';
+import { openMachineId, startSession } from '../../src/state/session';
 
 beforeAll(async () => {
   await startSession();

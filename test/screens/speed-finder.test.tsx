@@ -1,5 +1,5 @@
 // @vitest-environment happy-dom
-// The speed finder screen: the usual strobe procedure step by step (physics.md §7), the
+// The speed finder screen: the usual strobe procedure step by step (docs/physics.md §7), the
 // candidate table, the proposed rate, saving the speed found, and bad input.
 // Invented scenario: a 6-blade extract fan at the (fictional) Harrowgate Tile Works.
 import 'fake-indexeddb/auto';
@@ -14,11 +14,13 @@ import {
 } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
 import { speedFinderSteps } from '../../src/core';
-import { App, toolScreens } from '../../src/app/app';
+import { App } from '../../src/app/app';
+import { toolScreens } from '../../src/app/screen-list';
 import { openScreen } from '../../src/state/navigation';
 import { machines, saveMachine } from '../../src/state/machines';
 import { defaultSetup, type Setup } from '../../src/state/model';
-import { flashUnit, openMachineId, replaceSetup, setup, startSession } from '../../src/state/setup';
+import { flashUnit, replaceSetup, setup } from '../../src/state/setup';
+import { openMachineId, startSession } from '../../src/state/session';
 import {
   clearReadings,
   defaultExpectation,
@@ -27,7 +29,8 @@ import {
   readings,
   withMeasuredSpeed,
 } from '../../src/state/speedFinder';
-import { finderCsv } from '../../src/words/speedFinder';
+import { finderCsv } from '../../src/screens/speed-finder/csv';
+import { speedChangeWords, stepInstruction } from '../../src/words/speedFinder';
 import { field, type } from '../helpers/screen-queries';
 
 beforeAll(async () => {
@@ -78,7 +81,7 @@ function rows(): string[] {
 describe('the speed finder', () => {
   test('before any reading it says to start at the top of the strobe, and both cautions always show', () => {
     const step = speedFinderSteps({ readings: [], symmetry: 6, strobeRange: STROBE });
-    expect(instruction()).toBe(step.instruction);
+    expect(instruction()).toBe(stepInstruction(step));
     expect(instruction()).toMatch(
       /^Set the strobe to 12000 flashes\/min \(the top of the strobe's range\)/,
     );
@@ -90,7 +93,7 @@ describe('the speed finder', () => {
   test('the first single image at 1780 fpm proposes the double-image check at 3560 fpm', () => {
     record('1780', 1);
     expect(readings.value).toEqual([{ id: expect.any(Number), rateFpm: 1780, images: 1 }]);
-    // physics.md §7: coming down from the top, the first single image is at n·f; twice it shows two images.
+    // docs/physics.md §7: coming down from the top, the first single image is at n·f; twice it shows two images.
     expect(instruction()).toMatch(
       /^Now set 3560 flashes\/min \(twice the single-image rate 1780 flashes\/min\)/,
     );
@@ -103,7 +106,7 @@ describe('the speed finder', () => {
       /593\.3 rpm.*Ruled out.*3560 flashes\/min on the way down.*a single image stands still/,
     );
     // The next reading's row starts at the proposed rate; the image count is left to the
-    // technician, never filled in from the prediction (physics.md §7).
+    // technician, never filled in from the prediction (docs/physics.md §7).
     expect(field('Rate where it stood still').value).toBe('3560');
     expect((screen.getByLabelText('Images standing still') as HTMLSelectElement).value).toBe('');
   });
@@ -123,7 +126,7 @@ describe('the speed finder', () => {
     type('Blades or marks on the part', '1');
     record('1800', 1);
     record('1200', 1);
-    // physics.md §7: 1800 · 1200 / (1800 − 1200) = 3600 flashes/min, one mark: 3600 rpm.
+    // docs/physics.md §7: 1800 · 1200 / (1800 − 1200) = 3600 flashes/min, one mark: 3600 rpm.
     expect(rows()[0]).toMatch(/^3,600 rpmLikeliest/);
   });
 
@@ -327,9 +330,9 @@ describe('keeping the speed found', () => {
       features: 1,
       tolerancePercent: 1,
     });
-    // Belt: f2 = f1 · D1/D2 (physics.md §8): 1470 · 100/250 = 588 rpm.
+    // Belt: f2 = f1 · D1/D2 (docs/physics.md §8): 1470 · 100/250 = 588 rpm.
     expect(next.parts[1].speedRpm).toBeCloseTo(588, 9);
-    expect(changes).toEqual([
+    expect(changes.map(speedChangeWords)).toEqual([
       'Motor: speed 1,455 rpm → 1,470 rpm.',
       'Motor no longer takes its speed from the motor nameplate.',
       'Fan, driven from it: speed 582 rpm → 588 rpm.',
@@ -347,7 +350,11 @@ describe('keeping the speed found', () => {
       features: 3,
       tolerancePercent: 1,
     });
-    expect(changes).toContain('Fan is no longer worked out from the drive from Motor.');
-    expect(changes).toContain('Fan: features 6 → 3.');
+    expect(changes).toContainEqual({ kind: 'leaves-drive', part: 'Fan', driver: 'Motor' });
+    expect(changes).toContainEqual({ kind: 'features', part: 'Fan', from: 6, to: 3 });
+    expect(changes.map(speedChangeWords)).toContain(
+      'Fan is no longer worked out from the drive from Motor.',
+    );
+    expect(changes.map(speedChangeWords)).toContain('Fan: features 6 → 3.');
   });
 });

@@ -15,13 +15,15 @@ import {
   noStillRates,
   wheelSpeedHz,
 } from '../../src/core';
-import { App, toolScreens } from '../../src/app/app';
+import { App } from '../../src/app/app';
+import { toolScreens } from '../../src/app/screen-list';
 import { formatNumber } from '../../src/words/format';
 import { openScreen } from '../../src/state/navigation';
 import { formatRate } from '../../src/words/rates';
 import { deriveParts, listedRange, MAX_LISTED_SPANS } from '../../src/state/chain';
 import { defaultSetup } from '../../src/state/model';
-import { flashUnit, replaceSetup, setup, startSession } from '../../src/state/setup';
+import { flashUnit, replaceSetup, setup } from '../../src/state/setup';
+import { startSession } from '../../src/state/session';
 import {
   freezeBandsShown,
   freezeRateToSet,
@@ -52,7 +54,7 @@ beforeEach(() => {
   replaceSetup(defaultSetup);
   flashUnit.value = 'fpm';
   charts.length = 0;
-  openScreen('machine-chain');
+  openScreen('whole-machine');
   render(<App />);
 });
 
@@ -89,7 +91,7 @@ describe('the whole machine', () => {
     // IEC 60034-1: 4 poles on 50 Hz = 1500 rpm synchronous; 3 % slip: 1455 rpm; ±1 % tolerance.
     expect(motorSpeedHz(50, 4, 0.03) * 60).toBeCloseTo(1455, 9);
     expect(speedOf(0)).toBe('1,455 rpm ± 1 % (1,440 – 1,470 rpm)');
-    // Belt (physics.md §8): 1455 · 100/250 = 582 rpm, the tolerance carried along.
+    // Belt (docs/physics.md §8): 1455 · 100/250 = 582 rpm, the tolerance carried along.
     expect(beltSpeedHz(1455 / 60, 0.1, 0.25) * 60).toBeCloseTo(582, 9);
     expect(speedOf(1)).toBe('582 rpm ± 1 % (576.2 – 587.8 rpm)');
     // Saved with the set-up: the fan's drive and the speed it gives.
@@ -169,7 +171,7 @@ describe('the whole machine', () => {
   });
 
   test('offers no freeze band cut off from the chosen part’s nominal lock: the chuck beside a fan', () => {
-    // Reported case (physics.md §4): a 3-jaw chuck at 2000 rpm ±1 % and a 6-blade fan at 990 rpm
+    // Reported case (docs/physics.md §4): a 3-jaw chuck at 2000 rpm ±1 % and a 6-blade fan at 990 rpm
     // ±1 % under a strobe of 5400–6600 flashes/min. The fan stands still up to 6000.9 flashes/min,
     // over the chuck's lock at 6000; what is left of the chuck's still span above it misses the
     // lock: at 2000 rpm the chuck turns backward there. Nothing is offered, and the screen says why.
@@ -217,7 +219,7 @@ describe('the whole machine', () => {
       type(1, 'Driver pulley', text);
       const input = card(1).getByLabelText('Driver pulley', { exact: true });
       expect(input.getAttribute('aria-invalid'), text).toBe('true');
-      // physics.md §10: a speed carried from a refused entry is not shown as current.
+      // docs/physics.md §10: a speed carried from a refused entry is not shown as current.
       expect(speedOf(1), text).toBe('Not current: fix Fan: Driver pulley first.');
       expect(screen.getByTestId('withdrawn').textContent, text).toMatch(
         /^No answer until Fan: Driver pulley is fixed/,
@@ -248,7 +250,7 @@ describe('the whole machine', () => {
     buildMotorBeltFan();
     type(0, 'Tolerance', '45');
     type(1, 'Belt slip', '20');
-    // physics.md §10: the answer is withdrawn with the core's words; the results are marked not current.
+    // docs/physics.md §10: the answer is withdrawn with the core's words; the results are marked not current.
     expect(screen.getByTestId('withdrawn').textContent).toMatch(/uncertain by more than ±50 %/);
     expect(screen.getByTestId('not-current')).toBeTruthy();
     expect((setup.value.parts[1].drive as { slipPercent: number }).slipPercent).toBe(20);

@@ -149,7 +149,7 @@ describe('saved set-ups carry drives and wheels', () => {
 describe('speeds along the drives', () => {
   test('each part gets the band its chain gives, as the core computes it', () => {
     const parts = deriveParts(conveyor());
-    // The same chain straight through the core: physics.md §8 (motor 120·fm/P, belt D1/D2, gears z1/z2).
+    // The same chain straight through the core: docs/physics.md §8 (motor 120·fm/P, belt D1/D2, gears z1/z2).
     const core = driveChain({
       root: { kind: 'fixed', speedHz: motorSpeedHz(50, 4, 0.03), tolerance: 0.01 },
       parts: [

@@ -9,8 +9,14 @@ import {
   rateBands,
   rollingSkewDegrees,
 } from '../../src/core';
-import { computeCheck, corePart, tryCheck, verdictOf } from '../../src/state/check';
-import { defaultSetup, type Setup } from '../../src/state/model';
+import { computeCheck, tryCheck, verdictOf } from '../../src/state/check';
+import { activeCorePart as corePart, defaultSetup, type Setup } from '../../src/state/model';
+import {
+  CHECK_NOTE_WORDS,
+  creepMissingWords,
+  narrowLocksWords,
+  verdictHeadline,
+} from '../../src/words/check';
 
 function setupWith(change: Partial<Setup> & { part?: Partial<Setup['parts'][number]> }): Setup {
   const { part, ...rest } = change;
@@ -34,7 +40,7 @@ describe('the verdict', () => {
     // Wikipedia, "Stroboscopic effect": 60 rev/s lit at 61 flashes/s seems to turn backwards at 1 rev/s.
     const r = computeCheck(disc(61 * 60));
     expect(r.verdict.kind).toBe('backward');
-    expect(r.verdict.headline).toBe('Turning backward');
+    expect(verdictHeadline(r.verdict)).toBe('Turning backward');
     expect(r.verdict.apparentRpm).toBeCloseTo(-60, 9);
     expect(r.verdict.trueRpm).toBe(3600);
     expect(r.verdict.trust).toBe('danger');
@@ -44,7 +50,7 @@ describe('the verdict', () => {
     // Wikipedia, "Stroboscopic effect": at 59 flashes/s it seems to turn forwards at 1 rev/s.
     const r = computeCheck(disc(59 * 60));
     expect(r.verdict.kind).toBe('creeping');
-    expect(r.verdict.headline).toBe('Creeping forward');
+    expect(verdictHeadline(r.verdict)).toBe('Creeping forward');
     expect(r.verdict.apparentRpm).toBeCloseTo(60, 9);
     expect(r.verdict.trust).toBe('caution');
   });
@@ -58,16 +64,16 @@ describe('the verdict', () => {
     });
     const r = computeCheck(s);
     expect(r.verdict.kind).toBe('still');
-    expect(r.verdict.headline).toBe('Looks still');
+    expect(verdictHeadline(r.verdict)).toBe('Looks still');
     expect(r.showSafety).toBe(true);
   });
 
   test('half a turn per flash shows two images standing still', () => {
-    // physics.md §2: exactly half a turn per flash is two images standing still.
+    // docs/physics.md §2: exactly half a turn per flash is two images standing still.
     const r = computeCheck(disc(120 * 60));
     expect(r.verdict.kind).toBe('images');
     expect(r.verdict.images).toBe(2);
-    expect(r.verdict.headline).toBe('2 images, standing still');
+    expect(verdictHeadline(r.verdict)).toBe('2 images, standing still');
   });
 
   test('a sampler above twice the pattern frequency shows true motion, and no caution', () => {
@@ -95,7 +101,7 @@ describe('the verdict', () => {
         still: /still|images/,
         unclear: 'unclear',
       };
-      // Creeping groups of images read as images whatever the single-image look (physics.md §3).
+      // Creeping groups of images read as images whatever the single-image look (docs/physics.md §3).
       const want = m.images > 1 && m.look !== 'still' ? 'images' : words[m.look];
       if (typeof want === 'string') expect(v.kind).toBe(want);
       else expect(v.kind).toMatch(want);
@@ -105,13 +111,13 @@ describe('the verdict', () => {
 
   test('three marks creeping under a strobe above the Nyquist rate read as images, with the safety notice', () => {
     // One mark at 10 rev/s under 30.5 flashes/s: r = 0.328, near 1/3, the group of three drifts
-    // at 10 − 30.5/3 = −1/6 rev/s (physics.md §3).
+    // at 10 − 30.5/3 = −1/6 rev/s (docs/physics.md §3).
     const part = { speedHz: 10, symmetry: 1, tolerance: 0 };
     const m = apparentMotion(part, 30.5, { sampler: 'flash' });
     expect(m.look).toBe('true');
     expect(m.images).toBe(3);
     const v = verdictOf(m, part);
-    expect(v.headline).toBe('3 images, creeping backward');
+    expect(verdictHeadline(v)).toBe('3 images, creeping backward');
     expect(v.apparentRpm).toBeCloseTo(-10, 9);
     expect(v.trust).toBe('danger');
   });
@@ -130,7 +136,7 @@ describe('the verdict', () => {
 
 describe('the cautions', () => {
   test('the safety notice shows for every aliased view, a forward creep included, and not for true motion', () => {
-    // physics.md §4: every view that is not faithful carries the stillness caution of §10.
+    // docs/physics.md §4: every view that is not faithful carries the stillness caution of §10.
     expect(computeCheck(disc(3600)).showSafety).toBe(true); // still
     expect(computeCheck(disc(61 * 60)).showSafety).toBe(true); // backward
     expect(computeCheck(disc(59 * 60)).showSafety).toBe(true); // creeping forward at 60 rpm
@@ -138,8 +144,8 @@ describe('the cautions', () => {
     expect(computeCheck(disc(121 * 60)).showSafety).toBe(false); // r < 0.5: faithful (Shannon 1949)
   });
 
-  test('the fan of issue 8 creeping forward at 2 rpm carries the safety notice', () => {
-    // 6 blades at 1750 rpm under 1748 flashes/min: a = (1750 − 1748)/60 rev/s (physics.md §2).
+  test('a fan creeping forward at 2 rpm carries the safety notice', () => {
+    // 6 blades at 1750 rpm under 1748 flashes/min: a = (1750 − 1748)/60 rev/s (docs/physics.md §2).
     const r = computeCheck(
       setupWith({
         part: { speedRpm: 1750, features: 6, tolerancePercent: 0 },
@@ -154,7 +160,7 @@ describe('the cautions', () => {
   });
 
   test('several images above the Nyquist rate carry the safety notice although the sampler is faithful', () => {
-    // One mark at 10 rev/s under 30.5 flashes/s: three images creep (physics.md §3).
+    // One mark at 10 rev/s under 30.5 flashes/s: three images creep (docs/physics.md §3).
     const r = computeCheck(
       setupWith({
         part: { speedRpm: 600, features: 1, tolerancePercent: 0 },
@@ -168,7 +174,7 @@ describe('the cautions', () => {
   });
 
   test('the photosensitivity caution shows for a flash rate from 3 to 60 per second', () => {
-    // physics.md §10, WCAG 2.x success criterion 2.3.1 counts from three flashes per second.
+    // docs/physics.md §10, WCAG 2.x success criterion 2.3.1 counts from three flashes per second.
     expect(computeCheck(disc(3 * 60)).showPhotosensitivity).toBe(true);
     expect(computeCheck(disc(60 * 60)).showPhotosensitivity).toBe(true);
     expect(computeCheck(disc(2.9 * 60)).showPhotosensitivity).toBe(false);
@@ -214,17 +220,18 @@ describe('rates to try', () => {
   });
 
   test('leaves out a lock whose freezing band is narrower than one flash per minute, and says why', () => {
-    // physics.md §4: a suggested rate is at least one setting step wide. One mark at exactly
+    // docs/physics.md §4: a suggested rate is at least one setting step wide. One mark at exactly
     // 3600 rpm (no tolerance) freezes within 0.25 rpm of each single-image lock: 0.5 flash/min
     // wide, left out. The double image at 7200 flashes/min drifts half as fast for the same
     // rate error: 2 · 2 · 0.25 = 1 flash/min wide, exactly one step, and kept.
     const r = computeCheck(disc(3000));
     expect(r.locks.map((l) => [l.rateHz, l.images])).toEqual([[120, 2]]);
-    expect(r.locksNote).toMatch(/less than one flash per minute/);
+    expect(r.narrowLocksLeftOut).toBe(true);
+    expect(narrowLocksWords(r.sampler)).toMatch(/less than one flash per minute/);
     // With ±1 % the same locks are 2 % of their rate wide, and listed.
     const wide = computeCheck(disc(3000, {}, 1));
     expect(wide.locks.length).toBeGreaterThan(0);
-    expect(wide.locksNote).toBeUndefined();
+    expect(wide.narrowLocksLeftOut).toBe(false);
   });
 
   test('a camera only suggests single-image rates', () => {
@@ -233,7 +240,7 @@ describe('rates to try', () => {
     expect(r.locks.every((l) => l.images === 1)).toBe(true);
   });
 
-  test('the creep rates show one image creeping forward under the sampler in use (physics.md §4)', () => {
+  test('the creep rates show one image creeping forward under the sampler in use (docs/physics.md §4)', () => {
     // The default fan, 6 blades at 1770 rpm, creeping at 2 rpm under a strobe: every rate offered
     // shows one image creeping forward, never a group of images standing still.
     const r = computeCheck(setupWith({ creepRpm: 2 }));
@@ -249,7 +256,7 @@ describe('rates to try', () => {
   });
 
   test('the creep rate shows the part creeping forward at the wanted speed', () => {
-    // physics.md §4 worked check: f = 30 rev/s, one mark, creep 0.5 rev/s forward → 29.5 flashes/s.
+    // docs/physics.md §4 worked check: f = 30 rev/s, one mark, creep 0.5 rev/s forward → 29.5 flashes/s.
     const s = setupWith({
       part: { speedRpm: 1800, features: 1, tolerancePercent: 0 },
       samplerKind: 'strobe',
@@ -265,8 +272,12 @@ describe('rates to try', () => {
   });
 
   test('explains why there is no creep rate for a part standing still or a creep faster than the part', () => {
-    expect(computeCheck(setupWith({ part: { speedRpm: 0 } })).creepNote).toMatch(/not turning/);
-    expect(computeCheck(setupWith({ creepRpm: 5000 })).creepNote).toMatch(
+    const still = computeCheck(setupWith({ part: { speedRpm: 0 } }));
+    expect(still.creepMissing).toBe('not-turning');
+    expect(creepMissingWords(still.creepMissing!, still.creepRpm)).toMatch(/not turning/);
+    const fast = computeCheck(setupWith({ creepRpm: 5000 }));
+    expect(fast.creepMissing).toBe('creep-too-fast');
+    expect(creepMissingWords(fast.creepMissing!, fast.creepRpm)).toMatch(
       /slower than the true speed/,
     );
   });
@@ -280,12 +291,12 @@ describe('safe bands', () => {
     expect(r.bands.all).toEqual(bands);
     expect(r.bands.partial).toBe(false);
     expect(r.bands.safeNearby.every((b) => b.safe)).toBe(true);
-    // physics.md §4: every band suggested is at least one flash per minute wide.
+    // docs/physics.md §4: every band suggested is at least one flash per minute wide.
     expect(r.bands.safeNearby.every((b) => (b.toHz - b.fromHz) * 60 >= 1)).toBe(true);
   });
 
   test('keep the nearly-still margin: a 3-jaw chuck at 2000 rpm ±1 % is not safe at 5939 flashes/min', () => {
-    // Reported case: at 1980 rpm (inside ±1 %) the chuck creeps at 0.33 rpm there (physics.md §4).
+    // Reported case: at 1980 rpm (inside ±1 %) the chuck creeps at 0.33 rpm there (docs/physics.md §4).
     const s = setupWith({
       part: { speedRpm: 2000, features: 3, tolerancePercent: 1 },
       samplerKind: 'strobe',
@@ -307,7 +318,7 @@ describe('safe bands', () => {
   });
 
   test('for a camera, every rate above twice the pattern frequency with tolerance is safe', () => {
-    // physics.md §4: for frames every rate > 2·n·|f|·(1+u) is safe.
+    // docs/physics.md §4: for frames every rate > 2·n·|f|·(1+u) is safe.
     const s = setupWith({
       part: { speedRpm: 600, features: 2, tolerancePercent: 5 },
       samplerKind: 'camera',
@@ -367,7 +378,8 @@ describe('camera and lighting read-outs', () => {
     const r = computeCheck(s);
     expect(r.camera?.exposureS).toBeCloseTo(1 / 30, 15);
     expect(r.camera?.shutterAngleDeg).toBeCloseTo(360, 9);
-    expect(r.notes.join(' ')).toMatch(/longer than one frame/);
+    expect(r.notes).toEqual(['exposure-capped']);
+    expect(CHECK_NOTE_WORDS['exposure-capped']).toMatch(/longer than one frame/);
   });
 
   test("the lighting read-out is the core's IEEE Std 1789-2015 class", () => {
@@ -391,7 +403,8 @@ describe('refused set-ups', () => {
   test("a strobe rate outside the strobe's own range is noted", () => {
     const r = computeCheck(setupWith({ strobe: { rateFpm: 20000, minFpm: 30, maxFpm: 12000 } }));
     expect(r.rateInRange).toBe(false);
-    expect(r.notes.join(' ')).toMatch(/outside this strobe's own range/);
+    expect(r.notes).toEqual(['rate-outside-range']);
+    expect(CHECK_NOTE_WORDS['rate-outside-range']).toMatch(/outside this strobe's own range/);
   });
 });
 

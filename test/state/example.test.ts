@@ -19,16 +19,16 @@ describe('the first-run example machine', () => {
 
   it('has a 4-pole 50 Hz motor at the typical full-load 1450 rpm', () => {
     const motor = exampleSetup.parts[0];
-    // Synchronous speed 120·50/4 = 1500 rpm (IEC 60034-1 / NEMA MG 1 table, physics.md).
+    // Synchronous speed 120·50/4 = 1500 rpm (IEC 60034-1 / NEMA MG 1 table, docs/physics.md).
     expect(synchronousSpeedHz(motor.motor!.mainsHz, motor.motor!.poles) * 60).toBeCloseTo(1500, 9);
-    // Typical full-load speed of a 4-pole 50 Hz motor: 1450 rpm (Engineering ToolBox table, physics.md).
+    // Typical full-load speed of a 4-pole 50 Hz motor: 1450 rpm (Engineering ToolBox table, docs/physics.md).
     expect(motor.speedRpm).toBeCloseTo(1450, 6);
     expect(motorSpeedHz(50, 4, motor.motor!.slipPercent / 100) * 60).toBeCloseTo(motor.speedRpm, 6);
   });
 
   it('drives the fan through the belt ratio: 1450 · 140/200 = 1015 rpm', () => {
     const [motor, fan] = exampleSetup.parts;
-    // Belt drive without slip, f2 = f1·D1/D2 (physics.md §8); 1450 × 0.7 = 1015 by hand.
+    // Belt drive without slip, f2 = f1·D1/D2 (docs/physics.md §8); 1450 × 0.7 = 1015 by hand.
     expect(fan.speedRpm).toBeCloseTo(1015, 6);
     expect(beltSpeedHz(motor.speedRpm / 60, 0.14, 0.2) * 60).toBeCloseTo(fan.speedRpm, 9);
     expect(exampleSetup.parts[exampleSetup.activePart]).toBe(fan);

@@ -3,10 +3,8 @@ import { defaultSetup, type Setup } from '../../src/state/model';
 import {
   activePart,
   flickerHzOf,
-  openSession,
   replaceSetup,
   samplerRateHz,
-  sessionMessage,
   setExposureSeconds,
   setFeatures,
   setMotor,
@@ -17,6 +15,7 @@ import {
   setStrobeRange,
   setup,
 } from '../../src/state/setup';
+import { openSession, sessionMessage } from '../../src/state/session';
 
 beforeEach(() => {
   replaceSetup(defaultSetup);
@@ -68,7 +67,7 @@ describe('the sampler rate', () => {
     setSamplerKind('camera');
     expect(samplerRateHz(setup.value)).toBeCloseTo(30000 / 1001, 12);
     setSamplerKind('lighting');
-    // Lighting on 50 Hz mains flickers at twice mains, 100 Hz (physics.md §6).
+    // Lighting on 50 Hz mains flickers at twice mains, 100 Hz (docs/physics.md §6).
     expect(samplerRateHz(setup.value)).toBe(100);
   });
 

@@ -178,7 +178,7 @@ describe('readField', () => {
     }
   });
 
-  test('refuses two numbers in one field and reads a fraction sign as its value (issue 8, item 10)', () => {
+  test('refuses two numbers in one field and reads a fraction sign as its value', () => {
     // "1780 1800" once read as 17,801,800 rpm; "2½" as 2.
     const twice = readField('1780 1800', (t: string) => readSpeedRpm(t, 'rpm'));
     expect(twice.ok).toBe(false);

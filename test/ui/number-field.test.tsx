@@ -89,7 +89,7 @@ describe('NumberField', () => {
   });
 
   test('lists refused text among the page’s refused fields, by id and label, until the text is good again', () => {
-    // physics.md §10: results worked out from a refused field are withdrawn; they learn of it here.
+    // docs/physics.md §10: results worked out from a refused field are withdrawn; they learn of it here.
     render(<Harness onValues={[]} />);
     expect(fieldProblems.value).toEqual([]);
     type('2.5');

@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, test } from 'vitest';
-import { cautionFlags, InputError, safetyCautions } from '../../src/core';
+import { cautionCodes, cautionFlags, InputError } from '../../src/core';
 import { readExposureSeconds } from '../../src/ui/fields';
 import {
   readBits,
@@ -84,7 +84,7 @@ describe('logger field readers', () => {
 });
 
 describe('caution flags follow the core', () => {
-  test('stillness shows the safety caution; 3 to 60 flashes a second the seizure caution (physics.md §10)', () => {
+  test('stillness shows the safety caution; 3 to 60 flashes a second the seizure caution (docs/physics.md §10)', () => {
     expect(cautionFlags({ apparentStillness: true, flashRatesHz: [100] })).toEqual({
       safety: true,
       photosensitivity: false,
@@ -102,7 +102,7 @@ describe('caution flags follow the core', () => {
       {},
     ]) {
       const flags = cautionFlags(context);
-      expect(safetyCautions(context).length).toBe(
+      expect(cautionCodes(context).length).toBe(
         1 + Number(flags.safety) + Number(flags.photosensitivity),
       );
     }

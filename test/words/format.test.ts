@@ -94,7 +94,7 @@ describe('formatPercent and formatExposure', () => {
   test('write percent with its sign and exposure as 1/x s', () => {
     expect(formatPercent(1.5)).toBe('1.5 %');
     expect(formatPercent(NaN)).toBe(NO_VALUE);
-    // Shutter angle at 24 frames/s: 180° = 1/48 s (physics.md check sources).
+    // Shutter angle at 24 frames/s: 180° = 1/48 s (docs/physics.md §13).
     expect(formatExposure(180 / 360 / 24)).toBe('1/48 s');
     expect(formatExposure(2)).toBe('2 s');
     expect(formatExposure(0)).toBe(NO_VALUE);

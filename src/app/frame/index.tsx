@@ -1,27 +1,20 @@
 import type { ComponentChildren } from 'preact';
 import { useEffect, useRef } from 'preact/hooks';
-import { currentScreen, openScreen, type ScreenId } from '../../state/navigation';
+import { openScreen } from '../../state/navigation';
+import { SCREENS } from '../screen-list';
 import style from './style.module.css';
 
 interface Props {
   /** Messages across the top: updates, storage, how the session opened. */
   notices?: ComponentChildren;
+  /** The id of the open screen: its tab is marked. */
+  current: string;
   children: ComponentChildren;
 }
 
-const TABS: ReadonlyArray<{ id: ScreenId; label: string }> = [
-  { id: 'check', label: 'Check' },
-  { id: 'machines', label: 'Machines' },
-  { id: 'lighting', label: 'Lighting' },
-  { id: 'camera-plan', label: 'Camera' },
-  { id: 'logger', label: 'Logger' },
-  { id: 'speed-finder', label: 'Speed finder' },
-  { id: 'machine-chain', label: 'Whole machine' },
-];
-
-/** The page: our mark and name, the tab bar, notices, and the open screen. */
-export function AppFrame({ notices, children }: Props) {
-  const screen = currentScreen.value;
+/** The page: our mark and name, the tab bar (one tab per entry of the list of screens), notices, and the open screen. */
+export function AppFrame({ notices, current, children }: Props) {
+  const screen = current;
   const tabBar = useRef<HTMLElement>(null);
   // On a phone the tab row scrolls sideways: keep the open tab in view.
   useEffect(() => {
@@ -58,7 +51,7 @@ export function AppFrame({ notices, children }: Props) {
           <span class={style.name}>Trueturn</span>
         </div>
         <nav class={style.tabs} aria-label="Screens" ref={tabBar}>
-          {TABS.map((t) => (
+          {SCREENS.map((t) => (
             <button
               key={t.id}
               type="button"
@@ -66,6 +59,9 @@ export function AppFrame({ notices, children }: Props) {
               aria-current={t.id === screen ? 'page' : undefined}
               onClick={() => openScreen(t.id)}
             >
+              <svg class={style.icon} viewBox="0 0 24 24" aria-hidden="true">
+                <path d={t.icon} />
+              </svg>
               {t.label}
             </button>
           ))}

@@ -23,7 +23,7 @@ export interface Range {
 /** 'flash': a strobe or flickering light watched live; 'frames': a camera. */
 export type Sampler = 'flash' | 'frames';
 
-/** What the viewer reads off the sampled part (physics.md §2). */
+/** What the viewer reads off the sampled part (docs/physics.md §2). */
 export type Look = 'true' | 'forward' | 'backward' | 'still' | 'unclear';
 
 /** Largest feature count accepted: far beyond any fan or gear a person inspects by eye. */

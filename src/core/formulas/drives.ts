@@ -9,7 +9,7 @@ import {
 } from '../basics/InputError';
 
 /**
- * Synchronous speed of an induction motor (physics.md §8): 120·fm/P rpm = 2·fm/P rev/s.
+ * Synchronous speed of an induction motor (docs/physics.md §8): 120·fm/P rpm = 2·fm/P rev/s.
  * Source: IEC 60034-1 / NEMA MG 1 synchronous-speed table (4 poles at 60 Hz = 1800 rpm).
  * Throws InputError for mains ≤ 0 or poles not an even whole number ≥ 2.
  * @example synchronousSpeedHz(60, 4) // 30 (1800 rpm)
@@ -41,7 +41,7 @@ export function slipFromSpeed(speedHz: number, mainsHz: number, poles: number): 
 }
 
 /**
- * Driven pulley speed of a belt drive without slip (physics.md §8): f2 = f1·D1/D2.
+ * Driven pulley speed of a belt drive without slip (docs/physics.md §8): f2 = f1·D1/D2.
  * Signs carry (an open belt keeps the direction).
  * @example beltSpeedHz(30, 0.1, 0.25) // 12
  */
@@ -57,7 +57,7 @@ export function beltSpeedHz(
 }
 
 /**
- * Driven gear speed (physics.md §8): f2 = −f1·z1/z2 for an external mesh (direction reverses).
+ * Driven gear speed (docs/physics.md §8): f2 = −f1·z1/z2 for an external mesh (direction reverses).
  * @example gearSpeedHz(30, 20, 60) // -10
  */
 export function gearSpeedHz(driverHz: number, driverTeeth: number, drivenTeeth: number): number {
@@ -68,7 +68,7 @@ export function gearSpeedHz(driverHz: number, driverTeeth: number, drivenTeeth: 
 }
 
 /**
- * Wheel speed from ground speed (physics.md §8): f = v/(π·D).
+ * Wheel speed from ground speed (docs/physics.md §8): f = v/(π·D).
  * @example wheelSpeedHz(100 / 3.6, 0.6319) // 13.992627445613348 rev/s (100 km/h on a 205/55R16)
  */
 export function wheelSpeedHz(groundSpeedMps: number, diameterM: number): number {

@@ -9,7 +9,7 @@ import {
 import { MAX_SYMMETRY } from '../basics/types';
 
 /**
- * Angle the part turns during one exposure (physics.md §5): 360·|f|·t degrees.
+ * Angle the part turns during one exposure (docs/physics.md §5): 360·|f|·t degrees.
  * Units: rev/s, seconds → degrees. Throws InputError for a non-finite speed or a negative exposure.
  * @example blurDegrees(30, 1 / 1000) // 10.8
  */
@@ -20,7 +20,7 @@ export function blurDegrees(speedHz: number, exposureS: number): number {
 }
 
 /**
- * Blur in feature pitches (physics.md §5): n·|f|·t. At 1 pitch or more the features smear
+ * Blur in feature pitches (docs/physics.md §5): n·|f|·t. At 1 pitch or more the features smear
  * into an even disc.
  * @example blurPitches(30, 6, 1 / 180) // 1
  */
@@ -32,7 +32,7 @@ export function blurPitches(speedHz: number, symmetry: number, exposureS: number
 }
 
 /**
- * Exposure time from a shutter angle (physics.md §5): t = (θ/360)/s.
+ * Exposure time from a shutter angle (docs/physics.md §5): t = (θ/360)/s.
  * Source: the cinema rule, e.g. 180° at 24 frames/s = 1/48 s.
  * Throws InputError for an angle outside (0, 360] or a rate ≤ 0.
  * @example exposureFromShutterAngle(180, 24) // 0.020833333333333332 (1/48 s)
@@ -64,7 +64,7 @@ export function shutterAngleFromExposure(exposureS: number, rateHz: number): num
 }
 
 /**
- * Arc a point at radius R travels during a strobe flash of duration t (physics.md §5):
+ * Arc a point at radius R travels during a strobe flash of duration t (docs/physics.md §5):
  * 2π·R·|f|·t metres.
  * @example flashArcBlurM(50, 0.1, 10e-6) // 0.00031415926535897936 (0.31 mm)
  */
@@ -77,7 +77,7 @@ export function flashArcBlurM(speedHz: number, radiusM: number, flashS: number):
 
 /**
  * Angle the part turns while a rolling shutter reads the frame top to bottom
- * (physics.md §5): 360·|f|·T degrees. Straight blades bend; past one pitch they break up.
+ * (docs/physics.md §5): 360·|f|·T degrees. Straight blades bend; past one pitch they break up.
  * Source for typical T: Ringaby & Forssén, IJCV 2011 (phones 22–33 ms at 30 frames/s).
  * @example rollingSkewDegrees(10, 0.03) // 108
  */

@@ -27,7 +27,7 @@ export function flickerLimits(flickerHz: number): {
 }
 
 /**
- * Flicker risk class of a light source by IEEE Std 1789-2015 (physics.md §6). A modulation
+ * Flicker risk class of a light source by IEEE Std 1789-2015 (docs/physics.md §6). A modulation
  * on a line counts on the lower-risk side (≤). Percent flicker = 100·(Lmax − Lmin)/(Lmax + Lmin).
  * Units: Hz, percent 0…100. Throws InputError for a frequency ≤ 0 or a modulation outside 0…100.
  * @example flickerRisk(120, 5) // 'low-risk' (no-effect line 4 %, low-risk line 9.6 %)
@@ -73,7 +73,7 @@ export function svmThreshold(frequencyHz: number): number {
 }
 
 /**
- * Stroboscopic visibility measure, CIE TN 006:2016 (physics.md §6): SVM = (Σ (C/T(f))^3.7)^(1/3.7),
+ * Stroboscopic visibility measure, CIE TN 006:2016 (docs/physics.md §6): SVM = (Σ (C/T(f))^3.7)^(1/3.7),
  * T(f) the Perz et al. (2018) threshold fit (svmThreshold); SVM = 1 is the visibility
  * threshold for the average observer. Give the components up to 2 kHz (lightHarmonics).
  * Throws InputError for no components, a frequency ≤ 0 or a negative amplitude.
@@ -96,7 +96,7 @@ export function svm(components: LightComponent[]): number {
 }
 
 /**
- * The shape of a lamp's light over one flicker period (physics.md §6):
+ * The shape of a lamp's light over one flicker period (docs/physics.md §6):
  * 'sine': L = L₀·(1 + M·cos ωt), the shape most flicker figures assume;
  * 'rectangular': PWM, on at the high level for `dutyCycle` of each period, at the low level otherwise;
  * 'rectified': the full-wave rectified sine of a plain driver, L = B + A·|sin(ωt/2)|, whose

@@ -7,7 +7,7 @@ import {
 } from '../basics/InputError';
 
 /**
- * Where a component lands after sampling (physics.md §9): |f − fs·round(f/fs)|, in [0, fs/2].
+ * Where a component lands after sampling (docs/physics.md §9): |f − fs·round(f/fs)|, in [0, fs/2].
  * Source: the alias relation of any DSP text (Shannon 1949 for the Nyquist limit).
  * Throws InputError for a negative or non-finite signal frequency, or a sample rate ≤ 0.
  * @example foldedHz(20, 18) // 2 (common practice: 20 Hz sampled at 18/s looks like 2 Hz)
@@ -22,7 +22,7 @@ export function foldedHz(signalHz: number, sampleHz: number): number {
 
 /**
  * Gain of an order-m Butterworth low-pass (m = 1: an RC stage) in dB, ≤ 0
- * (physics.md §9): 20·log10(1/sqrt(1 + (f/fc)^(2m))).
+ * (docs/physics.md §9): 20·log10(1/sqrt(1 + (f/fc)^(2m))).
  * Source: Butterworth 1930; any filter handbook (−3.01 dB at fc, −20·m dB/decade beyond).
  * @example lowPassGainDb(1000, 100, 2) // -40.00043427276863
  */

@@ -1,6 +1,6 @@
 import { InputError, requireFinite, requireFiniteResult as finite } from '../basics/InputError';
 
-// Conversions at the edges (physics.md: the core works in rev/s, Hz, s, m). Exact factors.
+// Conversions at the edges (docs/physics.md: the core works in rev/s, Hz, s, m). Exact factors.
 
 /** @example rpmToHz(1800) // 30 */
 export const rpmToHz = (rpm: number): number => requireFinite(rpm, 'speed') / 60;

@@ -14,7 +14,7 @@ export interface ApparentMotion {
   faithful: boolean;
   /** Image count q seen at once: > 1 only under a flash locked or near-locked to p/q. */
   images: number;
-  /** What the viewer reads (physics.md §2 precedence). */
+  /** What the viewer reads (docs/physics.md §2 precedence). */
   look: Look;
   /** Lowest-terms p/q of the lock or near-lock found (q = 1 otherwise, p = round(ratio)). */
   p: number;
@@ -24,7 +24,7 @@ export interface ApparentMotion {
   /**
    * An aliased view (look other than 'true') whose speed seen (the group's drift when
    * several images show, else the single image's apparent speed) is below the nearly-still
-   * threshold (physics.md §4; default 6 rpm). Still views are nearly still too. To a person
+   * threshold (docs/physics.md §4; default 6 rpm). Still views are nearly still too. To a person
    * at the machine it is as dangerous as still.
    */
   nearlyStill: boolean;
@@ -33,7 +33,7 @@ export interface ApparentMotion {
 export type ApparentMotionOptions = Partial<LookOptions> & { sampler?: Sampler };
 
 /**
- * What a sampler at `rateHz` shows of a turning part (physics.md §2–§3).
+ * What a sampler at `rateHz` shows of a turning part (docs/physics.md §2–§3).
  *
  * ratio r = n·f/s; step e = r − round(r) in [−0.5, 0.5]; apparent speed a = e·s/n rev/s.
  * Precedence: among the groups of q ≤ maxImages images (p/q in lowest terms; under 'frames'

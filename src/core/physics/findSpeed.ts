@@ -67,7 +67,7 @@ const COMPARED = 8;
 const MAX_EXPECTED_TESTS = 10_000;
 
 /**
- * The true speeds consistent with a set of strobe readings (physics.md §7). A reading of q
+ * The true speeds consistent with a set of strobe readings (docs/physics.md §7). A reading of q
  * images standing still at rate F means n·f = (p/q)·F for some whole p ≥ 1 with gcd(p, q) = 1.
  * Every speed satisfying all readings (within matchTolerance) is returned, ranked: inside the
  * expected range first, then slowest first: coming down from high rates, the first single
@@ -132,7 +132,7 @@ export function findSpeed(
     };
   };
 
-  // physics.md §7: inside an expected range, every p from ⌈q·n·min/F⌉ to ⌊q·n·max/F⌋, all kept.
+  // docs/physics.md §7: inside an expected range, every p from ⌈q·n·min/F⌉ to ⌊q·n·max/F⌋, all kept.
   const inside: SpeedCandidate[] = [];
   let pIn = { first: 1, last: 0 };
   if (expected) {

@@ -1,4 +1,10 @@
-import { InputError, requireWhole } from '../basics/InputError';
+import {
+  InputError,
+  requireFiniteResult,
+  requireNonNegative,
+  requirePositive,
+  requireWhole,
+} from '../basics/InputError';
 import { checkPart, checkRange, MAX_IMAGES_LIMIT, type Part, type Range } from '../basics/types';
 import { gcd } from '../basics/gcd';
 import { requireWorkable } from '../basics/workLimit';
@@ -20,7 +26,7 @@ export interface LockRate {
 const EDGE = 1e-12;
 
 /**
- * Every rate in the range at which the part's pattern locks to p/q (physics.md §3):
+ * Every rate in the range at which the part's pattern locks to p/q (docs/physics.md §3):
  * s = n·|f|·q/p with p ≥ 1, 1 ≤ q ≤ maxImages, gcd(p, q) = 1, ascending by rate.
  * q = 1 are the single-image rates (the highest is s = n·|f|); q ≥ 2 show q images under a flash.
  * Each lock's tolerance band is [n|f|(1−u)·q/p, n|f|(1+u)·q/p]. A part that is not turning
@@ -105,6 +111,41 @@ export function lockRates(part: Part, range: Range, opts?: { maxImages?: number 
     nextP[q] = p;
     return p >= firstP[q] ? (patternHz * q) / p : Infinity;
   }
+}
+
+/**
+ * How many lock-in rates with up to `maxImages` images at most lie in `range`, for a pattern
+ * rate n·|f| anywhere from lowHz to highHz (a part within its tolerance): for each image count
+ * q the locks s = n·|f|·q/p in [min, max] number about q·(highHz/min − lowHz/max), so all
+ * image counts together (highHz/min − lowHz/max)·q(q + 1)/2. The one estimate of the work a
+ * list of locks, still spans or bands costs, made before the work starts (lockRates itself
+ * counts exactly). A range open at the top (maxHz = Infinity) counts from its bottom up.
+ * Units: Hz. Throws InputError for a pattern rate that is not a number ≥ 0 with low ≤ high, a
+ * lowest rate that is not above zero, a highest rate below the lowest, an image count that is
+ * not a whole number in 1…64, or a count too large to be a number.
+ * @example lockCountBound({ lowHz: 178, highHz: 178 }, { minHz: 1, maxHz: 10_000 }, 8) // 6407.36 (a 6-blade fan at 1780 rpm)
+ */
+export function lockCountBound(
+  pattern: { lowHz: number; highHz: number },
+  range: Range,
+  maxImages: number,
+): number {
+  const lowHz = requireNonNegative(pattern?.lowHz, 'lowest pattern rate');
+  const highHz = requireNonNegative(pattern?.highHz, 'highest pattern rate');
+  const minHz = requirePositive(range?.minHz, 'lowest rate');
+  const maxHz =
+    range?.maxHz === Infinity ? Infinity : requirePositive(range?.maxHz, 'highest rate');
+  if (!(lowHz <= highHz && minHz <= maxHz)) {
+    throw new InputError(
+      'rate range',
+      'The pattern rates and the rate range run from low to high.',
+    );
+  }
+  const q = requireWhole(maxImages, 'largest image count', 1, MAX_IMAGES_LIMIT);
+  return requireFiniteResult(
+    Math.max(0, highHz / minHz - lowHz / maxHz) * ((q * (q + 1)) / 2),
+    'rate range',
+  );
 }
 
 /**

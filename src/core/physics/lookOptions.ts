@@ -11,10 +11,10 @@ export interface LookOptions {
   stillHz: number;
   /**
    * A step of at least this many pitches per sample (up to 0.5) is too close to half a
-   * pitch for direction to be told. Default 0.45 (physics.md §2).
+   * pitch for direction to be told. Default 0.45 (docs/physics.md §2).
    */
   unclearStep: number;
-  /** Largest image count looked for in a lock (physics.md §3). Default 8. */
+  /** Largest image count looked for in a lock (docs/physics.md §3). Default 8. */
   maxImages: number;
   /**
    * Under a flash, a group of q images that drifts less than this many of its own spacings
@@ -23,7 +23,7 @@ export interface LookOptions {
   groupSpacingsPerS: number;
   /**
    * An aliased view whose apparent speed is below this (rev/s) reads as *nearly still*
-   * (physics.md §4). Default 6 rpm = 0.1 rev/s: one turn in 10 s or longer. A part creeping
+   * (docs/physics.md §4). Default 6 rpm = 0.1 rev/s: one turn in 10 s or longer. A part creeping
    * that slowly gives a person at the machine the same false sense that it has stopped as
    * one standing still (a judgement, not a published figure). A value below stillHz acts
    * as stillHz: nothing slower than still can be "nearly" still.
@@ -40,7 +40,7 @@ export const defaultLookOptions: Readonly<LookOptions> = Object.freeze({
 });
 
 /**
- * Relative slack of every threshold comparison (physics.md §2): a value equal to a threshold
+ * Relative slack of every threshold comparison (docs/physics.md §2): a value equal to a threshold
  * up to this share of the numbers compared counts as equal, so a decimal input lands where
  * the user meant it (3000.25 rpm at 50 frames/s drifts exactly 0.25 rpm: still). 2^-42,
  * about 2.3e-13: a thousand times the rounding of one subtraction, yet below 2^-40 (1e-12).

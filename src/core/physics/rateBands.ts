@@ -11,6 +11,7 @@ import { checkLookOptions, type LookOptions } from './lookOptions';
 import { gcd } from '../basics/gcd';
 import { MAX_WORK_ITEMS, requireWorkable } from '../basics/workLimit';
 import { plainNumber } from '../basics/plainNumber';
+import { lockCountBound } from './lockRates';
 
 export interface RateBandCause {
   /** Index of the part in the list given. */
@@ -29,7 +30,7 @@ export interface RateBandCause {
 export interface RateBand {
   fromHz: number;
   toHz: number;
-  /** physics.md §4: every part, at every speed within its tolerance, is seen moving its true way. */
+  /** docs/physics.md §4: every part, at every speed within its tolerance, is seen moving its true way. */
   safe: boolean;
   /**
    * What the band promises, in a few words: for a safe band whether every part is seen at its
@@ -46,7 +47,7 @@ export type RateBandOptions = Partial<LookOptions> & { sampler?: Sampler };
 
 /**
  * Splits a rate range into bands that are safe or misleading for all parts together
- * (physics.md §4). A rate is safe when, for every speed within each part's tolerance,
+ * (docs/physics.md §4). A rate is safe when, for every speed within each part's tolerance,
  * apparentMotion shows the part faithfully ('true'), or turning forward as one image at the
  * nearly-still threshold or faster (default 6 rpm); anything else misleads: still, nearly
  * still, backward, direction unclear, or several images. A part that is not turning misleads
@@ -170,9 +171,14 @@ function addMisleadingSpans(
   const qMax = sampler === 'flash' ? look.maxImages : 1;
   const bottom = Math.max(minHz, floorHz);
   const g = look.groupSpacingsPerS;
+  // The highest pattern rate whose locks can reach the range: still or drifting as a group.
+  const top = hi + Math.max(D, g);
   // Spans are flat numbers, not objects, so ten times the list limit still runs in ~0.1 s.
   requireWorkable(
-    kLast - kFirst + 1 + (((hi + Math.max(D, g)) / bottom) * qMax * (qMax + 1)) / 2,
+    kLast -
+      kFirst +
+      1 +
+      lockCountBound({ lowHz: top, highHz: top }, { minHz: bottom, maxHz: Infinity }, qMax),
     'rate range',
     'lock-in and backward spans',
     'raise the lowest rate or narrow the range',
@@ -189,7 +195,7 @@ function addMisleadingSpans(
   // Locks p/q: still while (p/q)·s lies within D of some speed in [lo, hi].
   for (let q = 1; q <= qMax; q++) {
     const pFirst = Math.max(1, Math.floor(((lo - Math.max(D, g)) * q) / maxHz));
-    const pLast = Math.ceil(((hi + Math.max(D, g)) * q) / bottom);
+    const pLast = Math.ceil((top * q) / bottom);
     for (let p = pFirst; p <= pLast; p++) {
       if (q > 1 && gcd(p, q) !== 1) continue;
       const k = Math.round(p / q);

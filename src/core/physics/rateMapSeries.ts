@@ -9,7 +9,7 @@ export interface RateMapOptions extends Partial<LookOptions> {
   points?: number;
   /** Space the grid evenly in log(rate) instead of rate. Default false. */
   log?: boolean;
-  /** Which locks and bands apply (physics.md §3–§4). Default 'flash'. */
+  /** Which locks and bands apply (docs/physics.md §3–§4). Default 'flash'. */
   sampler?: Sampler;
 }
 
@@ -49,7 +49,7 @@ export const MAX_RATE_MAP_POINTS = 100_000;
 
 /**
  * The rate map: each part's apparent speed (rpm) against the sampler's rate over a range,
- * as chart columns, with its lock-in rates and the safe and misleading bands (physics.md §2–§4).
+ * as chart columns, with its lock-in rates and the safe and misleading bands (docs/physics.md §2–§4).
  *
  * The apparent speed is apparentMotion's single-image speed a = e·s/n with e = r − round(r),
  * r = n·f/s: a sawtooth in s that jumps where |r| = k + ½, that is at s = n·|f|/(k + ½)

@@ -12,7 +12,7 @@ import { apparentMotion } from './apparentMotion';
 import { requireWorkable } from '../basics/workLimit';
 
 /**
- * Rates that show the part turning at a wanted signed apparent speed (physics.md §4):
+ * Rates that show the part turning at a wanted signed apparent speed (docs/physics.md §4):
  * s = n·|f − a|/k for k = 1, 2, …, valid while the single-image step |k·a/(f − a)| < 0.5,
  * ascending by rate. Only rates at which apparentMotion, for the sampler's kind (default
  * 'flash'), really shows that motion are kept: one image (under a flash no group of several
@@ -25,7 +25,7 @@ import { requireWorkable } from '../basics/workLimit';
  * Throws InputError for a bad part or range, a non-finite apparent speed, or an unknown sampler.
  *
  * @example
- * // physics.md §4 worked check: f = 30 rev/s, one mark, creep forward at 0.5 rev/s.
+ * // docs/physics.md §4 worked check: f = 30 rev/s, one mark, creep forward at 0.5 rev/s.
  * ratesForApparent({ speedHz: 30, symmetry: 1 }, 0.5, { minHz: 20, maxHz: 40 })
  * // [{ rateHz: 29.5, k: 1 }]
  *

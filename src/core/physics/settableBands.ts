@@ -4,7 +4,7 @@ import { checkSampler, type Sampler } from '../basics/types';
 
 /**
  * The smallest change a person can make to a sampler's rate, Hz, when none is given
- * (physics.md §4): a strobe's dial steps by 1 flash per minute, a camera's frame rate by
+ * (docs/physics.md §4): a strobe's dial steps by 1 flash per minute, a camera's frame rate by
  * 0.01 frames per second (common practice). Lighting flicker is not set at all; it shares
  * the strobe's step, as a flash.
  */
@@ -26,7 +26,7 @@ export function settingStepHz(sampler: Sampler | undefined, stepHz?: number): nu
 }
 
 /**
- * physics.md §4, the one rule for every suggested band of rates: a person must be able to set
+ * docs/physics.md §4, the one rule for every suggested band of rates: a person must be able to set
  * it, and it must do what it says. It is at least one setting step wide (so some setting on
  * the dial lies inside it; a sliver is not offered), and a band offered to freeze a part
  * contains that part's lock for its nominal speed (`lockHz`), so the rate suggested freezes

@@ -68,7 +68,7 @@ export interface TellingRate {
 }
 
 /**
- * The most telling flash rate in a strobe's range for candidate pattern rates (physics.md §7),
+ * The most telling flash rate in a strobe's range for candidate pattern rates (docs/physics.md §7),
  * the first of them the likeliest: the rate whose predicted views (image count, look,
  * direction; robustView) tell the likeliest from every other, and after that tell the most
  * pairs apart (the most even split); on a tie, the one where more candidates show images

@@ -13,7 +13,8 @@ import {
 import { ratesForApparent } from '../physics/ratesForApparent';
 import { hzToRpm } from '../formulas/units';
 import { plainNumber } from '../basics/plainNumber';
-import { safetyCautions } from './safetyCautions';
+import { cautionCodes, type CautionCode } from './cautions';
+import { lockCountBound } from '../physics/lockRates';
 
 /** A frame rate cameras offer, with its exact value. */
 export interface StandardFrameRate {
@@ -130,7 +131,7 @@ export interface CameraNeeds {
   patternHz: number;
   /**
    * Frame rates within the camera's own span that show the look: freeze, every sub-multiple
-   * n·|f|/k (physics.md §3); creep, the rates of ratesForApparent that show it. Highest first,
+   * n·|f|/k (docs/physics.md §3); creep, the rates of ratesForApparent that show it. Highest first,
    * at most MAX_LOOK_RATES of them; empty for the other goals.
    */
   lookRates: LookRate[];
@@ -164,8 +165,8 @@ export interface CameraPlan {
   settings: CameraSetting[];
   /** The best of the rest, up to five: fewest conditions failed first, then by score. */
   nearMisses: CameraSetting[];
-  /** Safety cautions that apply (physics.md §10). */
-  cautions: string[];
+  /** Safety cautions that apply (docs/physics.md §10). */
+  cautions: CautionCode[];
 }
 
 export interface CameraPlanOptions extends Partial<LookOptions> {
@@ -177,7 +178,7 @@ export interface CameraPlanOptions extends Partial<LookOptions> {
   maxResidualContrast?: number;
   /**
    * Rolling-shutter bend, in pitches, at which the features break into pieces. Default 1:
-   * physics.md §5, straight blades bend and, past a pitch, break into pieces.
+   * docs/physics.md §5, straight blades bend and, past a pitch, break into pieces.
    */
   maxBendPitches?: number;
 }
@@ -213,9 +214,19 @@ interface Limits {
   maxBendPitches: number;
 }
 
+/** What every setting of one plan is weighed against: the part, the goal and its judgements. */
+interface PlanContext {
+  part: Required<Part>;
+  goal: CameraGoal;
+  conditions: CameraCondition[];
+  readoutS: number;
+  look: LookOptions;
+  limits: Limits;
+}
+
 /**
  * Weighs the camera's settings (every frame rate with every shutter angle or exposure that fits
- * in a frame) for a goal (physics.md §2–§5). For each: the look (apparentMotion, 'frames'),
+ * in a frame) for a goal (docs/physics.md §2–§5). For each: the look (apparentMotion, 'frames'),
  * whether any speed within the tolerance misleads (rateBands at that rate), blur (blurDegrees,
  * blurPitches), rolling-shutter bend (rollingSkewDegrees) and the pattern contrast left by the
  * blur: an exposure t averages the pattern over b = n·|f|·t pitches, which scales its
@@ -271,9 +282,8 @@ export function cameraPlan(
   const readoutS = requireNonNegative(camera.readoutS, 'readout time');
   const conditions = GOAL_CONDITIONS[g.kind];
 
-  const all = combos.map(({ frameRate, exposureS, shutterAngle }) =>
-    evaluate(p, g, conditions, frameRate, exposureS, shutterAngle, readoutS, look, limits),
-  );
+  const context: PlanContext = { part: p, goal: g, conditions, readoutS, look, limits };
+  const all = combos.map((combo) => evaluate(combo, context));
   const byScore = (a: CameraSetting, b: CameraSetting) =>
     b.score - a.score || b.frameRate - a.frameRate || a.exposureS - b.exposureS;
   const settings = all.filter((s) => s.reaches).sort(byScore);
@@ -292,12 +302,12 @@ export function cameraPlan(
     met,
     weighed: all.length,
     span,
-    needs: needsOf(p, g, span, rates, combos, limits, look),
+    needs: needsOf(context, span, combos),
     settings,
     nearMisses,
-    // physics.md §4 and §10: freezing or creeping is aliased by intent; any other setting that
+    // docs/physics.md §4 and §10: freezing or creeping is aliased by intent; any other setting that
     // is not the true motion is aliased too.
-    cautions: safetyCautions({
+    cautions: cautionCodes({
       apparentStillness:
         g.kind === 'freeze' || g.kind === 'creep' || all.some((s) => s.look !== 'true'),
     }),
@@ -376,7 +386,7 @@ function listOf(list: number[] | undefined, field: string): number[] {
   return list;
 }
 
-/** The creep look (physics.md §2): forward at both tolerance ends, the same whole k between them (no wrap), near the creep wanted. */
+/** The creep look (docs/physics.md §2): forward at both tolerance ends, the same whole k between them (no wrap), near the creep wanted. */
 function creepLookHolds(
   part: Required<Part>,
   frameRate: number,
@@ -395,17 +405,9 @@ function creepLookHolds(
 
 type ApparentMotionOpts = LookOptions & { sampler: 'frames' };
 
-function evaluate(
-  part: Required<Part>,
-  goal: CameraGoal,
-  conditions: CameraCondition[],
-  frameRate: number,
-  exposureS: number,
-  shutterAngle: number,
-  readoutS: number,
-  look: LookOptions,
-  limits: Limits,
-): CameraSetting {
+function evaluate(combo: Combo, context: PlanContext): CameraSetting {
+  const { frameRate, exposureS, shutterAngle } = combo;
+  const { part, goal, conditions, readoutS, look, limits } = context;
   const opts: ApparentMotionOpts = { ...look, sampler: 'frames' };
   const pitchesPerFrame =
     (part.symmetry * Math.abs(part.speedHz) * (1 + part.tolerance)) / frameRate;
@@ -508,23 +510,18 @@ function evaluate(
 }
 
 /** What would lift each condition: rates that show the look, and the exposure and readout limits. */
-function needsOf(
-  part: Required<Part>,
-  goal: CameraGoal,
-  span: Range,
-  offeredHz: number[],
-  combos: Combo[],
-  limits: Limits,
-  look: LookOptions,
-): CameraNeeds {
+function needsOf(context: PlanContext, span: Range, combos: Combo[]): CameraNeeds {
+  const { part, goal, limits, look } = context;
+  const offeredHz = combos.map((c) => c.frameRate);
   const speed = Math.abs(part.speedHz);
   const patternHz = part.symmetry * speed;
   const exposures = combos.map((c) => c.exposureS);
   const offered = (hz: number) => offeredHz.some((r) => Math.abs(r - hz) <= SAME_RATE * hz);
+  const creepPatternHz = goal.kind === 'creep' ? part.symmetry * (speed + goal.creepHz) : 0;
   let candidates: number[] = [];
   let count = 0;
   if (patternHz > 0 && goal.kind === 'freeze') {
-    // Every sub-multiple n·|f|/k within the span (physics.md §3, q = 1).
+    // Every sub-multiple n·|f|/k within the span (docs/physics.md §3, q = 1).
     const kFirst = Math.max(1, Math.ceil((patternHz / span.maxHz) * (1 - 1e-12)));
     const kLast = Math.floor((patternHz / span.minHz) * (1 + 1e-12));
     count = Math.max(0, kLast - kFirst + 1);
@@ -534,12 +531,13 @@ function needsOf(
     patternHz > 0 &&
     goal.kind === 'creep' &&
     // More candidates than anyone reads (a fast gear against a slow span): list none.
-    part.symmetry * (speed + goal.creepHz) * (1 / span.minHz - 1 / span.maxHz) <= MAX_LOOK_WORK
+    // The creep rates n·|f − a|/k lie like the single-image locks of the rate n·(|f| + a).
+    lockCountBound({ lowHz: creepPatternHz, highHz: creepPatternHz }, span, 1) <= MAX_LOOK_WORK
   ) {
     const wanted = Math.sign(part.speedHz || 1) * goal.creepHz;
     const range = { minHz: span.minHz * (1 - SAME_RATE), maxHz: span.maxHz * (1 + SAME_RATE) };
     const opts: ApparentMotionOpts = { ...look, sampler: 'frames' };
-    // Only rates where the camera really shows that creep (physics.md §4).
+    // Only rates where the camera really shows that creep (docs/physics.md §4).
     candidates = ratesForApparent(part, wanted, range, { sampler: 'frames' })
       .map((r) => r.rateHz)
       .filter((hz) =>

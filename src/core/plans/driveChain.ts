@@ -85,7 +85,7 @@ export interface ChainPart {
 const MAX_TOLERANCE = 0.5;
 
 /**
- * Every part's speed along a chain of drives (physics.md §8): motor → belt → fan, gear stages,
+ * Every part's speed along a chain of drives (docs/physics.md §8): motor → belt → fan, gear stages,
  * a wheel from ground speed. Each part's band of speeds is the driving part's band times the
  * link's ratio (worst case, carried as an interval): relative tolerances add through ratio
  * links, and belt slip lowers the bottom of the band. Each part is reported at the middle of

@@ -8,7 +8,7 @@ import {
   type Sampler,
 } from '../basics/types';
 import { checkLookOptions, type LookOptions } from '../physics/lookOptions';
-import { lockRates } from '../physics/lockRates';
+import { lockCountBound, lockRates } from '../physics/lockRates';
 import { isSettableBand, settingStepHz } from '../physics/settableBands';
 
 export type StillRateOptions = Partial<LookOptions> & {
@@ -47,7 +47,7 @@ export interface FreezeBand {
 }
 
 /**
- * Every span of rates in the range where some part can look still (physics.md §3, §4): for a
+ * Every span of rates in the range where some part can look still (docs/physics.md §3, §4): for a
  * lock p/q (q = 1 always; q ≤ maxImages under a flash) the part is still while its pattern
  * rate comes within D = n·stillHz of (p/q)·s for some speed in its tolerance, i.e. for
  * s ∈ ((F₋ − D)·q/p, (F₊ + D)·q/p), F± = n|f|(1 ± u): the locks of lockRates widened by the
@@ -75,7 +75,7 @@ export function stillRates(parts: Part[], range: Range, opts?: StillRateOptions)
 
 /**
  * Bands of rates that freeze parts[target] as a single image while no other part looks still
- * (physics.md §4, several parts): the target's single-image still spans minus every other
+ * (docs/physics.md §4, several parts): the target's single-image still spans minus every other
  * part's still spans (any image count under a flash). Ascending by rate. The band is where the
  * freeze can be found: within it, the exact rate depends on the part's actual speed.
  * Only bands a person can set and that do what they say are offered (isSettableBand): each
@@ -128,7 +128,7 @@ export function freezeRates(
 }
 
 /**
- * Bands of rates at which no part looks still (physics.md §4): the range minus every part's
+ * Bands of rates at which no part looks still (docs/physics.md §4): the range minus every part's
  * still spans. Parts may still look slow or backward there (see rateBands for that).
  * Ascending by rate. Bands narrower than one setting step are not offered (isSettableBand).
  *
@@ -199,7 +199,11 @@ function addStillSpans(
   const queryMax = maxHz / (1 - w);
   if (!(queryMin < queryMax)) return;
   // Locks F·q/p in [queryMin, queryMax]: about F·(1/queryMin − 1/queryMax)·q per image count q.
-  const expected = F * (1 / queryMin - 1 / queryMax) * ((qMax * (qMax + 1)) / 2);
+  const expected = lockCountBound(
+    { lowHz: F, highHz: F },
+    { minHz: queryMin, maxHz: queryMax },
+    qMax,
+  );
   if (!(expected <= MAX_SPANS_PER_PART)) {
     throw new InputError(
       'rate range',

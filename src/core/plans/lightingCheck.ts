@@ -13,10 +13,9 @@ import {
   type LightWave,
 } from '../formulas/flicker';
 import { hzToRpm } from '../formulas/units';
-import { plainNumber } from '../basics/plainNumber';
-import { safetyCautions } from './safetyCautions';
+import { cautionCodes, type CautionCode } from './cautions';
 
-/** A lamp on the mains, as the lighting check sees it (physics.md §6). */
+/** A lamp on the mains, as the lighting check sees it (docs/physics.md §6). */
 export interface Lamp {
   /** Mains frequency: 50 or 60 Hz. */
   mainsHz: number;
@@ -37,6 +36,8 @@ export type LightingVerdict = 'fine' | 'caution' | 'hazard';
 
 export interface PartUnderLight {
   name: string;
+  /** The part's own signed speed, rev/s: how it really turns. */
+  speedHz: number;
   /** What the part shows at its nominal speed. */
   look: Look;
   /** Signed apparent speed at its nominal speed, rpm (0 when it looks still). */
@@ -49,19 +50,28 @@ export interface PartUnderLight {
   misleading: boolean;
   /**
    * The flickering light shows it other than as it truly turns, at some speed within its
-   * tolerance (physics.md §4: still, slowed, several images, backward, unclear): the stillness
+   * tolerance (docs/physics.md §4: still, slowed, several images, backward, unclear): the stillness
    * caution goes with it.
    */
   aliased: boolean;
   /** Misleading under flicker people can see (SVM ≥ 1): a hazard. */
   hazard: boolean;
   verdict: LightingVerdict;
-  /** In plain words. */
-  text: string;
 }
+
+/**
+ * What to do about a misleading light, by code (src/words/lighting.ts says each in words):
+ * drivers that do not flicker at this rate; neighbouring lamps on different phases (for mains
+ * flicker); a faster dimmer (for a dimmer's own flicker); a task lamp on a steady source; and
+ * local rules first.
+ */
+export type LightingRemedy =
+  'steady-drivers' | 'split-phases' | 'faster-dimmer' | 'task-lamp' | 'local-rules';
 
 export interface LightingCheck {
   flickerHz: number;
+  /** Percent flicker of the lamp, as given (0: steady light, which samples nothing). */
+  modulationPercent: number;
   /** IEEE Std 1789-2015 class of the flicker (see flickerRisk). */
   risk: FlickerRisk;
   /** IEEE Std 1789-2015 lines at this frequency, percent. */
@@ -78,17 +88,26 @@ export interface LightingCheck {
   visible: boolean;
   parts: PartUnderLight[];
   verdict: LightingVerdict;
-  summary: string;
-  /** What to do about it, in our words (empty when the verdict is 'fine'). */
-  remedies: string[];
-  /** Safety cautions that apply (physics.md §10). */
-  cautions: string[];
+  /** What to do about it, most telling first (empty when the verdict is 'fine'). */
+  remedies: LightingRemedy[];
+  /** Safety cautions that apply (docs/physics.md §10). */
+  cautions: CautionCode[];
+}
+
+/** What every part is checked against: the light, and the judgements of how the eye reads it. */
+interface Light {
+  flickerHz: number;
+  /** The light flickers at all (modulation above 0 %). */
+  flickers: boolean;
+  /** SVM ≥ 1: the average observer sees the stroboscopic effect. */
+  visible: boolean;
+  look: LookOptions;
 }
 
 const SEVERITY: Record<Look, number> = { true: 0, forward: 1, unclear: 2, backward: 3, still: 4 };
 
 /**
- * How a lamp's flicker shows the parts of a machine (physics.md §6): the flicker frequency
+ * How a lamp's flicker shows the parts of a machine (docs/physics.md §6): the flicker frequency
  * (twice the mains, the mains, or a custom rate), its IEEE Std 1789-2015 risk and the CIE TN
  * 006:2016 SVM of the light's harmonics up to 2 kHz for its waveform (sine unless given;
  * threshold fit of Perz et al., JOSA A 35(2):309, 2018); for each part, what
@@ -111,7 +130,7 @@ const SEVERITY: Record<Look, number> = { true: 0, forward: 1, unclear: 2, backwa
  * Steady light (0 % modulation) samples nothing: every part looks as it truly turns.
  *
  * Sources: IEEE Std 1789-2015 (risk lines), CIE TN 006:2016 (SVM) with the threshold fit of
- * Perz et al. (2018), physics.md §2–§3 (looks).
+ * Perz et al. (2018), docs/physics.md §2–§3 (looks).
  */
 export function lightingCheck(
   lamp: Lamp,
@@ -146,9 +165,8 @@ export function lightingCheck(
   const visible = visibility >= 1;
   const flickers = modulation > 0;
 
-  const rows = parts.map((p, i) =>
-    partUnderLight(p, i, flickerHz, flickers, visible, visibility, look),
-  );
+  const light: Light = { flickerHz, flickers, visible, look };
+  const rows = parts.map((p, i) => partUnderLight(p, i, light));
   const verdict: LightingVerdict = rows.some((r) => r.hazard)
     ? 'hazard'
     : rows.some((r) => r.verdict === 'caution') || risk === 'elevated'
@@ -157,6 +175,7 @@ export function lightingCheck(
 
   return {
     flickerHz,
+    modulationPercent: modulation,
     risk,
     lowRiskPercent,
     noEffectPercent,
@@ -165,9 +184,18 @@ export function lightingCheck(
     visible,
     parts: rows,
     verdict,
-    summary: summarise(verdict, flickerHz, modulation, risk, visibility, rows),
-    remedies: verdict === 'fine' ? [] : remedies(lamp, flickerHz, noEffectPercent),
-    cautions: safetyCautions({
+    remedies:
+      verdict === 'fine'
+        ? []
+        : [
+            'steady-drivers',
+            lamp.flicker === 'double' || lamp.flicker === 'mains'
+              ? 'split-phases'
+              : 'faster-dimmer',
+            'task-lamp',
+            'local-rules',
+          ],
+    cautions: cautionCodes({
       apparentStillness: rows.some((r) => r.aliased),
       flashRatesHz: flickers ? [flickerHz] : [],
     }),
@@ -184,22 +212,16 @@ function flickerFrequency(lamp: Lamp): number {
   );
 }
 
-function partUnderLight(
-  raw: LitPart,
-  index: number,
-  flickerHz: number,
-  flickers: boolean,
-  visible: boolean,
-  visibility: number,
-  look: LookOptions,
-): PartUnderLight {
+function partUnderLight(raw: LitPart, index: number, light: Light): PartUnderLight {
+  const { flickerHz, flickers, visible, look } = light;
   const part = checkPart(raw, `part ${index + 1}`);
   const name =
     typeof raw.name === 'string' && raw.name.trim() !== '' ? raw.name.trim() : `part ${index + 1}`;
   if (!flickers) {
-    // Steady light samples nothing: every part looks as it truly turns (physics.md §6).
+    // Steady light samples nothing: every part looks as it truly turns (docs/physics.md §6).
     return {
       name,
+      speedHz: part.speedHz,
       look: 'true',
       apparentRpm: hzToRpm(part.speedHz),
       worstLook: 'true',
@@ -208,7 +230,6 @@ function partUnderLight(
       aliased: false,
       hazard: false,
       verdict: 'fine',
-      text: `${name}: the light does not flicker, so it looks as it is (${plainNumber(Math.abs(hzToRpm(part.speedHz)))} rpm).`,
     };
   }
   const opts = { ...look, sampler: 'flash' as const };
@@ -239,20 +260,9 @@ function partUnderLight(
     flickers && (worstLook === 'still' || worstLook === 'backward' || worstLook === 'unclear');
   const hazard = misleading && visible;
   const verdict: LightingVerdict = hazard ? 'hazard' : misleading ? 'caution' : 'fine';
-  const text = describePart(
-    name,
-    part.speedHz,
-    worstLook,
-    images,
-    nominal.look,
-    apparentRpm,
-    flickers,
-    visible,
-    visibility,
-    verdict,
-  );
   return {
     name,
+    speedHz: part.speedHz,
     look: nominal.look,
     apparentRpm,
     worstLook,
@@ -261,101 +271,5 @@ function partUnderLight(
     aliased: worstLook !== 'true' || nominal.images > 1,
     hazard,
     verdict,
-    text,
   };
-}
-
-function describePart(
-  name: string,
-  speedHz: number,
-  worst: Look,
-  images: number,
-  nominal: Look,
-  apparentRpm: number,
-  flickers: boolean,
-  visible: boolean,
-  visibility: number,
-  verdict: LightingVerdict,
-): string {
-  const trueSpeed = `${plainNumber(Math.abs(hzToRpm(speedHz)))} rpm`;
-  if (!flickers) return `${name}: the light does not flicker, so it looks as it is (${trueSpeed}).`;
-  const how =
-    worst === 'still'
-      ? images === 1
-        ? 'look still'
-        : `show ${images} images standing still`
-      : worst === 'backward'
-        ? 'look as if it turns backward'
-        : 'look as if it turns with no clear direction';
-  if (verdict === 'hazard') {
-    return `${name} can ${how} under this light although it turns at ${trueSpeed}. Hazard: the flicker is visible (SVM ${plainNumber(visibility)}).`;
-  }
-  if (verdict === 'caution') {
-    return (
-      `${name} can ${how} under this light although it turns at ${trueSpeed}. The flicker is below the ` +
-      `average observer's threshold (SVM ${plainNumber(visibility)} < 1), but some people may still see it.`
-    );
-  }
-  const seen =
-    nominal === 'true'
-      ? 'turns the right way at its true speed'
-      : `turns the right way, though it seems slower (${plainNumber(Math.abs(apparentRpm))} rpm)`;
-  return `${name} ${seen}${visible ? '; the flickering motion is visible' : ''}.`;
-}
-
-function summarise(
-  verdict: LightingVerdict,
-  flickerHz: number,
-  modulation: number,
-  risk: FlickerRisk,
-  visibility: number,
-  rows: PartUnderLight[],
-): string {
-  const light =
-    modulation === 0
-      ? 'The light does not flicker.'
-      : `The light flickers at ${plainNumber(flickerHz)} Hz with ${plainNumber(modulation)} % modulation: ` +
-        `${riskWords(risk)} by IEEE Std 1789-2015, SVM ${plainNumber(visibility)}.`;
-  if (verdict === 'hazard') {
-    const names = rows.filter((r) => r.hazard).map((r) => r.name);
-    return `${light} Hazard: ${names.join(', ')} can look still or backward while turning.`;
-  }
-  if (verdict === 'caution') {
-    const names = rows.filter((r) => r.verdict === 'caution').map((r) => r.name);
-    return names.length > 0
-      ? `${light} Caution: ${names.join(', ')} can look misleading to some people.`
-      : `${light} Caution: the flicker itself is above the IEEE 1789 low-risk line.`;
-  }
-  return `${light} No part looks still or backward under it.`;
-}
-
-function riskWords(risk: FlickerRisk): string {
-  return risk === 'no-effect'
-    ? 'no observable effect'
-    : risk === 'low-risk'
-      ? 'low risk'
-      : 'above the low-risk line';
-}
-
-function remedies(lamp: Lamp, flickerHz: number, noEffectPercent: number): string[] {
-  const out = [
-    `Use lamps whose drivers do not flicker at this rate: electronic drivers that run the lamp at high frequency, ` +
-      `or low-flicker LED drivers (at ${plainNumber(flickerHz)} Hz the IEEE 1789 no-observable-effect line is ` +
-      `${plainNumber(noEffectPercent)} %).`,
-  ];
-  if (lamp.flicker === 'double' || lamp.flicker === 'mains') {
-    out.push(
-      'Where several lamps light the machine, connect neighbouring lamps to different phases of a three-phase ' +
-        'supply: their flicker peaks fall at different moments and largely cancel.',
-    );
-  } else {
-    out.push(
-      "Raise the dimmer's switching frequency, or run the lamps undimmed where the dimmer then stops switching.",
-    );
-  }
-  out.push(
-    'Light the working area of the machine with a task lamp on a steady source, so the flickering light no longer dominates.',
-  );
-  out.push('Local lighting rules and machinery-safety rules take precedence over this check.');
-  return out;
 }

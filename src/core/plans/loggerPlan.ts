@@ -1,8 +1,7 @@
 import { InputError, requireBetween, requirePositive, requireWhole } from '../basics/InputError';
 import { converterRangeDb, foldedHz, lowPassGainDb, rcCutoffHz } from '../formulas/logger';
-import { plainNumber } from '../basics/plainNumber';
 
-/** What the machine puts into the sensor signal (physics.md §9). */
+/** What the machine puts into the sensor signal (docs/physics.md §9). */
 export interface MachineTones {
   /** Shaft speed, rev/s = the 1× frequency in Hz. */
   shaftHz: number;
@@ -12,8 +11,8 @@ export interface MachineTones {
   blades?: number[];
   /** Tooth counts of gears on the shaft: gear mesh z·f each. */
   gearTeeth?: number[];
-  /** Other tones the user adds (Hz), with a label. */
-  extraTones?: Array<{ label: string; hz: number }>;
+  /** Other tones the user adds (Hz), each with its own name if it has one. */
+  extraTones?: Array<{ label?: string; hz: number }>;
 }
 
 /** The analog low-pass before the converter. */
@@ -23,8 +22,15 @@ export type AntiAliasFilter =
   | { kind: 'rc'; cutoffHz?: number; resistanceOhm?: number; capacitanceF?: number }
   | { kind: 'butterworth'; order: number; cutoffHz: number };
 
+/** Where a component comes from: the shaft's k-th harmonic, a blade pass, a gear mesh, or a tone added. */
+export type ComponentSource = 'shaft' | 'blades' | 'teeth' | 'tone';
+
 export interface LoggerComponent {
-  label: string;
+  source: ComponentSource;
+  /** The harmonic k (shaft), the blade or tooth count, or the tone's place among those added (from 1). */
+  count: number;
+  /** An added tone's own name, when it was given one. */
+  label?: string;
   hz: number;
   /** Where it lands after sampling, in [0, fs/2]. */
   foldedHz: number;
@@ -36,7 +42,6 @@ export interface LoggerComponent {
   neededDb: number;
   /** An alias buried below the converter's noise floor, or an in-band component cut by no more than 3.01 dB. */
   pass: boolean;
-  text: string;
 }
 
 export interface LoggerProposal {
@@ -49,8 +54,18 @@ export interface LoggerProposal {
   droopDb: number;
   /** Attenuation at fs − fmax, the lowest frequency that folds onto the band of interest, dB. */
   aliasRejectionDb: number;
-  why: string;
+  /** The highest component of interest, Hz: what the droop is measured at. */
+  highestHz: number;
 }
+
+/**
+ * A plain statement about the plan, by code (src/words/logger.ts says each in words): no
+ * filter at all; components folding with too little attenuation; content above the guard rate
+ * folding onto the components; that filtering after the converter cannot remove an alias (always
+ * there); no Butterworth filter within the limits.
+ */
+export type LoggerNote =
+  'no-filter' | 'false-tones' | 'guard-short' | 'alias-after-converter' | 'no-proposal';
 
 export interface LoggerPlan {
   nyquistHz: number;
@@ -65,9 +80,21 @@ export interface LoggerPlan {
   /** Content at fs − fmax and above folds onto the components of interest: the filter's rejection there. */
   guard: { hz: number; attenuationDb: number; enough: boolean };
   /** Plain statements, including that filtering after the converter cannot remove an alias. */
-  notes: string[];
+  notes: LoggerNote[];
+  /** The highest Butterworth order a proposal may use (the option maxOrder). */
+  maxOrder: number;
   /** A sample rate and filter that would work (absent when none does within the limits). */
   proposal?: LoggerProposal;
+}
+
+/** What the planner weighs: the machine's tones, and the logger's sample rate, filter and converter. */
+export interface LoggerPlanInput {
+  tones: MachineTones;
+  /** Samples per second, Hz. */
+  sampleHz: number;
+  filter: AntiAliasFilter;
+  /** The converter's resolution, bits (1…64). */
+  bits: number;
 }
 
 export interface LoggerPlanOptions {
@@ -79,17 +106,11 @@ export interface LoggerPlanOptions {
   maxSampleHz?: number;
 }
 
-/** The statement the issue asks for, in our words. */
-export const ALIAS_AFTER_CONVERTER_NOTE =
-  'Filtering after the converter cannot remove an alias: once a component has folded, it sits at the ' +
-  'same frequency as real content and no digital filter can tell them apart. The anti-alias filter must act on ' +
-  'the analog signal, before the converter.';
-
 /** Butterworth −3.01 dB point: a wanted component beyond the cutoff is itself being cut. */
 const HALF_POWER_DB = 10 * Math.log10(2);
 
 /**
- * Plans a data logger's sampling of a machine (physics.md §9). For every component (1× and
+ * Plans a data logger's sampling of a machine (docs/physics.md §9). For every component (1× and
  * harmonics, blade pass n·f, gear mesh z·f, added tones): where it lands after sampling
  * (foldedHz), whether it aliases (at or above fs/2), the anti-alias filter's gain there
  * (lowPassGainDb: an RC is order 1), and whether that buries it below the converter's noise
@@ -98,29 +119,31 @@ const HALF_POWER_DB = 10 * Math.log10(2);
  * the highest component fmax within passbandDroopDb and attenuate fs − fmax (the lowest
  * frequency that folds onto the band of interest) by the converter's range:
  * fc ≥ fmax/(10^(droop/10) − 1)^(1/2m) and fs ≥ fmax + fc·(10^(range/10) − 1)^(1/2m); the
- * cutoff proposed is the geometric middle of the cutoffs that work at that rate.
+ * cutoff proposed is the geometric middle of the cutoffs that work at that rate. Components
+ * and notes come as codes and numbers (src/words/logger.ts says them in words).
  *
- * Units: Hz, dB, bits. Throws InputError for a shaft speed ≤ 0, a harmonic count, blade or
+ * Units: Hz, dB, bits. Throws InputError for input that is not an object, a shaft speed ≤ 0, a harmonic count, blade or
  * tooth count that is not a whole number ≥ 1, a tone ≤ 0, a sample rate ≤ 0, an unknown filter,
  * a cutoff ≤ 0, an order outside 1…20, bits outside 1…64, or bad options.
  *
  * @example
  * // 25 Hz shaft, harmonics to 10× (250 Hz), 16 bits (98.08 dB), no filter, 1000 samples/s:
  * // nothing aliases, but nothing stops content above 750 Hz from folding onto 0–250 Hz.
- * loggerPlan({ shaftHz: 25, harmonics: 10 }, 1000, { kind: 'none' }, 16).proposal
- * // { sampleHz: 1600, order: 8, cutoffHz: 299.2…, droopDb: 0.238…, aliasRejectionDb: 104.7…, why: … }
+ * loggerPlan({ tones: { shaftHz: 25, harmonics: 10 }, sampleHz: 1000, filter: { kind: 'none' }, bits: 16 }).proposal
+ * // { sampleHz: 1600, order: 8, cutoffHz: 299.2…, droopDb: 0.238…, aliasRejectionDb: 104.7…, highestHz: 250 }
  *
  * Sources: Shannon 1949 (Nyquist limit); the alias relation of any DSP text; Butterworth 1930
  * (|H| = 1/sqrt(1 + (f/fc)^(2m)), −3.01 dB at the cutoff); Bennett 1948 / Analog Devices MT-001
  * (6.02·N + 1.76 dB). The nice rates are common practice.
  */
-export function loggerPlan(
-  tones: MachineTones,
-  sampleHz: number,
-  filter: AntiAliasFilter,
-  bits: number,
-  opts?: LoggerPlanOptions,
-): LoggerPlan {
+export function loggerPlan(input: LoggerPlanInput, opts?: LoggerPlanOptions): LoggerPlan {
+  if (typeof input !== 'object' || input === null) {
+    throw new InputError(
+      'logger',
+      "Give the machine's tones, the sample rate, the filter and the converter's bits.",
+    );
+  }
+  const { tones, sampleHz, filter, bits } = input;
   const list = componentsOf(tones);
   const fs = requirePositive(sampleHz, 'sample rate');
   const { cutoffHz, order } = checkFilter(filter);
@@ -139,21 +162,12 @@ export function loggerPlan(
 
   const nyquistHz = fs / 2;
   const gain = (hz: number) => (cutoffHz === undefined ? 0 : lowPassGainDb(hz, cutoffHz, order));
-  const components = list.map(({ label, hz }): LoggerComponent => {
+  const components = list.map(({ hz, ...source }): LoggerComponent => {
     const aliases = hz >= nyquistHz;
     const g = gain(hz);
     const neededDb = aliases ? rangeDb : 0;
     const pass = aliases ? -g >= rangeDb : -g <= HALF_POWER_DB + 1e-9;
-    return {
-      label,
-      hz,
-      foldedHz: foldedHz(hz, fs),
-      aliases,
-      gainDb: g,
-      neededDb,
-      pass,
-      text: describe(label, hz, aliases, g, fs, rangeDb, pass),
-    };
+    return { ...source, hz, foldedHz: foldedHz(hz, fs), aliases, gainDb: g, neededDb, pass };
   });
 
   const fmax = Math.max(...list.map((c) => c.hz));
@@ -163,29 +177,12 @@ export function loggerPlan(
   const allPass = components.every((c) => c.pass) && guard.enough;
   const proposal = propose(fmax, rangeDb, droopDb, maxOrder, maxSampleHz);
 
-  const notes: string[] = [];
-  if (cutoffHz === undefined) {
-    notes.push(
-      `There is no anti-alias filter: anything in the signal above ${plainNumber(nyquistHz)} Hz folds into the record.`,
-    );
-  }
-  if (components.some((c) => c.aliases && !c.pass)) {
-    notes.push(
-      'Some components fold onto false frequencies with too little attenuation: they will look like real tones in the record.',
-    );
-  } else if (!guard.enough) {
-    notes.push(
-      `Content at ${plainNumber(guardHz)} Hz and above folds onto the components of interest; the filter takes off ` +
-        `${plainNumber(guardDb)} dB there, less than the ${plainNumber(rangeDb)} dB the converter resolves.`,
-    );
-  }
-  notes.push(ALIAS_AFTER_CONVERTER_NOTE);
-  if (!proposal) {
-    notes.push(
-      `No Butterworth filter up to order ${maxOrder} buries aliases below the ${plainNumber(rangeDb)} dB noise floor ` +
-        `within the fastest sample rate allowed; use a steeper filter, or accept fewer effective bits.`,
-    );
-  }
+  const notes: LoggerNote[] = [];
+  if (cutoffHz === undefined) notes.push('no-filter');
+  if (components.some((c) => c.aliases && !c.pass)) notes.push('false-tones');
+  else if (!guard.enough) notes.push('guard-short');
+  notes.push('alias-after-converter');
+  if (!proposal) notes.push('no-proposal');
   return {
     nyquistHz,
     rangeDb,
@@ -195,6 +192,7 @@ export function loggerPlan(
     allPass,
     guard,
     notes,
+    maxOrder,
     ...(proposal ? { proposal } : {}),
   };
 }
@@ -264,37 +262,35 @@ function propose(
     cutoffHz,
     droopDb: droop,
     aliasRejectionDb: rejection,
-    why:
-      `Sample at ${plainNumber(best)} Hz behind a Butterworth low-pass of order ${chosen.m} with its cutoff at ` +
-      `${plainNumber(cutoffHz)} Hz: the highest component (${plainNumber(fmax)} Hz) loses ${plainNumber(droop)} dB, and ` +
-      `anything at ${plainNumber(best - fmax)} Hz or above, which would fold onto the components of interest, ` +
-      `is cut by at least ${plainNumber(rejection)} dB (the converter resolves ${plainNumber(rangeDb)} dB).`,
+    highestHz: fmax,
   };
 }
 
-function componentsOf(tones: MachineTones): Array<{ label: string; hz: number }> {
+/** A component before sampling: where it comes from and its frequency. */
+type Source = Pick<LoggerComponent, 'source' | 'count' | 'label' | 'hz'>;
+
+function componentsOf(tones: MachineTones): Source[] {
   if (typeof tones !== 'object' || tones === null) {
     throw new InputError('machine', "Give the shaft speed and the machine's tones.");
   }
   const f = requirePositive(tones.shaftHz, 'shaft speed');
   const harmonics = requireWhole(tones.harmonics ?? 1, 'harmonics', 1, 200);
-  const out: Array<{ label: string; hz: number }> = [];
+  const out: Source[] = [];
   for (let k = 1; k <= harmonics; k++) {
-    out.push({ label: k === 1 ? '1× shaft' : `${k}× shaft`, hz: k * f });
+    out.push({ source: 'shaft', count: k, hz: k * f });
   }
   listOf(tones.blades, 'blade counts').forEach((b, i) => {
     const n = requireWhole(b, `blade count ${i + 1}`, 1, 1000);
-    out.push({ label: `blade pass (${n} blades)`, hz: n * f });
+    out.push({ source: 'blades', count: n, hz: n * f });
   });
   listOf(tones.gearTeeth, 'tooth counts').forEach((z, i) => {
     const teeth = requireWhole(z, `tooth count ${i + 1}`, 1, 100_000);
-    out.push({ label: `gear mesh (${teeth} teeth)`, hz: teeth * f });
+    out.push({ source: 'teeth', count: teeth, hz: teeth * f });
   });
   listOf(tones.extraTones, 'added tones').forEach((t, i) => {
     const hz = requirePositive(t?.hz, `added tone ${i + 1}`);
-    const label =
-      typeof t?.label === 'string' && t.label.trim() !== '' ? t.label.trim() : `tone ${i + 1}`;
-    out.push({ label, hz });
+    const label = typeof t?.label === 'string' ? t.label.trim() : '';
+    out.push({ source: 'tone', count: i + 1, ...(label === '' ? {} : { label }), hz });
   });
   if (!out.every((c) => Number.isFinite(c.hz))) {
     throw new InputError(
@@ -334,25 +330,4 @@ function checkFilter(filter: AntiAliasFilter): { cutoffHz?: number; order: numbe
     default:
       throw new InputError('filter', "The filter must be 'none', 'rc' or 'butterworth'.");
   }
-}
-
-function describe(
-  label: string,
-  hz: number,
-  aliases: boolean,
-  gainDb: number,
-  fs: number,
-  rangeDb: number,
-  pass: boolean,
-): string {
-  const at = `${label} at ${plainNumber(hz)} Hz`;
-  if (!aliases) {
-    return pass
-      ? `${at} is recorded where it is${gainDb < -0.01 ? ` (the filter takes off ${plainNumber(-gainDb)} dB)` : ''}.`
-      : `${at} is beyond the filter's cutoff: it is cut by ${plainNumber(-gainDb)} dB.`;
-  }
-  const lands = `folds to ${plainNumber(foldedHz(hz, fs))} Hz`;
-  return pass
-    ? `${at} ${lands}, but the filter buries it (${plainNumber(-gainDb)} dB of the ${plainNumber(rangeDb)} dB needed).`
-    : `${at} ${lands} and shows as a false tone: the filter takes off ${plainNumber(-gainDb)} dB of the ${plainNumber(rangeDb)} dB needed.`;
 }

@@ -67,7 +67,7 @@ const STROBE_TOLERANCE = 0.003;
 
 /**
  * Joins a sound estimate with the strobe's candidates. A frozen single image at rate F only
- * says n·f = k·F for some whole k (physics.md §7): the strobe's candidates are spaced by whole
+ * says n·f = k·F for some whole k (docs/physics.md §7): the strobe's candidates are spaced by whole
  * multiples. The sound gives f to a fraction of a per cent but can mistake a subharmonic for
  * the speed; the two together leave the speeds both allow (within twice the sound's precision
  * plus the strobe's slack).

@@ -14,7 +14,7 @@ import {
   readShutterAngle,
 } from '../../ui/fields';
 import { formatExposure, formatNumber, formatPrecise, numberForField } from '../../words/format';
-import { openScreen } from '../../state/navigation';
+import { openCheckScreen } from '../../state/navigation';
 import { readList } from '../../ui/toolFields';
 import {
   applyCameraSetting,
@@ -74,7 +74,7 @@ const speedText = (s: number) => (s < 1 ? numberForField(1 / s) : numberForField
  * chosen part; a ranked table of settings that reach the goal, each with what it looks like and
  * an action that opens it on the check screen. With none, why not, and the near misses.
  */
-export function CameraPlanScreen() {
+export function CameraScreen() {
   const plan = cameraPlanning.result.value;
   const problem = cameraPlanning.problem.value;
   const kind = goalKind.value;
@@ -86,7 +86,7 @@ export function CameraPlanScreen() {
 
   const open = (setting: CameraSetting) => {
     applyCameraSetting(setting, shutterAnglesDeg.value, planReadoutMs.value);
-    openScreen('check');
+    openCheckScreen();
   };
 
   const summary = (
@@ -266,7 +266,7 @@ export function CameraPlanScreen() {
 
   return (
     <ToolLayout
-      testId="camera-plan-screen"
+      testId="camera-screen"
       summary={summary}
       warnings={warnings}
       entries={entries}

@@ -1,6 +1,6 @@
 // Which of the check screen's fields each result is worked out from, by the fields' ids, so a
 // result is withdrawn or marked "not current" exactly while a field it depends on is refused
-// (src/state/fieldProblems.ts; physics.md §10).
+// (src/state/fieldProblems.ts; docs/physics.md §10).
 
 /** What the verdict reads: the part's speed (typed or from a motor) and blades, and the sampler's rate and exposure. */
 export const VERDICT_FIELDS: readonly string[] = [

@@ -13,6 +13,7 @@ import { SamplerForm } from './sampler-form';
 import { VerdictPanel } from './verdict-panel';
 import { CheckPreview, CheckRateMap } from './connected-widgets';
 import { RESULT_FIELDS, VERDICT_FIELDS } from './field-ids';
+import { CHECK_NOTE_WORDS } from '../../words/check';
 import style from './style.module.css';
 
 interface Props {
@@ -34,7 +35,7 @@ interface Props {
  * pinned to the top, its cautions right under it; on a desktop, entries on the left and
  * results on the right. The rate map sits under the rate it sets; the preview sits under the
  * cautions that go with it. While an entry is refused, the verdict is withdrawn and every
- * result worked out from it is marked not current (physics.md §10).
+ * result worked out from it is marked not current (docs/physics.md §10).
  */
 export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap /> }: Props) {
   const refusal = checkProblem.value;
@@ -58,7 +59,7 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
           <NotCurrent problems={stale} refusal={refusal}>
             <ul class={style.notes} data-testid="check-notes">
               {r.notes.map((n) => (
-                <li key={n}>{n}</li>
+                <li key={n}>{CHECK_NOTE_WORDS[n]}</li>
               ))}
             </ul>
           </NotCurrent>

@@ -2,7 +2,7 @@
 // the set-up, so the wiring can be tested without drawing anything.
 import type { Part, Range, Sampler } from '../../core';
 import type { CheckResult } from '../../state/check';
-import type { SamplerKind, Setup } from '../../state/model';
+import { type SamplerKind, type Setup, activeIndex, corePartOf } from '../../state/model';
 
 /** What the preview draws: one part as one sampler shows it. */
 export interface PreviewInput {
@@ -47,17 +47,10 @@ export function previewInputOf(result: CheckResult, setup: Setup): PreviewInput 
  * when the newest entry was refused.
  */
 export function rateMapInputOf(result: CheckResult, setup: Setup): RateMapInput {
-  // The check falls back on the first part when the index points nowhere (src/state/check.ts).
-  const active = setup.parts[setup.activePart] ? setup.activePart : 0;
+  const active = activeIndex(setup);
   const parts = setup.parts.map((p, i) => {
     const name = p.name.trim() || undefined;
-    if (i === active) return { ...result.part, name };
-    return {
-      speedHz: p.speedRpm / 60,
-      symmetry: p.features,
-      tolerance: p.tolerancePercent / 100,
-      name,
-    };
+    return { ...(i === active ? result.part : corePartOf(p)), name };
   });
   return { parts, range: result.range, rateHz: result.rateHz, samplerKind: result.samplerKind };
 }

@@ -19,26 +19,21 @@ import { ResultTable, type ResultColumn } from '../../ui/result-table';
 import { LightingFields } from '../../ui/lighting-fields';
 import { ToolLayout } from '../../ui/tool-layout';
 import { lookWords } from '../../words/look';
+import {
+  LIGHTING_HEADLINES,
+  LOCAL_RULES_NOTE,
+  lightingSummary,
+  PART_VERDICT_WORDS,
+  partWords,
+  remedyWords,
+} from '../../words/lighting';
 import style from './style.module.css';
-
-const HEADLINES: Record<LightingCheck['verdict'], string> = {
-  hazard: 'Hazard: a part can look still or backward',
-  caution: 'Caution: a misleading look is possible',
-  fine: 'No part looks still or backward',
-};
-
-const VERDICT_WORDS: Record<PartUnderLight['verdict'], string> = {
-  hazard: 'HAZARD',
-  caution: 'Caution',
-  fine: 'Fine',
-};
-
-/** The deferral the issue asks for, shown whatever the verdict. */
-export const LOCAL_RULES_NOTE =
-  'Local lighting rules and machinery-safety rules come first: this check is a planning aid, not an assessment.';
+import { type Setup } from '../../state/model';
 
 interface PartRow {
   part: PartUnderLight;
+  /** The part under the light, in a sentence or two. */
+  words: string;
   speedRpm: number;
   features: number;
   tolerancePercent: number;
@@ -58,14 +53,7 @@ export function LightingScreen() {
   const modulation = s.lighting.modulationPercent;
   // Until the core has accepted a set-up, show the stillness caution rather than none.
   const cautions = result ? lightingCautions(result, modulation) : { apparentStillness: true };
-  const rows: PartRow[] = result
-    ? result.parts.map((part, i) => ({
-        part,
-        speedRpm: s.parts[i]?.speedRpm ?? 0,
-        features: s.parts[i]?.features ?? 1,
-        tolerancePercent: s.parts[i]?.tolerancePercent ?? 0,
-      }))
-    : [];
+  const rows = result ? partRowsOf(result, s) : [];
   const hazards = result ? result.parts.filter((p) => p.hazard) : [];
 
   // The hazard is said once, here at the top with the verdict; the stillness caution under it
@@ -80,9 +68,9 @@ export function LightingScreen() {
           data-testid={hazards.length > 0 ? 'lighting-hazard' : undefined}
         >
           <p class={style.headline} data-testid="lighting-headline">
-            {HEADLINES[result.verdict]}
+            {LIGHTING_HEADLINES[result.verdict]}
           </p>
-          <p data-testid="lighting-summary">{result.summary}</p>
+          <p data-testid="lighting-summary">{lightingSummary(result)}</p>
         </div>
       ) : (
         <p class={style.plain}>Nothing to show yet: {problem}</p>
@@ -140,7 +128,7 @@ export function LightingScreen() {
         {result && result.remedies.length > 0 ? (
           <ul class={style.remedies} data-testid="lighting-remedies">
             {result.remedies.map((r) => (
-              <li key={r}>{r}</li>
+              <li key={r}>{remedyWords(r, result)}</li>
             ))}
           </ul>
         ) : (
@@ -192,14 +180,25 @@ const COLUMNS: ReadonlyArray<ResultColumn<PartRow>> = [
     cell: (r) =>
       r.part.verdict === 'hazard' ? (
         <strong class={style.tag} data-testid="hazard-flag">
-          {VERDICT_WORDS.hazard}
+          {PART_VERDICT_WORDS.hazard}
         </strong>
       ) : (
-        VERDICT_WORDS[r.part.verdict]
+        PART_VERDICT_WORDS[r.part.verdict]
       ),
   },
-  { label: 'In words', cell: (r) => r.part.text },
+  { label: 'In words', cell: (r) => r.words },
 ];
+
+/** The table's rows: each part as the core found it, in words, with what the set-up holds of it. */
+export function partRowsOf(result: LightingCheck, s: Setup): PartRow[] {
+  return result.parts.map((part, i) => ({
+    part,
+    words: partWords(part, result),
+    speedRpm: s.parts[i]?.speedRpm ?? 0,
+    features: s.parts[i]?.features ?? 1,
+    tolerancePercent: s.parts[i]?.tolerancePercent ?? 0,
+  }));
+}
 
 /** The table as CSV: one row per part, with the light's figures on every row so each row stands alone. */
 export function lightingCsv(
@@ -223,7 +222,7 @@ export function lightingCsv(
     { label: 'worst look within tolerance', value: (r) => r.part.worstLook },
     { label: 'images', value: (r) => r.part.images },
     { label: 'verdict', value: (r) => r.part.verdict },
-    { label: 'in words', value: (r) => r.part.text },
+    { label: 'in words', value: (r) => r.words },
   ];
   return csvTable(columns, [...rows]);
 }

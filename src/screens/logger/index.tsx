@@ -1,10 +1,7 @@
 import {
-  ALIAS_AFTER_CONVERTER_NOTE,
   converterRangeDb,
   rcCutoffHz as rcCutoffOf,
   csvTable,
-  plainNumber,
-  safetyCautions,
   type CsvColumn,
   type LoggerComponent,
   type LoggerPlan,
@@ -53,6 +50,14 @@ import { PartChoice } from '../../ui/part-choice';
 import { ReportBar } from '../../ui/report-bar';
 import { ResultTable, type ResultColumn } from '../../ui/result-table';
 import { ToolLayout } from '../../ui/tool-layout';
+import { PLANNING_AID_CAUTION } from '../../words/cautions';
+import {
+  ALIAS_AFTER_CONVERTER_NOTE,
+  componentLabel,
+  componentWords,
+  loggerNoteWords,
+  proposalWords,
+} from '../../words/logger';
 import style from './style.module.css';
 
 const FILTERS: ReadonlyArray<{ value: FilterKind; label: string }> = [
@@ -85,7 +90,7 @@ export function LoggerScreen() {
   const kind = filterKind.value;
   // The alias statement has a box of its own and the guard a line of its own (see below).
   const otherNotes = plan
-    ? plan.notes.filter((n) => n !== ALIAS_AFTER_CONVERTER_NOTE && !isGuardNote(n, plan))
+    ? plan.notes.filter((n) => n !== 'alias-after-converter' && n !== 'guard-short')
     : [];
   const failing = plan ? plan.components.filter((c) => !c.pass) : [];
 
@@ -243,7 +248,7 @@ export function LoggerScreen() {
               caption={`Sampled at ${formatPrecise(sampleHzOf(plan))} Hz; anything at or above ${formatPrecise(plan.nyquistHz)} Hz folds`}
               columns={COLUMNS}
               rows={plan.components}
-              rowKey={(c, i) => `${i}-${c.label}`}
+              rowKey={(c, i) => `${i}-${c.source}-${c.count}`}
               rowState={(c) => (c.pass ? undefined : 'fail')}
               testId="logger-table"
             />
@@ -260,7 +265,7 @@ export function LoggerScreen() {
             {otherNotes.length > 0 && (
               <ul class={style.notes} data-testid="logger-notes">
                 {otherNotes.map((n) => (
-                  <li key={n}>{n}</li>
+                  <li key={n}>{loggerNoteWords(n, plan)}</li>
                 ))}
               </ul>
             )}
@@ -271,7 +276,7 @@ export function LoggerScreen() {
         {plan?.proposal ? (
           <>
             <p class={style.plain} data-testid="logger-proposal-text">
-              {plan.proposal.why}
+              {proposalWords(plan)}
             </p>
             <div>
               <button
@@ -291,7 +296,7 @@ export function LoggerScreen() {
           </p>
         )}
       </Panel>
-      <p class={style.note}>{safetyCautions()[0]}</p>
+      <p class={style.note}>{PLANNING_AID_CAUTION}</p>
     </>
   );
 
@@ -315,11 +320,6 @@ export function LoggerScreen() {
       withdraw={{ refusal: problem }}
     />
   );
-}
-
-/** The core's note about content folding onto the band, which the guard line already says. */
-function isGuardNote(note: string, plan: LoggerPlan): boolean {
-  return note.startsWith(`Content at ${plainNumber(plan.guard.hz)} Hz and above folds`);
 }
 
 /** The plan's own sample rate (twice its Nyquist frequency), so a refused entry never mixes with a kept plan. */
@@ -385,7 +385,7 @@ function RcFields() {
 }
 
 const COLUMNS: ReadonlyArray<ResultColumn<LoggerComponent>> = [
-  { label: 'Component', cell: (c) => c.label },
+  { label: 'Component', cell: (c) => componentLabel(c) },
   { label: 'Frequency', numeric: true, cell: (c) => `${formatPrecise(c.hz)} Hz` },
   { label: 'Lands at', numeric: true, cell: (c) => `${formatPrecise(c.foldedHz)} Hz` },
   { label: 'Aliased', cell: (c) => (c.aliases ? 'Yes: a false tone' : 'No') },
@@ -408,7 +408,7 @@ const COLUMNS: ReadonlyArray<ResultColumn<LoggerComponent>> = [
 /** The components as CSV, with the sample rate and converter range on every row. */
 export function loggerCsv(plan: LoggerPlan, sampleRateHz: number): string {
   const columns: CsvColumn<LoggerComponent>[] = [
-    { label: 'component', value: (c) => c.label },
+    { label: 'component', value: (c) => componentLabel(c) },
     { label: 'frequency (Hz)', value: (c) => c.hz },
     { label: 'sample rate (Hz)', value: () => sampleRateHz },
     { label: 'lands at (Hz)', value: (c) => c.foldedHz },
@@ -417,7 +417,7 @@ export function loggerCsv(plan: LoggerPlan, sampleRateHz: number): string {
     { label: 'attenuation needed (dB)', value: (c) => c.neededDb },
     { label: 'converter range (dB)', value: () => plan.rangeDb },
     { label: 'pass', value: (c) => c.pass },
-    { label: 'in words', value: (c) => c.text },
+    { label: 'in words', value: (c) => componentWords(c, plan) },
   ];
   return csvTable(columns, plan.components);
 }

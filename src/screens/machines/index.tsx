@@ -1,5 +1,5 @@
 import { useState } from 'preact/hooks';
-import { openScreen } from '../../state/navigation';
+import { openCheckScreen } from '../../state/navigation';
 import type { Machine } from '../../state/model';
 import {
   deleteMachine,
@@ -12,7 +12,8 @@ import {
   renameMachine,
   undoDelete,
 } from '../../state/machines';
-import { openMachineId, replaceSetup } from '../../state/setup';
+import { replaceSetup } from '../../state/setup';
+import { openMachineId } from '../../state/session';
 import { Panel } from '../../ui/panel';
 import { setupSummary } from './summary';
 import style from './style.module.css';
@@ -167,7 +168,7 @@ function MachineRow({ machine, onOutcome }: RowProps) {
   const open = () => {
     replaceSetup(machine.setup);
     openMachineId.value = machine.id;
-    openScreen('check');
+    openCheckScreen();
   };
 
   const rename = async (event: Event) => {

@@ -1,13 +1,13 @@
 // A one-line description of a saved machine's set-up for the list.
 import { formatNumber, formatPrecise } from '../../words/format';
-import type { Setup } from '../../state/model';
+import { type Setup, activePartOf } from '../../state/model';
 
 /**
  * "Cooler fan (8 blades): 1,015 rpm, 8 features · strobe at 1,015 fpm".
  * @example setupSummary(defaultSetup) // "Fan: 1,770 rpm, 6 features · strobe at 1,770 fpm"
  */
 export function setupSummary(s: Setup): string {
-  const part = s.parts[s.activePart] ?? s.parts[0];
+  const part = activePartOf(s);
   const features = part.features === 1 ? '1 mark' : `${formatNumber(part.features)} features`;
   const name = part.name.trim() ? `${part.name.trim()}: ` : '';
   const sampler =

@@ -1,7 +1,7 @@
 import { useState } from 'preact/hooks';
 import { type CautionContext, type StepCandidate } from '../../core';
 import { formatNumber } from '../../words/format';
-import { openScreen } from '../../state/navigation';
+import { openCheckScreen } from '../../state/navigation';
 import { formatRate } from '../../words/rates';
 import { openMachineName } from '../../state/openMachine';
 import { attempt } from '../../state/outcome';
@@ -21,13 +21,16 @@ import { ResultTable, type ResultColumn } from '../../ui/result-table';
 import { ToolLayout } from '../../ui/tool-layout';
 import {
   candidateCaption,
+  candidateNote,
   candidateStatus,
-  finderCsv,
   STAGE_TITLES,
+  stepInstruction,
 } from '../../words/speedFinder';
 import { ReadingsPanel } from './readings-panel';
 import { SavePanel } from './save-panel';
 import { FinderSetupPanel } from './setup-panel';
+import { finderCsv } from './csv';
+import { viewWords } from '../../words/look';
 import style from './style.module.css';
 
 interface Props {}
@@ -50,7 +53,7 @@ export function SpeedFinderScreen(_props: Props) {
   const expectedRpm = safeExpectedRpm();
 
   // The procedure sweeps the strobe's whole range: stillness that is not real, and flashing in
-  // the seizure range, apply throughout (physics.md §10). Both always show on this screen.
+  // the seizure range, apply throughout (docs/physics.md §10). Both always show on this screen.
   const cautions: CautionContext = { apparentStillness: true, flashSweepHz: strobeRangeHz.value };
 
   const summary = (
@@ -59,7 +62,7 @@ export function SpeedFinderScreen(_props: Props) {
         <div class={style.step} data-stage={step.stage} data-testid="finder-step">
           <p class={style.stage}>{STAGE_TITLES[step.stage]}</p>
           <p class={style.instruction} data-testid="finder-instruction">
-            {step.instruction}
+            {stepInstruction(step)}
           </p>
           {step.rateHz !== undefined && (
             <div class={style.setRate}>
@@ -79,7 +82,7 @@ export function SpeedFinderScreen(_props: Props) {
               {applied !== null && Math.abs(applied - step.rateHz) <= 1e-9 * applied && (
                 <p class={style.applied} role="status">
                   The Check screen's strobe now flashes at {rate(applied)}.{' '}
-                  <button type="button" class={style.link} onClick={() => openScreen('check')}>
+                  <button type="button" class={style.link} onClick={() => openCheckScreen()}>
                     Open the Check screen
                   </button>
                 </p>
@@ -124,10 +127,15 @@ export function SpeedFinderScreen(_props: Props) {
           candidateStatus(c)
         ),
     },
-    { label: 'Why', cell: (c) => c.note },
+    { label: 'Why', cell: (c) => candidateNote(c) },
     ...(nextRate === undefined
       ? []
-      : [{ label: `At ${rate(nextRate)}`, cell: (c: StepCandidate) => c.atNextRate?.text ?? '' }]),
+      : [
+          {
+            label: `At ${rate(nextRate)}`,
+            cell: (c: StepCandidate) => (c.atNextRate ? viewWords(c.atNextRate) : ''),
+          },
+        ]),
   ];
 
   const results = (

@@ -13,7 +13,7 @@ import {
 import { ChoiceGroup } from '../../ui/choice-group';
 import { NumberField } from '../../ui/number-field';
 import { Panel } from '../../ui/panel';
-import { imagesLabel } from '../../words/speedFinder';
+import { imagesWords } from '../../words/look';
 import style from './style.module.css';
 
 interface Props {
@@ -118,7 +118,7 @@ function ImagesChoice({ id, label, value, onChange }: ImagesProps) {
           </option>
         )}
         {IMAGE_CHOICES.map((n) => (
-          <option key={n} value={String(n)} aria-label={imagesLabel(n)}>
+          <option key={n} value={String(n)} aria-label={imagesWords(n)}>
             {n}
           </option>
         ))}
@@ -130,7 +130,7 @@ function ImagesChoice({ id, label, value, onChange }: ImagesProps) {
 /**
  * The next reading, added with a button: its rate starts at the proposed one, and the image
  * count is left for the technician to choose every time. What they saw is never filled in
- * from a prediction (physics.md §7): a reading recorded with a predicted count would lead the
+ * from a prediction (docs/physics.md §7): a reading recorded with a predicted count would lead the
  * search astray. Text that is not a rate, or no count chosen, keeps its message and adds nothing.
  */
 function NewReading({ proposedFpm }: Props) {

@@ -1,10 +1,11 @@
 import { useState } from 'preact/hooks';
 import { formatNumber } from '../../words/format';
 import { openMachineName } from '../../state/openMachine';
-import { partLabel } from '../../state/model';
+import { partLabel, activeIndex } from '../../state/model';
 import { setup } from '../../state/setup';
 import { featuresInUse, saveFoundSpeed, type SaveTarget } from '../../state/speedFinder';
 import { Panel } from '../../ui/panel';
+import { savedSpeedLines } from '../../words/speedFinder';
 import style from './style.module.css';
 
 interface Props {
@@ -24,7 +25,7 @@ export function SavePanel({ speedHz }: Props) {
   const [busy, setBusy] = useState(false);
   const machineName = openMachineName.value;
   const s = setup.value;
-  const part = partLabel(s, s.parts[s.activePart] ? s.activePart : 0);
+  const part = partLabel(s, activeIndex(s));
 
   const save = async (target: SaveTarget) => {
     if (speedHz === undefined) return;
@@ -32,7 +33,7 @@ export function SavePanel({ speedHz }: Props) {
     try {
       setOutcome({
         kind: 'done',
-        lines: await saveFoundSpeed(speedHz, featuresInUse.peek(), target),
+        lines: savedSpeedLines(await saveFoundSpeed(speedHz, featuresInUse.peek(), target)),
       });
       if (target.kind === 'new') setName('');
     } catch (error) {

@@ -1,8 +1,8 @@
 import { useState } from 'preact/hooks';
 import { apparentMotion, cautionFlags, type CautionContext, type FreezeBand } from '../../core';
 import { formatNumber } from '../../words/format';
-import { openScreen } from '../../state/navigation';
-import { formatRate, formatRateSpan } from '../../words/rates';
+import { openCheckScreen } from '../../state/navigation';
+import { formatRate, formatRateSpan, settingStepWords } from '../../words/rates';
 import {
   chain,
   editChain,
@@ -12,7 +12,7 @@ import {
   type DerivedPart,
 } from '../../state/chain';
 import { check, verdictOf } from '../../state/check';
-import { partLabel, type SamplerKind } from '../../state/model';
+import { partLabel, type SamplerKind, activeIndex } from '../../state/model';
 import { openMachineName } from '../../state/openMachine';
 import { flashUnit, setSamplerKind, setSamplerRateHz, setup } from '../../state/setup';
 import { MAX_PARTS } from '../../state/validate';
@@ -32,6 +32,7 @@ import {
 } from './band-lists';
 import { machineCsv } from './chain-csv';
 import { PartCard, speedWords } from './part-card';
+import { verdictHeadline } from '../../words/check';
 import style from './style.module.css';
 
 interface Props {}
@@ -50,7 +51,7 @@ const SAMPLERS: ReadonlyArray<{ value: SamplerKind; label: string }> = [
  * ground speed), each part's speed carried along the chain with its tolerance; rates that
  * freeze a chosen part while no other looks still, and rates at which no part looks still.
  */
-export function MachineChainScreen(_props: Props) {
+export function WholeMachineScreen(_props: Props) {
   const s = setup.value;
   const parts = chain.result.value ?? [];
   const chainProblem = chain.problem.value;
@@ -59,7 +60,7 @@ export function MachineChainScreen(_props: Props) {
   const r = check.value;
   const unit = flashUnit.value;
   const kind = s.samplerKind;
-  const target = s.parts[s.activePart] ? s.activePart : 0;
+  const target = activeIndex(s);
   const [editProblem, setEditProblem] = useState<string | null>(null);
   const [addFrom, setAddFrom] = useState<number | null>(null);
   const [applied, setApplied] = useState<number | null>(null);
@@ -235,7 +236,7 @@ export function MachineChainScreen(_props: Props) {
         {applied !== null && (
           <p class={style.applied} role="status" data-testid="chain-applied">
             The Check screen now uses {rate(applied)}.{' '}
-            <button type="button" class={style.link} onClick={() => openScreen('check')}>
+            <button type="button" class={style.link} onClick={() => openCheckScreen()}>
               Open the Check screen
             </button>
           </p>
@@ -244,7 +245,7 @@ export function MachineChainScreen(_props: Props) {
         {freezeShown.length === 0 ? (
           <p class={style.quiet} data-testid="no-freeze">
             {rates
-              ? `No band in the range listed freezes ${partLabel(s, target)} round the lock of its nominal speed, ${stepWords(r.sampler)} wide or more, without another part looking still too.`
+              ? `No band in the range listed freezes ${partLabel(s, target)} round the lock of its nominal speed, ${settingStepWords(r.sampler)} wide or more, without another part looking still too.`
               : 'Not worked out yet.'}
           </p>
         ) : (
@@ -308,7 +309,7 @@ export function MachineChainScreen(_props: Props) {
 
   return (
     <ToolLayout
-      testId="machine-chain-screen"
+      testId="whole-machine-screen"
       summary={summary}
       warnings={warnings}
       entries={entries}
@@ -337,12 +338,7 @@ function RateButton({
 /** How the part looks at the rate, in the check screen's words. */
 function lookAt(p: DerivedPart, rateHz: number, sampler: 'flash' | 'frames'): string {
   const part = { speedHz: p.speedHz, symmetry: p.symmetry, tolerance: p.tolerance };
-  return verdictOf(apparentMotion(part, rateHz, { sampler }), part).headline;
-}
-
-/** physics.md §4: the setting step a suggested band must span, in words. */
-function stepWords(sampler: 'flash' | 'frames'): string {
-  return sampler === 'frames' ? '0.01 frames/s' : 'one flash per minute';
+  return verdictHeadline(verdictOf(apparentMotion(part, rateHz, { sampler }), part));
 }
 
 function freezeWords(b: FreezeBand, samples: 'flashes' | 'frames'): string {

@@ -147,7 +147,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         />
       )}
       <p class={style.derived} data-testid={`chain-speed-${index}`}>
-        {/* A speed carried from a refused entry is not the one on screen (physics.md §10). */}
+        {/* A speed carried from a refused entry is not the one on screen (docs/physics.md §10). */}
         {stale.length > 0
           ? `Not current: fix ${fieldNames(stale)} first.`
           : derived

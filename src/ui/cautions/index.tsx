@@ -1,25 +1,21 @@
-import { FLASHING_CAUTION, PLANNING_AID_CAUTION, STILLNESS_CAUTION } from '../../core';
-import { check } from '../../state/check';
+import { FLASHING_CAUTION, PLANNING_AID_CAUTION, STILLNESS_CAUTION } from '../../words/cautions';
 import style from './style.module.css';
 
 interface Props {
   class?: string;
-  /** Which cautions to show, for a screen other than the check (defaults to the check's). */
-  show?: { safety: boolean; photosensitivity: boolean };
+  /** Which cautions to show: the core's cautionFlags for what the screen's result shows. */
+  show: { safety: boolean; photosensitivity: boolean };
 }
 
 /**
- * The cautions of physics.md §10, in the core's words (src/core/plans/safetyCautions.ts, shared with
+ * The cautions of docs/physics.md §10, in the one wording of src/words/cautions.ts (shared with
  * every tool and printed report). They show whenever they apply and cannot be dismissed.
  */
 export function Cautions({ class: extra, show }: Props) {
-  const r = show
-    ? { showSafety: show.safety, showPhotosensitivity: show.photosensitivity }
-    : check.value;
-  if (!r.showSafety && !r.showPhotosensitivity) return null;
+  if (!show.safety && !show.photosensitivity) return null;
   return (
     <div class={`${style.cautions} ${extra ?? ''}`}>
-      {r.showSafety && (
+      {show.safety && (
         <aside class={style.caution} aria-labelledby="safety-title" data-testid="safety-notice">
           <h2 id="safety-title" class={style.title}>
             Still turning: do not trust what you see
@@ -28,7 +24,7 @@ export function Cautions({ class: extra, show }: Props) {
           <p class={style.small}>{PLANNING_AID_CAUTION}</p>
         </aside>
       )}
-      {r.showPhotosensitivity && (
+      {show.photosensitivity && (
         <aside
           class={`${style.caution} ${style.flash}`}
           aria-labelledby="flash-title"

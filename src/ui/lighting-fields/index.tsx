@@ -20,7 +20,7 @@ const WAVEFORMS: ReadonlyArray<{ value: LightWaveform; label: string }> = [
   { value: 'rectified', label: 'Rectified mains' },
 ];
 
-/** How the percent flicker sets each shape's levels (physics.md §6), in a line under the choice. */
+/** How the percent flicker sets each shape's levels (docs/physics.md §6), in a line under the choice. */
 const WAVEFORM_NOTES: Record<LightWaveform, string> = {
   sine: 'A smooth swing between max and min: its flicker component is the percent flicker itself.',
   rectangular:

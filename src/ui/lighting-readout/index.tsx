@@ -1,6 +1,7 @@
 import { formatNumber, formatPercent } from '../../words/format';
 import { check, type LightingResult } from '../../state/check';
 import { Panel } from '../panel';
+import { RISK_LINE_WORDS } from '../../words/lighting';
 import style from './style.module.css';
 
 interface Props {
@@ -8,12 +9,6 @@ interface Props {
   /** The light to describe, for a screen other than the check (defaults to the check's). */
   lighting?: LightingResult;
 }
-
-const RISK_WORDS: Record<LightingResult['risk'], string> = {
-  'no-effect': 'Below the no-observable-effect line',
-  'low-risk': 'Between the no-effect and low-risk lines',
-  elevated: 'Above the low-risk line',
-};
 
 /** The light's shape in words, with a PWM light's duty. */
 function waveWords(l: LightingResult): string {
@@ -53,7 +48,7 @@ export function LightingReadout({ class: extra, lighting }: Props) {
         </div>
         <div data-risk={l.risk}>
           <dt>IEEE Std 1789-2015</dt>
-          <dd data-testid="flicker-risk">{RISK_WORDS[l.risk]}</dd>
+          <dd data-testid="flicker-risk">{RISK_LINE_WORDS[l.risk]}</dd>
           <dd class={style.words}>
             At {formatNumber(l.flickerHz)} Hz the lines are {formatPercent(l.noEffectPercent)} (no
             observable effect) and {formatPercent(l.lowRiskPercent)} (low risk).

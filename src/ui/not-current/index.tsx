@@ -86,7 +86,7 @@ interface WithdrawnProps {
 }
 
 /**
- * An answer withdrawn where it stood because its entries are refused (physics.md §10): which
+ * An answer withdrawn where it stood because its entries are refused (docs/physics.md §10): which
  * field to fix, the field's own message, and a button that takes the cursor there.
  */
 export function Withdrawn({ problems, refusal, what, testId }: WithdrawnProps) {

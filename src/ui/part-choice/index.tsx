@@ -1,5 +1,5 @@
 import { formatNumber } from '../../words/format';
-import { partLabel } from '../../state/model';
+import { partLabel, activeIndex } from '../../state/model';
 import { selectPart } from '../../state/parts';
 import { setup } from '../../state/setup';
 import style from './style.module.css';
@@ -14,7 +14,7 @@ interface Props {
 /** Chooses which part of the set-up a tool works on (the same choice every screen shares). */
 export function PartChoice({ id, label, editHint }: Props) {
   const s = setup.value;
-  const index = s.parts[s.activePart] ? s.activePart : 0;
+  const index = activeIndex(s);
   const part = s.parts[index];
   return (
     <div class={style.field}>

@@ -1,7 +1,7 @@
 import { useState } from 'preact/hooks';
 import { formatNumber } from '../../words/format';
 import { useFollowingText } from '../followingText';
-import { partLabel } from '../../state/model';
+import { partLabel, activeIndex } from '../../state/model';
 import { addPart, removePart, renamePart, selectPart } from '../../state/parts';
 import { setup } from '../../state/setup';
 import { DataError } from '../../state/validate';
@@ -25,7 +25,7 @@ function messageOf(error: unknown): string {
  */
 export function PartsList({ class: extra, title = 'Parts' }: Props) {
   const s = setup.value;
-  const active = s.parts[s.activePart] ? s.activePart : 0;
+  const active = activeIndex(s);
   const chosen = s.parts[active];
   const [problem, setProblem] = useState<string | null>(null);
   // Another part chosen, or its name changed elsewhere: the field follows, in the same render.

@@ -1,17 +1,11 @@
 import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
-import {
-  InputError,
-  rateMapSeries,
-  safetyCautions,
-  type Part,
-  type Range,
-  type RateMapSeries,
-} from '../../core';
+import { InputError, rateMapSeries, type Part, type Range, type RateMapSeries } from '../../core';
 import type { SamplerKind } from '../../state/model';
 import { formatNumber } from '../../words/format';
 import { formatRate, rateNumber, rateUnit, type FlashUnit } from '../../words/rates';
 import { partsKey, rateForKey, speedAxisLimitRpm, unresolvedShare } from './chart-data';
 import type { ChartColours, RateChart } from './chart';
+import { STILLNESS_CAUTION } from '../../words/cautions';
 import style from './style.module.css';
 
 export interface Props {
@@ -30,7 +24,7 @@ export interface Props {
   /** Start with a logarithmic rate axis. Default: logarithmic when the range spans more than 20:1. */
   logAxis?: boolean;
   /**
-   * Show the stillness caution of physics.md §10 under the map (default true); the map marks
+   * Show the stillness caution of docs/physics.md §10 under the map (default true); the map marks
    * rates where parts look still. Pass false only where the screen shows it right beside.
    */
   showCautions?: boolean;
@@ -171,7 +165,7 @@ export function RateMap(props: Props) {
   };
 
   const unit = rateUnit(samplerKind, flashUnit);
-  const caution = showCautions ? safetyCautions({ apparentStillness: true })[0] : null;
+  const caution = showCautions ? STILLNESS_CAUTION : null;
 
   return (
     <div ref={rootRef} class={`${style.rateMap} ${extra ?? ''}`}>

@@ -1,4 +1,5 @@
-import { safetyCautions, type CautionContext } from '../../core';
+import type { CautionContext } from '../../core';
+import { safetyCautions } from '../../words/cautions';
 import { downloadText, fileStem } from '../download';
 import style from './style.module.css';
 
@@ -9,7 +10,7 @@ interface Props {
   machineName?: string;
   /** The tool's main table as CSV (RFC 4180, built with the core's csv helpers); omit when there is none. */
   csv?: () => string;
-  /** Which cautions the printed page must carry (physics.md §10). */
+  /** Which cautions the printed page must carry (docs/physics.md §10). */
   cautions: CautionContext;
 }
 

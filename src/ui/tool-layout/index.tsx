@@ -16,7 +16,7 @@ interface Props {
   report?: ComponentChildren;
   testId?: string;
   /**
-   * When the answer and results stop being current (physics.md §10): while a field among
+   * When the answer and results stop being current (docs/physics.md §10): while a field among
    * `fields` is refused (every field on the page when left out), or while the core refuses the
    * entries (`refusal`), the answer is withdrawn where it stands and the results are marked
    * not current. Left out, the tool's answer never depends on a field's text.

@@ -18,13 +18,13 @@ import {
 
 describe('exposureFromShutterAngle', () => {
   it('gives 1/48 s for 180° at 24 frames/s (the cinema rule)', () => {
-    // Shutter angle at 24 frames/s: 180° = 1/48 s (physics.md check sources).
+    // Shutter angle at 24 frames/s: 180° = 1/48 s (docs/physics.md §13).
     expect(exposureFromShutterAngle(180, 24)).toBeCloseTo(1 / 48, 15);
     expect(exposureFromShutterAngle(180, 24)).toBe(0.020833333333333332); // doc block literal
   });
 
   it('gives 1/50 s for 172.8° and 1/60 s for 144° at 24 frames/s', () => {
-    // Shutter angle at 24 frames/s: 172.8° = 1/50 s, 144° = 1/60 s (physics.md check sources).
+    // Shutter angle at 24 frames/s: 172.8° = 1/50 s, 144° = 1/60 s (docs/physics.md §13).
     expect(exposureFromShutterAngle(172.8, 24)).toBeCloseTo(1 / 50, 15);
     expect(exposureFromShutterAngle(144, 24)).toBeCloseTo(1 / 60, 15);
   });
@@ -87,13 +87,13 @@ describe('shutterAngleFromExposure', () => {
 
 describe('blurDegrees and blurPitches', () => {
   it('turns 10.8° in 1/1000 s at 30 rev/s (doc example: 360·|f|·t)', () => {
-    // physics.md §5: blur 360·|f|·t degrees = 360 × 30 × 0.001.
+    // docs/physics.md §5: blur 360·|f|·t degrees = 360 × 30 × 0.001.
     expect(blurDegrees(30, 1 / 1000)).toBe(10.8);
     expect(blurDegrees(-30, 1 / 1000)).toBe(10.8); // direction does not matter
   });
 
   it('smears a 6-blade fan at 30 rev/s over exactly one pitch in 1/180 s (doc example)', () => {
-    // physics.md §5: n·|f|·t pitches = 6 × 30 / 180.
+    // docs/physics.md §5: n·|f|·t pitches = 6 × 30 / 180.
     expect(blurPitches(30, 6, 1 / 180)).toBe(1);
     expect(blurPitches(30, 6, 1 / 180)).toBeCloseTo((blurDegrees(30, 1 / 180) * 6) / 360, 12);
   });
@@ -121,7 +121,7 @@ describe('blurDegrees and blurPitches', () => {
 
 describe('flashArcBlurM', () => {
   it('moves a point 0.1 m out 2π·R·|f|·t = 0.314 mm during a 10 µs flash at 50 rev/s (doc example)', () => {
-    // physics.md §5: arc blur 2π·R·|f|·t.
+    // docs/physics.md §5: arc blur 2π·R·|f|·t.
     expect(flashArcBlurM(50, 0.1, 10e-6)).toBe(0.00031415926535897936);
     expect(flashArcBlurM(-50, 0.1, 10e-6)).toBeCloseTo(Math.PI * 1e-4, 15);
   });
@@ -139,7 +139,7 @@ describe('flashArcBlurM', () => {
 
 describe('rollingSkewDegrees', () => {
   it('turns a part at 10 rev/s by 108° while a phone reads a frame in 30 ms', () => {
-    // physics.md §5: 360·|f|·T; phone readout typically 22–33 ms at 30 frames/s (Ringaby & Forssén, IJCV 2011).
+    // docs/physics.md §5: 360·|f|·T; phone readout typically 22–33 ms at 30 frames/s (Ringaby & Forssén, IJCV 2011).
     expect(rollingSkewDegrees(10, 0.03)).toBe(108); // doc block literal
     expect(rollingSkewDegrees(10, 0.022)).toBeCloseTo(79.2, 12);
     expect(rollingSkewDegrees(10, 0.033)).toBeCloseTo(118.8, 12);

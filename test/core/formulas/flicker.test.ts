@@ -20,7 +20,7 @@ import {
   notNumbers,
 } from '../expectInputError';
 
-// IEEE Std 1789-2015 recommended-practice lines (physics.md §6): low risk 0.025·f below 90 Hz,
+// IEEE Std 1789-2015 recommended-practice lines (docs/physics.md §6): low risk 0.025·f below 90 Hz,
 // 0.08·f from 90 to 1250 Hz, no limit above; no observable effect 0.01·f below 90 Hz, 0.0333·f
 // from 90 to 3000 Hz, no limit above. flicker.ts documents: 90 Hz belongs to the upper segment,
 // 1250 Hz and 3000 Hz still carry their line, and a modulation on a line counts on the lower-risk side.
@@ -41,7 +41,7 @@ describe('flickerLimits: the IEEE Std 1789-2015 lines', () => {
   });
 
   it('gives the mains flicker rates 100 Hz and 120 Hz their 0.08·f and 0.0333·f lines', () => {
-    // physics.md §6: mains at 50 or 60 Hz usually flickers at 100 or 120 Hz.
+    // docs/physics.md §6: mains at 50 or 60 Hz usually flickers at 100 or 120 Hz.
     expect(flickerLimits(100)).toEqual({
       lowRiskPercent: expect.closeTo(8, 12),
       noEffectPercent: expect.closeTo(3.33, 12),
@@ -123,7 +123,7 @@ describe('flickerRisk', () => {
 
 describe('percentFlicker', () => {
   it('is 100·(Lmax − Lmin)/(Lmax + Lmin): 150 and 50 give 50 % (doc example)', () => {
-    // IES definition of percent flicker, as used by IEEE Std 1789-2015 (physics.md §6).
+    // IES definition of percent flicker, as used by IEEE Std 1789-2015 (docs/physics.md §6).
     expect(percentFlicker(150, 50)).toBe(50);
     expect(percentFlicker(1, 0)).toBe(100);
     expect(percentFlicker(7, 7)).toBe(0);

@@ -16,7 +16,7 @@ const oneMark = (speedHz: number) => ({ speedHz, symmetry: 1 });
 
 describe('apparentMotion: published cases', () => {
   it('counts three creeping images above the Nyquist rate, while the look stays true', () => {
-    // physics.md §3: near r = 1/3 the pattern occupies three positions; one mark at 10 rev/s
+    // docs/physics.md §3: near r = 1/3 the pattern occupies three positions; one mark at 10 rev/s
     // under 30.5 flashes/s drifts as a group at 10 − 30.5/3 = −1/6 rev/s. §2's precedence
     // still reads a faithful sampler as 'true'.
     const m = apparentMotion(oneMark(10), 30.5);
@@ -129,7 +129,7 @@ describe('apparentMotion: the 1000/1001 picture rates', () => {
   });
 });
 
-describe('apparentMotion: precedence of physics.md §2', () => {
+describe('apparentMotion: precedence of docs/physics.md §2', () => {
   it('shows exactly half a turn per flash as two images standing still', () => {
     const m = apparentMotion(oneMark(10), 20);
     expect(m.look).toBe('still');
@@ -138,7 +138,7 @@ describe('apparentMotion: precedence of physics.md §2', () => {
   });
 
   it('shows a three-blade fan at r = 1/2 as six blades: two images of three', () => {
-    // physics.md §3: a 3-blade fan shows 6 blades.
+    // docs/physics.md §3: a 3-blade fan shows 6 blades.
     const m = apparentMotion({ speedHz: 10, symmetry: 3 }, 60);
     expect(m.ratio).toBe(0.5);
     expect(m.look).toBe('still');
@@ -153,7 +153,7 @@ describe('apparentMotion: precedence of physics.md §2', () => {
   });
 
   it('shows q images standing still under a flash for every lock p/q up to the image limit', () => {
-    // physics.md §3: r = p/q in lowest terms gives q superimposed images.
+    // docs/physics.md §3: r = p/q in lowest terms gives q superimposed images.
     for (let q = 1; q <= 8; q++) {
       for (let p = 1; p <= 12; p++) {
         if (reduced(p, q) !== 1) continue;
@@ -195,7 +195,7 @@ describe('apparentMotion: precedence of physics.md §2', () => {
   });
 
   it('calls a step of exactly 0.45 pitch unclear and 0.44 pitch a direction', () => {
-    // physics.md §2: |e| ≥ 0.45 is "direction unclear" (default).
+    // docs/physics.md §2: |e| ≥ 0.45 is "direction unclear" (default).
     expect(apparentMotion(oneMark(29), 20, { sampler: 'frames' }).look).toBe('unclear'); // r = 1.45
     expect(apparentMotion(oneMark(11), 20, { sampler: 'frames' }).look).toBe('unclear'); // r = 0.55
     expect(apparentMotion(oneMark(28.8), 20, { sampler: 'frames' }).look).toBe('forward'); // r = 1.44
@@ -231,11 +231,11 @@ describe('apparentMotion: precedence of physics.md §2', () => {
   });
 });
 
-describe('apparentMotion: which group stands still, and nearly still (physics.md §2–§4)', () => {
+describe('apparentMotion: which group stands still, and nearly still (docs/physics.md §2–§4)', () => {
   const gear = { speedHz: 1780 / 60, symmetry: 60 };
 
   it('shows a 60-tooth gear at 1780 rpm under 13.92 flashes/s as 8 images, the group with the smallest drift', () => {
-    // physics.md §3: 60·29.667/13.92 = 127.8736 pitches a flash. The 8-image group 1023/8
+    // docs/physics.md §3: 60·29.667/13.92 = 127.8736 pitches a flash. The 8-image group 1023/8
     // drifts |1780 − 1023·13.92/8|/60 = 0.02 rpm, the 7-image group 895/7 drifts
     // |1780 − 895·13.92/7|/60 = 0.229 rpm: both at or below 0.25 rpm, the 8 images stand still.
     const seen = apparentMotion(gear, 13.92);
@@ -246,7 +246,7 @@ describe('apparentMotion: which group stands still, and nearly still (physics.md
   });
 
   it('reports at every lock lockRates lists the image count it lists', () => {
-    // physics.md §3: the count apparentMotion reports equals lockRates' (here around 13.92 flashes/s).
+    // docs/physics.md §3: the count apparentMotion reports equals lockRates' (here around 13.92 flashes/s).
     const locks = lockRates(gear, { minHz: 13, maxHz: 15 });
     expect(locks.length).toBeGreaterThan(20);
     for (const lock of locks) {
@@ -255,7 +255,7 @@ describe('apparentMotion: which group stands still, and nearly still (physics.md
   });
 
   it('reads a drift equal to the still threshold as still: 3000.25 rpm at 50 frames/s', () => {
-    // physics.md §2: thresholds are inclusive with a relative slack of about 1e-12;
+    // docs/physics.md §2: thresholds are inclusive with a relative slack of about 1e-12;
     // 3000.25/60 − 50 = 0.25/60 rev/s, exactly the 0.25 rpm threshold.
     for (const sampler of ['frames', 'flash'] as const) {
       expect(apparentMotion({ speedHz: 3000.25 / 60, symmetry: 1 }, 50, { sampler })).toMatchObject(
@@ -272,7 +272,7 @@ describe('apparentMotion: which group stands still, and nearly still (physics.md
   });
 
   it('marks a forward creep below 6 rpm nearly still, and one at 6 rpm or more not', () => {
-    // physics.md §4: nearly still below 6 rpm (one turn in 10 s or longer).
+    // docs/physics.md §4: nearly still below 6 rpm (one turn in 10 s or longer).
     const mark = { speedHz: 30, symmetry: 1 };
     // 30 rev/s under 29.95 flashes/s: 0.05 rev/s = 3 rpm forward.
     expect(apparentMotion(mark, 29.95)).toMatchObject({ look: 'forward', nearlyStill: true });

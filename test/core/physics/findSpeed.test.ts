@@ -15,7 +15,7 @@ const single = (rateHz: number) => ({ rateHz, images: 1 });
 
 describe('findSpeed: two adjacent single images', () => {
   it('finds n·f = F1·F2/(F1 − F2): single images at 30 and 20 flashes/s mean 60 rev/s (doc example)', () => {
-    // physics.md §7: two adjacent single-image rates F1 > F2 give n·f = F1·F2/(F1 − F2) = 600/10.
+    // docs/physics.md §7: two adjacent single-image rates F1 > F2 give n·f = F1·F2/(F1 − F2) = 600/10.
     const found = findSpeed([single(30), single(20)], 1);
     expect(found.candidates[0].speedHz).toBe(60); // doc block example
     expect(found.candidates[0].locks).toEqual([
@@ -70,7 +70,7 @@ describe('findSpeed: ranking and the next rate', () => {
   });
 
   it('proposes twice the top candidate, where it shows a double image, when that tells the candidates apart', () => {
-    // physics.md §7: twice the top candidate's rate shows a double image if it is right.
+    // docs/physics.md §7: twice the top candidate's rate shows a double image if it is right.
     const found = findSpeed([single(30), single(20)], 1, undefined, { maxMultiple: 4 });
     expect(found.candidates.map((c) => c.speedHz)).toEqual([60, 120]);
     expect(found.nextRateHz).toBe(120);
@@ -110,10 +110,10 @@ describe('findSpeed: ranking and the next rate', () => {
   });
 });
 
-describe('findSpeed: an expected range is enumerated, never capped away (physics.md §7)', () => {
+describe('findSpeed: an expected range is enumerated, never capped away (docs/physics.md §7)', () => {
   it('lists every speed of a 60-tooth gear in 29–30 rev/s from one image at 10 flashes/s', () => {
     // Reported case. n·f = k·F with k from ⌈60·29/10⌉ = 174 to ⌊60·30/10⌋ = 180: seven speeds,
-    // k/6 rev/s = 29, 29.17, …, 30 (physics.md §7).
+    // k/6 rev/s = 29, 29.17, …, 30 (docs/physics.md §7).
     const found = findSpeed([single(10)], 60, { minHz: 29, maxHz: 30 });
     const inside = found.candidates.filter((c) => c.expected);
     expect(inside.map((c) => c.speedHz * 6)).toEqual(
@@ -145,7 +145,7 @@ describe('findSpeed: an expected range is enumerated, never capped away (physics
   });
 });
 
-describe('findSpeed: the next rate is searched over the whole strobe range (physics.md §7)', () => {
+describe('findSpeed: the next rate is searched over the whole strobe range (docs/physics.md §7)', () => {
   const strobe = { minHz: 30 / 60, maxHz: 12000 / 60 };
 
   it('after single images at 1500 and 1000 flashes/min proposes a rate where the candidates look different, not 3000', () => {
@@ -168,7 +168,7 @@ describe('findSpeed: the next rate is searched over the whole strobe range (phys
 
   it('after single images at 30 and 20 flashes/s finds a rate in a 1–35 Hz strobe that tells 60 rev/s from 120', () => {
     // Reported case: the old search said no rate helps. 24 flashes/s, for one, shows 2 images at
-    // 60 rev/s (r = 5/2) and 1 at 120 rev/s (r = 5), physics.md §3.
+    // 60 rev/s (r = 5/2) and 1 at 120 rev/s (r = 5), docs/physics.md §3.
     expect(replay(sceneOf(60, 1, 24, 'flash')).images).toBe(2);
     expect(replay(sceneOf(120, 1, 24, 'flash')).images).toBe(1);
     const found = findSpeed([single(30), single(20)], 1, undefined, {

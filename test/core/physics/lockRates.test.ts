@@ -16,7 +16,7 @@ describe('lockRates: published cases', () => {
   });
 
   it('adds the multi-image locks p/q between 20 and 30 when up to 8 images are counted', () => {
-    // physics.md §3: s = n·|f|·q/p = 24·q/p, gcd(p, q) = 1, q ≤ 8; worked by hand.
+    // docs/physics.md §3: s = n·|f|·q/p = 24·q/p, gcd(p, q) = 1, q ≤ 8; worked by hand.
     const found = lockRates(wheel, { minHz: 20, maxHz: 30 }).map((l) => [l.p, l.q]);
     expect(found).toEqual([
       [6, 5], // 24·5/6 = 20 (the lower range end, included)
@@ -40,7 +40,7 @@ describe('lockRates: published cases', () => {
   });
 });
 
-describe('lockRates: structure of physics.md §3', () => {
+describe('lockRates: structure of docs/physics.md §3', () => {
   it('gives the sub-multiples n·|f|/p as single images and the multiples q·n·|f| as q images', () => {
     const locks = lockRates({ speedHz: 10, symmetry: 1 }, { minHz: 1, maxHz: 100 });
     const single = locks.filter((l) => l.q === 1).map((l) => l.rateHz);
@@ -59,7 +59,7 @@ describe('lockRates: structure of physics.md §3', () => {
   });
 
   it('places the highest single-image rate at n·|f|', () => {
-    // physics.md §3: the highest rate that gives one single image is s = n·|f|.
+    // docs/physics.md §3: the highest rate that gives one single image is s = n·|f|.
     const locks = lockRates({ speedHz: 29.5, symmetry: 6 }, { minHz: 1, maxHz: 2000 });
     const highestSingle = Math.max(...locks.filter((l) => l.images === 1).map((l) => l.rateHz));
     expect(highestSingle).toBeCloseTo(6 * 29.5, 9);
@@ -127,7 +127,7 @@ describe('lockRates: range ends and tolerance bands', () => {
   });
 
   it('spreads each lock into the band [n|f|(1−u)·q/p, n|f|(1+u)·q/p] for a tolerance u', () => {
-    // physics.md §3: a speed tolerance ±u turns each lock-in rate into a band.
+    // docs/physics.md §3: a speed tolerance ±u turns each lock-in rate into a band.
     const locks = lockRates(
       { speedHz: 24.5, symmetry: 1, tolerance: 0.03 },
       { minHz: 5, maxHz: 100 },
@@ -160,8 +160,8 @@ describe('lockRates: range ends and tolerance bands', () => {
   });
 });
 
-describe('lockRates: large numbers (issue 8, item 10)', () => {
-  /** The locks p/q of a range by brute force over p (physics.md §3's definition), for checking. */
+describe('lockRates: large numbers', () => {
+  /** The locks p/q of a range by brute force over p (docs/physics.md §3's definition), for checking. */
   function bruteForce(F: number, minHz: number, maxHz: number, maxImages: number) {
     const out: Array<{ p: number; q: number }> = [];
     for (let q = 1; q <= maxImages; q++) {

@@ -7,24 +7,24 @@ import {
 import { bad, expectInputError } from '../expectInputError';
 
 describe('defaultLookOptions', () => {
-  it('reads drift below 0.25 rpm as still (a documented judgement, physics.md §2)', () => {
+  it('reads drift below 0.25 rpm as still (a documented judgement, docs/physics.md §2)', () => {
     expect(defaultLookOptions.stillHz * 60).toBeCloseTo(0.25, 12);
-    // 0.25 rpm is 1.5 degrees per second (physics.md §2).
+    // 0.25 rpm is 1.5 degrees per second (docs/physics.md §2).
     expect(defaultLookOptions.stillHz * 360).toBeCloseTo(1.5, 12);
   });
 
-  it('calls a step of 0.45 pitch or more unclear and counts up to 8 images (physics.md §2, §3)', () => {
+  it('calls a step of 0.45 pitch or more unclear and counts up to 8 images (docs/physics.md §2, §3)', () => {
     expect(defaultLookOptions.unclearStep).toBe(0.45);
     expect(defaultLookOptions.maxImages).toBe(8);
     expect(defaultLookOptions.groupSpacingsPerS).toBe(1);
   });
 
-  it('reads an aliased view slower than 6 rpm as nearly still: one turn in 10 s or longer (a documented judgement, physics.md §4)', () => {
+  it('reads an aliased view slower than 6 rpm as nearly still: one turn in 10 s or longer (a documented judgement, docs/physics.md §4)', () => {
     expect(defaultLookOptions.nearlyStillHz * 60).toBeCloseTo(6, 12);
     expect(1 / defaultLookOptions.nearlyStillHz).toBeCloseTo(10, 12); // seconds a turn
   });
 
-  it('compares thresholds with a relative slack below 1e-12 but far above one rounding (physics.md §2)', () => {
+  it('compares thresholds with a relative slack below 1e-12 but far above one rounding (docs/physics.md §2)', () => {
     expect(THRESHOLD_SLACK).toBeLessThan(1e-12);
     expect(THRESHOLD_SLACK).toBeGreaterThan(100 * Number.EPSILON);
   });

@@ -12,7 +12,7 @@ function bandInside(bands: RateBand[], s: number): RateBand | undefined {
 }
 
 /**
- * What apparentMotion says: does this rate mislead about this part? physics.md §4: safe is
+ * What apparentMotion says: does this rate mislead about this part? docs/physics.md §4: safe is
  * faithful, or forward as one image at the nearly-still threshold (6 rpm) or faster.
  */
 function misleads(part: Part, s: number, sampler: Sampler): boolean {
@@ -42,7 +42,7 @@ describe('rateBands: the camera case', () => {
   });
 
   it('calls every frame rate above 2·n·|f|·(1 + u) safe, and the rate just below it misleading', () => {
-    // physics.md §4: for frames every rate > 2·n·|f|·(1+u) is safe. 3 blades, 10 rev/s, ±5 %: 63 frames/s.
+    // docs/physics.md §4: for frames every rate > 2·n·|f|·(1+u) is safe. 3 blades, 10 rev/s, ±5 %: 63 frames/s.
     const bands = rateBands(
       [{ speedHz: 10, symmetry: 3, tolerance: 0.05 }],
       { minHz: 1, maxHz: 200 },
@@ -71,7 +71,7 @@ describe('rateBands: the camera case', () => {
       { part: 0, kind: 'still', images: 1 },
       { part: 0, kind: 'nearly-still', images: 1 },
     ]);
-    // physics.md §4: the margin below the freeze at 10 frames/s ends where the mark creeps
+    // docs/physics.md §4: the margin below the freeze at 10 frames/s ends where the mark creeps
     // forward at 6 rpm = 0.1 rev/s: 10 − 0.1 = 9.9 frames/s.
     expect(band.fromHz).toBeCloseTo(9.9, 12);
     expect(band.toHz).toBe(20);
@@ -81,7 +81,7 @@ describe('rateBands: the camera case', () => {
 
 describe('rateBands: the strobe case', () => {
   it('keeps multi-image locks misleading at any rate under a flash, however high', () => {
-    // physics.md §4: for a flash the multi-image locks stay misleading at any rate.
+    // docs/physics.md §4: for a flash the multi-image locks stay misleading at any rate.
     const part = { speedHz: 10, symmetry: 1 };
     const flash = rateBands([part], { minHz: 1, maxHz: 200 }, { sampler: 'flash' });
     for (const q of [3, 4, 5, 6, 7, 8]) {
@@ -97,7 +97,7 @@ describe('rateBands: the strobe case', () => {
   });
 
   it('never steps over a lock inside a wide tolerance band', () => {
-    // physics.md §4: report bands, not points; a lock inside a tolerance band must never be stepped over.
+    // docs/physics.md §4: report bands, not points; a lock inside a tolerance band must never be stepped over.
     const part = { speedHz: 24.5, symmetry: 6, tolerance: 0.2 };
     const range = { minHz: 5, maxHz: 1500 };
     const bands = rateBands([part], range, { sampler: 'flash' });
@@ -112,7 +112,7 @@ describe('rateBands: the strobe case', () => {
   });
 });
 
-describe('rateBands: the nearly-still margin (physics.md §4)', () => {
+describe('rateBands: the nearly-still margin (docs/physics.md §4)', () => {
   // Reported case: a 3-jaw chuck at 2000 rpm ±1 % under a strobe.
   const chuck = { speedHz: 2000 / 60, symmetry: 3, tolerance: 0.01 };
   const strobe = { minHz: 30 / 60, maxHz: 12000 / 60 };
@@ -123,7 +123,7 @@ describe('rateBands: the nearly-still margin (physics.md §4)', () => {
     expect(at.safe).toBe(false);
     expect(at.causes).toContainEqual({ part: 0, kind: 'nearly-still', images: 1 });
     // At 1980 rpm (inside ±1 %): 3·33/98.983 = 1.000168 pitches a flash, a forward creep of
-    // 0.000168·98.983/3 rev/s = 0.33 rpm (physics.md §2): below 6 rpm, nearly still.
+    // 0.000168·98.983/3 rev/s = 0.33 rpm (docs/physics.md §2): below 6 rpm, nearly still.
     const seen = apparentMotion({ speedHz: 1980 / 60, symmetry: 3 }, 5939 / 60);
     expect(seen.look).toBe('forward');
     expect(seen.apparentHz * 60).toBeCloseTo(1 / 3, 9);
@@ -131,7 +131,7 @@ describe('rateBands: the nearly-still margin (physics.md §4)', () => {
   });
 
   it('keeps the safe band below the 100 flashes/s lock until the slowest speed creeps forward at 6 rpm', () => {
-    // physics.md §4: the edge is where the apparent speed at the worst speed within tolerance
+    // docs/physics.md §4: the edge is where the apparent speed at the worst speed within tolerance
     // falls to the threshold: s = n·|f|·(1 − u) − n·0.1 rev/s = 99 − 0.3 = 98.7 flashes/s (5922 fpm).
     const bands = rateBands([chuck], { minHz: 90, maxHz: 99.5 }, { sampler: 'flash' });
     const safeBelow = bands.filter((b) => b.safe).at(-1)!;

@@ -9,14 +9,14 @@ const oneMark = (speedHz: number) => ({ speedHz, symmetry: 1 });
 
 describe('ratesForApparent: worked examples', () => {
   it('finds 29.5 flashes/s to make one mark at 30 rev/s creep forward at 0.5 rev/s', () => {
-    // physics.md §4 example check: f = 30, n = 1, a = 0.5 → s = 29.5. Doc block example.
+    // docs/physics.md §4 example check: f = 30, n = 1, a = 0.5 → s = 29.5. Doc block example.
     expect(ratesForApparent(oneMark(30), 0.5, { minHz: 20, maxHz: 40 })).toEqual([
       { rateHz: 29.5, k: 1 },
     ]);
   });
 
   it('finds 30.5 flashes/s to make the same mark creep backward at 0.5 rev/s', () => {
-    // s = n·|f − a|/k = |30 − (−0.5)|/1 (physics.md §4).
+    // s = n·|f − a|/k = |30 − (−0.5)|/1 (docs/physics.md §4).
     const rates = ratesForApparent(oneMark(30), -0.5, { minHz: 20, maxHz: 40 });
     expect(rates).toEqual([{ rateHz: 30.5, k: 1 }]);
     const seen = apparentMotion(oneMark(30), rates[0].rateHz);
@@ -32,7 +32,7 @@ describe('ratesForApparent: worked examples', () => {
       { minHz: 1, maxHz: 40 },
       { sampler: 'frames' },
     );
-    // k = 27…29 step 0.458, 0.475, 0.492 pitch per frame: direction unclear (physics.md §2).
+    // k = 27…29 step 0.458, 0.475, 0.492 pitch per frame: direction unclear (docs/physics.md §2).
     expect(rates.map((r) => r.k)).toEqual(Array.from({ length: 26 }, (_, i) => 26 - i));
     for (const { rateHz, k } of rates) {
       expect(rateHz).toBeCloseTo(29.5 / k, 12);
@@ -61,13 +61,13 @@ describe('ratesForApparent: worked examples', () => {
     for (const { rateHz } of rates) {
       const seen = apparentMotion(part, rateHz);
       expect(seen.apparentHz).toBeCloseTo(1, 9);
-      // +1 rev/s against a speed of −10: turning backward, as one image (physics.md §4).
+      // +1 rev/s against a speed of −10: turning backward, as one image (docs/physics.md §4).
       expect([seen.look, seen.images]).toEqual(['backward', 1]);
     }
   });
 
-  it('under a flash, drops the sub-multiples where several images show (physics.md §4)', () => {
-    // physics.md §4: keep only rates where the flash shows ONE image moving as wanted. Under a
+  it('under a flash, drops the sub-multiples where several images show (docs/physics.md §4)', () => {
+    // docs/physics.md §4: keep only rates where the flash shows ONE image moving as wanted. Under a
     // flash the slow sub-multiples of 29.5 flashes/s put one mark at 30 rev/s close to a p/q
     // with q ≥ 2 (k = 22: 30·22/29.5 = 22.37 ≈ 179/8, eight images standing still).
     const flash = ratesForApparent(oneMark(30), 0.5, { minHz: 1, maxHz: 40 });
@@ -103,7 +103,7 @@ describe('ratesForApparent: the validity limit |k·a/(f − a)| < 0.5', () => {
       ratesForApparent(oneMark(10), 2, { minHz: 1, maxHz: 100 }, { sampler: 'frames' }),
     ).toEqual([{ rateHz: 8, k: 1 }]);
     // Under a flash 8 flashes/s is the lock 5/4 (10/8 = 1.25): four images stand still, so
-    // no rate shows one image creeping at 2 rev/s (physics.md §3, §4).
+    // no rate shows one image creeping at 2 rev/s (docs/physics.md §3, §4).
     expect(ratesForApparent(oneMark(10), 2, { minHz: 1, maxHz: 100 })).toEqual([]);
     expect(apparentMotion(oneMark(10), 8)).toMatchObject({ look: 'still', images: 4 });
     expect(apparentMotion(oneMark(10), 4, { sampler: 'frames' }).apparentHz).toBeCloseTo(-2, 12);
@@ -173,7 +173,7 @@ describe('ratesForApparent: the validity limit |k·a/(f − a)| < 0.5', () => {
   });
 });
 
-describe('ratesForApparent: only rates that really show the wanted motion (physics.md §4)', () => {
+describe('ratesForApparent: only rates that really show the wanted motion (docs/physics.md §4)', () => {
   // Reported case: a 6-blade fan at 1780 rpm, wanted 0.5 rev/s backward, strobe 30–12000 flashes/min.
   const fan = { speedHz: 1780 / 60, symmetry: 6 };
   const strobe = { minHz: 0.5, maxHz: 200 };
@@ -183,11 +183,11 @@ describe('ratesForApparent: only rates that really show the wanted motion (physi
     expect(rates.length).toBeGreaterThan(0);
     for (const { rateHz } of rates) {
       const seen = apparentMotion(fan, rateHz, { sampler: 'flash' });
-      // physics.md §4: one image, a clear direction, the wanted motion.
+      // docs/physics.md §4: one image, a clear direction, the wanted motion.
       expect([seen.images, seen.look], `${rateHz} flashes/s`).toEqual([1, 'backward']);
       expect(seen.apparentHz).toBeCloseTo(-0.5, 9);
     }
-    // s = n·|f − a|/k (physics.md §4): 6·(29.667 + 0.5)/20 = 9.05 flashes/s is the lock 20/3,
+    // s = n·|f − a|/k (docs/physics.md §4): 6·(29.667 + 0.5)/20 = 9.05 flashes/s is the lock 20/3,
     // three images standing still there: not offered.
     expect(apparentMotion(fan, 9.05)).toMatchObject({ look: 'still', images: 3 });
     expect(rates.some((r) => r.k === 20)).toBe(false);
@@ -208,7 +208,7 @@ describe('ratesForApparent: only rates that really show the wanted motion (physi
   it('never offers a rate where the direction is unclear', () => {
     // One mark at 30 rev/s, wanted 0.5 rev/s forward: k = 27…29 pass the validity limit
     // |k·a/(f − a)| < 0.5 but step 0.458–0.492 pitch per sample, direction unclear from 0.45
-    // (physics.md §2); every rate kept has |step| < 0.45.
+    // (docs/physics.md §2); every rate kept has |step| < 0.45.
     for (const sampler of ['flash', 'frames'] as const) {
       for (const { rateHz } of ratesForApparent(
         oneMark(30),
@@ -224,7 +224,7 @@ describe('ratesForApparent: only rates that really show the wanted motion (physi
   });
 
   it('gives nothing for a wanted speed at or below the still threshold: it would look still, not turn', () => {
-    // 0.2 rpm is below the 0.25 rpm still threshold (physics.md §2).
+    // 0.2 rpm is below the 0.25 rpm still threshold (docs/physics.md §2).
     expect(ratesForApparent(oneMark(30), 0.2 / 60, { minHz: 20, maxHz: 40 })).toEqual([]);
   });
 });

@@ -6,9 +6,9 @@ import {
 } from '../../../src/core/physics/settableBands';
 import { bad, expectInputError } from '../expectInputError';
 
-describe('the setting step (physics.md §4)', () => {
+describe('the setting step (docs/physics.md §4)', () => {
   it('is 1 flash per minute for a strobe and 0.01 frames/s for a camera by default', () => {
-    // physics.md §4: "default 1 flash per minute for strobes, 0.01 frames/s for cameras".
+    // docs/physics.md §4: "default 1 flash per minute for strobes, 0.01 frames/s for cameras".
     expect(DEFAULT_SETTING_STEP_HZ.flash * 60).toBeCloseTo(1, 12);
     expect(DEFAULT_SETTING_STEP_HZ.frames).toBe(0.01);
     expect(settingStepHz('flash')).toBe(1 / 60);
@@ -23,7 +23,7 @@ describe('the setting step (physics.md §4)', () => {
   });
 });
 
-describe('isSettableBand: a band a person can set, that does what it says (physics.md §4)', () => {
+describe('isSettableBand: a band a person can set, that does what it says (docs/physics.md §4)', () => {
   const fpm = 1 / 60;
 
   it('refuses the reported sliver 6060.7–6060.8 flashes/min: a tenth of a step', () => {

@@ -19,7 +19,7 @@ describe('driveChain: speeds along the drives', () => {
   });
 
   it('turns the fan of a 100 mm to 250 mm belt at 0.4 times the motor, with the same relative tolerance', () => {
-    // Belt drive D1·n1 = D2·n2 (physics.md §8): 1450–1500 rpm × 0.4 = 580–600 rpm.
+    // Belt drive D1·n1 = D2·n2 (docs/physics.md §8): 1450–1500 rpm × 0.4 = 580–600 rpm.
     const [m, fan] = driveChain({
       root: motor50,
       parts: [
@@ -70,7 +70,7 @@ describe('driveChain: speeds along the drives', () => {
   });
 
   it('reverses the direction through an external gear mesh and keeps it through an internal one', () => {
-    // Gears z1·n1 = z2·n2 (physics.md §8): 20 → 60 teeth turns a third as fast.
+    // Gears z1·n1 = z2·n2 (docs/physics.md §8): 20 → 60 teeth turns a third as fast.
     const spec: ChainSpec = {
       root: { kind: 'fixed', speedHz: 30, tolerance: 0.01 },
       parts: [

@@ -39,7 +39,7 @@ describe('stillRates: where parts can look still', () => {
   });
 
   it('adds the multi-image locks under a flash, at s = n·|f|·q/p', () => {
-    // physics.md §3, worked by hand: 24·q/p in 20–30 Hz with q ≤ 8 (as in lockRates' own test).
+    // docs/physics.md §3, worked by hand: 24·q/p in 20–30 Hz with q ≤ 8 (as in lockRates' own test).
     const spans = stillRates([wheel], { minHz: 20, maxHz: 30 });
     expect(spans.map((s) => [s.p, s.images])).toEqual([
       [6, 5],
@@ -68,7 +68,7 @@ describe('stillRates: where parts can look still', () => {
           const m = apparentMotion(part, rateHz, { sampler });
           const holding = spans.filter((x) => x.fromHz < rateHz && rateHz < x.toHz);
           expect(m.look === 'still').toBe(holding.length > 0);
-          // physics.md §3: of the groups standing still, the one with the smallest drift
+          // docs/physics.md §3: of the groups standing still, the one with the smallest drift
           // |n·f − (p/q)·s| is seen (ties to the smaller q).
           const drift = (x: StillSpan) => Math.abs(symmetry * speedHz - (x.p * rateHz) / x.images);
           const seen = [...holding].sort((a, b) => drift(a) - drift(b) || a.images - b.images)[0];
@@ -199,7 +199,7 @@ describe('freezeRates: freeze one part while no other looks still', () => {
         fc.array(fc.double({ min: 5, max: 120, noNaN: true }), { minLength: 20, maxLength: 20 }),
         (parts: Part[], sampler, rates) => {
           const range = { minHz: 5, maxHz: 120 };
-          const step = sampler === 'flash' ? 1 / 60 : 0.01; // physics.md §4 default steps
+          const step = sampler === 'flash' ? 1 / 60 : 0.01; // docs/physics.md §4 default steps
           const bands = freezeRates(parts, 0, range, { sampler });
           const own = stillRates([parts[0]], range, { sampler: 'frames' }); // single images only
           const others = stillRates(parts.slice(1), range, { sampler });
@@ -207,7 +207,7 @@ describe('freezeRates: freeze one part while no other looks still', () => {
           for (let i = 1; i < bands.length; i++)
             expect(bands[i].fromHz).toBeGreaterThanOrEqual(bands[i - 1].toHz);
           for (const b of bands) {
-            // physics.md §4: contains the nominal lock, at least one setting step wide.
+            // docs/physics.md §4: contains the nominal lock, at least one setting step wide.
             expect(b.lockRateHz).toBeCloseTo(F / b.p, 9);
             expect(b.fromHz).toBeLessThanOrEqual(b.lockRateHz);
             expect(b.toHz).toBeGreaterThanOrEqual(b.lockRateHz);
@@ -249,7 +249,7 @@ describe('freezeRates: freeze one part while no other looks still', () => {
     // 6-blade fan at 990 rpm ±1 % (lock 99 flashes/s, still up to 99.99 + 6·0.25/60 = 100.015).
     // The chuck is still for some speed in its tolerance up to 101 + 3·0.25/60 = 101.0125 flashes/s,
     // but the piece above the fan's span misses 100 flashes/s: at the nominal 2000 rpm the chuck
-    // turns backward there (n·f/s = 100/100.5 < 1, physics.md §2).
+    // turns backward there (n·f/s = 100/100.5 < 1, docs/physics.md §2).
     const chuck = { speedHz: 2000 / 60, symmetry: 3, tolerance: 0.01 };
     const fan = { speedHz: 990 / 60, symmetry: 6, tolerance: 0.01 };
     const range = { minHz: 90, maxHz: 110 };
@@ -262,7 +262,7 @@ describe('freezeRates: freeze one part while no other looks still', () => {
   });
 
   it('does not offer a sliver narrower than one flash per minute, even round the nominal lock', () => {
-    // One mark at 1800 rpm exactly (physics.md §4: default step 1 flash/min): its still span is
+    // One mark at 1800 rpm exactly (docs/physics.md §4: default step 1 flash/min): its still span is
     // 1800 ± 0.25 flashes/min wide (the still threshold), half a step: not settable on the dial.
     const mark = { speedHz: 30, symmetry: 1 };
     const range = { minHz: 25, maxHz: 35 };
@@ -319,7 +319,7 @@ describe('noStillRates: rates at which no part looks still', () => {
         fc.array(fc.double({ min: 5, max: 150, noNaN: true }), { minLength: 20, maxLength: 20 }),
         (parts: Part[], rates) => {
           const range = { minHz: 5, maxHz: 150 };
-          const step = 1 / 60; // physics.md §4: one flash per minute
+          const step = 1 / 60; // docs/physics.md §4: one flash per minute
           const free = noStillRates(parts, range);
           const spans: StillSpan[] = stillRates(parts, range);
           for (const b of free) expect(b.toHz - b.fromHz).toBeGreaterThanOrEqual(step * (1 - 1e-9));

@@ -27,9 +27,8 @@ describe('lightingCheck: how the machine looks under a flickering lamp', () => {
       hazard: true,
       verdict: 'hazard',
     });
-    expect(row.text).toMatch(/chuck can look still under this light although it turns at 3000 rpm/);
+    expect(row.speedHz).toBe(50);
     expect(check.verdict).toBe('hazard');
-    expect(check.summary).toMatch(/Hazard: chuck/);
   });
 
   it('gives the IEEE 1789 lines and the CIE SVM of the 100 Hz component', () => {
@@ -46,12 +45,12 @@ describe('lightingCheck: how the machine looks under a flickering lamp', () => {
 
   it('shows the chuck at its typical full-load 2900 rpm creeping backward at 100 rpm', () => {
     // Engineering ToolBox: 2900 rpm typical for 2 poles at 50 Hz. Pattern 2·2900/60 = 96.67 Hz;
-    // r = 0.9667, step −1/30 pitch, apparent −(1/30)·100/2 rev/s = −100 rpm (physics.md §2).
+    // r = 0.9667, step −1/30 pitch, apparent −(1/30)·100/2 rev/s = −100 rpm (docs/physics.md §2).
     const [row] = lightingCheck(lamp50, [{ name: 'chuck', speedHz: 2900 / 60, symmetry: 2 }]).parts;
     expect(row.look).toBe('backward');
     expect(row.apparentRpm).toBeCloseTo(-100, 9);
     expect(row.hazard).toBe(true);
-    expect(row.text).toMatch(/turns backward/);
+    expect(row.worstLook).toBe('backward');
   });
 
   it('freezes a 4-blade fan on a 4-pole 60 Hz motor at synchronous speed under 120 Hz flicker', () => {
@@ -87,7 +86,6 @@ describe('lightingCheck: how the machine looks under a flickering lamp', () => {
       hazard: false,
       verdict: 'caution',
     });
-    expect(check.parts[0].text).toMatch(/below the average observer's threshold/);
     expect(check.verdict).toBe('caution');
     expect(check.remedies.length).toBeGreaterThan(0);
   });
@@ -98,13 +96,12 @@ describe('lightingCheck: how the machine looks under a flickering lamp', () => {
       { name: 'roller', speedHz: 0.5, symmetry: 1 },
     ]);
     expect(check.parts[0]).toMatchObject({ look: 'true', worstLook: 'true', verdict: 'fine' });
-    expect(check.parts[0].text).toBe('roller turns the right way at its true speed.');
     expect(check.verdict).toBe('fine');
     expect(check.remedies).toEqual([]);
   });
 
   it('sees nothing misleading when the light does not flicker: at 0 % nothing looks still', () => {
-    // Steady light samples nothing (physics.md §6): the chuck that stands still at 30 % shows its true motion.
+    // Steady light samples nothing (docs/physics.md §6): the chuck that stands still at 30 % shows its true motion.
     const check = lightingCheck({ ...lamp50, modulationPercent: 0 }, [chuck]);
     expect(check.svm).toBe(0);
     expect(check.parts[0]).toMatchObject({
@@ -117,27 +114,23 @@ describe('lightingCheck: how the machine looks under a flickering lamp', () => {
       verdict: 'fine',
     });
     expect(check.verdict).toBe('fine');
-    expect(check.summary).toMatch(/does not flicker/);
-    expect(check.cautions).toHaveLength(1); // only the planning-aid caution
+    expect(check.modulationPercent).toBe(0);
+    expect(check.cautions).toEqual(['planning-aid']);
   });
 
   it('recommends high-frequency drivers, lamps on different phases, task lighting and local rules', () => {
     const { remedies, cautions } = lightingCheck(lamp50, [chuck]);
-    const text = remedies.join(' ');
-    expect(text).toMatch(/high frequency/);
-    expect(text).toMatch(/different phases of a three-phase supply/);
-    expect(text).toMatch(/task lamp on a steady source/);
-    expect(text).toMatch(/Local lighting rules and machinery-safety rules/);
-    expect(cautions.join(' ')).toMatch(/lock out/);
+    expect(remedies).toEqual(['steady-drivers', 'split-phases', 'task-lamp', 'local-rules']);
+    expect(cautions).toContain('stillness');
   });
 
   it('flickers at the mains frequency when asked, and warns about flashing in the seizure range', () => {
-    // IEEE Std 1789-2015 below 90 Hz: 0.025·50 = 1.25 %, 0.01·50 = 0.5 %. WCAG 2.x 2.3.1 / physics.md §10: 3–60 Hz.
+    // IEEE Std 1789-2015 below 90 Hz: 0.025·50 = 1.25 %, 0.01·50 = 0.5 %. WCAG 2.x 2.3.1 / docs/physics.md §10: 3–60 Hz.
     const check = lightingCheck({ mainsHz: 50, flicker: 'mains', modulationPercent: 30 }, [chuck]);
     expect(check.flickerHz).toBe(50);
     expect(check.lowRiskPercent).toBeCloseTo(1.25, 12);
     expect(check.noEffectPercent).toBeCloseTo(0.5, 12);
-    expect(check.cautions.join(' ')).toMatch(/photosensitive epilepsy/);
+    expect(check.cautions).toContain('flashing');
   });
 
   it('takes a custom flicker frequency and then suggests changing the dimmer rather than the phases', () => {
@@ -146,9 +139,8 @@ describe('lightingCheck: how the machine looks under a flickering lamp', () => {
     ]);
     expect(check.flickerHz).toBe(300);
     expect(check.parts[0].worstLook).toBe('still'); // 6·50 = 300 features a second
-    const text = check.remedies.join(' ');
-    expect(text).toMatch(/dimmer's switching frequency/);
-    expect(text).not.toMatch(/three-phase/);
+    expect(check.remedies).toContain('faster-dimmer');
+    expect(check.remedies).not.toContain('split-phases');
   });
 });
 
@@ -209,7 +201,7 @@ describe('lightingCheck: never NaN or Infinity', () => {
   });
 });
 
-describe('lightingCheck: the lamp’s waveform (issue 8 item 9)', () => {
+describe('lightingCheck: the lamp’s waveform', () => {
   it('counts a PWM lamp’s harmonics: a 50 % square wave at 25 % flicker is visible where a sine is not', () => {
     // Sine: SVM = 0.25/T(100) = 0.96 < 1. Square wave of the same percent flicker: C_m = 4·0.25/(mπ)
     // for odd m (Fourier series of a rectangular pulse train), combined to 2 kHz with exponent 3.7.
@@ -239,12 +231,12 @@ describe('lightingCheck: the lamp’s waveform (issue 8 item 9)', () => {
   });
 
   it('carries the stillness caution for a part that only seems slower under the flicker', () => {
-    // physics.md §4: a slowed forward view is aliased too. One mark at 101 rev/s under 100 Hz
-    // flicker: r = 1.01, e = +0.01 pitch, a = 0.01·100 = 1 rev/s forward (physics.md §2).
+    // docs/physics.md §4: a slowed forward view is aliased too. One mark at 101 rev/s under 100 Hz
+    // flicker: r = 1.01, e = +0.01 pitch, a = 0.01·100 = 1 rev/s forward (docs/physics.md §2).
     const creep = lightingCheck(lamp50, [{ name: 'disc', speedHz: 101, symmetry: 1 }]);
     expect(creep.parts[0].look).toBe('forward');
     expect(creep.parts[0].misleading).toBe(false);
     expect(creep.parts[0].aliased).toBe(true);
-    expect(creep.cautions.join(' ')).toMatch(/lock out/);
+    expect(creep.cautions).toContain('stillness');
   });
 });

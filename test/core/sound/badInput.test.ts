@@ -1,6 +1,6 @@
 /**
  * Bad input to the sound core: a clear InputError naming the field, or a clear "no tone"
- * result; never NaN or Infinity, never another error (core-api.md's contract).
+ * result; never NaN or Infinity, never another error (the core's contract, DEVELOPERS.md).
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

@@ -1,6 +1,6 @@
 /**
  * Joining the sound estimate with strobe readings. A frozen single image at rate F means
- * n·f = k·F for some whole k (physics.md §7; the stroboscope's whole-multiple ambiguity):
+ * n·f = k·F for some whole k (docs/physics.md §7; the stroboscope's whole-multiple ambiguity):
  * the strobe's candidates come from findSpeed, the sound's from speedsFromSound, and every
  * proposed rate is checked here against apparentMotion, independently of the join's own use
  * of it.

@@ -14,7 +14,8 @@ import { formatRate } from '../../../src/words/rates';
 import { openScreen } from '../../../src/state/navigation';
 import { check } from '../../../src/state/check';
 import { defaultSetup } from '../../../src/state/model';
-import { flashUnit, replaceSetup, setup, speedUnit, startSession } from '../../../src/state/setup';
+import { flashUnit, replaceSetup, setup, speedUnit } from '../../../src/state/setup';
+import { startSession } from '../../../src/state/session';
 
 beforeAll(async () => {
   await startSession();
@@ -47,7 +48,7 @@ describe('the check screen', () => {
     expect(verdict()).toBe('Looks still');
     expect(screen.getByTestId('true-speed').textContent).toBe('1,770 rpm');
     expect(screen.getByTestId('safety-notice')).toBeTruthy();
-    // 29.5 flashes per second lies between 3 and 60 (physics.md §10).
+    // 29.5 flashes per second lies between 3 and 60 (docs/physics.md §10).
     expect(screen.getByTestId('photosensitivity-notice')).toBeTruthy();
   });
 
@@ -79,14 +80,14 @@ describe('the check screen', () => {
     expect(screen.getByRole('alert').textContent).toMatch(/not a number/);
     expect(setup.value.parts[0].speedRpm).toBe(1770);
     expect(check.value).toBe(before);
-    // physics.md §10: a verdict from inputs no longer valid is withdrawn where it stands.
+    // docs/physics.md §10: a verdict from inputs no longer valid is withdrawn where it stands.
     expect(verdict()).toBe('No verdict until Speed is fixed');
     type('Speed', '1770');
     expect(verdict()).toBe('Looks still');
   });
 
   test('a speed made invalid after a good one withdraws the verdict where it stands and marks every list not current', () => {
-    // Issue 8 item 3: fan 1750 rpm, 6 blades, strobe 1748 flashes/min; then "1750x".
+    // A fan at 1750 rpm, 6 blades, strobe 1748 flashes/min; then "1750x".
     type('Speed', '1750');
     type('Flash rate', '1748');
     expect(verdict()).toBe('Creeping forward');
@@ -110,7 +111,7 @@ describe('the check screen', () => {
   });
 
   test('"17OO" typed key by key never shows the verdict for 17 rpm once the text is refused', () => {
-    // Issue 8 item 3: the letter O typed for a zero.
+    // The letter O typed for a zero.
     const seen: string[] = [];
     for (const text of ['1', '17', '17O', '17OO']) {
       type('Speed', text);
@@ -182,15 +183,15 @@ describe('the check screen', () => {
       .getAllByRole('button')
       .find((b) => b.textContent?.startsWith('1,770 fpm'));
     fireEvent.click(button!);
-    // physics.md §4 worked check: f = 30 rev/s, creep 0.5 rev/s → 29.5 flashes/s = 1770 fpm.
+    // docs/physics.md §4 worked check: f = 30 rev/s, creep 0.5 rev/s → 29.5 flashes/s = 1770 fpm.
     expect(setup.value.strobe.rateFpm).toBeCloseTo(1770, 9);
     expect(verdict()).toBe('Creeping forward');
-    // physics.md §4: a creep asked for is still an aliased view; the lock-out caution goes with it.
+    // docs/physics.md §4: a creep asked for is still an aliased view; the lock-out caution goes with it.
     expect(screen.getByTestId('safety-notice')).toBeTruthy();
   });
 
-  test('the creep of issue 8 carries the lock-out caution: 6 blades at 1750 rpm under 1748 flashes/min', () => {
-    // physics.md §2: a = f − k·s/n = (1750 − 1748)/60 rev/s = 2 rpm forward (k = 6).
+  test('a creep close to a freeze carries the lock-out caution: 6 blades at 1750 rpm under 1748 flashes/min', () => {
+    // docs/physics.md §2: a = f − k·s/n = (1750 − 1748)/60 rev/s = 2 rpm forward (k = 6).
     type('Speed', '1750');
     type('Flash rate', '1748');
     expect(verdict()).toBe('Creeping forward');

@@ -37,7 +37,7 @@ describe('the preview of the check screen', () => {
     const input = previewInputOf(computeCheck(s), s)!;
     expect(input.sampler).toBe('frames');
     expect(input.rateHz).toBe(24);
-    // A 180° shutter at 24 frames/s exposes 1/48 s (physics.md, check sources).
+    // A 180° shutter at 24 frames/s exposes 1/48 s (docs/physics.md, check sources).
     expect(input.exposureS).toBeCloseTo(1 / 48, 15);
     expect(input.readoutS).toBeCloseTo(0.03, 15);
   });
@@ -48,7 +48,7 @@ describe('the preview of the check screen', () => {
       lighting: { mainsHz: 50, flicker: 'double', customHz: 300, modulationPercent: 30 },
     });
     const input = previewInputOf(computeCheck(flickering), flickering)!;
-    // Mains at 50 Hz flickers at 100 Hz (physics.md §6).
+    // Mains at 50 Hz flickers at 100 Hz (docs/physics.md §6).
     expect(input.sampler).toBe('flash');
     expect(input.rateHz).toBe(100);
     expect(input.exposureS).toBe(0);

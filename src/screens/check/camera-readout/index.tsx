@@ -1,23 +1,12 @@
 import { formatExposure, formatNumber } from '../../../words/format';
-import { check, type CameraResult } from '../../../state/check';
+import { check } from '../../../state/check';
+import { BLUR_WORDS, SKEW_WORDS } from '../../../words/check';
 import { Panel } from '../../../ui/panel';
 import style from './style.module.css';
 
 interface Props {
   class?: string;
 }
-
-const BLUR_WORDS: Record<CameraResult['blurLook'], string> = {
-  sharp: 'sharp',
-  streaked: 'streaked: edges drawn out along the turn',
-  smeared: 'smeared into an even disc: single features cannot be seen',
-};
-
-const SKEW_WORDS: Record<CameraResult['skewLook'], string> = {
-  straight: 'straight',
-  bent: 'bent into curves',
-  broken: 'broken into pieces: more than one pitch passes during the readout',
-};
 
 /** For a camera: blur per frame and the rolling-shutter bend. */
 export function CameraReadout({ class: extra }: Props) {

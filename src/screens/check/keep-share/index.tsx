@@ -1,7 +1,8 @@
 import { useState } from 'preact/hooks';
 import { machines, saveMachine, updateMachine } from '../../../state/machines';
 import { encodeShareFragment } from '../../../state/shareLink';
-import { openMachineId, setup } from '../../../state/setup';
+import { setup } from '../../../state/setup';
+import { openMachineId } from '../../../state/session';
 import { Panel } from '../../../ui/panel';
 import style from './style.module.css';
 

@@ -2,7 +2,6 @@ import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
 import {
   apparentMotion,
   InputError,
-  safetyCautions,
   SEIZURE_RISK_HIGH_HZ,
   SEIZURE_RISK_LOW_HZ,
   type Part,
@@ -13,6 +12,8 @@ import { checkScene, sampleIndexAt, sampleTimeS, type PreviewScene } from '../..
 import { formatNumber } from '../../../words/format';
 import { lookFromCss } from './css-colour';
 import { useFrameLoop } from '../../../ui/frameLoop';
+import { safetyCautions } from '../../../words/cautions';
+import { lookPhrase } from '../../../words/look';
 import style from './style.module.css';
 
 export interface Props {
@@ -27,7 +28,7 @@ export interface Props {
   /** Camera rolling-shutter readout, top to bottom, seconds (0 = global shutter). */
   readoutS?: number;
   /**
-   * Show the stillness caution of physics.md §10 when what is drawn can mislead (default true).
+   * Show the stillness caution of docs/physics.md §10 when what is drawn can mislead (default true).
    * Pass false only where the screen shows it right beside the preview. The caution about the
    * playback's own flashing shows either way: only the preview knows how fast it flashes.
    */
@@ -40,7 +41,7 @@ const SLOW_FACTORS = [1, 2, 5, 10, 30, 100] as const;
 
 /**
  * How long a flash's image lingers on the eye, as a time constant in the part's clock:
- * physics.md §1 puts fusion of successive flashes at about 16 a second, so an image fades
+ * docs/physics.md §1 puts fusion of successive flashes at about 16 a second, so an image fades
  * over about 1/16 s. A judgement of ours; it is what makes multi-image locks superimpose.
  */
 const EYE_FADE_S = 1 / 16;
@@ -203,7 +204,7 @@ export function Preview({
             ref={sampledCanvas}
             class={style.canvas}
             role="img"
-            aria-label={`${samplerView}: ${motion ? describeLook(motion.look, motion.images) : 'nothing to show'}`}
+            aria-label={`${samplerView}: ${motion ? lookPhrase(motion.look, motion.images) : 'nothing to show'}`}
             data-testid="preview-sampled"
           />
           <figcaption class={style.caption}>{samplerView}</figcaption>
@@ -308,14 +309,7 @@ function counterText(sampler: Sampler, index: number, timeS: number, slow: numbe
   return `${word} ${formatNumber(index, 0)} · ${formatNumber(timeS, 3)} s · ${pace}`;
 }
 
-function describeLook(look: string, images: number): string {
-  if (look === 'still') return images > 1 ? `${images} images standing still` : 'looks still';
-  if (look === 'true') return 'turns its true way';
-  if (look === 'unclear') return 'direction cannot be told';
-  return `looks to turn ${look}`;
-}
-
-/** A strobe played back at a rate people should not watch flashing (physics.md §10). */
+/** A strobe played back at a rate people should not watch flashing (docs/physics.md §10). */
 function flashesInRiskRange(sampler: Sampler, rateHz: number, slow: number): boolean {
   const shown = rateHz / slow;
   return sampler === 'flash' && shown >= SEIZURE_RISK_LOW_HZ && shown <= SEIZURE_RISK_HIGH_HZ;

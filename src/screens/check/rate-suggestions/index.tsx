@@ -1,29 +1,19 @@
 import { formatNumber, numberForField } from '../../../words/format';
 import { readCreepRpm } from '../../../ui/fields';
 import { formatRate, formatRateSpan } from '../../../words/rates';
-import { check, checkProblem, type CreepRate, type SuggestedRate } from '../../../state/check';
+import { check, checkProblem, type SuggestedRate } from '../../../state/check';
 import { problemsAmong } from '../../../state/fieldProblems';
 import { CREEP_FIELDS, RESULT_FIELDS } from '../field-ids';
 import { NotCurrent } from '../../../ui/not-current';
 import { flashUnit, setCreepRpm, setSamplerRateHz, setup } from '../../../state/setup';
 import { NumberField } from '../../../ui/number-field';
 import { Panel } from '../../../ui/panel';
+import { creepMissingWords, creepRateWords, narrowLocksWords } from '../../../words/check';
+import { imagesWords } from '../../../words/look';
 import style from './style.module.css';
 
 interface Props {
   class?: string;
-}
-
-const LOOK_WORDS: Record<CreepRate['look'], string> = {
-  true: 'true motion',
-  forward: 'creeping forward',
-  backward: 'turning backward',
-  still: 'looks still',
-  unclear: 'direction unclear',
-};
-
-function imagesText(images: number): string {
-  return images === 1 ? '1 image' : `${images} images`;
 }
 
 /** Rates worth tapping: the nearest lock-in rates, and the rate for a slow forward creep. */
@@ -34,7 +24,7 @@ export function RateSuggestions({ class: extra }: Props) {
   const rate = (hz: number) => formatRate(hz, kind, unit);
   const span = (fromHz: number, toHz: number) => formatRateSpan(fromHz, toHz, kind, unit);
   const tolerance = r.part.tolerance > 0;
-  // Rates worked out from a refused entry are marked not current, out of reach (physics.md §10).
+  // Rates worked out from a refused entry are marked not current, out of reach (docs/physics.md §10).
   const refusal = checkProblem.value;
   return (
     <Panel title="Rates to try" id="suggestions" class={extra}>
@@ -47,7 +37,7 @@ export function RateSuggestions({ class: extra }: Props) {
             <p class={style.none}>
               {r.part.speedHz === 0
                 ? 'The part is not turning.'
-                : r.locksNote
+                : r.narrowLocksLeftOut
                   ? 'None near this rate that can be set and held.'
                   : 'None near this rate in the range.'}
             </p>
@@ -60,9 +50,9 @@ export function RateSuggestions({ class: extra }: Props) {
               ))}
             </ul>
           )}
-          {r.locksNote && (
+          {r.narrowLocksLeftOut && (
             <p class={style.help} data-testid="locks-note">
-              {r.locksNote}
+              {narrowLocksWords(r.sampler)}
             </p>
           )}
         </NotCurrent>
@@ -96,16 +86,15 @@ export function RateSuggestions({ class: extra }: Props) {
                     onClick={() => setSamplerRateHz(c.rateHz)}
                   >
                     <span class={style.value}>{rate(c.rateHz)}</span>
-                    <span class={style.what}>
-                      {c.images > 1 ? `${imagesText(c.images)}, ` : ''}
-                      {LOOK_WORDS[c.look]}
-                    </span>
+                    <span class={style.what}>{creepRateWords(c)}</span>
                   </button>
                 </li>
               ))}
             </ul>
           ) : (
-            <p class={style.none}>{r.creepNote}</p>
+            <p class={style.none}>
+              {r.creepMissing && creepMissingWords(r.creepMissing, r.creepRpm)}
+            </p>
           )}
         </NotCurrent>
         <p class={style.help}>
@@ -136,7 +125,7 @@ function LockButton({ lock, rate, span, tolerance }: LockProps) {
     >
       <span class={style.value}>{rate(lock.rateHz)}</span>
       <span class={style.what}>
-        {imagesText(lock.images)}
+        {imagesWords(lock.images)}
         {here ? ' · this rate' : ''}
       </span>
       {tolerance && <span class={style.span}>± tolerance: {span(lock.lowHz, lock.highHz)}</span>}

@@ -1,6 +1,6 @@
 import { defaultLookOptions } from '../../../core';
 import { formatNumber, formatPercent } from '../../../words/format';
-import { formatRateSpan } from '../../../words/rates';
+import { formatRateSpan, settingStepWords } from '../../../words/rates';
 import { check } from '../../../state/check';
 import { flashUnit, setSamplerRateHz } from '../../../state/setup';
 import { Panel } from '../../../ui/panel';
@@ -11,12 +11,12 @@ interface Props {
   class?: string;
 }
 
-/** The nearly-still threshold the bands are made with, rpm (physics.md §4, lookOptions.ts). */
+/** The nearly-still threshold the bands are made with, rpm (docs/physics.md §4, lookOptions.ts). */
 const NEARLY_STILL_RPM = defaultLookOptions.nearlyStillHz * 60;
 
 /**
  * The bands of the sampler's range nearest the current rate in which the part is seen turning
- * its true way (physics.md §4: at its true speed, or forward as one image at 6 rpm or more, for
+ * its true way (docs/physics.md §4: at its true speed, or forward as one image at 6 rpm or more, for
  * every speed within the tolerance), and where the rate lies now. `safe` in the core.
  */
 export function SafeBands({ class: extra }: Props) {
@@ -27,7 +27,7 @@ export function SafeBands({ class: extra }: Props) {
   const current = b.current;
   const tolerance =
     r.part.tolerance > 0 ? ` for any speed within ±${formatPercent(r.part.tolerance * 100)}` : '';
-  const step = r.sampler === 'frames' ? '0.01 frames/s' : 'one flash per minute';
+  const step = settingStepWords(r.sampler);
   return (
     <Panel title="Rates that show its true way" id="bands" class={extra}>
       {current && (

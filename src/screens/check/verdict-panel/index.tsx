@@ -6,6 +6,7 @@ import { activePart, flashUnit } from '../../../state/setup';
 import { VERDICT_FIELDS } from '../field-ids';
 import { Withdrawn } from '../../../ui/not-current';
 import { TrustMark } from '../../../ui/trust-mark';
+import { verdictHeadline } from '../../../words/check';
 import style from './style.module.css';
 
 interface Props {
@@ -21,7 +22,7 @@ const SAMPLER_WORDS = {
 /**
  * What the viewer will see, in big words: the verdict, the apparent speed and the true speed.
  * While a field the verdict reads is refused, or the core refuses the set-up, the verdict is
- * withdrawn in its place and says what to fix (physics.md §10): never the last good answer for
+ * withdrawn in its place and says what to fix (docs/physics.md §10): never the last good answer for
  * a value no longer on screen.
  */
 export function VerdictPanel({ class: extra }: Props) {
@@ -71,7 +72,7 @@ export function VerdictPanel({ class: extra }: Props) {
       <div class={style.head} role="status" aria-live="polite" aria-atomic="true">
         <TrustMark trust={v.trust} />
         <p class={style.headline} data-testid="verdict">
-          {v.headline}
+          {verdictHeadline(v)}
           <span class={style.quiet}>
             . Seen at {seen}; true speed {trueSpeed}.
           </span>
