@@ -81,8 +81,6 @@ export const SCREENS = [
   },
 ] as const satisfies readonly ScreenEntry[];
 
-export type ScreenId = (typeof SCREENS)[number]['id'];
-
 /** The entry of a screen id; the home screen for an id the list does not hold. */
 export function screenEntry(id: string): ScreenEntry {
   return SCREENS.find((s) => s.id === id) ?? SCREENS[0];

@@ -69,6 +69,7 @@ export {
   rcCutoffHz,
   converterRangeDb,
   orderForAttenuation,
+  niceSampleRateHz,
 } from './formulas/logger';
 export * from './formulas/units';
 export { gcd } from './basics/gcd';
@@ -121,8 +122,6 @@ export {
 } from './plans/lightingCheck';
 export {
   cameraPlan,
-  standardFrameRates,
-  type StandardFrameRate,
   type CameraAbilities,
   type CameraGoal,
   type CameraSetting,
@@ -131,11 +130,11 @@ export {
   type CameraCondition,
   type CameraNeeds,
   type LookRate,
-  MAX_LOOK_RATES,
 } from './plans/cameraPlan';
+export { MAX_LOOK_RATES } from './plans/cameraNeeds';
+export { standardFrameRates, type StandardFrameRate } from './plans/frameRates';
 export {
   loggerPlan,
-  niceSampleRateHz,
   type ComponentSource,
   type LoggerNote,
   type LoggerPlanInput,

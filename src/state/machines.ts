@@ -1,3 +1,5 @@
+// Kept whole (over 300 lines): every action on the saved list follows the same pattern (check,
+// change, wait for the write) around one list signal and one write queue.
 // The saved machines, as signals the screens read, and the actions that change them. Every
 // action checks its input first (DataError, nothing changed), then updates the list and waits
 // until the whole list is written; a storage failure keeps the change in memory and is reported

@@ -107,6 +107,22 @@ export function partLabel(s: Setup, index: number): string {
 }
 
 /**
+ * A new part for the end of the list: a single mark with the speed and tolerance of `like`,
+ * named "Part n" with the first n no part of the list uses (names compare without case).
+ */
+export function newPartLike(parts: readonly PartSpec[], like: PartSpec): PartSpec {
+  const taken = new Set(parts.map((p) => p.name.trim().toLowerCase()));
+  let n = parts.length + 1;
+  while (taken.has(`part ${n}`)) n++;
+  return {
+    name: `Part ${n}`,
+    speedRpm: like.speedRpm,
+    features: 1,
+    tolerancePercent: like.tolerancePercent,
+  };
+}
+
+/**
  * The place of the part every screen works on: `activePart`, or the first part when it points
  * nowhere (a set-up edited elsewhere). The one rule for it: nothing else falls back on its own.
  */

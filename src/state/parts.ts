@@ -1,10 +1,10 @@
 // The parts of the current set-up as a list: choose which one the screens work on, add one,
 // remove one, rename one. The per-field setters of the chosen part live in setup.ts; these
 // only change the list, and every change goes through the same checks as a saved file.
-import { editChain, withoutPart } from './chain';
-import { type PartSpec, activePartOf } from './model';
+import { editChain, withoutPart } from './driveChain';
+import { activePartOf, newPartLike } from './model';
 import { setup } from './setup';
-import { DataError, MAX_NAME_CHARS, MAX_PARTS, validateSetup } from './validate';
+import { DataError, MAX_NAME_CHARS, requirePartRoom, validateSetup } from './validate';
 
 /** Makes part `index` the one the screens work on. Ignores an index outside the list. */
 export function selectPart(index: number): void {
@@ -21,28 +21,9 @@ export function selectPart(index: number): void {
  */
 export function addPart(): void {
   const s = setup.value;
-  if (s.parts.length >= MAX_PARTS) {
-    throw new DataError(
-      'parts',
-      `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`,
-    );
-  }
-  const like = activePartOf(s);
-  const part: PartSpec = {
-    name: freeName(s.parts),
-    speedRpm: like.speedRpm,
-    features: 1,
-    tolerancePercent: like.tolerancePercent,
-  };
+  requirePartRoom(s);
+  const part = newPartLike(s.parts, activePartOf(s));
   setup.value = { ...s, parts: [...s.parts, part], activePart: s.parts.length };
-}
-
-function freeName(parts: readonly PartSpec[]): string {
-  const taken = new Set(parts.map((p) => p.name.trim().toLowerCase()));
-  for (let n = parts.length + 1; ; n++) {
-    const name = `Part ${n}`;
-    if (!taken.has(name.toLowerCase())) return name;
-  }
 }
 
 /**

@@ -1,7 +1,7 @@
 // The session: where the set-up on screen comes from when the page opens (a share link, the
 // last visit, the default), keeping it across reloads, and what the page says about that.
-import { effect, signal } from '@preact/signals';
-import { loadMachines } from './machines';
+import { computed, effect, signal } from '@preact/signals';
+import { loadMachines, machines } from './machines';
 import { defaultSetup, type Setup } from './model';
 import { replaceSetup, setup } from './setup';
 import { decodeShareFragment } from './shareLink';
@@ -9,6 +9,11 @@ import { loadCurrentSetup, openStore, saveCurrentSetup } from './storage';
 
 /** The saved machine the set-up was opened from (null = none, or it was deleted). */
 export const openMachineId = signal<string | null>(null);
+
+/** Name of the open machine, or undefined when the set-up is not one of the saved machines (report headers). */
+export const openMachineName = computed<string | undefined>(
+  () => machines.value.find((m) => m.id === openMachineId.value)?.name,
+);
 
 /** A message about how the session opened (a refused share link), for the top of the screen. */
 export const sessionMessage = signal<{ kind: 'info' | 'problem'; text: string } | null>(null);

@@ -15,7 +15,7 @@ import {
   withChainSpeeds,
   withPartFields,
   withSpeedSource,
-} from './chain';
+} from './driveChain';
 import { saveMachine, updateMachine } from './machines';
 import { partLabel, type Machine, type Setup, activeIndex } from './model';
 import { keepLastGood } from './outcome';

@@ -1,3 +1,6 @@
+// Kept whole (over 300 lines): opening the store, the schema and its upgrades, and the write
+// queue share one state (the open store or the memory fallback); split, each part would reach
+// into the others.
 // Where saved machines and the current set-up live between visits: the browser's IndexedDB
 // (through idb-keyval), in a database of our own, with a schema version so later versions of the
 // app can upgrade what earlier ones saved. When the browser offers no usable storage (private

@@ -1,3 +1,5 @@
+// Kept whole (over 300 lines): one reader per saved shape, all with the same helpers, so every
+// limit of the file format (docs/file-format.md) is written once, here.
 // Strict checks for data that comes from outside the running app: a saved record, an imported
 // file, a share link. Every field is checked; anything unexpected is refused with a message a
 // technician can act on, naming where the problem is ("machine 3 › parts › 1 › features …").
@@ -31,6 +33,16 @@ export class DataError extends Error {
 
 /** Most parts one set-up may hold: enough for a drive train, small enough to fit a share link. */
 export const MAX_PARTS = 20;
+
+/** Throws DataError when a set-up has no room for one more part (it holds MAX_PARTS). */
+export function requirePartRoom(s: Setup): void {
+  if (s.parts.length >= MAX_PARTS) {
+    throw new DataError(
+      'parts',
+      `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`,
+    );
+  }
+}
 /** Longest name of a machine or part, in characters. */
 export const MAX_NAME_CHARS = 80;
 /** Longest crew note of a machine, in characters. */

@@ -19,7 +19,8 @@ import {
 import { defaultSetup, type Setup, activeCorePart } from '../../src/state/model';
 import { replaceSetup, setup } from '../../src/state/setup';
 import { startSession } from '../../src/state/session';
-import { CameraScreen, cameraCsv } from '../../src/screens/camera';
+import { CameraScreen } from '../../src/screens/camera';
+import { cameraCsv } from '../../src/screens/camera/csv';
 import { field, tableRows, type } from '../helpers/screen-queries';
 
 beforeAll(async () => {

@@ -17,7 +17,8 @@ import {
 import { defaultSetup, type Setup } from '../../src/state/model';
 import { replaceSetup, setup } from '../../src/state/setup';
 import { startSession } from '../../src/state/session';
-import { LoggerScreen, loggerCsv } from '../../src/screens/logger';
+import { LoggerScreen } from '../../src/screens/logger';
+import { loggerCsv } from '../../src/screens/logger/csv';
 import { field, tableRows, type } from '../helpers/screen-queries';
 
 beforeAll(async () => {

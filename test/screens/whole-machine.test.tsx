@@ -20,7 +20,8 @@ import { toolScreens } from '../../src/app/screen-list';
 import { formatNumber } from '../../src/words/format';
 import { openScreen } from '../../src/state/navigation';
 import { formatRate } from '../../src/words/rates';
-import { deriveParts, listedRange, MAX_LISTED_SPANS } from '../../src/state/chain';
+import { deriveParts } from '../../src/state/driveChain';
+import { listedRange, MAX_LISTED_SPANS } from '../../src/state/wholeMachine';
 import { defaultSetup } from '../../src/state/model';
 import { flashUnit, replaceSetup, setup } from '../../src/state/setup';
 import { startSession } from '../../src/state/session';
@@ -30,7 +31,7 @@ import {
   middleHz,
   noStillBandsShown,
 } from '../../src/screens/whole-machine/band-lists';
-import { machineCsv } from '../../src/screens/whole-machine/chain-csv';
+import { wholeMachineCsv } from '../../src/screens/whole-machine/csv';
 
 const charts: Array<{ parts: number }> = [];
 vi.mock('../../src/ui/rate-map/chart', () => ({
@@ -288,7 +289,7 @@ describe('the whole machine', () => {
     const parts = deriveParts(setup.value);
     const freeze = freezeRates(parts, 0, { minHz: 0.5, maxHz: 200 });
     const noStill = noStillRates(parts, { minHz: 0.5, maxHz: 200 });
-    const text = machineCsv(
+    const text = wholeMachineCsv(
       parts,
       {
         target: 0,

@@ -9,7 +9,8 @@ import {
   rateBands,
   rollingSkewDegrees,
 } from '../../src/core';
-import { computeCheck, tryCheck, verdictOf } from '../../src/state/check';
+import { computeCheck, verdictOf } from '../../src/state/check';
+import { attempt } from '../../src/state/outcome';
 import { activeCorePart as corePart, defaultSetup, type Setup } from '../../src/state/model';
 import {
   CHECK_NOTE_WORDS,
@@ -393,9 +394,9 @@ describe('camera and lighting read-outs', () => {
 });
 
 describe('refused set-ups', () => {
-  test("tryCheck reports the core's message instead of throwing", () => {
+  test("the core's refusal of a set-up comes as its message, not a throw", () => {
     const s = setupWith({ part: { features: 0 } });
-    const outcome = tryCheck(s);
+    const outcome = attempt(() => computeCheck(s));
     expect(outcome.ok).toBe(false);
     if (!outcome.ok) expect(outcome.message).toMatch(/features/);
   });

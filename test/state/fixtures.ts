@@ -34,7 +34,6 @@ export function sampleMachine(overrides: Partial<Machine> = {}): Machine {
 }
 
 /** A plain JSON copy of `value` that `change` may bend freely (typed loosely on purpose). */
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
 export function bent<T>(value: T, change: (copy: any) => void): unknown {
   const copy: unknown = JSON.parse(JSON.stringify(value));
   change(copy);

@@ -1,4 +1,5 @@
 import {
+  InputError,
   requireFinite,
   requireFiniteResult,
   requireNonNegative,
@@ -72,4 +73,34 @@ export function orderForAttenuation(
   if (f <= fc) return need === 0 ? 1 : undefined;
   for (let m = 1; m <= 20; m++) if (-lowPassGainDb(f, fc, m) >= need) return m;
   return undefined;
+}
+
+/**
+ * Sample rates loggers and converters commonly offer, per decade (common practice): the 1-2-5
+ * series, the 2.56·bandwidth family of vibration analysers (1.28, 2.56, 5.12, 6.4) and the
+ * 48 kHz audio family (1.2, 2.4, 4.8, 9.6), with 1.6, 3.2 and 8 for the binary steps.
+ */
+const NICE_MANTISSAS = [
+  100, 120, 125, 128, 160, 200, 240, 250, 256, 320, 400, 480, 500, 512, 640, 800, 960,
+];
+
+/**
+ * The smallest nice sample rate at or above hz (see NICE_MANTISSAS; exact decimal values).
+ * Units: Hz. Throws InputError for a rate ≤ 0 or not a number.
+ * @example niceSampleRateHz(1297) // 1600
+ * Source: common practice (the rates loggers, vibration analysers and audio converters offer).
+ */
+export function niceSampleRateHz(hz: number): number {
+  const f = requirePositive(hz, 'sample rate');
+  let exponent = Math.floor(Math.log10(f)) - 2;
+  for (;;) {
+    for (const m of NICE_MANTISSAS) {
+      const candidate = exponent >= 0 ? m * 10 ** exponent : m / 10 ** -exponent;
+      if (!Number.isFinite(candidate)) {
+        throw new InputError('sample rate', `${f} Hz is too large a sample rate.`);
+      }
+      if (candidate >= f * (1 - 1e-12)) return candidate;
+    }
+    exponent++;
+  }
 }

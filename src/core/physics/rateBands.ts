@@ -1,3 +1,5 @@
+// Kept whole (over 300 lines): the closed forms of every misleading span and the flat span list
+// they fill belong to one algorithm (docs/physics.md §4), measured by `npm run bench`.
 import { InputError } from '../basics/InputError';
 import {
   checkPart,

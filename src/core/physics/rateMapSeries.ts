@@ -1,3 +1,6 @@
+// Kept whole (over 300 lines): the grid, the exact alias edges and the column builder that
+// inserts them share one invariant (each edge inside its grid step, in rate order), and this is
+// a hot path measured by `npm run bench`.
 import { InputError, requireFiniteResult } from '../basics/InputError';
 import { lockRates, type LockRate } from './lockRates';
 import { rateBands, type RateBand } from './rateBands';

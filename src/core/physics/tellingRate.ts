@@ -106,18 +106,21 @@ export function mostTellingRate(
       if (best.separatesTop && best.pairsTold === allPairs && best.standing === count) break;
     }
   }
-  return best && roundOff(best, patternsHz, symmetry, range, tried, spread);
+  return best && roundOff(best, { patternsHz, symmetry, range, tried, spread });
 }
 
 /** The best rate moved to a round number of flashes per minute where it tells the same. */
 function roundOff(
   best: TellingRate,
-  patternsHz: readonly number[],
-  symmetry: number,
-  range: Range,
-  tried: (rateHz: number) => boolean,
-  spread: number,
+  search: {
+    patternsHz: readonly number[];
+    symmetry: number;
+    range: Range;
+    tried: (rateHz: number) => boolean;
+    spread: number;
+  },
 ): TellingRate {
+  const { patternsHz, symmetry, range, tried, spread } = search;
   for (const step of ROUND_STEPS_FPM) {
     const rateHz = (Math.round((best.rateHz * 60) / step) * step) / 60;
     if (!(rateHz >= range.minHz && rateHz <= range.maxHz) || tried(rateHz)) continue;

@@ -1,50 +1,12 @@
+// A camera's settings weighed for a goal (docs/physics.md §2–§5): the plan's shapes and the
+// planner; each setting is weighed in cameraSetting.ts, what would lift a condition in cameraNeeds.ts.
 import { InputError, requireNonNegative, requirePositive } from '../basics/InputError';
 import { checkPart, type Look, type Part, type Range } from '../basics/types';
 import { checkLookOptions, type LookOptions } from '../physics/lookOptions';
-import { apparentMotion } from '../physics/apparentMotion';
-import { rateBands } from '../physics/rateBands';
-import {
-  blurDegrees,
-  blurPitches,
-  exposureFromShutterAngle,
-  rollingSkewDegrees,
-  shutterAngleFromExposure,
-} from '../formulas/exposure';
-import { ratesForApparent } from '../physics/ratesForApparent';
-import { hzToRpm } from '../formulas/units';
-import { plainNumber } from '../basics/plainNumber';
+import { exposureFromShutterAngle, shutterAngleFromExposure } from '../formulas/exposure';
 import { cautionCodes, type CautionCode } from './cautions';
-import { lockCountBound } from '../physics/lockRates';
-
-/** A frame rate cameras offer, with its exact value. */
-export interface StandardFrameRate {
-  /** As printed on cameras: '29.97'. */
-  label: string;
-  /** Exact frames per second (29.97 is 30000/1001). */
-  hz: number;
-  source: string;
-}
-
-const BT709 = 'ITU-R BT.709 picture rates; SMPTE ST 12-1 time code rates for the /1.001 family';
-
-/**
- * Frame rates to offer as presets, ascending. The /1.001 rates are exact fractions, not the
- * rounded labels. 120 and 240 are the high-speed modes of phones and action cameras (common practice).
- * @example standardFrameRates[3] // { label: '29.97', hz: 29.97002997002997 (30000/1001), source: … }
- * Sources: ITU-R BT.709 (60, 50, 30, 25, 24 and each divided by 1.001); SMPTE ST 12-1.
- */
-export const standardFrameRates: readonly StandardFrameRate[] = Object.freeze([
-  { label: '23.976', hz: 24000 / 1001, source: BT709 },
-  { label: '24', hz: 24, source: BT709 },
-  { label: '25', hz: 25, source: BT709 },
-  { label: '29.97', hz: 30000 / 1001, source: BT709 },
-  { label: '30', hz: 30, source: BT709 },
-  { label: '50', hz: 50, source: BT709 },
-  { label: '59.94', hz: 60000 / 1001, source: BT709 },
-  { label: '60', hz: 60, source: BT709 },
-  { label: '120', hz: 120, source: 'common practice (high-speed video modes)' },
-  { label: '240', hz: 240, source: 'common practice (high-speed video modes)' },
-]);
+import { needsOf } from './cameraNeeds';
+import { evaluate, type Combo, type Limits, type PlanContext } from './cameraSetting';
 
 /** What the camera can do. */
 export interface CameraAbilities {
@@ -183,22 +145,8 @@ export interface CameraPlanOptions extends Partial<LookOptions> {
   maxBendPitches?: number;
 }
 
+/** The best of the rest offered as near misses. */
 const NEAR_MISSES = 5;
-/** Most look rates returned: more than anyone reads, far more than a camera offers. */
-export const MAX_LOOK_RATES = 200;
-/** Most creep candidates weighed for the list of look rates. */
-const MAX_LOOK_WORK = 10_000;
-/**
- * Beyond this many features passing per frame the look hangs on the speed's 7th digit, which
- * nobody knows; rateBands' work also grows with it.
- */
-const MAX_PITCHES_PER_FRAME = 1e6;
-/** A creep within this factor of the one wanted counts as reaching it (a judgement). */
-const CREEP_FACTOR = 3;
-/** Creep clarity 1/(1 + 4·blur in pitches): half at a quarter pitch (a judgement). */
-const CREEP_BLUR_WEIGHT = 4;
-/** Two frame rates this close are the same setting. */
-const SAME_RATE = 1e-9;
 
 const GOAL_CONDITIONS: Record<CameraGoal['kind'], CameraCondition[]> = {
   freeze: ['look', 'sharpness', 'bend'],
@@ -206,23 +154,6 @@ const GOAL_CONDITIONS: Record<CameraGoal['kind'], CameraCondition[]> = {
   natural: ['blur', 'smoothness'],
   honest: ['look', 'bend'],
 };
-
-interface Limits {
-  sharpBlurDeg: number;
-  creepBlurPitches: number;
-  maxResidual: number;
-  maxBendPitches: number;
-}
-
-/** What every setting of one plan is weighed against: the part, the goal and its judgements. */
-interface PlanContext {
-  part: Required<Part>;
-  goal: CameraGoal;
-  conditions: CameraCondition[];
-  readoutS: number;
-  look: LookOptions;
-  limits: Limits;
-}
 
 /**
  * Weighs the camera's settings (every frame rate with every shutter angle or exposure that fits
@@ -325,12 +256,6 @@ function checkGoal(goal: CameraGoal): CameraGoal {
   throw new InputError('goal', "The goal must be 'freeze', 'creep', 'natural' or 'honest'.");
 }
 
-interface Combo {
-  frameRate: number;
-  exposureS: number;
-  shutterAngle: number;
-}
-
 function settingsOf(camera: CameraAbilities): Combo[] {
   if (typeof camera !== 'object' || camera === null) {
     throw new InputError(
@@ -384,198 +309,4 @@ function listOf(list: number[] | undefined, field: string): number[] {
   if (list === undefined) return [];
   if (!Array.isArray(list)) throw new InputError(field, `${field} must be a list of numbers.`);
   return list;
-}
-
-/** The creep look (docs/physics.md §2): forward at both tolerance ends, the same whole k between them (no wrap), near the creep wanted. */
-function creepLookHolds(
-  part: Required<Part>,
-  frameRate: number,
-  nominalRpm: number,
-  wantedRpm: number,
-  opts: ApparentMotionOpts,
-): boolean {
-  const ratio = wantedRpm === 0 ? 0 : nominalRpm / wantedRpm;
-  if (!(ratio >= 1 / CREEP_FACTOR && ratio <= CREEP_FACTOR)) return false;
-  const ends = [part.speedHz * (1 - part.tolerance), part.speedHz * (1 + part.tolerance)].map(
-    (speedHz) => apparentMotion({ ...part, speedHz }, frameRate, opts),
-  );
-  const sameK = Math.round(ends[0].ratio) === Math.round(ends[1].ratio);
-  return sameK && ends.every((m) => m.look === 'forward' || m.look === 'true');
-}
-
-type ApparentMotionOpts = LookOptions & { sampler: 'frames' };
-
-function evaluate(combo: Combo, context: PlanContext): CameraSetting {
-  const { frameRate, exposureS, shutterAngle } = combo;
-  const { part, goal, conditions, readoutS, look, limits } = context;
-  const opts: ApparentMotionOpts = { ...look, sampler: 'frames' };
-  const pitchesPerFrame =
-    (part.symmetry * Math.abs(part.speedHz) * (1 + part.tolerance)) / frameRate;
-  if (!(pitchesPerFrame <= MAX_PITCHES_PER_FRAME)) {
-    throw new InputError(
-      'frame rate',
-      `At ${plainNumber(frameRate)} frames/s the part passes over a million features per frame: ` +
-        'what it looks like then depends on digits nobody knows. Check the units of the speed and frame rates.',
-    );
-  }
-  const m = apparentMotion(part, frameRate, opts);
-  const apparentRpm = m.look === 'still' ? 0 : hzToRpm(m.apparentHz);
-  const endMotions = [part.speedHz * (1 - part.tolerance), part.speedHz * (1 + part.tolerance)].map(
-    (speedHz) => apparentMotion({ ...part, speedHz }, frameRate, opts),
-  );
-  const ends = endMotions.map((e) => (e.look === 'still' ? 0 : hzToRpm(e.apparentHz)));
-  const apparentRpmRange: [number, number] = [Math.min(...ends), Math.max(...ends)];
-  // A creep is the slow forward turn asked for: only still, backward or unclear views spoil it
-  // (the nearly-still margin of safe bands would refuse every creep).
-  const bands = rateBands(
-    [part],
-    { minHz: frameRate * (1 - SAME_RATE), maxHz: frameRate * (1 + SAME_RATE) },
-    goal.kind === 'creep' ? { ...opts, nearlyStillHz: look.stillHz } : opts,
-  );
-  const misleading = bands.some((b) => !b.safe);
-  const blurDeg = blurDegrees(part.speedHz, exposureS);
-  const blurP = blurPitches(part.speedHz, part.symmetry, exposureS);
-  const skewDeg = rollingSkewDegrees(part.speedHz, readoutS);
-  const skewP = (skewDeg * part.symmetry) / 360;
-  const residualContrast =
-    blurP === 0 ? 1 : Math.abs(Math.sin(Math.PI * blurP) / (Math.PI * blurP));
-  const evenDisc = blurP >= 1 && residualContrast <= limits.maxResidual;
-  if (![apparentRpm, ...ends, blurDeg, blurP, skewDeg, residualContrast].every(Number.isFinite)) {
-    throw new InputError(
-      'speed',
-      'The speed, frame rates or exposures are too large to plan with.',
-    );
-  }
-
-  const wantedRpm =
-    goal.kind === 'creep' ? Math.sign(part.speedHz || 1) * hzToRpm(goal.creepHz) : 0;
-  const holds: Record<CameraCondition, () => boolean> = {
-    look: () =>
-      goal.kind === 'freeze'
-        ? m.look === 'still' && m.images === 1
-        : goal.kind === 'creep'
-          ? creepLookHolds(part, frameRate, apparentRpm, wantedRpm, opts)
-          : !misleading,
-    sharpness: () =>
-      goal.kind === 'creep' ? blurP <= limits.creepBlurPitches : blurDeg <= limits.sharpBlurDeg,
-    blur: () => blurP >= 1,
-    smoothness: () => residualContrast <= limits.maxResidual,
-    // For nothing misleading, an even disc has no features left for the rolling shutter to
-    // bend; a freeze or creep needs the features themselves whole.
-    bend: () => skewP < limits.maxBendPitches || (goal.kind === 'honest' && evenDisc),
-  };
-  const blocks = conditions.filter((c) => !holds[c]());
-
-  const straight = evenDisc ? 1 : 1 / (1 + skewP);
-  let factor: number;
-  switch (goal.kind) {
-    case 'freeze':
-      factor =
-        (1 / (1 + Math.abs(apparentRpm))) * (1 / (1 + blurDeg / limits.sharpBlurDeg)) * straight;
-      break;
-    case 'creep': {
-      const ratio = apparentRpm === 0 ? 0 : apparentRpm / wantedRpm;
-      // A creep is seen while the features stay apart: clarity falls with blur in pitches.
-      const clarity = 1 / (1 + CREEP_BLUR_WEIGHT * blurP);
-      factor = (ratio > 0 ? 1 / (1 + Math.abs(Math.log(ratio))) : 0.01) * clarity * straight;
-      break;
-    }
-    case 'natural':
-      factor = Math.min(1, blurP) * (1 - residualContrast) * (misleading ? 0.5 : 1);
-      break;
-    default:
-      factor = (misleading ? 0.2 : m.look === 'true' ? 1 : 0.8) * straight;
-  }
-  const stillEnds = endMotions.every((e) => e.look === 'still');
-  return {
-    frameRate,
-    exposureS,
-    shutterAngle,
-    look: m.look,
-    apparentRpm,
-    apparentRpmRange,
-    misleading,
-    driftsWithinTolerance: m.look === 'still' && part.tolerance > 0 && !stillEnds,
-    blurDegrees: blurDeg,
-    blurPitches: blurP,
-    skewDegrees: skewDeg,
-    skewPitches: skewP,
-    residualContrast,
-    evenDisc,
-    readoutLongerThanFrame: readoutS * frameRate > 1 + SAME_RATE,
-    blocks,
-    reaches: blocks.length === 0,
-    score: Math.max(0, Math.min(100, 100 * factor)),
-  };
-}
-
-/** What would lift each condition: rates that show the look, and the exposure and readout limits. */
-function needsOf(context: PlanContext, span: Range, combos: Combo[]): CameraNeeds {
-  const { part, goal, limits, look } = context;
-  const offeredHz = combos.map((c) => c.frameRate);
-  const speed = Math.abs(part.speedHz);
-  const patternHz = part.symmetry * speed;
-  const exposures = combos.map((c) => c.exposureS);
-  const offered = (hz: number) => offeredHz.some((r) => Math.abs(r - hz) <= SAME_RATE * hz);
-  const creepPatternHz = goal.kind === 'creep' ? part.symmetry * (speed + goal.creepHz) : 0;
-  let candidates: number[] = [];
-  let count = 0;
-  if (patternHz > 0 && goal.kind === 'freeze') {
-    // Every sub-multiple n·|f|/k within the span (docs/physics.md §3, q = 1).
-    const kFirst = Math.max(1, Math.ceil((patternHz / span.maxHz) * (1 - 1e-12)));
-    const kLast = Math.floor((patternHz / span.minHz) * (1 + 1e-12));
-    count = Math.max(0, kLast - kFirst + 1);
-    for (let k = kFirst; k <= kLast && candidates.length < MAX_LOOK_RATES; k++)
-      candidates.push(patternHz / k);
-  } else if (
-    patternHz > 0 &&
-    goal.kind === 'creep' &&
-    // More candidates than anyone reads (a fast gear against a slow span): list none.
-    // The creep rates n·|f − a|/k lie like the single-image locks of the rate n·(|f| + a).
-    lockCountBound({ lowHz: creepPatternHz, highHz: creepPatternHz }, span, 1) <= MAX_LOOK_WORK
-  ) {
-    const wanted = Math.sign(part.speedHz || 1) * goal.creepHz;
-    const range = { minHz: span.minHz * (1 - SAME_RATE), maxHz: span.maxHz * (1 + SAME_RATE) };
-    const opts: ApparentMotionOpts = { ...look, sampler: 'frames' };
-    // Only rates where the camera really shows that creep (docs/physics.md §4).
-    candidates = ratesForApparent(part, wanted, range, { sampler: 'frames' })
-      .map((r) => r.rateHz)
-      .filter((hz) =>
-        creepLookHolds(
-          part,
-          hz,
-          hzToRpm(apparentMotion(part, hz, opts).apparentHz),
-          hzToRpm(wanted),
-          opts,
-        ),
-      )
-      .sort((a, b) => b - a);
-    count = candidates.length;
-    candidates = candidates.slice(0, MAX_LOOK_RATES);
-  }
-  // A part that does not turn blurs and bends nothing: any exposure or readout will do.
-  const perPitchS = patternHz > 0 ? 1 / patternHz : 1;
-  const sharpExposureS =
-    goal.kind === 'creep'
-      ? limits.creepBlurPitches * perPitchS
-      : speed > 0
-        ? limits.sharpBlurDeg / (360 * speed)
-        : 1;
-  if (![sharpExposureS, perPitchS].every(Number.isFinite)) {
-    throw new InputError(
-      'speed',
-      'The speed is too slow to plan exposures for: check its units (rpm or rev/s).',
-    );
-  }
-  return {
-    patternHz,
-    lookRates: candidates.map((rateHz) => ({ rateHz, offered: offered(rateHz) })),
-    lookRateCount: count,
-    faithfulAboveHz: 2 * patternHz * (1 + part.tolerance),
-    sharpExposureS,
-    discExposureS: perPitchS,
-    bendReadoutS: limits.maxBendPitches * perPitchS,
-    shortestExposureS: Math.min(...exposures),
-    longestExposureS: Math.max(...exposures),
-  };
 }

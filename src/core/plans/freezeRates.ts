@@ -68,7 +68,7 @@ export function stillRates(parts: Part[], range: Range, opts?: StillRateOptions)
   const { checked, minHz, maxHz, qMax, look } = checkAll(parts, range, opts);
   const out: StillSpan[] = [];
   checked.forEach((part, index) =>
-    addStillSpans(part, index, minHz, maxHz, qMax, look.stillHz, out),
+    addStillSpans(part, index, { minHz, maxHz, qMax, stillHz: look.stillHz }, out),
   );
   return out.sort((a, b) => a.fromHz - b.fromHz || a.part - b.part || a.images - b.images);
 }
@@ -102,10 +102,11 @@ export function freezeRates(
   const { checked, minHz, maxHz, qMax, look, stepHz } = checkAll(parts, range, opts);
   const t = requireWhole(target, 'part to freeze', 0, checked.length - 1);
   const own: StillSpan[] = [];
-  addStillSpans(checked[t], t, minHz, maxHz, 1, look.stillHz, own);
+  const search = { minHz, maxHz, qMax, stillHz: look.stillHz };
+  addStillSpans(checked[t], t, { ...search, qMax: 1 }, own);
   const others: StillSpan[] = [];
   checked.forEach((part, index) => {
-    if (index !== t) addStillSpans(part, index, minHz, maxHz, qMax, look.stillHz, others);
+    if (index !== t) addStillSpans(part, index, search, others);
   });
   const blocked = union(others);
   const patternHz = checked[t].symmetry * Math.abs(checked[t].speedHz);
@@ -168,15 +169,22 @@ function checkAll(parts: Part[], range: Range, opts: StillRateOptions | undefine
 /** More still spans than this for one part would take seconds to list and mean nothing on a chart. */
 const MAX_SPANS_PER_PART = 1_000_000;
 
+/** Where still spans are looked for: the rate range, the image counts and the still threshold. */
+interface SpanSearch {
+  minHz: number;
+  maxHz: number;
+  /** Largest image count that stands still (1 on camera). */
+  qMax: number;
+  stillHz: number;
+}
+
 function addStillSpans(
   part: Required<Part>,
   index: number,
-  minHz: number,
-  maxHz: number,
-  qMax: number,
-  stillHz: number,
+  search: SpanSearch,
   out: StillSpan[],
 ): void {
+  const { minHz, maxHz, qMax, stillHz } = search;
   const F = part.symmetry * Math.abs(part.speedHz);
   if (F === 0) return; // not turning: it looks still because it is
   const D = part.symmetry * stillHz;

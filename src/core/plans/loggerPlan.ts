@@ -1,5 +1,11 @@
 import { InputError, requireBetween, requirePositive, requireWhole } from '../basics/InputError';
-import { converterRangeDb, foldedHz, lowPassGainDb, rcCutoffHz } from '../formulas/logger';
+import {
+  converterRangeDb,
+  foldedHz,
+  lowPassGainDb,
+  niceSampleRateHz,
+  rcCutoffHz,
+} from '../formulas/logger';
 
 /** What the machine puts into the sensor signal (docs/physics.md §9). */
 export interface MachineTones {
@@ -195,36 +201,6 @@ export function loggerPlan(input: LoggerPlanInput, opts?: LoggerPlanOptions): Lo
     maxOrder,
     ...(proposal ? { proposal } : {}),
   };
-}
-
-/**
- * Sample rates loggers and converters commonly offer, per decade (common practice): the 1-2-5
- * series, the 2.56·bandwidth family of vibration analysers (1.28, 2.56, 5.12, 6.4) and the
- * 48 kHz audio family (1.2, 2.4, 4.8, 9.6), with 1.6, 3.2 and 8 for the binary steps.
- */
-const NICE_MANTISSAS = [
-  100, 120, 125, 128, 160, 200, 240, 250, 256, 320, 400, 480, 500, 512, 640, 800, 960,
-];
-
-/**
- * The smallest nice sample rate at or above hz (see NICE_MANTISSAS; exact decimal values).
- * Units: Hz. Throws InputError for a rate ≤ 0 or not a number.
- * @example niceSampleRateHz(1297) // 1600
- * Source: common practice (the rates loggers, vibration analysers and audio converters offer).
- */
-export function niceSampleRateHz(hz: number): number {
-  const f = requirePositive(hz, 'sample rate');
-  let exponent = Math.floor(Math.log10(f)) - 2;
-  for (;;) {
-    for (const m of NICE_MANTISSAS) {
-      const candidate = exponent >= 0 ? m * 10 ** exponent : m / 10 ** -exponent;
-      if (!Number.isFinite(candidate)) {
-        throw new InputError('sample rate', `${f} Hz is too large a sample rate.`);
-      }
-      if (candidate >= f * (1 - 1e-12)) return candidate;
-    }
-    exponent++;
-  }
 }
 
 /** No proposal above this rate (1 THz): far beyond any data logger, and safe from overflow. */

@@ -1,3 +1,5 @@
+// Kept whole (over 300 lines): the guide's shapes, the procedure and the ranking of candidates
+// are one procedure (docs/physics.md §7); half the file is the documented shape of its result.
 import { InputError, requireBetween, requirePositive, requireWhole } from '../basics/InputError';
 import { checkRange, MAX_IMAGES_LIMIT, MAX_SYMMETRY, type Look, type Range } from '../basics/types';
 import { findSpeed, type StrobeReading } from '../physics/findSpeed';

@@ -1,3 +1,6 @@
+// Kept whole (over 300 lines): the harmonic sum, the candidates it yields and their ranking share
+// one set of line and spectrum invariants (docs/physics.md §11.6); split, each piece would need
+// the others' internals.
 import { InputError, requireWhole } from '../basics/InputError';
 import { checkRange, MAX_SYMMETRY, type Range } from '../basics/types';
 import { requireWorkable } from '../basics/workLimit';

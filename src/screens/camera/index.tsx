@@ -1,11 +1,4 @@
-import {
-  cautionFlags,
-  csvTable,
-  standardFrameRates,
-  type CameraPlan,
-  type CameraSetting,
-  type CsvColumn,
-} from '../../core';
+import { cautionFlags, standardFrameRates, type CameraSetting } from '../../core';
 import {
   readCreepRpm,
   readExposureSeconds,
@@ -13,7 +6,7 @@ import {
   readReadoutMs,
   readShutterAngle,
 } from '../../ui/fields';
-import { formatExposure, formatNumber, formatPrecise, numberForField } from '../../words/format';
+import { formatExposure, formatPrecise, numberForField } from '../../words/format';
 import { openCheckScreen } from '../../state/navigation';
 import { readList } from '../../ui/toolFields';
 import {
@@ -29,7 +22,7 @@ import {
   toggleStandardRate,
   type GoalKind,
 } from '../../state/cameraPlanning';
-import { openMachineName } from '../../state/openMachine';
+import { openMachineName } from '../../state/session';
 import { setCreepRpm, setup } from '../../state/setup';
 import { Cautions } from '../../ui/cautions';
 import { ChoiceGroup } from '../../ui/choice-group';
@@ -38,16 +31,11 @@ import { NumberListField } from '../../ui/number-list-field';
 import { Panel } from '../../ui/panel';
 import { PartChoice } from '../../ui/part-choice';
 import { ReportBar } from '../../ui/report-bar';
-import { ResultTable, type ResultColumn } from '../../ui/result-table';
+import { ResultTable } from '../../ui/result-table';
 import { ToolLayout } from '../../ui/tool-layout';
-import {
-  blockedLines,
-  CONDITION_NAMES,
-  conditionLines,
-  GOAL_WORDS,
-  settingLook,
-  settingWords,
-} from '../../words/cameraPlan';
+import { blockedLines, conditionLines, GOAL_WORDS, settingWords } from '../../words/cameraPlan';
+import { columnsFor } from './columns';
+import { cameraCsv } from './csv';
 import style from './style.module.css';
 
 const GOALS: ReadonlyArray<{ value: GoalKind; label: string }> = [
@@ -275,69 +263,4 @@ export function CameraScreen() {
       withdraw={{ refusal: problem }}
     />
   );
-}
-
-function columnsFor(
-  open: (s: CameraSetting) => void,
-  plan: CameraPlan,
-): ReadonlyArray<ResultColumn<CameraSetting>> {
-  return [
-    { label: 'Rank', numeric: true, cell: (_, i) => String(i + 1) },
-    { label: 'Frame rate', numeric: true, cell: (r) => `${formatPrecise(r.frameRate)} fps` },
-    {
-      label: 'Exposure',
-      numeric: true,
-      cell: (r) => `${formatExposure(r.exposureS)} (${formatNumber(r.shutterAngle)}°)`,
-    },
-    { label: 'Looks', cell: (r) => settingLook(r) },
-    {
-      label: 'Blur',
-      numeric: true,
-      cell: (r) => `${formatNumber(r.blurDegrees)}°, ${formatNumber(r.blurPitches)} pitch`,
-    },
-    { label: 'Bend', numeric: true, cell: (r) => `${formatNumber(r.skewDegrees)}°` },
-    {
-      label: 'Goal',
-      cell: (r) =>
-        r.reaches ? 'Reaches it' : `Fails: ${r.blocks.map((c) => CONDITION_NAMES[c]).join(', ')}`,
-    },
-    { label: 'Score', numeric: true, cell: (r) => formatNumber(r.score, r.score < 10 ? 1 : 0) },
-    { label: 'What it looks like', cell: (r) => settingWords(r, plan) },
-    {
-      label: 'Try it',
-      action: true,
-      cell: (r) => (
-        <button type="button" class={style.open} onClick={() => open(r)}>
-          Open in check
-        </button>
-      ),
-    },
-  ];
-}
-
-/** The settings (or, with none, the near misses) as CSV. */
-export function cameraCsv(plan: CameraPlan): string {
-  const rows = plan.settings.length > 0 ? plan.settings : plan.nearMisses;
-  const columns: CsvColumn<CameraSetting>[] = [
-    { label: 'rank', value: (r) => rows.indexOf(r) + 1 },
-    { label: 'frame rate (fps)', value: (r) => r.frameRate },
-    { label: 'exposure (s)', value: (r) => r.exposureS },
-    { label: 'shutter angle (°)', value: (r) => r.shutterAngle },
-    { label: 'look', value: (r) => r.look },
-    { label: 'apparent speed (rpm)', value: (r) => r.apparentRpm },
-    { label: 'apparent speed low (rpm)', value: (r) => r.apparentRpmRange[0] },
-    { label: 'apparent speed high (rpm)', value: (r) => r.apparentRpmRange[1] },
-    { label: 'misleading within tolerance', value: (r) => r.misleading },
-    { label: 'blur (°)', value: (r) => r.blurDegrees },
-    { label: 'blur (pitches)', value: (r) => r.blurPitches },
-    { label: 'rolling-shutter bend (°)', value: (r) => r.skewDegrees },
-    { label: 'pattern contrast left', value: (r) => r.residualContrast },
-    { label: 'rolling-shutter bend (pitches)', value: (r) => r.skewPitches },
-    { label: 'readout longer than a frame', value: (r) => r.readoutLongerThanFrame },
-    { label: 'reaches the goal', value: (r) => r.reaches },
-    { label: 'fails', value: (r) => r.blocks.join(' ') },
-    { label: 'score', value: (r) => r.score },
-    { label: 'what it looks like', value: (r) => settingWords(r, plan) },
-  ];
-  return csvTable(columns, rows);
 }

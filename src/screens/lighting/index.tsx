@@ -7,7 +7,7 @@ import {
 } from '../../core';
 import { formatNumber } from '../../words/format';
 import { lighting, lightingCautions } from '../../state/lighting';
-import { openMachineName } from '../../state/openMachine';
+import { openMachineName } from '../../state/session';
 import { lightWaveOf, setup } from '../../state/setup';
 import { Cautions } from '../../ui/cautions';
 import { LightingReadout } from '../../ui/lighting-readout';

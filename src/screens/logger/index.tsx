@@ -1,22 +1,13 @@
-import {
-  converterRangeDb,
-  rcCutoffHz as rcCutoffOf,
-  csvTable,
-  type CsvColumn,
-  type LoggerComponent,
-  type LoggerPlan,
-} from '../../core';
+import { converterRangeDb, type LoggerPlan } from '../../core';
 import { readSpeedRpm } from '../../ui/fields';
 import { formatNumber, formatPrecise, numberForField } from '../../words/format';
 import {
   readBits,
   readBladeCount,
-  readCapacitanceF,
   readCutoffHz,
   readFilterOrder,
   readHarmonics,
   readList,
-  readResistanceOhm,
   readSampleRateHz,
   readTeeth,
   readToneHz,
@@ -25,7 +16,6 @@ import {
   applyProposal,
   bladeCounts,
   bladesFor,
-  capacitanceF,
   converterBits,
   extraTonesHz,
   filterCutoffHz,
@@ -34,13 +24,10 @@ import {
   gearTeeth,
   harmonics,
   loggerPlanning,
-  rcCutoffHz,
-  rcGiven,
-  resistanceOhm,
   sampleHz,
   type FilterKind,
 } from '../../state/loggerPlanning';
-import { openMachineName } from '../../state/openMachine';
+import { openMachineName } from '../../state/session';
 import { activePart, setSpeedRpm } from '../../state/setup';
 import { ChoiceGroup } from '../../ui/choice-group';
 import { NumberField } from '../../ui/number-field';
@@ -48,16 +35,13 @@ import { NumberListField } from '../../ui/number-list-field';
 import { Panel } from '../../ui/panel';
 import { PartChoice } from '../../ui/part-choice';
 import { ReportBar } from '../../ui/report-bar';
-import { ResultTable, type ResultColumn } from '../../ui/result-table';
+import { ResultTable } from '../../ui/result-table';
 import { ToolLayout } from '../../ui/tool-layout';
 import { PLANNING_AID_CAUTION } from '../../words/cautions';
-import {
-  ALIAS_AFTER_CONVERTER_NOTE,
-  componentLabel,
-  componentWords,
-  loggerNoteWords,
-  proposalWords,
-} from '../../words/logger';
+import { ALIAS_AFTER_CONVERTER_NOTE, loggerNoteWords, proposalWords } from '../../words/logger';
+import { COLUMNS } from './columns';
+import { loggerCsv } from './csv';
+import { RcFields } from './rc-fields';
 import style from './style.module.css';
 
 const FILTERS: ReadonlyArray<{ value: FilterKind; label: string }> = [
@@ -70,11 +54,6 @@ const MAX_LIST = 12;
 const readBlades = (text: string) => readList(text, readBladeCount, 'blade counts', 0, MAX_LIST);
 const readGears = (text: string) => readList(text, readTeeth, 'tooth counts', 0, MAX_LIST);
 const readTones = (text: string) => readList(text, readToneHz, 'added tones', 0, MAX_LIST);
-
-/** A resistance in ohms for its field: "10000". */
-const ohmText = (ohm: number) => numberForField(ohm);
-/** A capacitance in farads for its field, in nF: "100". */
-const nanofaradText = (f: number) => numberForField(f * 1e9);
 
 /**
  * The data-logger planner: the machine's frequencies, the sample rate, the analog anti-alias
@@ -325,99 +304,4 @@ export function LoggerScreen() {
 /** The plan's own sample rate (twice its Nyquist frequency), so a refused entry never mixes with a kept plan. */
 function sampleHzOf(plan: LoggerPlan): number {
   return plan.nyquistHz * 2;
-}
-
-function RcFields() {
-  return (
-    <>
-      <ChoiceGroup
-        legend="RC given as"
-        name="logger-rc-given"
-        options={[
-          { value: 'cutoff', label: 'Its cutoff' },
-          { value: 'parts', label: 'R and C' },
-        ]}
-        value={rcGiven.value}
-        onChange={(v) => (rcGiven.value = v)}
-      />
-      {rcGiven.value === 'cutoff' ? (
-        <NumberField
-          id="logger-rc-cutoff"
-          label="Cutoff"
-          value={rcCutoffHz.value}
-          toText={numberForField}
-          read={readCutoffHz}
-          onValue={(v) => (rcCutoffHz.value = v)}
-          unit="Hz"
-          hint="−3 dB point of the single RC stage."
-        />
-      ) : (
-        <div class={style.pair}>
-          <NumberField
-            id="logger-r"
-            label="Resistance"
-            value={resistanceOhm.value}
-            toText={ohmText}
-            read={readResistanceOhm}
-            onValue={(v) => (resistanceOhm.value = v)}
-            unit="Ω"
-            hint="10k works."
-          />
-          <NumberField
-            id="logger-c"
-            label="Capacitance"
-            value={capacitanceF.value}
-            toText={nanofaradText}
-            read={readCapacitanceF}
-            onValue={(v) => (capacitanceF.value = v)}
-            unit="nF"
-            hint="4.7 µF works."
-          />
-        </div>
-      )}
-      {rcGiven.value === 'parts' && (
-        <p class={style.note} data-testid="logger-rc-result">
-          Cutoff 1/(2πRC) = {formatNumber(rcCutoffOf(resistanceOhm.value, capacitanceF.value))} Hz.
-        </p>
-      )}
-    </>
-  );
-}
-
-const COLUMNS: ReadonlyArray<ResultColumn<LoggerComponent>> = [
-  { label: 'Component', cell: (c) => componentLabel(c) },
-  { label: 'Frequency', numeric: true, cell: (c) => `${formatPrecise(c.hz)} Hz` },
-  { label: 'Lands at', numeric: true, cell: (c) => `${formatPrecise(c.foldedHz)} Hz` },
-  { label: 'Aliased', cell: (c) => (c.aliases ? 'Yes: a false tone' : 'No') },
-  { label: 'Filter takes off', numeric: true, cell: (c) => `${formatNumber(-c.gainDb)} dB` },
-  {
-    label: 'Needed',
-    numeric: true,
-    cell: (c) => (c.aliases ? `${formatNumber(c.neededDb)} dB` : 'at most 3 dB loss'),
-  },
-  {
-    label: 'Result',
-    cell: (c) => (
-      <strong class={c.pass ? style.pass : style.fail} data-testid="component-result">
-        {c.pass ? 'Pass' : 'Fail'}
-      </strong>
-    ),
-  },
-];
-
-/** The components as CSV, with the sample rate and converter range on every row. */
-export function loggerCsv(plan: LoggerPlan, sampleRateHz: number): string {
-  const columns: CsvColumn<LoggerComponent>[] = [
-    { label: 'component', value: (c) => componentLabel(c) },
-    { label: 'frequency (Hz)', value: (c) => c.hz },
-    { label: 'sample rate (Hz)', value: () => sampleRateHz },
-    { label: 'lands at (Hz)', value: (c) => c.foldedHz },
-    { label: 'aliased', value: (c) => c.aliases },
-    { label: 'filter gain (dB)', value: (c) => c.gainDb },
-    { label: 'attenuation needed (dB)', value: (c) => c.neededDb },
-    { label: 'converter range (dB)', value: () => plan.rangeDb },
-    { label: 'pass', value: (c) => c.pass },
-    { label: 'in words', value: (c) => componentWords(c, plan) },
-  ];
-  return csvTable(columns, plan.components);
 }

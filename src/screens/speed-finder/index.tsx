@@ -3,7 +3,7 @@ import { type CautionContext, type StepCandidate } from '../../core';
 import { formatNumber } from '../../words/format';
 import { openCheckScreen } from '../../state/navigation';
 import { formatRate } from '../../words/rates';
-import { openMachineName } from '../../state/openMachine';
+import { openMachineName } from '../../state/session';
 import { attempt } from '../../state/outcome';
 import { flashUnit } from '../../state/setup';
 import {

@@ -1,6 +1,6 @@
 import { useState } from 'preact/hooks';
 import { formatNumber } from '../../words/format';
-import { openMachineName } from '../../state/openMachine';
+import { openMachineName } from '../../state/session';
 import { partLabel, activeIndex } from '../../state/model';
 import { setup } from '../../state/setup';
 import { featuresInUse, saveFoundSpeed, type SaveTarget } from '../../state/speedFinder';

@@ -1,19 +1,19 @@
 import { useState } from 'preact/hooks';
-import { apparentMotion, cautionFlags, type CautionContext, type FreezeBand } from '../../core';
+import { apparentMotion, cautionFlags, type CautionContext } from '../../core';
 import { formatNumber } from '../../words/format';
 import { openCheckScreen } from '../../state/navigation';
-import { formatRate, formatRateSpan, settingStepWords } from '../../words/rates';
+import { formatRate, formatRateSpan } from '../../words/rates';
 import {
   chain,
   editChain,
-  machineRates,
   syncChainSpeeds,
   withDrivenPart,
   type DerivedPart,
-} from '../../state/chain';
+} from '../../state/driveChain';
+import { wholeMachineRates } from '../../state/wholeMachine';
 import { check, verdictOf } from '../../state/check';
 import { partLabel, type SamplerKind, activeIndex } from '../../state/model';
-import { openMachineName } from '../../state/openMachine';
+import { openMachineName } from '../../state/session';
 import { flashUnit, setSamplerKind, setSamplerRateHz, setup } from '../../state/setup';
 import { MAX_PARTS } from '../../state/validate';
 import { Cautions } from '../../ui/cautions';
@@ -23,22 +23,15 @@ import { RateMap } from '../../ui/rate-map';
 import { ReportBar } from '../../ui/report-bar';
 import { ResultTable, type ResultColumn } from '../../ui/result-table';
 import { ToolLayout } from '../../ui/tool-layout';
-import {
-  freezeBandsShown,
-  freezeRateToSet,
-  middleHz,
-  noStillBandsShown,
-  type RateSpan,
-} from './band-lists';
-import { machineCsv } from './chain-csv';
-import { PartCard, speedWords } from './part-card';
+
+import { wholeMachineCsv } from './csv';
+import { PartCard } from './part-card';
+import { speedWords } from '../../words/wholeMachine';
 import { verdictHeadline } from '../../words/check';
+import { BandTables } from './band-tables';
 import style from './style.module.css';
 
 interface Props {}
-
-/** Bands listed per table; the CSV holds them all. */
-const SHOWN_BANDS = 6;
 
 const SAMPLERS: ReadonlyArray<{ value: SamplerKind; label: string }> = [
   { value: 'strobe', label: 'Strobe' },
@@ -55,8 +48,8 @@ export function WholeMachineScreen(_props: Props) {
   const s = setup.value;
   const parts = chain.result.value ?? [];
   const chainProblem = chain.problem.value;
-  const rates = machineRates.result.value;
-  const ratesProblem = machineRates.problem.value;
+  const rates = wholeMachineRates.result.value;
+  const ratesProblem = wholeMachineRates.problem.value;
   const r = check.value;
   const unit = flashUnit.value;
   const kind = s.samplerKind;
@@ -65,7 +58,6 @@ export function WholeMachineScreen(_props: Props) {
   const [addFrom, setAddFrom] = useState<number | null>(null);
   const [applied, setApplied] = useState<number | null>(null);
   const rate = (hz: number) => formatRate(hz, kind, unit);
-  const span = (b: RateSpan) => formatRateSpan(b.fromHz, b.toHz, kind, unit);
 
   // Tapping a rate sets it on the check screen, whose part then shows the chain's speed too.
   const useRate = (hz: number) => {
@@ -172,29 +164,6 @@ export function WholeMachineScreen(_props: Props) {
     </Panel>
   );
 
-  const freezeShown = rates ? freezeBandsShown(rates.freeze, SHOWN_BANDS) : [];
-  const noStillShown = rates ? noStillBandsShown(rates.noStill, SHOWN_BANDS) : [];
-  const freezeColumns: ReadonlyArray<ResultColumn<FreezeBand>> = [
-    { label: 'Rates', cell: (b) => span(b) },
-    {
-      label: 'Single image',
-      cell: (b) => freezeWords(b, r.sampler === 'flash' ? 'flashes' : 'frames'),
-    },
-    {
-      label: 'Use',
-      cell: (b) => (
-        <RateButton hz={freezeRateToSet(b)} label={rate(freezeRateToSet(b))} onUse={useRate} />
-      ),
-    },
-  ];
-  const noStillColumns: ReadonlyArray<ResultColumn<RateSpan>> = [
-    { label: 'Rates', cell: (b) => span(b) },
-    {
-      label: 'Use',
-      cell: (b) => <RateButton hz={middleHz(b)} label={rate(middleHz(b))} onUse={useRate} />,
-    },
-  ];
-
   const results = (
     <>
       <Panel title="Rates for the whole machine" id="chain-rates">
@@ -241,42 +210,7 @@ export function WholeMachineScreen(_props: Props) {
             </button>
           </p>
         )}
-        <h3 class={style.subtitle}>Freeze {partLabel(s, target)}, no other part still</h3>
-        {freezeShown.length === 0 ? (
-          <p class={style.quiet} data-testid="no-freeze">
-            {rates
-              ? `No band in the range listed freezes ${partLabel(s, target)} round the lock of its nominal speed, ${settingStepWords(r.sampler)} wide or more, without another part looking still too.`
-              : 'Not worked out yet.'}
-          </p>
-        ) : (
-          <ResultTable
-            caption={bandCaption(rates?.freeze.length ?? 0, freezeShown.length, 'highest first')}
-            columns={freezeColumns}
-            rows={freezeShown}
-            rowKey={(b) => `${b.fromHz}-${b.toHz}`}
-            testId="freeze-table"
-          />
-        )}
-        <h3 class={style.subtitle}>No part looks still</h3>
-        {noStillShown.length === 0 ? (
-          <p class={style.quiet} data-testid="no-no-still">
-            {rates
-              ? 'Some part can look still at every rate in the range listed.'
-              : 'Not worked out yet.'}
-          </p>
-        ) : (
-          <ResultTable
-            caption={bandCaption(
-              rates?.noStill.length ?? 0,
-              noStillShown.length,
-              'widest shown, highest first',
-            )}
-            columns={noStillColumns}
-            rows={noStillShown}
-            rowKey={(b) => `${b.fromHz}-${b.toHz}`}
-            testId="no-still-table"
-          />
-        )}
+        <BandTables onUse={useRate} />
         <p class={style.quiet}>
           Parts may still look slow or backward in these bands: the Check screen and the rate map
           show how each looks.
@@ -302,7 +236,7 @@ export function WholeMachineScreen(_props: Props) {
         title="Whole machine"
         machineName={openMachineName.value}
         cautions={cautions}
-        csv={() => machineCsv(parts, rates, kind, unit)}
+        csv={() => wholeMachineCsv(parts, rates, kind, unit)}
       />
     </>
   );
@@ -319,37 +253,8 @@ export function WholeMachineScreen(_props: Props) {
   );
 }
 
-function RateButton({
-  hz,
-  label,
-  onUse,
-}: {
-  hz: number;
-  label: string;
-  onUse: (hz: number) => void;
-}) {
-  return (
-    <button type="button" class={style.rateButton} onClick={() => onUse(hz)}>
-      {label}
-    </button>
-  );
-}
-
 /** How the part looks at the rate, in the check screen's words. */
 function lookAt(p: DerivedPart, rateHz: number, sampler: 'flash' | 'frames'): string {
   const part = { speedHz: p.speedHz, symmetry: p.symmetry, tolerance: p.tolerance };
   return verdictHeadline(verdictOf(apparentMotion(part, rateHz, { sampler }), part));
-}
-
-function freezeWords(b: FreezeBand, samples: 'flashes' | 'frames'): string {
-  if (b.p === 0) return 'Turns too slowly to look anything but still';
-  const order = b.p === 1 ? `one pitch between ${samples}` : `${b.p} pitches between ${samples}`;
-  return b.dense ? `${order}; where exactly depends on the actual speed` : order;
-}
-
-function bandCaption(total: number, shown: number, order: string): string {
-  const all = `${total} ${total === 1 ? 'band' : 'bands'}`;
-  return shown < total
-    ? `${all}; ${shown} shown (${order}), all in the CSV`
-    : `${all} (${order.replace(/^widest shown, /, '')})`;
 }

@@ -1,8 +1,7 @@
-import { kmhToMps, mpsToKmh, mpsToMph, mphToMps } from '../../core';
-import { readFeatures, readField, readSpeedRpm, readTolerancePercent } from '../../ui/fields';
-import { useFollowingText } from '../../ui/followingText';
-import { formatNumber, numberForField } from '../../words/format';
-import { readTeeth } from '../../ui/toolFields';
+import { readFeatures, readSpeedRpm, readTolerancePercent } from '../../ui/fields';
+
+import { numberForField } from '../../words/format';
+
 import {
   editChain,
   speedSourceOf,
@@ -14,15 +13,17 @@ import {
   withWheel,
   type DerivedPart,
   type SpeedSource,
-} from '../../state/chain';
-import { partLabel, type PartDrive, type Setup, type WheelSpec } from '../../state/model';
+} from '../../state/driveChain';
+import { partLabel, type Setup } from '../../state/model';
 import { ChoiceGroup } from '../../ui/choice-group';
 import { MotorFields } from '../../ui/motor-fields';
 import { problemsAmong } from '../../state/fieldProblems';
 import { fieldNames } from '../../ui/not-current';
 import { NumberField } from '../../ui/number-field';
-import { useReportedProblem } from '../../ui/number-field/text-field';
-import { readBeltSlipPercent, readGroundSpeed, readPulleyMm, readTyreSize } from './chain-fields';
+
+import { speedWords } from '../../words/wholeMachine';
+import { DriveFields } from './drive-fields';
+import { WheelFields } from './wheel-fields';
 import style from './style.module.css';
 
 interface Props {
@@ -33,12 +34,6 @@ interface Props {
   /** Reports an edit the saved list refuses (DataError), or clears the report. */
   onProblem: (message: string | null) => void;
 }
-
-/** Starting values when a drive first becomes a belt or a gear pair: ratio 1, no slip (neutral; the user types the real ones). */
-const NEW_DRIVE: { belt: PartDrive; gear: PartDrive } = {
-  belt: { from: 0, kind: 'belt', driverMm: 100, drivenMm: 100, slipPercent: 0 },
-  gear: { from: 0, kind: 'gear', driverTeeth: 20, drivenTeeth: 20 },
-};
 
 /**
  * One part of the machine: its name and features, where its speed comes from (typed, a motor,
@@ -168,17 +163,6 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
   );
 }
 
-/** "1,015 rpm ± 2 % (995 – 1,035 rpm), the other way to the first part". */
-export function speedWords(p: DerivedPart): string {
-  const rpm = formatNumber(Math.abs(p.speedHz * 60));
-  const band =
-    p.tolerance > 0
-      ? ` ± ${formatNumber(p.tolerance * 100)} % (${formatNumber(p.lowHz * 60)} – ${formatNumber(p.highHz * 60)} rpm)`
-      : '';
-  const way = p.ratioToRoot < 0 ? ', turning the other way to the start of its chain' : '';
-  return `${rpm} rpm${band}${way}`;
-}
-
 function NameField({
   id,
   name,
@@ -201,230 +185,6 @@ function NameField({
         value={name}
         onInput={(e) => onName((e.currentTarget as HTMLInputElement).value)}
       />
-    </div>
-  );
-}
-
-interface WheelProps {
-  id: (field: string) => string;
-  /** A field's name in a "fix …" note, from its label. */
-  named: (label: string) => string;
-  wheel: WheelSpec;
-  onWheel: (wheel: WheelSpec) => void;
-}
-
-function WheelFields({ id, named, wheel, onWheel }: WheelProps) {
-  // Another unit keeps the same ground speed.
-  const changeUnit = (unit: WheelSpec['unit']) => {
-    if (unit === wheel.unit) return;
-    const mps = wheel.unit === 'mph' ? mphToMps(wheel.groundSpeed) : kmhToMps(wheel.groundSpeed);
-    onWheel({ ...wheel, unit, groundSpeed: unit === 'mph' ? mpsToMph(mps) : mpsToKmh(mps) });
-  };
-  return (
-    <div class={style.group}>
-      <NumberField
-        id={id('ground')}
-        label="Ground speed"
-        name={named('Ground speed')}
-        value={wheel.groundSpeed}
-        unitKey={wheel.unit}
-        toText={numberForField}
-        read={(text) => readGroundSpeed(text, wheel.unit)}
-        onValue={(groundSpeed) => onWheel({ ...wheel, groundSpeed })}
-        unit={
-          <select
-            class={style.select}
-            aria-label="Ground speed unit"
-            value={wheel.unit}
-            onChange={(e) =>
-              changeUnit((e.currentTarget as HTMLSelectElement).value as WheelSpec['unit'])
-            }
-          >
-            <option value="km/h">km/h</option>
-            <option value="mph">mph</option>
-          </select>
-        }
-      />
-      <TyreField
-        id={id('tyre')}
-        name={named('Tyre size')}
-        size={wheel.tyreSize}
-        onSize={(tyreSize) => onWheel({ ...wheel, tyreSize })}
-      />
-    </div>
-  );
-}
-
-/** A tyre size, checked at each keystroke like a number field: bad text keeps the last good size. */
-function TyreField({
-  id,
-  name,
-  size,
-  onSize,
-}: {
-  id: string;
-  /** The field's name in a "fix …" note: which part's tyre. */
-  name: string;
-  size: string;
-  onSize: (size: string) => void;
-}) {
-  const { text, message, edit } = useFollowingText(
-    size,
-    (shown) => shown.trim() === size,
-    () => size,
-  );
-  useReportedProblem(id, name, message);
-  const onInput = (event: Event) => {
-    const next = (event.currentTarget as HTMLInputElement).value;
-    // readField turns the core's refusal into a sentence (and rethrows anything else).
-    let clean = '';
-    const reading = readField(next, (t) => {
-      clean = readTyreSize(t);
-      return 0;
-    });
-    edit(next, reading.ok ? null : reading.message);
-    if (reading.ok && clean !== size) onSize(clean);
-  };
-  return (
-    <div class={style.nameField}>
-      <label class={style.label} for={id}>
-        Tyre size
-      </label>
-      <input
-        id={id}
-        class={style.input}
-        type="text"
-        autoComplete="off"
-        spellcheck={false}
-        value={text}
-        onInput={onInput}
-        aria-invalid={message ? 'true' : undefined}
-        aria-describedby={message ? `${id}-message` : `${id}-hint`}
-      />
-      {message && (
-        <p id={`${id}-message`} class={style.message} role="alert">
-          {message}
-        </p>
-      )}
-      <p id={`${id}-hint`} class={style.hint}>
-        As on the sidewall: width/aspect R rim, e.g. 205/55R16 (ISO metric size).
-      </p>
-    </div>
-  );
-}
-
-interface DriveProps {
-  id: (field: string) => string;
-  /** A field's name in a "fix …" note, from its label. */
-  named: (label: string) => string;
-  setup: Setup;
-  index: number;
-  drive: PartDrive;
-  onDrive: (drive: PartDrive) => void;
-}
-
-function DriveFields({ id, named, setup, index, drive, onDrive }: DriveProps) {
-  const kinds: Array<{ value: PartDrive['kind']; label: string }> = [
-    { value: 'belt', label: 'Belt' },
-    { value: 'gear', label: 'Gears' },
-    { value: 'shaft', label: 'Same shaft' },
-  ];
-  const changeKind = (kind: PartDrive['kind']) => {
-    if (kind === drive.kind) return;
-    onDrive(
-      kind === 'shaft' ? { from: drive.from, kind } : { ...NEW_DRIVE[kind], from: drive.from },
-    );
-  };
-  return (
-    <div class={style.group}>
-      <div class={style.nameField}>
-        <label class={style.label} for={id('from')}>
-          Driven by
-        </label>
-        <select
-          id={id('from')}
-          class={style.select}
-          value={String(drive.from)}
-          onChange={(e) =>
-            onDrive({ ...drive, from: Number((e.currentTarget as HTMLSelectElement).value) })
-          }
-        >
-          {setup.parts.slice(0, index).map((_, i) => (
-            <option key={i} value={String(i)}>
-              {i + 1}. {partLabel(setup, i)}
-            </option>
-          ))}
-        </select>
-      </div>
-      <ChoiceGroup
-        legend="Drive"
-        name={id('kind')}
-        options={kinds}
-        value={drive.kind}
-        onChange={changeKind}
-      />
-      {drive.kind === 'belt' && (
-        <>
-          <div class={style.pair}>
-            <NumberField
-              id={id('driver-mm')}
-              label="Driver pulley"
-              name={named('Driver pulley')}
-              value={drive.driverMm}
-              toText={numberForField}
-              read={(text) => readPulleyMm(text, 'driver pulley')}
-              onValue={(driverMm) => onDrive({ ...drive, driverMm })}
-              unit="mm"
-            />
-            <NumberField
-              id={id('driven-mm')}
-              label="Driven pulley"
-              name={named('Driven pulley')}
-              value={drive.drivenMm}
-              toText={numberForField}
-              read={(text) => readPulleyMm(text, 'driven pulley')}
-              onValue={(drivenMm) => onDrive({ ...drive, drivenMm })}
-              unit="mm"
-            />
-          </div>
-          <NumberField
-            id={id('belt-slip')}
-            label="Belt slip"
-            name={named('Belt slip')}
-            value={drive.slipPercent}
-            toText={numberForField}
-            read={readBeltSlipPercent}
-            onValue={(slipPercent) => onDrive({ ...drive, slipPercent })}
-            unit="%"
-            hint="The driven pulley runs up to this much slower; a V-belt under load slips a little."
-          />
-        </>
-      )}
-      {drive.kind === 'gear' && (
-        <>
-          <div class={style.pair}>
-            <NumberField
-              id={id('driver-teeth')}
-              label="Driver teeth"
-              name={named('Driver teeth')}
-              value={drive.driverTeeth}
-              toText={numberForField}
-              read={readTeeth}
-              onValue={(driverTeeth) => onDrive({ ...drive, driverTeeth })}
-            />
-            <NumberField
-              id={id('driven-teeth')}
-              label="Driven teeth"
-              name={named('Driven teeth')}
-              value={drive.drivenTeeth}
-              toText={numberForField}
-              read={readTeeth}
-              onValue={(drivenTeeth) => onDrive({ ...drive, drivenTeeth })}
-            />
-          </div>
-          <p class={style.hint}>Two gears in mesh turn opposite ways.</p>
-        </>
-      )}
     </div>
   );
 }

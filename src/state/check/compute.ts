@@ -19,7 +19,6 @@ import {
   type Range,
   type Sampler,
 } from '../../core';
-import { attempt, type Outcome } from '../outcome';
 import { activeCorePart, samplerOf, type SamplerKind, type Setup } from '../model';
 import { flickerHzOf, lightWaveOf, samplerRateHz } from '../setup';
 import {
@@ -211,9 +210,4 @@ export function computeCheck(s: Setup): CheckResult {
     showPhotosensitivity: flashes && cautionFlags({ flashRatesHz: [rateHz] }).photosensitivity,
     notes,
   };
-}
-
-/** computeCheck that reports the core's refusal instead of throwing. */
-export function tryCheck(s: Setup): Outcome<CheckResult> {
-  return attempt(() => computeCheck(s));
 }

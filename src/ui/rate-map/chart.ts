@@ -1,3 +1,5 @@
+// Kept whole (over 300 lines): uPlot's options, hooks and drawing share one chart instance and
+// its scales; split, each piece would need the instance's internals.
 // The rate map drawn with uPlot. Loaded lazily (with uPlot and its stylesheet) so the first
 // screen stays small: RateMap/index.tsx imports this module with import().
 import uPlot from 'uplot';

@@ -1,10 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import {
-  cameraPlan,
-  standardFrameRates,
-  type CameraAbilities,
-} from '../../../src/core/plans/cameraPlan';
+import { cameraPlan, type CameraAbilities } from '../../../src/core/plans/cameraPlan';
+import { standardFrameRates } from '../../../src/core/plans/frameRates';
 import { anyFinite, bad, expectInputError, finiteOrInputError } from '../expectInputError';
 import { replay, sceneOf } from '../simulator';
 

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import FFT from 'fft.js';
 import fc from 'fast-check';
-import { loggerPlan, niceSampleRateHz } from '../../../src/core/plans/loggerPlan';
+import { loggerPlan } from '../../../src/core/plans/loggerPlan';
+import { niceSampleRateHz } from '../../../src/core/formulas/logger';
 import { lowPassGainDb } from '../../../src/core/formulas/logger';
 import { anyFinite, bad, expectInputError, finiteOrInputError } from '../expectInputError';
 

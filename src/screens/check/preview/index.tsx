@@ -1,19 +1,19 @@
 import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
-import {
-  apparentMotion,
-  InputError,
-  SEIZURE_RISK_HIGH_HZ,
-  SEIZURE_RISK_LOW_HZ,
-  type Part,
-  type Sampler,
-} from '../../../core';
+import { apparentMotion, InputError, type Part, type Sampler } from '../../../core';
 import { CanvasPreview } from '../../../render/canvasPreview';
 import { checkScene, sampleIndexAt, sampleTimeS, type PreviewScene } from '../../../render/scene';
-import { formatNumber } from '../../../words/format';
+
 import { lookFromCss } from './css-colour';
 import { useFrameLoop } from '../../../ui/frameLoop';
 import { safetyCautions } from '../../../words/cautions';
 import { lookPhrase } from '../../../words/look';
+import {
+  counterText,
+  emptyScene,
+  flashesInRiskRange,
+  prefersReducedMotion,
+  sceneFromProps,
+} from './scene';
 import style from './style.module.css';
 
 export interface Props {
@@ -38,13 +38,6 @@ export interface Props {
 
 /** Playback speeds: how many times slower than real time the part's clock runs. */
 const SLOW_FACTORS = [1, 2, 5, 10, 30, 100] as const;
-
-/**
- * How long a flash's image lingers on the eye, as a time constant in the part's clock:
- * docs/physics.md §1 puts fusion of successive flashes at about 16 a second, so an image fades
- * over about 1/16 s. A judgement of ours; it is what makes multi-image locks superimpose.
- */
-const EYE_FADE_S = 1 / 16;
 
 /**
  * The window the true view integrates, in real seconds: one refresh of a 60 Hz display, which
@@ -270,51 +263,4 @@ export function Preview({
       )}
     </section>
   );
-}
-
-const emptyScene: PreviewScene = {
-  features: 1,
-  speedHz: 0,
-  sampler: 'true',
-  rateHz: 1,
-  exposureS: 0,
-  readoutS: 0,
-  timeS: 0,
-  fadeS: EYE_FADE_S,
-};
-
-function sceneFromProps(
-  part: Part,
-  sampler: Sampler,
-  rateHz: number,
-  exposureS: number,
-  readoutS: number,
-): PreviewScene {
-  return {
-    features: part.symmetry,
-    speedHz: part.speedHz,
-    sampler: sampler === 'flash' ? 'flash' : 'frames',
-    rateHz,
-    exposureS,
-    readoutS: sampler === 'frames' ? readoutS : 0,
-    timeS: 0,
-    fadeS: EYE_FADE_S,
-  };
-}
-
-/** "Flash 1,234 · 20.567 s · 10× slower": the sample count and the part's clock. */
-function counterText(sampler: Sampler, index: number, timeS: number, slow: number): string {
-  const word = sampler === 'flash' ? 'Flash' : 'Frame';
-  const pace = slow === 1 ? 'real time' : `${slow}× slower`;
-  return `${word} ${formatNumber(index, 0)} · ${formatNumber(timeS, 3)} s · ${pace}`;
-}
-
-/** A strobe played back at a rate people should not watch flashing (docs/physics.md §10). */
-function flashesInRiskRange(sampler: Sampler, rateHz: number, slow: number): boolean {
-  const shown = rateHz / slow;
-  return sampler === 'flash' && shown >= SEIZURE_RISK_LOW_HZ && shown <= SEIZURE_RISK_HIGH_HZ;
-}
-
-function prefersReducedMotion(): boolean {
-  return typeof matchMedia === 'function' && matchMedia('(prefers-reduced-motion: reduce)').matches;
 }

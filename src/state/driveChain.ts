@@ -4,11 +4,8 @@
 // speeds and tolerances along (docs/physics.md §8); this file turns set-ups into its input and
 // writes what it gives back into the parts, so the check screen and saved machines keep it.
 import {
-  defaultLookOptions,
   driveChain,
-  freezeRates,
   InputError,
-  noStillRates,
   kmhToMps,
   motorSpeedHz,
   mphToMps,
@@ -16,12 +13,7 @@ import {
   type ChainPart,
   type ChainPartSpec,
   type ChainRoot,
-  type FreezeBand,
-  type Range,
-  type Sampler,
-  lockCountBound,
 } from '../core';
-import { check } from './check';
 import {
   MAX_SPEED_RPM,
   partLabel,
@@ -29,12 +21,12 @@ import {
   type PartSpec,
   type Setup,
   type WheelSpec,
-  activeIndex,
   corePartOf,
+  newPartLike,
 } from './model';
 import { keepLastGood } from './outcome';
 import { defaultMotor, setup } from './setup';
-import { DataError, MAX_PARTS } from './validate';
+import { DataError, requirePartRoom } from './validate';
 
 /** Where a part's speed comes from. */
 export type SpeedSource = 'typed' | 'motor' | 'wheel' | 'drive';
@@ -217,33 +209,15 @@ export function withPartFields(
   return changePart(s, index, (part) => ({ ...part, ...fields }));
 }
 
-function freeName(parts: readonly PartSpec[]): string {
-  const taken = new Set(parts.map((p) => p.name.trim().toLowerCase()));
-  for (let n = parts.length + 1; ; n++) {
-    if (!taken.has(`part ${n}`)) return `Part ${n}`;
-  }
-}
-
 /**
  * Adds a part at the end, on the same shaft as part `from` (the user then picks the drive).
  * Throws DataError, changing nothing, when the set-up is full or `from` is not a part.
  */
 export function withDrivenPart(s: Setup, from: number): Setup {
-  if (s.parts.length >= MAX_PARTS) {
-    throw new DataError(
-      'parts',
-      `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`,
-    );
-  }
+  requirePartRoom(s);
   const driver = s.parts[from];
   if (!driver) throw new DataError('parts', 'That part is no longer in the list.');
-  const part: PartSpec = {
-    name: freeName(s.parts),
-    speedRpm: driver.speedRpm,
-    features: 1,
-    tolerancePercent: driver.tolerancePercent,
-    drive: { from, kind: 'shaft' },
-  };
+  const part: PartSpec = { ...newPartLike(s.parts, driver), drive: { from, kind: 'shaft' } };
   return { ...s, parts: [...s.parts, part] };
 }
 
@@ -309,84 +283,3 @@ export function syncChainSpeeds(): void {
 
 /** The current set-up's parts with their speed bands, kept at the last good value when the core refuses a chain. */
 export const chain = keepLastGood(() => deriveParts(setup.value));
-
-/** What the whole-machine screen lists for a sampler's range (docs/physics.md §4, several parts). */
-export interface MachineRates {
-  /** The part to freeze (its index in the set-up). */
-  target: number;
-  /** The sampler's range. */
-  range: Range;
-  /** The part of it the bands cover: its top, from where listing every still span stays quick. */
-  listed: Range | null;
-  sampler: Sampler;
-  /** Bands that freeze the target as a single image while no other part looks still, ascending. */
-  freeze: FreezeBand[];
-  /** Bands where no part looks still, ascending. */
-  noStill: Array<{ fromHz: number; toHz: number }>;
-}
-
-/**
- * Still spans worked out per keystroke at most: enough for a dozen fast parts over a strobe's
- * whole range, few enough to answer at once on a phone (a judgement).
- */
-export const MAX_LISTED_SPANS = 100_000;
-
-/**
- * The top of `range` in which listing every part's still spans stays within `budget`: the
- * bottom is raised until the locks of all parts (the core's lockCountBound, docs/physics.md §3)
- * fit. Null when even the top rate is too costly.
- * @example listedRange([{ speedHz: 29.5, symmetry: 6 }], { minHz: 0.5, maxHz: 200 }, 'frames', 1e5) // { minHz: 0.5, maxHz: 200 }
- */
-export function listedRange(
-  parts: ReadonlyArray<{ speedHz: number; symmetry: number; tolerance?: number }>,
-  range: Range,
-  sampler: Sampler,
-  budget = MAX_LISTED_SPANS,
-): Range | null {
-  const q = sampler === 'flash' ? defaultLookOptions.maxImages : 1;
-  // Locks per 1/Hz of span, for the fastest pattern rate of every part summed: the count over
-  // [min, max] is this times (1/min − 1/max), which the bottom below solves for the budget.
-  const fastestHz = parts.reduce(
-    (sum, p) => sum + p.symmetry * Math.abs(p.speedHz) * (1 + (p.tolerance ?? 0)),
-    0,
-  );
-  const perInverseHz = lockCountBound(
-    { lowHz: fastestHz, highHz: fastestHz },
-    { minHz: 1, maxHz: Infinity },
-    q,
-  );
-  if (perInverseHz === 0) return range;
-  const lowest = 1 / (budget / perInverseHz + 1 / range.maxHz);
-  const minHz = Math.max(range.minHz, lowest);
-  return minHz < range.maxHz ? { minHz, maxHz: range.maxHz } : null;
-}
-
-/**
- * Freeze bands for parts[target] and the bands where no part looks still, over the top of the
- * range that can be listed quickly (listedRange).
- * Throws the core's InputError for a target that is not a part, or bad parts or range.
- */
-export function machineRatesFor(
-  parts: readonly DerivedPart[],
-  target: number,
-  range: Range,
-  sampler: Sampler,
-): MachineRates {
-  const list = [...parts];
-  const listed = listedRange(list, range, sampler);
-  return {
-    target,
-    range,
-    listed,
-    sampler,
-    freeze: listed ? freezeRates(list, target, listed, { sampler }) : [],
-    noStill: listed ? noStillRates(list, listed, { sampler }) : [],
-  };
-}
-
-/** The rate tables for the current set-up: its chosen part, its sampler and that sampler's range. */
-export const machineRates = keepLastGood(() => {
-  const s = setup.value;
-  const r = check.value;
-  return machineRatesFor(deriveParts(s), activeIndex(s), r.range, r.sampler);
-});

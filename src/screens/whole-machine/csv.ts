@@ -2,23 +2,18 @@
 // of the chosen part, and the bands where no part looks still (RFC 4180 via the core).
 import { csvTable } from '../../core';
 import { rateNumber, rateUnit, type FlashUnit } from '../../words/rates';
-import type { DerivedPart, MachineRates, SpeedSource } from '../../state/chain';
+import type { DerivedPart } from '../../state/driveChain';
+import { SOURCE_WORDS } from '../../words/wholeMachine';
+import type { WholeMachineRates } from '../../state/wholeMachine';
 import type { SamplerKind } from '../../state/model';
-
-const SOURCE_WORDS: Record<SpeedSource, string> = {
-  typed: 'typed',
-  motor: 'motor nameplate',
-  wheel: 'ground speed and tyre',
-  drive: 'drive',
-};
 
 /**
  * Three tables, one after another with a blank line between: parts, freeze bands, no-still bands.
  * Rates are in the sampler's unit (frames/s, flashes/min or Hz), speeds in rpm.
  */
-export function machineCsv(
+export function wholeMachineCsv(
   parts: readonly DerivedPart[],
-  rates: MachineRates | undefined,
+  rates: WholeMachineRates | undefined,
   kind: SamplerKind,
   flashUnit: FlashUnit,
 ): string {
@@ -42,20 +37,20 @@ export function machineCsv(
     [
       {
         label: `freezes ${target}: from (${unit})`,
-        value: (b: MachineRates['freeze'][number]) => r(b.fromHz),
+        value: (b: WholeMachineRates['freeze'][number]) => r(b.fromHz),
       },
-      { label: `to (${unit})`, value: (b: MachineRates['freeze'][number]) => r(b.toHz) },
+      { label: `to (${unit})`, value: (b: WholeMachineRates['freeze'][number]) => r(b.toHz) },
       {
         label: `single image at nominal speed (${unit})`,
-        value: (b: MachineRates['freeze'][number]) => (b.p === 0 ? '' : r(b.lockRateHz)),
+        value: (b: WholeMachineRates['freeze'][number]) => (b.p === 0 ? '' : r(b.lockRateHz)),
       },
       {
         label: 'turns between flashes (pitches)',
-        value: (b: MachineRates['freeze'][number]) => b.p,
+        value: (b: WholeMachineRates['freeze'][number]) => b.p,
       },
       {
         label: 'exact rate depends on actual speed',
-        value: (b: MachineRates['freeze'][number]) => (b.dense ? 'yes' : 'no'),
+        value: (b: WholeMachineRates['freeze'][number]) => (b.dense ? 'yes' : 'no'),
       },
     ],
     rates.freeze,

@@ -19,7 +19,7 @@ import {
   withoutPart,
   withSpeedSource,
   withWheel,
-} from '../../src/state/chain';
+} from '../../src/state/driveChain';
 import { defaultSetup, type Setup } from '../../src/state/model';
 import { replaceSetup, setMotor, setSpeedRpm, setup } from '../../src/state/setup';
 import { DataError, MAX_PARTS, validateSetup } from '../../src/state/validate';
