@@ -32,6 +32,7 @@ import {
 import { finderCsv } from '../../src/screens/speed-finder/csv';
 import { speedChangeWords, stepInstruction } from '../../src/words/speedFinder';
 import { field, type } from '../helpers/screen-queries';
+import { beltDriven, motorPart, setupOf } from '../helpers/setups';
 
 beforeAll(async () => {
   await startSession();
@@ -302,24 +303,7 @@ describe('the speed finder', () => {
 describe('keeping the speed found', () => {
   /** A 4-pole motor on 50 Hz turning a 6-blade fan through a 100 → 250 mm belt (invented). */
   function beltDrive(): Setup {
-    const s = structuredClone(defaultSetup);
-    s.parts = [
-      {
-        name: 'Motor',
-        speedRpm: 1455,
-        features: 1,
-        tolerancePercent: 1,
-        motor: { mainsHz: 50, poles: 4, slipPercent: 3 },
-      },
-      {
-        name: 'Fan',
-        speedRpm: 582,
-        features: 6,
-        tolerancePercent: 1,
-        drive: { from: 0, kind: 'belt', driverMm: 100, drivenMm: 250, slipPercent: 0 },
-      },
-    ];
-    return s;
+    return setupOf([motorPart(), beltDriven('Fan', 582, 6, 0)]);
   }
 
   test('a measured motor speed replaces the nameplate, and the fan it drives follows', () => {

@@ -24,25 +24,14 @@ import { defaultSetup, type Setup } from '../../src/state/model';
 import { replaceSetup, setMotor, setSpeedRpm, setup } from '../../src/state/setup';
 import { DataError, MAX_PARTS, validateSetup } from '../../src/state/validate';
 import { bent } from './fixtures';
+import { beltDriven, motorPart } from '../helpers/setups';
 
 /** Motor (4 poles, 50 Hz, 3 % slip) → belt 100 → 250 mm → gearbox input → gear 20 → 60 teeth → drum. */
 function conveyor(): Setup {
   const s = structuredClone(defaultSetup);
   s.parts = [
-    {
-      name: 'Motor',
-      speedRpm: 1455,
-      features: 1,
-      tolerancePercent: 1,
-      motor: { mainsHz: 50, poles: 4, slipPercent: 3 },
-    },
-    {
-      name: 'Gearbox input',
-      speedRpm: 0,
-      features: 1,
-      tolerancePercent: 0,
-      drive: { from: 0, kind: 'belt', driverMm: 100, drivenMm: 250, slipPercent: 2 },
-    },
+    motorPart(),
+    beltDriven('Gearbox input', 0, 1, 2),
     {
       name: 'Drum',
       speedRpm: 0,

@@ -2,48 +2,28 @@
 // built from the core's guide: the sentences name the speeds, rates and views of the table.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import {
-  motorExpectedRange,
-  plainNumber,
-  speedFinderSteps,
-  type SpeedFinderStep,
-} from '../../src/core';
+import { plainNumber, speedFinderSteps, type SpeedFinderStep } from '../../src/core';
 import { viewWords } from '../../src/words/look';
 import { candidateNote, stepInstruction } from '../../src/words/speedFinder';
 import { replay, sceneOf } from '../core/simulator';
-
-// A strobe covering 30 to 12 000 flashes per minute (common practice for hand-held strobes).
-const strobe = { minHz: 0.5, maxHz: 200 };
-// Engineering ToolBox: 1770 rpm typical full-load speed of a 4-pole motor on 60 Hz (29.5 rev/s).
-const F1 = 29.5;
+import { F1, steps } from '../helpers/speedFinderCases';
 
 describe('the speed finder in words, step by step', () => {
   it('starts at the top of the strobe range, a single image in view', () => {
-    const say = stepInstruction(
-      speedFinderSteps({ readings: [], symmetry: 1, strobeRange: strobe }),
-    );
+    const say = stepInstruction(steps.fromTop());
     expect(say).toMatch(/^Set the strobe to 12000 flashes\/min \(the top of the strobe's range\)/);
     expect(say).toMatch(/single image/);
   });
 
   it('starts just above the expected speed of a 4-pole motor on 60 Hz', () => {
     // IEC 60034-1 / NEMA MG 1: 1800 rpm synchronous; 10 % above is 1980 flashes/min.
-    const step = speedFinderSteps({
-      readings: [],
-      symmetry: 1,
-      strobeRange: strobe,
-      expect: motorExpectedRange(60, 4),
-    });
-    expect(stepInstruction(step)).toMatch(/1980 flashes\/min \(just above the expected speed\)/);
+    expect(stepInstruction(steps.aboveExpected())).toMatch(
+      /1980 flashes\/min \(just above the expected speed\)/,
+    );
   });
 
   it('asks for the double image at twice the first single image, naming what each speed shows', () => {
-    const step = speedFinderSteps({
-      readings: [{ rateHz: F1, images: 1 }],
-      symmetry: 1,
-      strobeRange: strobe,
-      expect: motorExpectedRange(60, 4),
-    });
+    const step = steps.firstSingle();
     expect(stepInstruction(step)).toMatch(
       /^Now set 3540 flashes\/min \(twice the single-image rate 1770 flashes\/min\)\. If the part turns at 1770 rpm, two marks half a turn apart stand still there\./,
     );
@@ -53,26 +33,11 @@ describe('the speed finder in words, step by step', () => {
   });
 
   it('confirms at two thirds of the rate when twice the rate is beyond the strobe', () => {
-    const step = speedFinderSteps({
-      readings: [{ rateHz: F1, images: 1 }],
-      symmetry: 1,
-      strobeRange: { minHz: 1, maxHz: 40 },
-      expect: motorExpectedRange(60, 4),
-    });
-    expect(stepInstruction(step)).toMatch(/two thirds of the single-image rate/);
+    expect(stepInstruction(steps.twoThirds())).toMatch(/two thirds of the single-image rate/);
   });
 
   it('finishes with the speed once the double image is seen', () => {
-    const step = speedFinderSteps({
-      readings: [
-        { rateHz: F1, images: 1 },
-        { rateHz: 2 * F1, images: 2 },
-      ],
-      symmetry: 1,
-      strobeRange: strobe,
-      expect: motorExpectedRange(60, 4),
-    });
-    expect(stepInstruction(step)).toBe(
+    expect(stepInstruction(steps.confirmed())).toBe(
       'The part turns at 1770 rpm (single image at 1770 flashes/min, confirmed by the two images).' +
         ' 4 speeds outside the expected range fit the readings too (see the table).' +
         ' You can save this speed to the machine.',
@@ -80,12 +45,8 @@ describe('the speed finder in words, step by step', () => {
   });
 
   it('says why a faster speed is ruled out: it would have stood still first on the way down', () => {
-    const step = speedFinderSteps({
-      readings: [{ rateHz: F1, images: 1 }],
-      symmetry: 1,
-      strobeRange: strobe,
-    });
-    const faster = step.candidates.find((c) => c.speedHz === 59)!;
+    const step = steps.firstSingleAlone();
+    const faster = step.candidates.find((c) => c.speedHz === 2 * F1)!;
     expect(candidateNote(faster)).toBe(
       'Would have stood still as a single image at 3540 flashes/min on the way down.',
     );
@@ -93,54 +54,23 @@ describe('the speed finder in words, step by step', () => {
   });
 
   it('keeps coming down after a double image', () => {
-    const step = speedFinderSteps({
-      readings: [{ rateHz: 2 * F1, images: 2 }],
-      symmetry: 1,
-      strobeRange: strobe,
-    });
-    expect(stepInstruction(step)).toMatch(/^Keep lowering the rate from 3540 flashes\/min/);
+    expect(stepInstruction(steps.afterDouble())).toMatch(
+      /^Keep lowering the rate from 3540 flashes\/min/,
+    );
   });
 
   it('proposes a rate that tells the speeds apart, with what each shows there', () => {
-    const step = speedFinderSteps(
-      {
-        readings: [
-          { rateHz: 20, images: 1 },
-          { rateHz: 40, images: 2 },
-        ],
-        symmetry: 1,
-        strobeRange: strobe,
-        expect: { minHz: 15, maxHz: 65 },
-      },
-      { sweptFromHz: 25 },
-    );
-    expect(stepInstruction(step)).toMatch(
+    expect(stepInstruction(steps.twoLeft())).toMatch(
       /^Set 1800 flashes\/min and compare what you see with the 2 speeds that still fit \(at 1200 rpm: 3 images stand still; at 3600 rpm: a single image stands still\)/,
     );
   });
 
   it('divides the single-image rate by the number of blades, and says so', () => {
-    const step = speedFinderSteps({
-      readings: [
-        { rateHz: 177, images: 1 },
-        { rateHz: 354, images: 2 },
-      ],
-      symmetry: 6,
-      strobeRange: { minHz: 0.5, maxHz: 400 },
-    });
-    expect(stepInstruction(step)).toMatch(/divided by 6/);
+    expect(stepInstruction(steps.sixBlades())).toMatch(/divided by 6/);
   });
 
   it('says so when the readings fit no single speed', () => {
-    const step = speedFinderSteps({
-      readings: [
-        { rateHz: 30, images: 1 },
-        { rateHz: 30, images: 2 },
-      ],
-      symmetry: 1,
-      strobeRange: strobe,
-    });
-    expect(stepInstruction(step)).toMatch(/fit no single speed/);
+    expect(stepInstruction(steps.conflict())).toMatch(/fit no single speed/);
   });
 });
 

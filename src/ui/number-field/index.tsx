@@ -1,7 +1,6 @@
 import type { ComponentChildren } from 'preact';
-import { readField } from '../fields';
-import { useFollowingText } from '../followingText';
-import { sameNumber, TextField } from './text-field';
+
+import { sameNumber, TextField, useCheckedText } from './text-field';
 
 interface Props {
   /** Unique id: the input's id, and the root of its message's id. */
@@ -45,21 +44,14 @@ export function NumberField({
   disabled,
   name,
 }: Props) {
-  const { text, message, edit } = useFollowingText(
+  const { text, message, onInput } = useCheckedText(
+    value,
     `${value} ${unitKey ?? ''}`,
-    (shown) => {
-      const reading = readField(shown, read);
-      return reading.ok && sameNumber(reading.value, value);
-    },
+    read,
+    sameNumber,
     () => toText(value),
+    onValue,
   );
-
-  const onInput = (event: Event) => {
-    const next = (event.currentTarget as HTMLInputElement).value;
-    const reading = readField(next, read);
-    edit(next, reading.ok ? null : reading.message);
-    if (reading.ok && !sameNumber(reading.value, value)) onValue(reading.value);
-  };
 
   return (
     <TextField

@@ -2,12 +2,46 @@
 // hint) and the test of whether typed text still says the value held.
 import type { ComponentChildren } from 'preact';
 import { useLayoutEffect } from 'preact/hooks';
+import { readField } from '../fields';
+import { useFollowingText } from '../followingText';
 import { reportFieldProblem } from '../../state/fieldProblems';
 import style from './style.module.css';
 
 /** Equal, or equal but for floating-point noise (a value read back from its own text). */
 export function sameNumber(a: number, b: number): boolean {
   return a === b || Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
+}
+
+/**
+ * The text of a field that holds a value read from it (one number, or a list): every keystroke
+ * is read; good text goes to `onGood` (when it says another value than the one held), bad text
+ * keeps its refusal beside the field and the value as it was. Text rewritten from outside
+ * follows the held value unless it already says it (useFollowingText).
+ * `key` names the held value, `same` compares two values, `heldText` writes the held value.
+ */
+export function useCheckedText<T extends number | readonly number[]>(
+  held: T,
+  key: string,
+  read: (text: string) => T,
+  same: (a: T, b: T) => boolean,
+  heldText: () => string,
+  onGood: (value: T) => void,
+): { text: string; message: string | null; onInput: (event: Event) => void } {
+  const { text, message, edit } = useFollowingText(
+    key,
+    (shown) => {
+      const reading = readField(shown, read);
+      return reading.ok && same(reading.value, held);
+    },
+    heldText,
+  );
+  const onInput = (event: Event) => {
+    const next = (event.currentTarget as HTMLInputElement).value;
+    const reading = readField(next, read);
+    edit(next, reading.ok ? null : reading.message);
+    if (reading.ok && !same(reading.value, held)) onGood(reading.value);
+  };
+  return { text, message, onInput };
 }
 
 interface Props {

@@ -1,8 +1,7 @@
 import type { ComponentChildren } from 'preact';
-import { readField } from '../fields';
-import { useFollowingText } from '../followingText';
+
 // The same look as a single number field.
-import { sameNumber, TextField } from '../number-field/text-field';
+import { sameNumber, TextField, useCheckedText } from '../number-field/text-field';
 
 interface Props {
   /** Unique id: the input's id, and the root of its message's id. */
@@ -43,21 +42,14 @@ export function NumberListField({
   name,
 }: Props) {
   // Keyed on the numbers, not the array, which a caller may rebuild at every render.
-  const { text, message, edit } = useFollowingText(
+  const { text, message, onInput } = useCheckedText<readonly number[]>(
+    values,
     values.join(' '),
-    (shown) => {
-      const reading = readField(shown, read);
-      return reading.ok && sameList(reading.value, values);
-    },
+    read,
+    sameList,
     () => values.map(toText).join(' '),
+    (list) => onValues([...list]),
   );
-
-  const onInput = (event: Event) => {
-    const next = (event.currentTarget as HTMLInputElement).value;
-    const reading = readField(next, read);
-    edit(next, reading.ok ? null : reading.message);
-    if (reading.ok && !sameList(reading.value, values)) onValues(reading.value);
-  };
 
   return (
     <TextField

@@ -3,7 +3,7 @@ import { readFlashRateFpm } from '../fields';
 import { numberForField } from '../../words/format';
 import { flashUnit, setStrobeRange, setup } from '../../state/setup';
 import { NumberField } from '../number-field';
-import fieldStyle from '../number-field/style.module.css';
+import style from './style.module.css';
 
 interface Props {
   /** Prefix for the two fields' ids, unique on the page. */
@@ -23,7 +23,7 @@ export function StrobeRangeFields({ idPrefix, minLabel, maxLabel }: Props) {
   const toText = (fpm: number) => numberForField(unit === 'fpm' ? fpm : fpm / 60);
   const unitWord = unit === 'fpm' ? 'fpm' : 'Hz';
   return (
-    <div class={fieldStyle.pair}>
+    <div class={style.pair}>
       <NumberField
         id={`${idPrefix}-min`}
         label={minLabel}

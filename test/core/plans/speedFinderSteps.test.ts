@@ -2,17 +2,11 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { motorExpectedRange, speedFinderSteps } from '../../../src/core/plans/speedFinderSteps';
 import { bad, expectInputError, finiteOrInputError } from '../expectInputError';
-
-// A strobe covering 30 to 12 000 flashes per minute (common practice for hand-held strobes).
-const strobe = { minHz: 0.5, maxHz: 200 };
-// IEC 60034-1 / NEMA MG 1: a 4-pole motor on 60 Hz runs below 1800 rpm synchronous;
-// Engineering ToolBox lists 1770 rpm as its typical full-load speed: 29.5 rev/s, a single
-// mark freezing first at 1770 flashes per minute.
-const F1 = 29.5;
+import { F1, steps, strobe } from '../../helpers/speedFinderCases';
 
 describe('speedFinderSteps: the usual procedure', () => {
   it('starts at the top of the strobe range when no speed is expected', () => {
-    const step = speedFinderSteps({ readings: [], symmetry: 1, strobeRange: strobe });
+    const step = steps.fromTop();
     expect(step.stage).toBe('start');
     expect(step.rateHz).toBe(200);
     expect(step.rateFpm).toBe(12000);
@@ -27,24 +21,14 @@ describe('speedFinderSteps: the usual procedure', () => {
 
   it('starts just above the expected speed of a 4-pole motor on 60 Hz', () => {
     // IEC 60034-1 / NEMA MG 1: 1800 rpm synchronous = 30 rev/s; 10 % above is 33 Hz (1980 flashes/min).
-    const step = speedFinderSteps({
-      readings: [],
-      symmetry: 1,
-      strobeRange: strobe,
-      expect: motorExpectedRange(60, 4),
-    });
+    const step = steps.aboveExpected();
     expect(step.rateHz).toBeCloseTo(33, 12);
     expect(step.guide).toMatchObject({ stage: 'start', from: 'above-expected' });
     expect(step.sweptFromHz).toBeCloseTo(33, 12);
   });
 
   it('asks to confirm the first single image at twice the rate, where two images must stand still', () => {
-    const step = speedFinderSteps({
-      readings: [{ rateHz: F1, images: 1 }],
-      symmetry: 1,
-      strobeRange: strobe,
-      expect: motorExpectedRange(60, 4),
-    });
+    const step = steps.firstSingle();
     expect(step.stage).toBe('confirm');
     expect(step.rateHz).toBe(59); // docs/physics.md §7: twice the single-image rate shows a double image
     expect(step.rateFpm).toBe(3540);
@@ -70,15 +54,7 @@ describe('speedFinderSteps: the usual procedure', () => {
   });
 
   it('finishes with the speed once the double image is seen', () => {
-    const step = speedFinderSteps({
-      readings: [
-        { rateHz: F1, images: 1 },
-        { rateHz: 2 * F1, images: 2 },
-      ],
-      symmetry: 1,
-      strobeRange: strobe,
-      expect: motorExpectedRange(60, 4),
-    });
+    const step = steps.confirmed();
     expect(step.stage).toBe('done');
     expect(step.speedHz).toBe(F1);
     expect(step.rateHz).toBeUndefined();
@@ -98,11 +74,7 @@ describe('speedFinderSteps: the usual procedure', () => {
 
   it('rules out faster speeds whose single image would have stood still first on the way down', () => {
     // From 12 000 flashes/min down, 3540 rpm freezes as a single image at 3540 before 1770.
-    const step = speedFinderSteps({
-      readings: [{ rateHz: F1, images: 1 }],
-      symmetry: 1,
-      strobeRange: strobe,
-    });
+    const step = steps.firstSingleAlone();
     const faster = step.candidates.find((c) => c.speedHz === 59);
     expect(faster).toMatchObject({ ruledOut: true, likeliest: false });
     expect(faster?.firstSingleHz).toBe(59); // 3540 flashes/min, passed on the way down
@@ -138,12 +110,7 @@ describe('speedFinderSteps: the usual procedure', () => {
   it('confirms at two thirds of the rate when twice the rate is beyond the strobe', () => {
     // r = n·f/s = 3/2 is the lock p/q = 3/2: two images stand still (docs/physics.md §3). The motor's
     // expected range (4 poles, 60 Hz) leaves 1770 rpm alone to check.
-    const step = speedFinderSteps({
-      readings: [{ rateHz: F1, images: 1 }],
-      symmetry: 1,
-      strobeRange: { minHz: 1, maxHz: 40 },
-      expect: motorExpectedRange(60, 4),
-    });
+    const step = steps.twoThirds();
     expect(step.stage).toBe('confirm');
     expect(step.rateHz).toBeCloseTo((2 / 3) * F1, 12);
     expect(step.guide).toMatchObject({ stage: 'confirm', basis: 'two-thirds-reading' });
@@ -171,11 +138,7 @@ describe('speedFinderSteps: the usual procedure', () => {
   });
 
   it('keeps coming down after a double image and points at half its rate for the single image', () => {
-    const step = speedFinderSteps({
-      readings: [{ rateHz: 2 * F1, images: 2 }],
-      symmetry: 1,
-      strobeRange: strobe,
-    });
+    const step = steps.afterDouble();
     expect(step.stage).toBe('come-down');
     expect(step.rateHz).toBe(F1);
     expect(step.guide).toEqual({
@@ -192,18 +155,7 @@ describe('speedFinderSteps: the usual procedure', () => {
     // Came down from 25 Hz only: 1200 and 3600 rpm both fit a single image at 20 Hz and two at 40 Hz.
     // At 30 Hz (3/2 of 20 Hz, the first simple multiple not yet tried that tells them apart),
     // 1200 rpm shows three images (r = 2/3) and 3600 rpm a single one (r = 2), docs/physics.md §3.
-    const step = speedFinderSteps(
-      {
-        readings: [
-          { rateHz: 20, images: 1 },
-          { rateHz: 40, images: 2 },
-        ],
-        symmetry: 1,
-        strobeRange: strobe,
-        expect: { minHz: 15, maxHz: 65 },
-      },
-      { sweptFromHz: 25 },
-    );
+    const step = steps.twoLeft();
     expect(step.stage).toBe('separate');
     expect(step.rateHz).toBe(30);
     const views = Object.fromEntries(step.candidates.slice(0, 2).map((c) => [c.rpm, c.atNextRate]));
@@ -216,28 +168,14 @@ describe('speedFinderSteps: the usual procedure', () => {
 
   it('divides the single-image rate by the number of blades', () => {
     // A 6-blade fan at 1770 rpm: the pattern repeats 6·29.5 = 177 times a second.
-    const step = speedFinderSteps({
-      readings: [
-        { rateHz: 177, images: 1 },
-        { rateHz: 354, images: 2 },
-      ],
-      symmetry: 6,
-      strobeRange: { minHz: 0.5, maxHz: 400 },
-    });
+    const step = steps.sixBlades();
     expect(step.stage).toBe('done');
     expect(step.speedHz).toBeCloseTo(F1, 12);
     expect(step.guide).toMatchObject({ stage: 'done', symmetry: 6 });
   });
 
   it('says so when the readings fit no single speed', () => {
-    const step = speedFinderSteps({
-      readings: [
-        { rateHz: 30, images: 1 },
-        { rateHz: 30, images: 2 },
-      ],
-      symmetry: 1,
-      strobeRange: strobe,
-    });
+    const step = steps.conflict();
     expect(step.stage).toBe('conflict');
     expect(step.candidates).toEqual([]);
     expect(step.rateHz).toBeUndefined();
@@ -246,7 +184,7 @@ describe('speedFinderSteps: the usual procedure', () => {
 
   it('always carries the lockout caution, and the seizure caution when the sweep passes 3–60 flashes a second', () => {
     // docs/physics.md §10; WCAG 2.x success criterion 2.3.1.
-    const low = speedFinderSteps({ readings: [], symmetry: 1, strobeRange: strobe });
+    const low = steps.fromTop();
     expect(low.cautions).toEqual(['stillness', 'flashing', 'planning-aid']);
     const high = speedFinderSteps({
       readings: [
