@@ -2,7 +2,7 @@
 // each setting looks like, which condition of the goal it fails, and what would lift it.
 import type { CameraCondition, CameraPlan, CameraSetting } from '../core';
 import { formatExposure, formatNumber, formatPrecise } from './format';
-import { lookWords } from './look';
+import { lookPhrase, lookWords } from './look';
 
 export type GoalKind = CameraPlan['goal'];
 
@@ -80,11 +80,9 @@ export function settingWords(s: CameraSetting, plan: CameraPlan): string {
 }
 
 function faintLook(s: CameraSetting): string {
-  return s.look === 'backward'
-    ? 'turns backward'
-    : s.look === 'still'
-      ? 'stands still'
-      : 'can look still or backward within the tolerance';
+  return s.look === 'backward' || s.look === 'still'
+    ? lookPhrase(s.look, 1)
+    : 'can look still or backward within the tolerance';
 }
 
 /** Why one setting fails one condition, in a short phrase with its numbers. */

@@ -6,9 +6,9 @@ import {
   type FlickerRisk,
   type LightingCheck,
   type LightingRemedy,
-  type Look,
   type PartUnderLight,
 } from '../core';
+import { canLookWords } from './look';
 
 /** The answer at the top of the lighting screen, per verdict. */
 export const LIGHTING_HEADLINES: Record<LightingCheck['verdict'], string> = {
@@ -46,15 +46,6 @@ export const RISK_LINE_WORDS: Record<FlickerRisk, string> = {
 
 const rpm = (speedHz: number) => `${plainNumber(Math.abs(hzToRpm(speedHz)))} rpm`;
 
-/** "can look still", "can show 2 images standing still": the worst look, after "can". */
-function worstWords(worst: Look, images: number): string {
-  if (worst === 'still')
-    return images === 1 ? 'look still' : `show ${images} images standing still`;
-  return worst === 'backward'
-    ? 'look as if it turns backward'
-    : 'look as if it turns with no clear direction';
-}
-
 /**
  * One part under the light, in a sentence or two.
  * @example partWords(check.parts[0], check) // "chuck can look still under this light although it turns at 3000 rpm. Hazard: …"
@@ -66,7 +57,7 @@ export function partWords(part: PartUnderLight, check: LightingCheck): string {
     return `${name}: the light does not flicker, so it looks as it is (${trueSpeed}).`;
   }
   const svm = plainNumber(check.svm);
-  const how = worstWords(part.worstLook, part.images);
+  const how = canLookWords(part.worstLook, part.images);
   if (part.verdict === 'hazard') {
     return `${name} can ${how} under this light although it turns at ${trueSpeed}. Hazard: the flicker is visible (SVM ${svm}).`;
   }

@@ -55,3 +55,14 @@ export function viewWords(view: StepPrediction): string {
   if (view.look === 'unclear') return 'flickers with no clear direction';
   return `creeps ${view.look} at ${speed}`;
 }
+
+/**
+ * A misleading look after "can": how a part may look under a light although it turns.
+ * @example canLookWords('still', 2) // "show 2 images standing still"
+ */
+export function canLookWords(look: Look, images: number): string {
+  if (look === 'still') return images === 1 ? 'look still' : `show ${images} images standing still`;
+  return look === 'backward'
+    ? 'look as if it turns backward'
+    : 'look as if it turns with no clear direction';
+}

@@ -2,16 +2,18 @@ import { apparentMotion, lockRates, rateBands, findSpeed, type Part } from '../.
 import { medianMs, type BenchResult } from './measure';
 
 // Budgets for this 2-core machine, from the foundation issue.
+/** An invented workshop set: a 4-pole motor, its belt-driven fan, a rotor, a gear, a pulley, a screen. */
+export const workshopParts: readonly Part[] = [
+  { speedHz: 1470 / 60, symmetry: 1, tolerance: 0.01 },
+  { speedHz: 980 / 60, symmetry: 6, tolerance: 0.02 },
+  { speedHz: 1780 / 60, symmetry: 6, tolerance: 0.01 },
+  { speedHz: 590 / 60, symmetry: 8, tolerance: 0.03 },
+  { speedHz: 2950 / 60, symmetry: 3, tolerance: 0.01 },
+  { speedHz: 245 / 60, symmetry: 24, tolerance: 0.02 },
+];
+
 export function runCoreBench(): BenchResult[] {
-  // An invented workshop fan set: a 4-pole motor, its belt-driven fan, a 6-blade rotor, a gear.
-  const parts: Part[] = [
-    { speedHz: 1470 / 60, symmetry: 1, tolerance: 0.01 },
-    { speedHz: 980 / 60, symmetry: 6, tolerance: 0.02 },
-    { speedHz: 1780 / 60, symmetry: 6, tolerance: 0.01 },
-    { speedHz: 590 / 60, symmetry: 8, tolerance: 0.03 },
-    { speedHz: 2950 / 60, symmetry: 3, tolerance: 0.01 },
-    { speedHz: 245 / 60, symmetry: 24, tolerance: 0.02 },
-  ];
+  const parts = [...workshopParts];
   let rate = 10;
   const results: BenchResult[] = [
     {

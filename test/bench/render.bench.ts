@@ -1,18 +1,9 @@
 // Budgets for the preview renderer and the rate map's data, run by `npm run bench`.
-import { rateMapSeries, type Part } from '../../src/core';
+import { rateMapSeries } from '../../src/core';
 import { PreviewRenderer } from '../../src/render/preview';
 import type { PreviewScene } from '../../src/render/scene';
+import { workshopParts } from './core.bench';
 import { medianMs, type BenchResult } from './measure';
-
-// The same invented workshop set as the core bench: motor, belt-driven fan, rotor, gear, pulley, screen.
-const workshopParts: Part[] = [
-  { speedHz: 1470 / 60, symmetry: 1, tolerance: 0.01 },
-  { speedHz: 980 / 60, symmetry: 6, tolerance: 0.02 },
-  { speedHz: 1780 / 60, symmetry: 6, tolerance: 0.01 },
-  { speedHz: 590 / 60, symmetry: 8, tolerance: 0.03 },
-  { speedHz: 2950 / 60, symmetry: 3, tolerance: 0.01 },
-  { speedHz: 245 / 60, symmetry: 24, tolerance: 0.02 },
-];
 
 const SIZE = 360;
 
@@ -59,7 +50,7 @@ export function runRenderBench(): BenchResult[] {
       medianMs: medianMs(
         () =>
           rateMapSeries(
-            workshopParts,
+            [...workshopParts],
             { minHz: 1, maxHz: 1000 },
             { points: 2000, sampler: 'flash' },
           ).rates.length,
@@ -71,7 +62,7 @@ export function runRenderBench(): BenchResult[] {
       medianMs: medianMs(
         () =>
           rateMapSeries(
-            workshopParts,
+            [...workshopParts],
             { minHz: 1, maxHz: 1000 },
             { points: 2000, log: true, sampler: 'flash' },
           ).rates.length,

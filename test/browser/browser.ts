@@ -7,6 +7,42 @@ import { join } from 'node:path';
 
 export const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
+/** Chromium's flags for a quiet, reproducible headless run: nothing fetched or synced behind the test. */
+export const CHROMIUM_ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+/** The two sizes every screen is looked at: a phone and a desktop. */
+export const SIZES = [
+  { name: 'phone', width: 390, height: 844 },
+  { name: 'desktop', width: 1280, height: 800 },
+] as const;
+
+/** Text that is no number, which every number field must refuse beside itself. */
+export const GARBAGE = [
+  'abc',
+  'NaN',
+  '-Infinity',
+  '1e999',
+  '<script>alert(1)</script>',
+  '1/0',
+  '0x10',
+  '12abc',
+  '--5',
+  '1..2',
+];
+
+/** The visible text of the page without what the user typed back in quotes. */
+export async function shownText(page: Page): Promise<string> {
+  return (await page.locator('body').innerText()).replace(/"[^"]*"/g, '');
+}
+
 export interface Session {
   context: BrowserContext;
   page: Page;
@@ -23,15 +59,7 @@ export async function openBrowser(
     viewport: { width: options.width ?? 390, height: options.height ?? 844 },
     colorScheme: options.colorScheme ?? 'light',
     acceptDownloads: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
+    args: CHROMIUM_ARGS,
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {

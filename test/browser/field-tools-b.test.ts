@@ -16,7 +16,7 @@ import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';
 import { lampOf, lightingCautions, litPartsOf } from '../../src/state/lighting';
 import { type Setup, activeCorePart } from '../../src/state/model';
 import { defaultLoggerEntries, tonesOf } from '../../src/state/loggerPlanning';
-import { openApp, openBrowser, typeInto, type Session } from './browser';
+import { GARBAGE, openApp, openBrowser, shownText, typeInto, type Session } from './browser';
 
 let session: Session | undefined;
 
@@ -26,23 +26,6 @@ afterEach(async () => {
 });
 
 const shots = 'test-output/screenshots';
-const GARBAGE = [
-  'abc',
-  'NaN',
-  '-Infinity',
-  '1e999',
-  '<script>alert(1)</script>',
-  '1/0',
-  '0x10',
-  '12abc',
-  '--5',
-  '1..2',
-];
-
-/** The visible text of the page without what the user typed back in quotes. */
-async function shownText(page: Page): Promise<string> {
-  return (await page.locator('body').innerText()).replace(/"[^"]*"/g, '');
-}
 
 /** Opens the first-run example machine (a fictional plant) and then the tab `tab`. */
 async function openExampleOn(page: Page, tab: string): Promise<void> {

@@ -3,7 +3,7 @@
 // text is good again, and nothing on screen ever reads NaN or Infinity.
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openApp, openBrowser, type Session } from './browser';
+import { GARBAGE, openApp, openBrowser, shownText, type Session } from './browser';
 
 let session: Session | undefined;
 
@@ -12,27 +12,8 @@ afterEach(async () => {
   session = undefined;
 });
 
-const GARBAGE = [
-  'abc',
-  '',
-  '   ',
-  'NaN',
-  '-Infinity',
-  '1e999',
-  '<script>alert(1)</script>',
-  '١٢٣',
-  '1/0',
-  '0x10',
-  '12abc',
-  '--5',
-  '1..2',
-];
-
-/** The visible text of the page without what the user typed back in quotes. */
-async function shownText(page: Page): Promise<string> {
-  const text = await page.locator('body').innerText();
-  return text.replace(/"[^"]*"/g, '');
-}
+/** Besides the shared garbage: nothing, blanks, and digits of another script. */
+const TYPED = [...GARBAGE, '', '   ', '١٢٣'];
 
 /** Fields the verdict reads: garbage in one withdraws the verdict (docs/physics.md §10); the others leave it. */
 const VERDICT_LABELS = new Set([
@@ -54,7 +35,7 @@ async function checkFields(page: Page, labels: string[]) {
     const good = await field.inputValue();
     const verdict = await page.getByTestId('verdict').innerText();
     const seen = await page.getByTestId('apparent-speed').innerText();
-    for (const text of GARBAGE) {
+    for (const text of TYPED) {
       await field.fill(text);
       expect(await field.getAttribute('aria-invalid'), `${label}: "${text}"`).toBe('true');
       const messageId = (await field.getAttribute('aria-describedby'))!.split(' ')[0];

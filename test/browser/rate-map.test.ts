@@ -6,7 +6,7 @@ import { mkdirSync } from 'node:fs';
 import type { Locator, Page } from 'playwright-core';
 import { apparentMotion, lockRates, type Part, type Range } from '../../src/core';
 import { formatRpmWithDirection } from '../../src/words/format';
-import { openApp, openBrowser, typeInto, type Session } from './browser';
+import { openApp, openBrowser, typeInto, type Session, SIZES } from './browser';
 
 let session: Session | undefined;
 
@@ -279,13 +279,8 @@ describe('the preview on the check screen', () => {
   });
 });
 
-const sizes = [
-  { name: 'phone', width: 390, height: 844 },
-  { name: 'desktop', width: 1280, height: 800 },
-] as const;
-
 describe('screenshots of the check screen with the preview and the rate map', () => {
-  for (const size of sizes) {
+  for (const size of SIZES) {
     for (const scheme of ['light', 'dark'] as const) {
       test(`the ${size.name} layout in ${scheme} fits the width; written to ${shots}/check-with-views-${size.name}-${scheme}*.png`, async () => {
         mkdirSync(shots, { recursive: true });

@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import { mkdirSync, statSync } from 'node:fs';
-import { openApp, openBrowser, type Session } from './browser';
+import { openApp, openBrowser, type Session, SIZES } from './browser';
 
 const dir = 'test-output/screenshots';
 let session: Session | undefined;
@@ -10,13 +10,8 @@ afterEach(async () => {
   session = undefined;
 });
 
-const sizes = [
-  { name: 'phone', width: 390, height: 844 },
-  { name: 'desktop', width: 1280, height: 800 },
-] as const;
-
 describe('screenshots of the check and machines screens', () => {
-  for (const size of sizes) {
+  for (const size of SIZES) {
     for (const scheme of ['light', 'dark'] as const) {
       test(`the ${size.name} layout in ${scheme} fits the width and is written to ${dir}`, async () => {
         mkdirSync(dir, { recursive: true });

@@ -10,7 +10,7 @@ import { join, resolve } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { build, preview, type PreviewServer } from 'vite';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CHROMIUM } from './browser';
+import { CHROMIUM, CHROMIUM_ARGS } from './browser';
 import { freePort } from './server';
 import { fanAt1750Rpm } from '../helpers/sound/machineSound';
 import { writeWav } from '../helpers/sound/wav';
@@ -72,16 +72,7 @@ window.smoke = {
 document.body.dataset.ready = 'yes';
 `;
 
-const BASE_ARGS = [
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--autoplay-policy=no-user-gesture-required',
-];
+const BASE_ARGS = [...CHROMIUM_ARGS, '--autoplay-policy=no-user-gesture-required'];
 
 let server: PreviewServer;
 let url: string;

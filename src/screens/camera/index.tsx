@@ -38,6 +38,9 @@ import { columnsFor } from './columns';
 import { cameraCsv } from './csv';
 import style from './style.module.css';
 
+/** The screen takes no props: it reads what it shows from the state's signals. */
+interface Props {}
+
 const GOALS: ReadonlyArray<{ value: GoalKind; label: string }> = [
   { value: 'freeze', label: 'Freeze it' },
   { value: 'creep', label: 'Slow forward turn' },
@@ -62,7 +65,7 @@ const speedText = (s: number) => (s < 1 ? numberForField(1 / s) : numberForField
  * chosen part; a ranked table of settings that reach the goal, each with what it looks like and
  * an action that opens it on the check screen. With none, why not, and the near misses.
  */
-export function CameraScreen() {
+export function CameraScreen(_props: Props) {
   const plan = cameraPlanning.result.value;
   const problem = cameraPlanning.problem.value;
   const kind = goalKind.value;

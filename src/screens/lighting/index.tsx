@@ -30,6 +30,9 @@ import {
 import style from './style.module.css';
 import { type Setup } from '../../state/model';
 
+/** The screen takes no props: it reads what it shows from the state's signals. */
+interface Props {}
+
 interface PartRow {
   part: PartUnderLight;
   /** The part under the light, in a sentence or two. */
@@ -46,7 +49,7 @@ interface PartRow {
  * loudly. The flicker's IEEE Std 1789-2015 class and CIE SVM, the remedies and the deferral to
  * local rules follow.
  */
-export function LightingScreen() {
+export function LightingScreen(_props: Props) {
   const result = lighting.result.value;
   const problem = lighting.problem.value;
   const s = setup.value;

@@ -44,6 +44,9 @@ import { loggerCsv } from './csv';
 import { RcFields } from './rc-fields';
 import style from './style.module.css';
 
+/** The screen takes no props: it reads what it shows from the state's signals. */
+interface Props {}
+
 const FILTERS: ReadonlyArray<{ value: FilterKind; label: string }> = [
   { value: 'none', label: 'None' },
   { value: 'rc', label: 'RC' },
@@ -62,7 +65,7 @@ const readTones = (text: string) => readList(text, readToneHz, 'added tones', 0,
  * statement that filtering after the converter cannot remove an alias; and a sample rate and
  * filter that would work, with a button to take them.
  */
-export function LoggerScreen() {
+export function LoggerScreen(_props: Props) {
   const plan = loggerPlanning.result.value;
   const problem = loggerPlanning.problem.value;
   const part = activePart.value;
