@@ -141,15 +141,20 @@ export function readCapacitanceF(text: string): number {
 /**
  * Splits a typed list into its items: spaces or semicolons separate them, and so does a comma
  * followed by a space ("48, 100"); a comma inside a number stays part of it ("29,97"). A word
- * after a number is its unit and stays with it ("50 Hz 2 kHz" is two items).
+ * after a number is its unit and stays with it ("50 Hz 2 kHz" is two items). Past `most` items
+ * it stops, keeping one more item to tell a list that is too long.
  * @example splitList('24; 29,97  60, 120') // ['24', '29,97', '60', '120']
  * @example splitList('50 Hz 2 kHz') // ['50 Hz', '2 kHz']
  */
-export function splitList(text: string): string[] {
+export function splitList(text: string, most = Infinity): string[] {
   if (typeof text !== 'string') return [];
   const out: string[] = [];
-  for (const token of text.trim().split(/\s*;\s*|,\s+|\s+/)) {
-    if (token === '') continue;
+  // An item runs until a space or semicolon, or a comma with a space after it; each character
+  // is looked at once. Stops once past `most` items, so a pasted page is not cut up whole.
+  const item = /(?:[^\s;,]|,(?!\s))+/g;
+  const trimmed = text.trim();
+  for (let m = item.exec(trimmed); m !== null && out.length <= most; m = item.exec(trimmed)) {
+    const token = m[0];
     const isUnit = /^[^\d+\-−.,]/u.test(token);
     if (isUnit && out.length > 0) out[out.length - 1] += ` ${token}`;
     else out.push(token);
@@ -169,7 +174,7 @@ export function readList(
   min: number,
   max: number,
 ): number[] {
-  const items = splitList(text);
+  const items = splitList(text, max);
   if (items.length < min) {
     throw new InputError(
       what,

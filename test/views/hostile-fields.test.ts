@@ -2,6 +2,7 @@
 // short message (or reads a number it really holds), and readField refuses over-long text before
 // any reader sees it. No timing here (speed is measured in `npm run bench`); a reader that
 // backtracked would not finish these cases at all.
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core';
 import {
@@ -184,5 +185,34 @@ describe('the length limit of a field', () => {
     expect(readField('2.2 kΩ', readResistanceOhm)).toEqual({ ok: true, value: 2200 });
     expect(readField('  1 / 500 s ', readExposureSeconds)).toEqual({ ok: true, value: 0.002 });
     expect(readField('500', readExposureSeconds)).toEqual({ ok: true, value: 0.002 });
+  });
+});
+
+describe('splitList', () => {
+  it('cuts short text exactly as the former split on /\\s*;\\s*|,\\s+|\\s+/ did', () => {
+    const former = (text: string): string[] => {
+      const out: string[] = [];
+      for (const token of text.trim().split(/\s*;\s*|,\s+|\s+/)) {
+        if (token === '') continue;
+        if (/^[^\d+\-−.,]/u.test(token) && out.length > 0) out[out.length - 1] += ` ${token}`;
+        else out.push(token);
+      }
+      return out;
+    };
+    const text = fc.string({
+      unit: fc.constantFrom(...'12 ;,\t\u00a0.-Hzk'.split('')),
+      maxLength: 16,
+    });
+    fc.assert(
+      fc.property(text, (t) => {
+        expect(splitList(t)).toEqual(former(t));
+      }),
+      { seed: 1101, numRuns: 4000 },
+    );
+  });
+
+  it('stops one item past the most a list may hold', () => {
+    expect(splitList('1 2 3 4 5 6', 3)).toEqual(['1', '2', '3', '4']);
+    expect(splitList('1 Hz 2 Hz', 3)).toEqual(['1 Hz', '2 Hz']);
   });
 });

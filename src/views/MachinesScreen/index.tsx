@@ -12,6 +12,7 @@ import {
   renameMachine,
   undoDelete,
 } from '../../state/machines';
+import { readImportFile } from '../../state/importFile';
 import { openMachineId, replaceSetup } from '../../state/setup';
 import { Panel } from '../Panel';
 import { setupSummary } from './summary';
@@ -61,14 +62,13 @@ export function MachinesScreen(_props: Props) {
     const file = input.files?.[0];
     input.value = '';
     if (!file) return;
-    let text: string;
-    try {
-      text = await file.text();
-    } catch {
-      setOutcome({ kind: 'problem', text: 'This file could not be read.' });
+    // The size is checked before the file is read (src/state/importFile.ts).
+    const read = await readImportFile(file);
+    if (!read.ok) {
+      setOutcome({ kind: 'problem', text: `Nothing was imported. ${read.error}` });
       return;
     }
-    const result = await importMachines(text);
+    const result = await importMachines(read.text);
     if (!result.ok) {
       setOutcome({ kind: 'problem', text: `Nothing was imported. ${result.error}` });
       return;
