@@ -15,6 +15,7 @@ import {
 import { readImportFile } from '../../state/importFile';
 import { openMachineId, replaceSetup } from '../../state/setup';
 import { Panel } from '../Panel';
+import { NameLengthNote, nameIsFull, nameNoteId } from '../NameLengthNote';
 import { setupSummary } from './summary';
 import style from './style.module.css';
 
@@ -209,7 +210,11 @@ function MachineRow({ machine, onOutcome }: RowProps) {
               maxLength={80}
               value={name}
               aria-invalid={problem ? 'true' : undefined}
-              aria-describedby={problem ? `${inputId}-problem` : undefined}
+              aria-describedby={
+                [problem ? `${inputId}-problem` : '', nameIsFull(name) ? nameNoteId(inputId) : '']
+                  .filter(Boolean)
+                  .join(' ') || undefined
+              }
               onInput={(e) => setName((e.currentTarget as HTMLInputElement).value)}
             />
             <button type="submit" class={style.primary}>
@@ -232,6 +237,7 @@ function MachineRow({ machine, onOutcome }: RowProps) {
               {problem}
             </p>
           )}
+          <NameLengthNote id={nameNoteId(inputId)} name={name} />
         </form>
       ) : (
         <div class={style.actions}>
