@@ -148,18 +148,24 @@ export function readCapacitanceF(text: string): number {
  */
 export function splitList(text: string, most = Infinity): string[] {
   if (typeof text !== 'string') return [];
-  const out: string[] = [];
-  // An item runs until a space or semicolon, or a comma with a space after it; each character
+  // The words of each item, joined once at the end (a long run of words stays cheap).
+  const items: string[][] = [];
+  // A word runs until a space or semicolon, or a comma with a space after it; each character
   // is looked at once. Stops once past `most` items, so a pasted page is not cut up whole.
-  const item = /(?:[^\s;,]|,(?!\s))+/g;
+  const word = /(?:[^\s;,]|,(?!\s))+/g;
   const trimmed = text.trim();
-  for (let m = item.exec(trimmed); m !== null && out.length <= most; m = item.exec(trimmed)) {
+  for (let m = word.exec(trimmed); m !== null && items.length <= most; m = word.exec(trimmed)) {
     const token = m[0];
-    const isUnit = /^[^\d+\-−.,]/u.test(token);
-    if (isUnit && out.length > 0) out[out.length - 1] += ` ${token}`;
-    else out.push(token);
+    if (startsAsUnit(token) && items.length > 0) items[items.length - 1].push(token);
+    else items.push([token]);
   }
-  return out;
+  return items.map((words) => words.join(' '));
+}
+
+/** True unless the token starts like a number: a digit, a sign, a point or a comma. */
+function startsAsUnit(token: string): boolean {
+  const c = token[0];
+  return !((c >= '0' && c <= '9') || c === '+' || c === '-' || c === '−' || c === '.' || c === ',');
 }
 
 /**
