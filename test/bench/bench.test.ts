@@ -1,6 +1,7 @@
 // `npm run bench`: medians against budgets. Run by test/bench/vitest.config.ts only, never by `npm test`.
 import { expect, test } from 'vitest';
 import { runCoreBench } from './core.bench';
+import { runParseBench } from './parse.bench';
 import { runSoundBench } from './sound.bench';
 import type { BenchResult } from './measure';
 
@@ -17,6 +18,7 @@ test('every measured median stays within its budget', async () => {
   const results = [
     ...runCoreBench(),
     ...runSoundBench(),
+    ...runParseBench(),
     ...(await optionalBench('./render.bench.ts', 'runRenderBench')),
   ];
   const rows = results.map((r) => {

@@ -3,6 +3,7 @@ import { machines, saveMachine, updateMachine } from '../../state/machines';
 import { encodeShareFragment } from '../../state/shareLink';
 import { openMachineId, setup } from '../../state/setup';
 import { Panel } from '../Panel';
+import { NameLengthNote, nameIsFull, nameNoteId } from '../NameLengthNote';
 import style from './style.module.css';
 
 interface Props {
@@ -93,12 +94,14 @@ export function KeepShare({ class: extra }: Props) {
             autoComplete="off"
             placeholder="e.g. Line 2 cooler fan"
             value={name}
+            aria-describedby={nameIsFull(name) ? nameNoteId('machine-name') : undefined}
             onInput={(e) => setName((e.currentTarget as HTMLInputElement).value)}
           />
           <button type="submit" class={style.button}>
             Save as new machine
           </button>
         </div>
+        <NameLengthNote id={nameNoteId('machine-name')} name={name} />
       </form>
       <div class={style.share}>
         <button type="button" class={style.button} onClick={makeLink}>

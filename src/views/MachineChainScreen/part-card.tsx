@@ -3,6 +3,7 @@ import { readFeatures, readField, readSpeedRpm, readTolerancePercent } from '../
 import { useFollowingText } from '../../lib/followingText';
 import { formatNumber, numberForField } from '../../lib/format';
 import { readTeeth } from '../../lib/toolFields';
+import { NameLengthNote, nameIsFull, nameNoteId } from '../NameLengthNote';
 import {
   editChain,
   speedSourceOf,
@@ -205,8 +206,10 @@ function NameField({
         type="text"
         maxLength={80}
         value={name}
+        aria-describedby={nameIsFull(name) ? nameNoteId(id) : undefined}
         onInput={(e) => onName((e.currentTarget as HTMLInputElement).value)}
       />
+      <NameLengthNote id={nameNoteId(id)} name={name} />
     </div>
   );
 }

@@ -12,8 +12,10 @@ import {
   renameMachine,
   undoDelete,
 } from '../../state/machines';
+import { readImportFile } from '../../state/importFile';
 import { openMachineId, replaceSetup } from '../../state/setup';
 import { Panel } from '../Panel';
+import { NameLengthNote, nameIsFull, nameNoteId } from '../NameLengthNote';
 import { setupSummary } from './summary';
 import style from './style.module.css';
 
@@ -61,14 +63,13 @@ export function MachinesScreen(_props: Props) {
     const file = input.files?.[0];
     input.value = '';
     if (!file) return;
-    let text: string;
-    try {
-      text = await file.text();
-    } catch {
-      setOutcome({ kind: 'problem', text: 'This file could not be read.' });
+    // The size is checked before the file is read (src/state/importFile.ts).
+    const read = await readImportFile(file);
+    if (!read.ok) {
+      setOutcome({ kind: 'problem', text: `Nothing was imported. ${read.error}` });
       return;
     }
-    const result = await importMachines(text);
+    const result = await importMachines(read.text);
     if (!result.ok) {
       setOutcome({ kind: 'problem', text: `Nothing was imported. ${result.error}` });
       return;
@@ -209,7 +210,11 @@ function MachineRow({ machine, onOutcome }: RowProps) {
               maxLength={80}
               value={name}
               aria-invalid={problem ? 'true' : undefined}
-              aria-describedby={problem ? `${inputId}-problem` : undefined}
+              aria-describedby={
+                [problem ? `${inputId}-problem` : '', nameIsFull(name) ? nameNoteId(inputId) : '']
+                  .filter(Boolean)
+                  .join(' ') || undefined
+              }
               onInput={(e) => setName((e.currentTarget as HTMLInputElement).value)}
             />
             <button type="submit" class={style.primary}>
@@ -232,6 +237,7 @@ function MachineRow({ machine, onOutcome }: RowProps) {
               {problem}
             </p>
           )}
+          <NameLengthNote id={nameNoteId(inputId)} name={name} />
         </form>
       ) : (
         <div class={style.actions}>

@@ -1,5 +1,5 @@
 import type { ComponentChildren } from 'preact';
-import { readField } from '../../lib/fields';
+import { MAX_LIST_CHARS, readField } from '../../lib/fields';
 import { useFollowingText } from '../../lib/followingText';
 // The same look as a single number field.
 import { sameNumber, TextField } from '../NumberField/text-field';
@@ -46,7 +46,7 @@ export function NumberListField({
   const { text, message, edit } = useFollowingText(
     values.join(' '),
     (shown) => {
-      const reading = readField(shown, read);
+      const reading = readField(shown, read, MAX_LIST_CHARS);
       return reading.ok && sameList(reading.value, values);
     },
     () => values.map(toText).join(' '),
@@ -54,7 +54,7 @@ export function NumberListField({
 
   const onInput = (event: Event) => {
     const next = (event.currentTarget as HTMLInputElement).value;
-    const reading = readField(next, read);
+    const reading = readField(next, read, MAX_LIST_CHARS);
     edit(next, reading.ok ? null : reading.message);
     if (reading.ok && !sameList(reading.value, values)) onValues(reading.value);
   };

@@ -5,6 +5,7 @@ import { partLabel } from '../../state/model';
 import { setup } from '../../state/setup';
 import { featuresInUse, saveFoundSpeed, type SaveTarget } from '../../state/speedFinder';
 import { Panel } from '../Panel';
+import { NameLengthNote, nameIsFull, nameNoteId } from '../NameLengthNote';
 import style from './style.module.css';
 
 interface Props {
@@ -85,12 +86,16 @@ export function SavePanel({ speedHz }: Props) {
                   type="text"
                   maxLength={80}
                   value={name}
+                  aria-describedby={
+                    nameIsFull(name) ? nameNoteId('finder-machine-name') : undefined
+                  }
                   onInput={(e) => setName((e.currentTarget as HTMLInputElement).value)}
                 />
                 <button type="submit" class={style.primary} disabled={busy}>
                   Save speed to a new machine
                 </button>
               </div>
+              <NameLengthNote id={nameNoteId('finder-machine-name')} name={name} />
             </form>
           )}
           <button
