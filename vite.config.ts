@@ -2,12 +2,15 @@
 import { defineConfig } from 'vite';
 import preact from '@preact/preset-vite';
 import { VitePWA } from 'vite-plugin-pwa';
+import { contentSecurityPolicy } from './scripts/content-security-policy.ts';
 
 // The app is fully static and must work with no network after the first visit:
 // every built file and icon is precached by the generated service worker.
 export default defineConfig({
   plugins: [
     preact(),
+    // The built page allows scripts, styles, workers and connections from its own origin only.
+    contentSecurityPolicy(),
     VitePWA({
       // A new version waits for the user's go-ahead (src/app/update-notice); registration is
       // done by the useRegisterSW hook, so no extra script is injected.

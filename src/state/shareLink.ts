@@ -11,6 +11,11 @@ import { DataError, validateSetup } from './validate';
 export const SHARE_LINK_VERSION = 1;
 /** Longest share payload accepted or made, in characters after "s=" (8 KiB). */
 export const MAX_SHARE_CHARS = 8 * 1024;
+/**
+ * Longest page address fragment read at all (16 KiB): a share payload and room for other
+ * fields. Anything longer is refused by its length alone, before it is split, matched or decoded.
+ */
+export const MAX_FRAGMENT_CHARS = 2 * MAX_SHARE_CHARS;
 /** Name of the fragment field that carries a set-up. */
 const FIELD = 's';
 
@@ -36,6 +41,7 @@ export type DecodeShareResult =
   { ok: true; setup: Setup } | { ok: false; error: string } | { ok: false; error: null };
 
 const BROKEN = 'This share link is damaged or cut short; ask for the link again.';
+const TOO_LONG = 'This share link is too long to be a Trueturn link; it was not opened.';
 
 /**
  * Reads a set-up from a page address fragment (`location.hash`, with or without "#").
@@ -45,14 +51,10 @@ const BROKEN = 'This share link is damaged or cut short; ask for the link again.
  */
 export function decodeShareFragment(hash: string): DecodeShareResult {
   if (typeof hash !== 'string') return { ok: false, error: null };
+  if (hash.length > MAX_FRAGMENT_CHARS) return { ok: false, error: TOO_LONG };
   const payload = findField(hash.startsWith('#') ? hash.slice(1) : hash);
   if (payload === null) return { ok: false, error: null };
-  if (payload.length > MAX_SHARE_CHARS) {
-    return {
-      ok: false,
-      error: 'This share link is too long to be a Trueturn link; it was not opened.',
-    };
-  }
+  if (payload.length > MAX_SHARE_CHARS) return { ok: false, error: TOO_LONG };
   const m = /^(\d{1,6})\.([A-Za-z0-9_-]+)$/.exec(payload);
   if (!m) return { ok: false, error: BROKEN };
   const version = Number(m[1]);

@@ -8,11 +8,27 @@ import { MAX_RATE_HZ, MAX_SPEED_RPM, type SpeedUnit } from '../state/model';
 /** What reading a field gave: a value (a number, or a list of them), or the message to show beside it. */
 export type FieldReading<T = number> = { ok: true; value: T } | { ok: false; message: string };
 
-/** Runs a reader and turns its InputError into a message; any other error is a bug and rethrows. */
+/** Longest text a field for one number takes: room for any number written with spaces and a unit. */
+export const MAX_NUMBER_CHARS = 64;
+/** Longest text a field for a list of numbers takes (lists hold at most a dozen or so values). */
+export const MAX_LIST_CHARS = 1000;
+
+/**
+ * Runs a reader and turns its InputError into a message; any other error is a bug and rethrows.
+ * Text longer than `maxChars` characters is refused before the reader sees it: no number needs
+ * more, and a page of pasted text gets a plain answer rather than a quote of itself.
+ */
 export function readField<T extends number | readonly number[]>(
   text: string,
   reader: (text: string) => T,
+  maxChars = MAX_NUMBER_CHARS,
 ): FieldReading<T> {
+  if (longerThan(text, maxChars)) {
+    return {
+      ok: false,
+      message: `Too long: type at most ${maxChars.toLocaleString('en-US')} characters.`,
+    };
+  }
   try {
     const value = reader(text);
     const numbers: readonly number[] = typeof value === 'number' ? [value] : value;
@@ -23,6 +39,14 @@ export function readField<T extends number | readonly number[]>(
     if (error instanceof InputError) return { ok: false, message: sentence(error.message) };
     throw error;
   }
+}
+
+/** More than `max` characters (code points, so "µ" or an emoji counts once); stops counting past it. */
+function longerThan(text: string, max: number): boolean {
+  if (typeof text !== 'string' || text.length <= max) return false;
+  let count = 0;
+  for (const _char of text) if (++count > max) return true;
+  return false;
 }
 
 /** The text with its first letter in capitals, to open a message with a field's name. */
@@ -63,8 +87,10 @@ const BARE_NUMBER = /^[+\-−]?[\d\s.,'\u00a0\u202f]+$/;
 /**
  * A whole number from min to max, such as "6" or "6 blades": trailing words are allowed only
  * when `words` matches them. parseNumber ignores whatever follows the number, so the rest is
- * checked here: "1/0" or "12abc" is not a whole number.
- * @example readWhole('6 blades', 'features', 1, 100, /\s*blades?$/i) // 6
+ * checked here: "1/0" or "12abc" is not a whole number. `words` matches the word at the end
+ * only, with no leading \s* (the spaces are trimmed here): an expression that starts with an
+ * open-ended repeat is retried at every position and takes time in the square of the length.
+ * @example readWhole('6 blades', 'features', 1, 100, /blades?$/i) // 6
  */
 export function readWhole(
   text: string,
@@ -87,7 +113,7 @@ export function readWhole(
 
 /** Identical features on the part: blades, spokes, jaws, bolts. */
 export function readFeatures(text: string): number {
-  const words = /\s*(blades?|spokes?|jaws?|bolts?|marks?|features?|teeth|tooth)$/i;
+  const words = /(blades?|spokes?|jaws?|bolts?|marks?|features?|teeth|tooth)$/i;
   return readWhole(text, 'features', 1, Math.min(MAX_SYMMETRY, 10_000), words);
 }
 
@@ -98,7 +124,7 @@ export function readTolerancePercent(text: string): number {
 
 /** Motor poles: an even whole number. */
 export function readPoles(text: string): number {
-  const poles = readWhole(text, 'poles', 2, 200, /\s*poles?$/i);
+  const poles = readWhole(text, 'poles', 2, 200, /poles?$/i);
   if (poles % 2 !== 0)
     throw new InputError('poles', 'Poles come in pairs: give an even number such as 2, 4 or 6.');
   return poles;
@@ -131,7 +157,8 @@ export function readShutterAngle(text: string): number {
  * "0.004 s" are read as written.
  */
 export function readExposureSeconds(text: string): number {
-  const bare = /^\s*[\d.,\s]+\s*$/.test(text);
+  // One character class, anchored: no nested repeats to backtrack over (\s* beside [\d\s]+ was cubic).
+  const bare = /^[\d.,\s]+$/.test(text);
   let seconds: number;
   if (bare) {
     const x = parseNumber(text, 'exposure');

@@ -29,22 +29,22 @@ export const readToneHz = (text: string): number => frequency(text, 'tone');
 
 /** Shaft harmonics to include: 1× … N×. */
 export const readHarmonics = (text: string): number =>
-  readWhole(text, 'harmonics', 1, 200, /\s*[×x]$/i);
+  readWhole(text, 'harmonics', 1, 200, /[×x]$/i);
 
 /** Blade count of a fan or impeller. */
 export const readBladeCount = (text: string): number =>
-  readWhole(text, 'blade count', 1, 1000, /\s*blades?$/i);
+  readWhole(text, 'blade count', 1, 1000, /blades?$/i);
 
 /** Tooth count of a gear. */
 export const readTeeth = (text: string): number =>
-  readWhole(text, 'tooth count', 1, 100_000, /\s*(teeth|tooth)$/i);
+  readWhole(text, 'tooth count', 1, 100_000, /(teeth|tooth)$/i);
 
 /** Butterworth filter order (poles). */
 export const readFilterOrder = (text: string): number => readWhole(text, 'filter order', 1, 20);
 
 /** Converter resolution, bits. */
 export const readBits = (text: string): number =>
-  readWhole(text, 'converter bits', 1, 64, /\s*bits?$/i);
+  readWhole(text, 'converter bits', 1, 64, /bits?$/i);
 
 /** A number with an optional SI-prefixed unit after it, read with `units` (lower-case keys, "" = the bare number's unit). */
 function withUnit(
@@ -58,8 +58,8 @@ function withUnit(
 ): number {
   if (typeof text !== 'string' || text.trim() === '')
     throw new InputError(what, `${capital(what)} is empty: type a number.`);
-  const m = /^(.*?\d)\s*([^\d\s.,]*)\s*$/u.exec(text.trim());
-  const unit = (m?.[2] ?? '').toLowerCase();
+  const m = splitUnit(text.trim());
+  const unit = (m?.unit ?? '').toLowerCase();
   const factor = units[unit];
   if (!m || factor === undefined) {
     throw new InputError(
@@ -67,11 +67,28 @@ function withUnit(
       `"${text.trim().slice(0, 24)}" is not a ${what}; type it as ${say}.`,
     );
   }
-  const value = parseNumber(m[1], what) * factor;
+  const value = parseNumber(m.number, what) * factor;
   if (!(value >= min && value <= max)) {
     throw new InputError(what, `${capital(what)} must lie between ${span}.`);
   }
   return value;
+}
+
+/**
+ * Text up to its last digit, and the unit word after it (no spaces, digits, points or commas
+ * inside it), in one pass from the end; null when there is no digit, or the unit is not one
+ * word. Reads what /^(.*?\d)\s*([^\d\s.,]*)\s*$/u matched, without its backtracking.
+ * @example splitUnit('2.2 kΩ') // { number: '2.2', unit: 'kΩ' }
+ */
+function splitUnit(text: string): { number: string; unit: string } | null {
+  let last = text.length - 1;
+  while (last >= 0 && !(text[last] >= '0' && text[last] <= '9')) last--;
+  if (last < 0) return null;
+  const number = text.slice(0, last + 1);
+  const unit = text.slice(last + 1).trim();
+  // "." in the former expression stopped at line breaks; \s, "." and "," cannot be in a unit.
+  if (/[\n\r\u2028\u2029]/.test(number) || /[\s.,]/.test(unit)) return null;
+  return { number, unit };
 }
 
 const OHMS: Record<string, number> = {
@@ -124,20 +141,31 @@ export function readCapacitanceF(text: string): number {
 /**
  * Splits a typed list into its items: spaces or semicolons separate them, and so does a comma
  * followed by a space ("48, 100"); a comma inside a number stays part of it ("29,97"). A word
- * after a number is its unit and stays with it ("50 Hz 2 kHz" is two items).
+ * after a number is its unit and stays with it ("50 Hz 2 kHz" is two items). Past `most` items
+ * it stops, keeping one more item to tell a list that is too long.
  * @example splitList('24; 29,97  60, 120') // ['24', '29,97', '60', '120']
  * @example splitList('50 Hz 2 kHz') // ['50 Hz', '2 kHz']
  */
-export function splitList(text: string): string[] {
+export function splitList(text: string, most = Infinity): string[] {
   if (typeof text !== 'string') return [];
-  const out: string[] = [];
-  for (const token of text.trim().split(/\s*;\s*|,\s+|\s+/)) {
-    if (token === '') continue;
-    const isUnit = /^[^\d+\-−.,]/u.test(token);
-    if (isUnit && out.length > 0) out[out.length - 1] += ` ${token}`;
-    else out.push(token);
+  // The words of each item, joined once at the end (a long run of words stays cheap).
+  const items: string[][] = [];
+  // A word runs until a space or semicolon, or a comma with a space after it; each character
+  // is looked at once. Stops once past `most` items, so a pasted page is not cut up whole.
+  const word = /(?:[^\s;,]|,(?!\s))+/g;
+  const trimmed = text.trim();
+  for (let m = word.exec(trimmed); m !== null && items.length <= most; m = word.exec(trimmed)) {
+    const token = m[0];
+    if (startsAsUnit(token) && items.length > 0) items[items.length - 1].push(token);
+    else items.push([token]);
   }
-  return out;
+  return items.map((words) => words.join(' '));
+}
+
+/** True unless the token starts like a number: a digit, a sign, a point or a comma. */
+function startsAsUnit(token: string): boolean {
+  const c = token[0];
+  return !((c >= '0' && c <= '9') || c === '+' || c === '-' || c === '−' || c === '.' || c === ',');
 }
 
 /**
@@ -152,7 +180,7 @@ export function readList(
   min: number,
   max: number,
 ): number[] {
-  const items = splitList(text);
+  const items = splitList(text, max);
   if (items.length < min) {
     throw new InputError(
       what,

@@ -43,6 +43,28 @@ describe('opening a share link', () => {
     expect(sessionMessage.value?.kind).toBe('problem');
   });
 
+  test('a 1 MB link is refused by its length: a plain message, the default set-up, nothing loaded', async () => {
+    replaceSetup(shared);
+    let lastLoaded = false;
+    let cleared = false;
+    await openSession({
+      hash: `#s=1.${'A'.repeat(1024 * 1024)}`,
+      decodeShare: decodeShareFragment,
+      loadLast: async () => {
+        lastLoaded = true;
+        return null;
+      },
+      clearHash: () => (cleared = true),
+    });
+    expect(setup.value).toEqual(defaultSetup);
+    expect(sessionMessage.value).toEqual({
+      kind: 'problem',
+      text: 'This share link is too long to be a Trueturn link; it was not opened. The default set-up is shown instead.',
+    });
+    expect(lastLoaded).toBe(false);
+    expect(cleared).toBe(true);
+  });
+
   test('markup inside a link is shown as text', async () => {
     const hostile: Setup = {
       ...structuredClone(defaultSetup),

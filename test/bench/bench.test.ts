@@ -3,6 +3,7 @@
 // loudly, never drops out of the table.
 import { expect, test } from 'vitest';
 import { runCoreBench } from './core.bench';
+import { runParseBench } from './parse.bench';
 import { runRenderBench } from './render.bench';
 import { runSoundBench } from './sound.bench';
 import type { BenchResult } from './measure';
@@ -11,6 +12,7 @@ test('every measured median stays within its budget', () => {
   const groups: Array<[string, () => BenchResult[]]> = [
     ['core', runCoreBench],
     ['sound', runSoundBench],
+    ['text readers', runParseBench],
     ['render', runRenderBench],
   ];
   const results = groups.flatMap(([group, run]) => {

@@ -57,6 +57,8 @@ describe('share links', () => {
       good.replace('#s=1.', '#s=1.@@'),
       '#s=9.abc',
       '#s=1.' + 'A'.repeat(40),
+      // A 1 MB link is refused by its length before anything reads it.
+      '#s=1.' + 'A'.repeat(1024 * 1024),
     ]) {
       // Work on a set-up of one's own first, so showing the default is a real change.
       await openApp(s.page, inject('baseUrl') + 'index.html');

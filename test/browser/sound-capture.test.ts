@@ -10,6 +10,7 @@ import { join, resolve } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { build, preview, type PreviewServer } from 'vite';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { contentSecurityPolicy } from '../../scripts/content-security-policy';
 import { CHROMIUM, CHROMIUM_ARGS } from './browser';
 import { freePort } from './server';
 import { fanAt1750Rpm } from '../helpers/sound/machineSound';
@@ -89,6 +90,13 @@ async function openPage(
   });
   if (grant) await context.grantPermissions(['microphone'], { origin: new URL(url).origin });
   const page = context.pages()[0] ?? (await context.newPage());
+  await context.addInitScript(() => {
+    const seen: string[] = [];
+    (window as unknown as { violations: string[] }).violations = seen;
+    document.addEventListener('securitypolicyviolation', (e) =>
+      seen.push(`${e.effectiveDirective} ${e.blockedURI}`),
+    );
+  });
   await page.goto(url);
   await page.locator('body[data-ready="yes"]').waitFor({ state: 'attached' });
   return {
@@ -114,7 +122,7 @@ beforeAll(async () => {
   mkdirSync(pageDir, { recursive: true });
   writeFileSync(
     join(pageDir, 'index.html'),
-    '<!doctype html><title>sound capture</title><body><script type="module" src="./main.js"></script></body>',
+    '<!doctype html><meta charset="utf-8"><title>sound capture</title><body><script type="module" src="./main.js"></script></body>',
   );
   writeFileSync(join(pageDir, 'main.js'), MAIN);
   writeWav(wavPath, fanAt1750Rpm(48_000, 6), 48_000);
@@ -123,6 +131,8 @@ beforeAll(async () => {
     configFile: false,
     logLevel: 'warn',
     build: { outDir: distDir, emptyOutDir: true, target: 'es2022' },
+    // The app's own policy, so the worklet is shown to load under it (worker-src 'self').
+    plugins: [contentSecurityPolicy()],
   });
   server = await preview({
     root: pageDir,
@@ -139,7 +149,7 @@ afterAll(async () => {
 });
 
 describe('sound capture in Chromium', () => {
-  it('bundles the worklet as a file of its own and loads it from the page’s origin', async () => {
+  it('bundles the worklet as a file of its own and loads it from the page’s origin, under the app’s security policy', async () => {
     const assets = readdirSync(join(distDir, 'assets'));
     expect(assets.some((f) => /^recorderWorklet-.*\.js$/.test(f))).toBe(true);
     const session = await openPage(
@@ -165,6 +175,15 @@ describe('sound capture in Chromium', () => {
       expect(loaded.protocol).toBe('http:'); // not blob: or data:
       expect(loaded.origin).toBe(new URL(url).origin);
       expect(loaded.pathname).toMatch(/\/assets\/recorderWorklet-.*\.js$/);
+      // Under the app's Content-Security-Policy, with nothing refused.
+      expect(readFileSync(join(distDir, 'index.html'), 'utf8')).toContain(
+        'http-equiv="Content-Security-Policy"',
+      );
+      expect(
+        await session.page.evaluate(
+          () => (window as unknown as { violations: string[] }).violations,
+        ),
+      ).toEqual([]);
     } finally {
       await session.close();
     }

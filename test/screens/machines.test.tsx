@@ -147,6 +147,30 @@ describe('saved machines', () => {
     expect(machines.value).toBe(before);
   });
 
+  test('an import file over 1 MB is refused by its size, unread, and changes nothing', async () => {
+    fireEvent.click(screen.getByRole('button', { name: 'Machines' }));
+    const before = machines.value;
+    const input = screen.getByTestId('import-file') as HTMLInputElement;
+    let reads = 0;
+    const big = {
+      name: 'film.mp4',
+      size: 200 * 1024 * 1024,
+      text: () => {
+        reads++;
+        return Promise.reject(new Error('a 200 MB file must not be read'));
+      },
+    };
+    Object.defineProperty(input, 'files', { value: [big], configurable: true });
+    fireEvent.change(input);
+    await waitFor(() =>
+      expect(screen.getByTestId('machines-outcome').textContent).toBe(
+        'Nothing was imported. This file is larger than 1 MB; a Trueturn machines file is never that big.',
+      ),
+    );
+    expect(reads).toBe(0);
+    expect(machines.value).toBe(before);
+  });
+
   test('an exported file imports back, renamed where names clash', async () => {
     fireEvent.click(screen.getByRole('button', { name: 'Machines' }));
     const count = machines.value.length;

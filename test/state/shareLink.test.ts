@@ -1,9 +1,10 @@
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { defaultSetup, type PartSpec, type Setup } from '../../src/state/model';
 import {
   decodeShareFragment,
   encodeShareFragment,
+  MAX_FRAGMENT_CHARS,
   MAX_SHARE_CHARS,
   SHARE_LINK_VERSION,
 } from '../../src/state/shareLink';
@@ -141,6 +142,39 @@ describe('decodeShareFragment', () => {
       ok: false,
       error: 'This share link is too long to be a Trueturn link; it was not opened.',
     });
+  });
+
+  it('refuses a 1 MB link by its length alone, before splitting, matching or decoding it', () => {
+    const huge = `#s=1.${'A'.repeat(1024 * 1024)}`;
+    const work = [
+      vi.spyOn(String.prototype, 'split'),
+      vi.spyOn(String.prototype, 'slice'),
+      vi.spyOn(RegExp.prototype, 'exec'),
+      vi.spyOn(globalThis, 'atob'),
+      vi.spyOn(JSON, 'parse'),
+    ];
+    let result;
+    let calls: number[];
+    try {
+      result = decodeShareFragment(huge);
+    } finally {
+      calls = work.map((spy) => spy.mock.calls.length);
+      for (const spy of work) spy.mockRestore();
+    }
+    expect(result).toEqual({
+      ok: false,
+      error: 'This share link is too long to be a Trueturn link; it was not opened.',
+    });
+    // split, slice, exec, atob, JSON.parse: none ran.
+    expect(calls).toEqual([0, 0, 0, 0, 0]);
+  });
+
+  it(`still reads a good link among other fields, up to ${MAX_FRAGMENT_CHARS} characters in all`, () => {
+    const good = encodeShareFragment(sampleSetup()).slice(1);
+    const padded = `#${good}&note=${'x'.repeat(MAX_FRAGMENT_CHARS - good.length - 7)}`;
+    expect(padded.length).toBe(MAX_FRAGMENT_CHARS);
+    expect(decodeShareFragment(padded)).toEqual({ ok: true, setup: sampleSetup() });
+    expect(decodeShareFragment(padded + 'x').ok).toBe(false);
   });
 
   it('refuses a link from a newer version and says which version it reads', () => {

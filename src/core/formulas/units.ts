@@ -1,4 +1,12 @@
 import { InputError, requireFinite, requireFiniteResult as finite } from '../basics/InputError';
+import {
+  FRACTIONS,
+  hasDigit,
+  isPlainDecimal,
+  scanFraction,
+  scanNumber,
+  scanOneOver,
+} from './numberText';
 
 // Conversions at the edges (docs/physics.md: the core works in rev/s, Hz, s, m). Exact factors.
 
@@ -52,52 +60,29 @@ export function parseNumber(text: string, field = 'value'): number {
   return splitNumber(text, field).value;
 }
 
-const NUMBER =
-  /^\s*([+\-−]?)\s*((?:\d[\d\s\u00a0\u202f.,']*)?\d|\d*[.,]\d+)(?:[eE]([+-]?\d+))?\s*(.*?)\s*$/u;
-
-/** Unicode fraction signs people type or paste (Unicode "Number Forms" block), by value. */
-const FRACTIONS: Record<string, number> = {
-  '¼': 1 / 4,
-  '½': 1 / 2,
-  '¾': 3 / 4,
-  '⅓': 1 / 3,
-  '⅔': 2 / 3,
-  '⅕': 1 / 5,
-  '⅖': 2 / 5,
-  '⅗': 3 / 5,
-  '⅘': 4 / 5,
-  '⅙': 1 / 6,
-  '⅚': 5 / 6,
-  '⅛': 1 / 8,
-  '⅜': 3 / 8,
-  '⅝': 5 / 8,
-  '⅞': 7 / 8,
-};
-const WITH_FRACTION = /^\s*([+\-−]?)\s*(\d*)\s*([¼½¾⅓⅔⅕⅖⅗⅘⅙⅚⅛⅜⅝⅞])\s*(.*?)\s*$/u;
-
 function splitNumber(text: string, field: string): { value: number; unit: string } {
   if (typeof text !== 'string') throw new InputError(field, `${field} must be typed as text.`);
   if (text.trim() === '') throw new InputError(field, `${field} is empty: type a number.`);
   const shown = text.slice(0, 24);
   const twoNumbers = () =>
     new InputError(field, `"${shown}" holds more than one number: type one number for ${field}.`);
-  const withFraction = WITH_FRACTION.exec(text);
+  const withFraction = scanFraction(text);
   if (withFraction) {
-    const [, signText, whole, sign, unit] = withFraction;
-    if (/\d/.test(unit)) throw twoNumbers();
+    const { sign: signText, whole, fraction, rest: unit } = withFraction;
+    if (hasDigit(unit)) throw twoNumbers();
     const sign1 = signText === '-' || signText === '−' ? -1 : 1;
-    return { value: sign1 * (Number(whole || '0') + FRACTIONS[sign]), unit };
+    return { value: sign1 * (Number(whole || '0') + FRACTIONS[fraction]), unit };
   }
-  const m = NUMBER.exec(text);
+  const m = scanNumber(text);
   if (!m) throw new InputError(field, `"${shown}" is not a number for ${field}.`);
   // A digit after the number ("1780 rpm 1800", "1780-1800") is a second number.
-  if (/\d/.test(m[4])) throw twoNumbers();
-  const sign = m[1] === '-' || m[1] === '−' ? -1 : 1;
-  const digits = normaliseDigits(m[2], text, field, twoNumbers);
-  const exponent = m[3] ? Number(m[3]) : 0;
+  if (hasDigit(m.rest)) throw twoNumbers();
+  const sign = m.sign === '-' || m.sign === '−' ? -1 : 1;
+  const digits = normaliseDigits(m.digits, text, field, twoNumbers);
+  const exponent = m.exponent ? Number(m.exponent) : 0;
   const value = sign * Number(digits) * Math.pow(10, exponent);
   if (!Number.isFinite(value)) throw new InputError(field, `"${shown}" is too large for ${field}.`);
-  return { value, unit: m[4] };
+  return { value, unit: m.rest };
 }
 
 function normaliseDigits(
@@ -141,7 +126,7 @@ function normaliseDigits(
     out =
       groups.length <= 2 ? s : groups.slice(1).every((g) => g.length === 3) ? groups.join('') : '';
   }
-  if (!/^\d*\.?\d+$|^\d+\.?$/.test(out))
+  if (!isPlainDecimal(out))
     throw new InputError(field, `"${text.slice(0, 24)}" is not a number for ${field}.`);
   return out;
 }
@@ -207,13 +192,13 @@ export function parseQuantity(
   }
   const table = UNITS[kind];
   if (kind === 'time' && typeof text === 'string') {
-    const frac = /^\s*1\s*\/\s*(\d+(?:[.,]\d+)?)\s*(s)?\s*$/i.exec(text);
-    if (frac) {
-      const under = parseNumber(frac[1], field);
+    const frac = scanOneOver(text);
+    if (frac !== null) {
+      const under = parseNumber(frac, field);
       if (under === 0) {
         throw new InputError(
           field,
-          `${field}: 1/${frac[1]} is not a time; the number under the line must be above zero.`,
+          `${field}: 1/${frac.slice(0, 24)} is not a time; the number under the line must be above zero.`,
         );
       }
       return 1 / under;
@@ -225,7 +210,7 @@ export function parseQuantity(
   if (factor === undefined) {
     throw new InputError(
       field,
-      `"${unit}" is not a unit for ${field}; use ${Object.keys(table).join(', ')}.`,
+      `"${unit.slice(0, 24)}" is not a unit for ${field}; use ${Object.keys(table).join(', ')}.`,
     );
   }
   return finite(value * factor, field);

@@ -15,6 +15,8 @@ import {
 import { replaceSetup } from '../../state/setup';
 import { openMachineId } from '../../state/session';
 import { Panel } from '../../ui/panel';
+import { readImportFile } from '../../state/importFile';
+import { NameLengthNote, nameIsFull, nameNoteId } from '../../ui/name-length-note';
 import { setupSummary } from './summary';
 import style from './style.module.css';
 
@@ -62,14 +64,13 @@ export function MachinesScreen(_props: Props) {
     const file = input.files?.[0];
     input.value = '';
     if (!file) return;
-    let text: string;
-    try {
-      text = await file.text();
-    } catch {
-      setOutcome({ kind: 'problem', text: 'This file could not be read.' });
+    // The size is checked before the file is read (src/state/importFile.ts).
+    const read = await readImportFile(file);
+    if (!read.ok) {
+      setOutcome({ kind: 'problem', text: `Nothing was imported. ${read.error}` });
       return;
     }
-    const result = await importMachines(text);
+    const result = await importMachines(read.text);
     if (!result.ok) {
       setOutcome({ kind: 'problem', text: `Nothing was imported. ${result.error}` });
       return;
@@ -210,7 +211,11 @@ function MachineRow({ machine, onOutcome }: RowProps) {
               maxLength={80}
               value={name}
               aria-invalid={problem ? 'true' : undefined}
-              aria-describedby={problem ? `${inputId}-problem` : undefined}
+              aria-describedby={
+                [problem ? `${inputId}-problem` : '', nameIsFull(name) ? nameNoteId(inputId) : '']
+                  .filter(Boolean)
+                  .join(' ') || undefined
+              }
               onInput={(e) => setName((e.currentTarget as HTMLInputElement).value)}
             />
             <button type="submit" class={style.primary}>
@@ -233,6 +238,7 @@ function MachineRow({ machine, onOutcome }: RowProps) {
               {problem}
             </p>
           )}
+          <NameLengthNote id={nameNoteId(inputId)} name={name} />
         </form>
       ) : (
         <div class={style.actions}>

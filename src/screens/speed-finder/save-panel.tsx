@@ -6,6 +6,7 @@ import { setup } from '../../state/setup';
 import { featuresInUse, saveFoundSpeed, type SaveTarget } from '../../state/speedFinder';
 import { Panel } from '../../ui/panel';
 import { savedSpeedLines } from '../../words/speedFinder';
+import { NameLengthNote, nameIsFull, nameNoteId } from '../../ui/name-length-note';
 import style from './style.module.css';
 
 interface Props {
@@ -86,12 +87,16 @@ export function SavePanel({ speedHz }: Props) {
                   type="text"
                   maxLength={80}
                   value={name}
+                  aria-describedby={
+                    nameIsFull(name) ? nameNoteId('finder-machine-name') : undefined
+                  }
                   onInput={(e) => setName((e.currentTarget as HTMLInputElement).value)}
                 />
                 <button type="submit" class={style.primary} disabled={busy}>
                   Save speed to a new machine
                 </button>
               </div>
+              <NameLengthNote id={nameNoteId('finder-machine-name')} name={name} />
             </form>
           )}
           <button

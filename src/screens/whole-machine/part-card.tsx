@@ -20,6 +20,7 @@ import { MotorFields } from '../../ui/motor-fields';
 import { problemsAmong } from '../../state/fieldProblems';
 import { fieldNames } from '../../ui/not-current';
 import { NumberField } from '../../ui/number-field';
+import { NameLengthNote, nameIsFull, nameNoteId } from '../../ui/name-length-note';
 
 import { speedWords } from '../../words/wholeMachine';
 import { DriveFields } from './drive-fields';
@@ -183,8 +184,10 @@ function NameField({
         type="text"
         maxLength={80}
         value={name}
+        aria-describedby={nameIsFull(name) ? nameNoteId(id) : undefined}
         onInput={(e) => onName((e.currentTarget as HTMLInputElement).value)}
       />
+      <NameLengthNote id={nameNoteId(id)} name={name} />
     </div>
   );
 }

@@ -26,18 +26,19 @@ export function useCheckedText<T extends number | readonly number[]>(
   same: (a: T, b: T) => boolean,
   heldText: () => string,
   onGood: (value: T) => void,
+  maxChars?: number,
 ): { text: string; message: string | null; onInput: (event: Event) => void } {
   const { text, message, edit } = useFollowingText(
     key,
     (shown) => {
-      const reading = readField(shown, read);
+      const reading = readField(shown, read, maxChars);
       return reading.ok && same(reading.value, held);
     },
     heldText,
   );
   const onInput = (event: Event) => {
     const next = (event.currentTarget as HTMLInputElement).value;
-    const reading = readField(next, read);
+    const reading = readField(next, read, maxChars);
     edit(next, reading.ok ? null : reading.message);
     if (reading.ok && !same(reading.value, held)) onGood(reading.value);
   };

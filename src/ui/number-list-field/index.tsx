@@ -1,5 +1,5 @@
 import type { ComponentChildren } from 'preact';
-
+import { MAX_LIST_CHARS } from '../fields';
 // The same look as a single number field.
 import { sameNumber, TextField, useCheckedText } from '../number-field/text-field';
 
@@ -49,6 +49,7 @@ export function NumberListField({
     sameList,
     () => values.map(toText).join(' '),
     (list) => onValues([...list]),
+    MAX_LIST_CHARS,
   );
 
   return (

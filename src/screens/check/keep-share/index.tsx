@@ -4,6 +4,7 @@ import { encodeShareFragment } from '../../../state/shareLink';
 import { setup } from '../../../state/setup';
 import { openMachineId } from '../../../state/session';
 import { Panel } from '../../../ui/panel';
+import { NameLengthNote, nameIsFull, nameNoteId } from '../../../ui/name-length-note';
 import style from './style.module.css';
 
 interface Props {
@@ -94,12 +95,14 @@ export function KeepShare({ class: extra }: Props) {
             autoComplete="off"
             placeholder="e.g. Line 2 cooler fan"
             value={name}
+            aria-describedby={nameIsFull(name) ? nameNoteId('machine-name') : undefined}
             onInput={(e) => setName((e.currentTarget as HTMLInputElement).value)}
           />
           <button type="submit" class={style.button}>
             Save as new machine
           </button>
         </div>
+        <NameLengthNote id={nameNoteId('machine-name')} name={name} />
       </form>
       <div class={style.share}>
         <button type="button" class={style.button} onClick={makeLink}>
