@@ -1,7 +1,7 @@
 import type { ComponentChildren } from 'preact';
 import { currentScreen } from '../state/navigation';
 import { sessionMessage, storageOpened } from '../state/session';
-import { storageMessage, storageStatus } from '../state/storage';
+import { storageMessage, storageStatus } from '../state/store';
 import { Banner } from './banner';
 import { AppFrame } from './frame';
 import { screenEntry, toolScreens, type ScreenEntry } from './screen-list';

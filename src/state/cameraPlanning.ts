@@ -1,7 +1,7 @@
 // The camera planner's entries (what the camera can do, the goal) and its ranked settings,
 // from the core's cameraPlan (docs/physics.md §2–§5). The part is the set-up's chosen part; "Open
 // in check" copies a setting into the set-up's camera.
-import { batch, computed, signal } from '@preact/signals';
+import { batch, computed } from '@preact/signals';
 import {
   cameraPlan,
   standardFrameRates,
@@ -11,7 +11,17 @@ import {
   type CameraSetting,
   type CautionContext,
 } from '../core';
-import { activeCorePart } from './model';
+import { activeCorePart, defaultCameraInputs } from './model';
+import {
+  exposuresS,
+  goalKind,
+  otherRatesHz,
+  planReadoutMs,
+  setToolInputs,
+  shutterAnglesDeg,
+  standardLabelsOn,
+  toolInputs,
+} from './toolInputs';
 import { keepLastGood } from './outcome';
 import {
   setExposureSeconds,
@@ -24,38 +34,23 @@ import {
 
 export type GoalKind = CameraGoal['kind'];
 
-/** What the planner starts with: a phone's usual video modes (common practice). */
+/** What the planner starts with (model/tools.ts), under the names the screens use. */
 export const defaultCameraEntries = {
-  /** Labels of standardFrameRates ticked: the rates a phone's video settings offer. */
-  standardLabels: ['24', '25', '30', '60', '120', '240'],
-  /** Frame rates typed in besides the standard ones, frames/s. */
-  otherRatesHz: [] as number[],
-  /** 180° is the cinema rule; a phone's automatic exposure often runs near it indoors. */
-  shutterAnglesDeg: [180],
-  /** Shutter speeds a phone's manual mode offers, seconds (1/500 … 1/4000 s). */
-  exposuresS: [1 / 500, 1 / 1000, 1 / 2000, 1 / 4000],
-  /** Typical phone readout, ms: Ringaby & Forssén, IJCV 2011, measured 22–33 ms at 30 frames/s. */
-  readoutMs: 25,
-  goal: 'freeze' as GoalKind,
-};
+  ...defaultCameraInputs,
+} as const;
 
-export const standardLabelsOn = signal<string[]>([...defaultCameraEntries.standardLabels]);
-export const otherRatesHz = signal<number[]>([...defaultCameraEntries.otherRatesHz]);
-export const shutterAnglesDeg = signal<number[]>([...defaultCameraEntries.shutterAnglesDeg]);
-export const exposuresS = signal<number[]>([...defaultCameraEntries.exposuresS]);
-export const planReadoutMs = signal<number>(defaultCameraEntries.readoutMs);
-export const goalKind = signal<GoalKind>(defaultCameraEntries.goal);
+export {
+  exposuresS,
+  goalKind,
+  otherRatesHz,
+  planReadoutMs,
+  shutterAnglesDeg,
+  standardLabelsOn,
+} from './toolInputs';
 
 /** Puts the planner back to its starting entries (tests, and a fresh start). */
 export function resetCameraEntries(): void {
-  batch(() => {
-    standardLabelsOn.value = [...defaultCameraEntries.standardLabels];
-    otherRatesHz.value = [...defaultCameraEntries.otherRatesHz];
-    shutterAnglesDeg.value = [...defaultCameraEntries.shutterAnglesDeg];
-    exposuresS.value = [...defaultCameraEntries.exposuresS];
-    planReadoutMs.value = defaultCameraEntries.readoutMs;
-    goalKind.value = defaultCameraEntries.goal;
-  });
+  setToolInputs({ ...toolInputs.peek(), camera: structuredClone(defaultCameraInputs) });
 }
 
 /** Ticks or unticks a standard frame rate by its label. */

@@ -1,6 +1,6 @@
 // The drive chains of a set-up (the whole-machine screen). A part without a drive starts a
-// chain: its speed is typed, or comes from a motor or a wheel. A part with a drive is turned by
-// an earlier part through a belt, a gear pair or a shared shaft. The core's driveChain carries
+// chain: its speed is typed (or applied from a wheel's road speed), or comes from a motor. A
+// part with a drive is turned by an earlier part through a belt, a gear pair or a shared shaft. The core's driveChain carries
 // speeds and tolerances along (docs/physics.md §8); this file turns set-ups into its input and
 // writes what it gives back into the parts, so the check screen and saved machines keep it.
 import {
@@ -9,6 +9,8 @@ import {
   kmhToMps,
   motorSpeedHz,
   mphToMps,
+  tyreDiameterM,
+  wheelSpeedHz,
   type ChainLink,
   type ChainPart,
   type ChainPartSpec,
@@ -23,9 +25,10 @@ import {
   type WheelSpec,
   corePartOf,
   newPartLike,
+  withoutOrigin,
 } from './model';
 import { keepLastGood } from './outcome';
-import { defaultMotor, setup } from './setup';
+import { defaultMotor, defaultWheelInputs, setup } from './setup';
 import { DataError, requirePartRoom } from './validate';
 
 /** Where a part's speed comes from. */
@@ -38,8 +41,8 @@ export interface DerivedPart extends ChainPart {
   source: SpeedSource;
 }
 
-/** A wheel when a part first becomes one: 50 km/h on a 205/55R16 tyre (an everyday car size; our choice). */
-export const defaultWheel: WheelSpec = { groundSpeed: 50, unit: 'km/h', tyreSize: '205/55R16' };
+/** A wheel when a part first becomes one (setup.ts): 50 km/h on a 205/55R16 tyre. */
+export const defaultWheel: WheelSpec = defaultWheelInputs;
 
 export function speedSourceOf(part: PartSpec): SpeedSource {
   if (part.drive) return 'drive';
@@ -48,14 +51,24 @@ export function speedSourceOf(part: PartSpec): SpeedSource {
   return 'typed';
 }
 
-/** The core's chain start for a part without a drive. */
+/**
+ * The speed a wheel's road speed and tyre give, rpm (signed as the road speed): what the part
+ * form offers to apply (docs/physics.md §8, f = v/(π·D)).
+ * Throws the core's InputError for a tyre size it cannot read.
+ * @example wheelSpeedRpm({ groundSpeed: 100, unit: 'km/h', tyreSize: '205/55R16' }) // 839.56 (to 2 decimals)
+ */
+export function wheelSpeedRpm(wheel: WheelSpec): number {
+  const { groundSpeed, unit } = wheel;
+  const groundSpeedMps = unit === 'mph' ? mphToMps(groundSpeed) : kmhToMps(groundSpeed);
+  return wheelSpeedHz(groundSpeedMps, tyreDiameterM(wheel.tyreSize)) * 60;
+}
+
+/**
+ * The core's chain start for a part without a drive. A wheel starts its chain at the speed it
+ * holds (the one last applied from its road speed), like a typed speed.
+ */
 export function chainRootOf(part: PartSpec): ChainRoot {
   const { speedHz, tolerance } = corePartOf(part);
-  if (part.wheel) {
-    const { groundSpeed, unit, tyreSize } = part.wheel;
-    const groundSpeedMps = unit === 'mph' ? mphToMps(groundSpeed) : kmhToMps(groundSpeed);
-    return { kind: 'wheel', groundSpeedMps, tyreSize, tolerance };
-  }
   if (part.motor) {
     // As on the check screen: the motor gives the speed at its slip, the part's tolerance the band.
     const { mainsHz, poles, slipPercent } = part.motor;
@@ -125,14 +138,14 @@ export function deriveParts(s: Setup): DerivedPart[] {
 }
 
 /**
- * The set-up with every driven part's speed and tolerance, and every wheel's speed, as its
- * chain gives them. Parts whose speed is typed or comes from a motor keep theirs.
+ * The set-up with every driven part's speed and tolerance as its chain gives them. Parts whose
+ * speed is typed, applied or comes from a motor keep theirs.
  * Throws InputError as deriveParts does, or when a part would turn faster than the app accepts.
  */
 export function withChainSpeeds(s: Setup): Setup {
   const derived = deriveParts(s);
   const parts = s.parts.map((part, i) => {
-    if (!part.drive && !part.wheel) return part;
+    if (!part.drive) return part;
     const rpm = derived[i].speedHz * 60;
     if (!(Math.abs(rpm) <= MAX_SPEED_RPM)) {
       throw new InputError(
@@ -140,8 +153,7 @@ export function withChainSpeeds(s: Setup): Setup {
         `${partLabel(s, i)} would turn at more than ${MAX_SPEED_RPM.toLocaleString('en-US')} rpm: check the drives and sizes before it.`,
       );
     }
-    const tolerancePercent = part.drive ? derived[i].tolerance * 100 : part.tolerancePercent;
-    return { ...part, speedRpm: rpm, tolerancePercent };
+    return { ...part, speedRpm: rpm, tolerancePercent: derived[i].tolerance * 100 };
   });
   return { ...s, parts };
 }
@@ -153,14 +165,15 @@ function changePart(s: Setup, index: number, change: (part: PartSpec) => PartSpe
 
 /** A part with no speed source of its own: speed and tolerance stay as they are. */
 function bare(part: PartSpec): PartSpec {
-  const { motor: _motor, drive: _drive, wheel: _wheel, ...rest } = part;
+  const { motor: _motor, drive: _drive, wheel: _wheel, origin: _origin, ...rest } = part;
   return rest;
 }
 
 /**
  * Changes where part `index` takes its speed from, keeping what it showed until now: a typed
  * speed starts at its current speed; a motor starts at 4 poles on 50 Hz with 3 % slip (as on
- * the check screen), a wheel at `defaultWheel`, a drive on the same shaft as the part before.
+ * the check screen); a wheel keeps its speed and offers `defaultWheel`'s road speed to apply;
+ * a drive starts on the same shaft as the part before.
  * Throws DataError for an unknown part, or a drive asked of the first part.
  */
 export function withSpeedSource(s: Setup, index: number, source: SpeedSource): Setup {
@@ -174,7 +187,8 @@ export function withSpeedSource(s: Setup, index: number, source: SpeedSource): S
         motorSpeedHz(defaultMotor.mainsHz, defaultMotor.poles, defaultMotor.slipPercent / 100) * 60;
       return { ...base, motor: { ...defaultMotor }, speedRpm: sign * rpm };
     }
-    if (source === 'wheel') return { ...base, wheel: { ...defaultWheel } };
+    if (source === 'wheel')
+      return { ...base, kind: 'wheel', wheel: { ...(part.wheel ?? defaultWheel) } };
     if (index === 0)
       throw new DataError('drive', 'The first part cannot be driven by another part.');
     return { ...base, drive: { from: index - 1, kind: 'shaft' } };
@@ -195,9 +209,15 @@ export function withMotor(s: Setup, index: number, motor: NonNullable<PartSpec['
   });
 }
 
-/** Replaces part `index`'s wheel. */
+/**
+ * Replaces part `index`'s road speed and tyre. Its speed stays until the user applies the one
+ * they give (applyDerivedSpeed); the origin of that speed stays too.
+ */
 export function withWheel(s: Setup, index: number, wheel: WheelSpec): Setup {
-  return changePart(s, index, (part) => ({ ...bare(part), wheel: { ...wheel } }));
+  return changePart(s, index, (part) => {
+    const { motor: _motor, drive: _drive, ...rest } = part;
+    return { ...rest, wheel: { ...wheel } };
+  });
 }
 
 /** Changes plain fields of part `index` (name, features, typed speed, tolerance). */
@@ -206,7 +226,10 @@ export function withPartFields(
   index: number,
   fields: Partial<Pick<PartSpec, 'name' | 'features' | 'speedRpm' | 'tolerancePercent'>>,
 ): Setup {
-  return changePart(s, index, (part) => ({ ...part, ...fields }));
+  // A typed speed is the user's own: any recorded origin no longer holds.
+  return changePart(s, index, (part) =>
+    fields.speedRpm === undefined ? { ...part, ...fields } : { ...withoutOrigin(part), ...fields },
+  );
 }
 
 /**

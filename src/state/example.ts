@@ -4,7 +4,7 @@
 // Invented: the plant (Brackenfold Feed Mill), the line, the machine and the crew note are
 // fictional, made up for this example. The numbers are chosen to be plausible for such a drive.
 
-import type { Machine, Setup } from './model';
+import { defaultToolInputs, type Machine, type Setup } from './model';
 
 /** Mains frequency of the invented plant, Hz (a 50 Hz country). */
 const MAINS_HZ = 50;
@@ -25,13 +25,20 @@ export const exampleSetup: Setup = {
   parts: [
     {
       name: 'Drive motor shaft (key mark)',
+      kind: 'disc',
       speedRpm: MOTOR_RPM,
       features: 1,
       tolerancePercent: 1,
       motor: { mainsHz: MAINS_HZ, poles: MOTOR_POLES, slipPercent: MOTOR_SLIP_PERCENT },
     },
     // A V-belt creeps and slips a little under load: ±2 % is common practice for a belt drive.
-    { name: 'Cooler fan (8 blades)', speedRpm: FAN_RPM, features: 8, tolerancePercent: 2 },
+    {
+      name: 'Cooler fan (8 blades)',
+      kind: 'fan',
+      speedRpm: FAN_RPM,
+      features: 8,
+      tolerancePercent: 2,
+    },
   ],
   activePart: 1,
   samplerKind: 'strobe',
@@ -41,6 +48,9 @@ export const exampleSetup: Setup = {
   lighting: { mainsHz: MAINS_HZ, flicker: 'double', customHz: 300, modulationPercent: 30 },
   creepRpm: 2,
 };
+
+/** Where the invented example machine stands. */
+export const EXAMPLE_SITE = 'Brackenfold Feed Mill, pellet line 2';
 
 /** Name of the example machine in the list. */
 export const EXAMPLE_MACHINE_NAME = 'Example: cooler fan, pellet line 2';
@@ -59,9 +69,13 @@ export function createExampleMachine(id: string, nowIso: string): Machine {
   return {
     id,
     name: EXAMPLE_MACHINE_NAME,
+    site: EXAMPLE_SITE,
+    notes: EXAMPLE_NOTES,
+    assessedBy: '',
+    assessedOn: '',
     setup: structuredClone(exampleSetup),
+    tools: defaultToolInputs(),
     createdAt: nowIso,
     updatedAt: nowIso,
-    notes: EXAMPLE_NOTES,
   };
 }

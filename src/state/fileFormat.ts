@@ -1,10 +1,11 @@
 // Trueturn's own file for moving saved machines between devices (docs/file-format.md):
-//   { "format": "trueturn-machines", "version": 1, "exportedAt": ISO time, "machines": [...] }
+//   { "format": "trueturn-machines", "version": 2, "exportedAt": ISO time, "machines": [...] }
 // Reading is strict: any file that is not exactly this shape is refused with a message, and
 // nothing of a refused file is used. Older versions are upgraded step by step through
 // `migrations` before the strict check.
 
 import type { Machine } from './model';
+import { machineV1toV2 } from './upgrade';
 import {
   DataError,
   describe,
@@ -18,7 +19,7 @@ import {
 /** The `format` value that marks a Trueturn machines file. */
 export const FILE_FORMAT_NAME = 'trueturn-machines';
 /** The version this app writes, and the newest it reads. */
-export const FILE_FORMAT_VERSION = 1;
+export const FILE_FORMAT_VERSION = 2;
 /** Largest file accepted, in bytes of UTF-8 (1 MiB). */
 export const MAX_FILE_BYTES = 1024 * 1024;
 /** Most machines one file (and the saved list) may hold. */
@@ -32,7 +33,8 @@ export const MAX_MACHINES = 500;
  * Version 0 was a draft that never shipped in a release; it is kept so the upgrade path is
  * exercised by tests (docs/file-format.md, "Older versions"). Its machines had one `savedAt`
  * time instead of `createdAt`/`updatedAt`, `notes` could be left out, and the file had no
- * `exportedAt`.
+ * `exportedAt`. Version 1 machines were a named set-up with notes; version 2 adds the site, the
+ * report header (assessed by, assessed on) and every tool's inputs (upgrade.ts).
  */
 export const migrations: Readonly<Record<number, (file: unknown) => unknown>> = {
   0: (file: unknown): unknown => {
@@ -56,6 +58,12 @@ export const migrations: Readonly<Record<number, (file: unknown) => unknown>> = 
       .filter((t): t is string => typeof t === 'string' && Number.isFinite(Date.parse(t)));
     const exportedAt = times.length > 0 ? times.sort().at(-1) : new Date(0).toISOString();
     return { format: f.format, version: 1, exportedAt, machines };
+  },
+  1: (file: unknown): unknown => {
+    const f = readRecord(file, 'file', ['format', 'version', 'exportedAt', 'machines']);
+    const list = readList(f.machines, 'machines', 0, MAX_MACHINES, 'machines');
+    const machines = list.map((m, i) => machineV1toV2(m, `machine ${i + 1}`));
+    return { format: f.format, version: 2, exportedAt: f.exportedAt, machines };
   },
 };
 

@@ -1,7 +1,8 @@
 // The data-logger planner's entries (the machine's tones, sample rate, anti-alias filter,
 // converter bits) and its plan, from the core's loggerPlan (docs/physics.md §9). The shaft speed is
-// the set-up's chosen part; the rest lives here for the session.
-import { batch, computed, signal } from '@preact/signals';
+// read from the set-up's chosen part, never written; the entries live in toolInputs.ts and are
+// saved with the machine.
+import { batch, computed } from '@preact/signals';
 import {
   loggerPlan,
   type AntiAliasFilter,
@@ -9,67 +10,53 @@ import {
   type LoggerProposal,
   type MachineTones,
 } from '../core';
-import { corePartOf, type PartSpec } from './model';
+import { corePartOf, defaultLoggerInputs, type PartSpec } from './model';
 import { keepLastGood } from './outcome';
 import { activePart } from './setup';
+import {
+  capacitanceF,
+  converterBits,
+  extraTonesHz,
+  filterCutoffHz,
+  filterKind,
+  filterOrder,
+  gearTeeth,
+  harmonics,
+  bladeCounts,
+  rcCutoffHz,
+  rcGiven,
+  resistanceOhm,
+  sampleHz,
+  setToolInputs,
+  toolInputs,
+} from './toolInputs';
 
 export type FilterKind = AntiAliasFilter['kind'];
 
-/** What the planner starts with (judgements for a first look, not recommendations). */
+/** What the planner starts with (model/tools.ts), under the names the screens use. */
 export const defaultLoggerEntries = {
-  /** Shaft harmonics 1× … 4×: looseness and misalignment show up to about there (common practice). */
-  harmonics: 4,
-  /** null: the chosen part's blade count (when it has more than one feature). */
-  blades: null as number[] | null,
-  gearTeeth: [] as number[],
-  extraTonesHz: [] as number[],
-  /** A round rate many loggers offer, Hz. */
-  sampleHz: 1000,
-  filterKind: 'none' as FilterKind,
-  /** How an RC stage is given: its cutoff, or R and C. */
-  rcGiven: 'cutoff' as 'cutoff' | 'parts',
-  rcCutoffHz: 200,
-  /** 10 kΩ and 100 nF: fc = 1/(2π·10e3·100e-9) = 159.15 Hz. */
-  resistanceOhm: 10_000,
-  capacitanceF: 100e-9,
-  order: 4,
-  cutoffHz: 200,
-  /** A common converter width. */
-  bits: 16,
-};
+  ...defaultLoggerInputs,
+} as const;
 
-export const harmonics = signal(defaultLoggerEntries.harmonics);
-export const bladeCounts = signal<number[] | null>(defaultLoggerEntries.blades);
-export const gearTeeth = signal<number[]>([...defaultLoggerEntries.gearTeeth]);
-export const extraTonesHz = signal<number[]>([...defaultLoggerEntries.extraTonesHz]);
-export const sampleHz = signal(defaultLoggerEntries.sampleHz);
-export const filterKind = signal<FilterKind>(defaultLoggerEntries.filterKind);
-export const rcGiven = signal<'cutoff' | 'parts'>(defaultLoggerEntries.rcGiven);
-export const rcCutoffHz = signal(defaultLoggerEntries.rcCutoffHz);
-export const resistanceOhm = signal(defaultLoggerEntries.resistanceOhm);
-export const capacitanceF = signal(defaultLoggerEntries.capacitanceF);
-export const filterOrder = signal(defaultLoggerEntries.order);
-export const filterCutoffHz = signal(defaultLoggerEntries.cutoffHz);
-export const converterBits = signal(defaultLoggerEntries.bits);
+export {
+  bladeCounts,
+  capacitanceF,
+  converterBits,
+  extraTonesHz,
+  filterCutoffHz,
+  filterKind,
+  filterOrder,
+  gearTeeth,
+  harmonics,
+  rcCutoffHz,
+  rcGiven,
+  resistanceOhm,
+  sampleHz,
+} from './toolInputs';
 
 /** Puts the planner back to its starting entries. */
 export function resetLoggerEntries(): void {
-  const d = defaultLoggerEntries;
-  batch(() => {
-    harmonics.value = d.harmonics;
-    bladeCounts.value = d.blades;
-    gearTeeth.value = [...d.gearTeeth];
-    extraTonesHz.value = [...d.extraTonesHz];
-    sampleHz.value = d.sampleHz;
-    filterKind.value = d.filterKind;
-    rcGiven.value = d.rcGiven;
-    rcCutoffHz.value = d.rcCutoffHz;
-    resistanceOhm.value = d.resistanceOhm;
-    capacitanceF.value = d.capacitanceF;
-    filterOrder.value = d.order;
-    filterCutoffHz.value = d.cutoffHz;
-    converterBits.value = d.bits;
-  });
+  setToolInputs({ ...toolInputs.peek(), logger: structuredClone(defaultLoggerInputs) });
 }
 
 /** The blade counts in use: the ones typed, else the part's own features when it has several. */

@@ -1,94 +1,132 @@
-// The session: where the set-up on screen comes from when the page opens (a share link, the
-// last visit, the default), keeping it across reloads, and what the page says about that.
-import { computed, effect, signal } from '@preact/signals';
+// The session: where the machine on screen comes from when the page opens (a share link, the
+// last visit's working copy, a fresh machine), share links opened while the app is open, and
+// what the page says about them. A refused link never replaces what was on screen.
+import { computed, signal } from '@preact/signals';
 import { loadMachines, machines } from './machines';
-import { defaultSetup, type Setup } from './model';
-import { replaceSetup, setup } from './setup';
-import { decodeShareFragment } from './shareLink';
-import { loadCurrentSetup, openStore, saveCurrentSetup } from './storage';
+import type { MachineContent } from './model';
+import { decodeShareFragment, type DecodeShareResult } from './shareLink';
+import { loadAll, openStore, type WorkRecord } from './store';
+import { header, keepWork, loadWork, openMachineId, workRecord } from './work';
 
-/** The saved machine the set-up was opened from (null = none, or it was deleted). */
-export const openMachineId = signal<string | null>(null);
+export { openMachineId } from './work';
 
-/** Name of the open machine, or undefined when the set-up is not one of the saved machines (report headers). */
+/** Name of the machine on screen, or undefined while it has none (report headers). */
 export const openMachineName = computed<string | undefined>(
-  () => machines.value.find((m) => m.id === openMachineId.value)?.name,
+  () => header.value.name.trim() || undefined,
 );
 
 /** A message about how the session opened (a refused share link), for the top of the screen. */
 export const sessionMessage = signal<{ kind: 'info' | 'problem'; text: string } | null>(null);
 
+/** A shared machine opened while the app was open, offered before it replaces anything. */
+export const offeredShare = signal<MachineContent | null>(null);
+
 /** True once storage has been opened (or found unusable), so its status is worth showing. */
 export const storageOpened = signal(false);
 
-/** Where the starting set-up comes from: the page address, and the last set-up kept on the device. */
+/** Where the starting machine comes from: the page address, and the working copy kept on the device. */
 export interface SessionSources {
   /** The page address fragment (location.hash). */
   hash: string;
   /** Reads the share fragment (src/state/shareLink.ts). */
-  decodeShare: (hash: string) => { ok: true; setup: Setup } | { ok: false; error: string | null };
-  /** The set-up kept from the last visit, if any (src/state/storage.ts). */
-  loadLast: () => Promise<Setup | null>;
+  decodeShare: (hash: string) => DecodeShareResult;
+  /** The working copy kept from the last visit, if any (src/state/store). */
+  loadLast: () => Promise<WorkRecord | null>;
   /** Removes the share data from the address once read, so a reload does not reopen it over later changes. */
   clearHash: () => void;
 }
 
+function sharedName(content: MachineContent): string {
+  return content.name.trim() ? `"${content.name.trim()}"` : 'a shared machine';
+}
+
 /**
- * Picks the starting set-up: a share link wins; a refused link shows its message and the
- * default set-up; otherwise the set-up from the last visit, else the default. A set-up the
- * user already changed (it is no longer `untouched`, the one the page opened with) is left alone.
+ * Picks the starting machine: a share link wins; a refused link says why and leaves what was
+ * there (the last visit's working copy, or what is on screen); otherwise the last visit's
+ * working copy. A machine the user already changed (the working copy is no longer `untouched`,
+ * the one the page opened with) is left alone.
  */
 export async function openSession(
   sources: SessionSources,
-  untouched: Setup = setup.peek(),
+  untouched: WorkRecord = workRecord.peek(),
 ): Promise<void> {
   const shared = sources.decodeShare(sources.hash);
   if (shared.ok) {
-    replaceSetup(shared.setup);
-    openMachineId.value = null;
+    loadWork(shared.content, null, null);
     sessionMessage.value = {
       kind: 'info',
-      text: 'Opened a shared set-up. Save it as a machine to keep it.',
+      text: `Opened ${sharedName(shared.content)} from a share link. Save it as a machine to keep it.`,
     };
     sources.clearHash();
     return;
   }
   if (shared.error !== null) {
-    replaceSetup(defaultSetup);
     sessionMessage.value = {
       kind: 'problem',
-      text: `${shared.error} The default set-up is shown instead.`,
+      text: `${shared.error} Nothing was replaced: what you had on screen is kept.`,
     };
     sources.clearHash();
-    return;
   }
   const last = await sources.loadLast();
-  if (last && setup.peek() === untouched) replaceSetup(last);
+  if (last && workRecord.peek() === untouched) loadWork(last.content, last.openId, last.baseVersion);
 }
 
 /**
- * Opens the session for real: storage, the share link in the address, the last set-up;
- * then keeps every change of the set-up on the device, and loads the saved machines.
+ * A share link opened while the app is open (the address changed): a good one is offered, not
+ * opened over what is on screen; a refused one says why and changes nothing.
+ */
+export function offerShare(hash: string, clearHash: () => void): void {
+  const shared = decodeShareFragment(hash);
+  if (!shared.ok && shared.error === null) return;
+  clearHash();
+  if (!shared.ok) {
+    sessionMessage.value = {
+      kind: 'problem',
+      text: `${shared.error} Nothing was replaced: what you had on screen is kept.`,
+    };
+    return;
+  }
+  offeredShare.value = shared.content;
+}
+
+/** Opens the offered shared machine in place of what is on screen. */
+export function acceptOfferedShare(): void {
+  const content = offeredShare.peek();
+  if (!content) return;
+  loadWork(content, null, null);
+  offeredShare.value = null;
+  sessionMessage.value = {
+    kind: 'info',
+    text: `Opened ${sharedName(content)} from a share link. Save it as a machine to keep it.`,
+  };
+}
+
+/**
+ * Opens the session for real: keeps the working copy from the first keystroke, opens storage,
+ * reads the share link in the address or the last visit's working copy, loads the saved
+ * machines, and listens for share links opened later.
  */
 export async function startSession(): Promise<void> {
   // What the page opened with: anything typed while storage opens must win over the last visit,
-  // and must be kept from the first keystroke (a reload a moment later must not lose it). Until
-  // something changes, nothing is written, so the last visit's set-up is there to be read.
-  const untouched = setup.peek();
-  effect(() => {
-    const current = setup.value;
-    if (current !== untouched) void saveCurrentSetup(current);
-  });
+  // and is kept from the first keystroke (a reload a moment later must not lose it).
+  const untouched = workRecord.peek();
+  keepWork();
+  const clearHash = () =>
+    history.replaceState(history.state, '', location.pathname + location.search);
+  addEventListener('hashchange', () => offerShare(location.hash, clearHash));
   await openStore();
   storageOpened.value = true;
   await openSession(
     {
       hash: location.hash,
       decodeShare: decodeShareFragment,
-      loadLast: loadCurrentSetup,
-      clearHash: () => history.replaceState(history.state, '', location.pathname + location.search),
+      loadLast: async () => (await loadAll()).work,
+      clearHash,
     },
     untouched,
   );
   await loadMachines();
+  // A working copy opened from a machine deleted meanwhile is no longer one of the saved ones.
+  const id = openMachineId.peek();
+  if (id !== null && !machines.peek().some((m) => m.id === id)) openMachineId.value = null;
 }

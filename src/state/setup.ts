@@ -8,7 +8,9 @@ import {
   defaultSetup,
   type CameraSpec,
   type LightingSpec,
+  type PartKind,
   type PartSpec,
+  type WheelSpec,
   type SamplerKind,
   type Setup,
   type SpeedUnit,
@@ -44,11 +46,42 @@ function updatePart(change: (part: PartSpec) => PartSpec): void {
   setup.value = { ...s, parts };
 }
 
-/** Speed typed directly: the part no longer follows a motor's nameplate, a drive or a wheel. */
+/**
+ * Speed typed directly: the part no longer follows a motor or a drive, and no recorded origin
+ * holds any more (a wheel keeps its road speed and tyre, to apply again).
+ */
 export function setSpeedRpm(rpm: number): void {
   updatePart((p) => {
-    const { motor: _motor, drive: _drive, wheel: _wheel, ...rest } = p;
+    const { motor: _motor, drive: _drive, origin: _origin, ...rest } = p;
     return { ...rest, speedRpm: rpm };
+  });
+}
+
+/**
+ * The kind of the chosen part (its words and form). A wheel gets a road speed and tyre to apply
+ * (the everyday car size of `defaultWheelInputs`); another kind drops them. The speed stays.
+ */
+export function setKind(kind: PartKind): void {
+  updatePart((p) => {
+    const { wheel, ...rest } = p;
+    if (kind !== 'wheel') return { ...rest, kind };
+    const { motor: _motor, drive: _drive, ...free } = rest;
+    return { ...free, kind, wheel: wheel ?? { ...defaultWheelInputs } };
+  });
+}
+
+/** A wheel's road speed and tyre when a part first becomes one: 50 km/h on 205/55R16 (an everyday car size; our choice). */
+export const defaultWheelInputs: WheelSpec = {
+  groundSpeed: 50,
+  unit: 'km/h',
+  tyreSize: '205/55R16',
+};
+
+/** The chosen wheel's road speed and tyre; its speed waits until the user applies what they give. */
+export function setWheel(wheel: WheelSpec): void {
+  updatePart((p) => {
+    const { motor: _motor, drive: _drive, ...rest } = p;
+    return { ...rest, wheel: { ...wheel } };
   });
 }
 
@@ -76,7 +109,7 @@ export function setMotor(motor: PartSpec['motor'] | undefined): void {
     const sign = p.speedRpm < 0 ? -1 : 1;
     const rpm = motorSpeedHz(motor.mainsHz, motor.poles, motor.slipPercent / 100) * 60;
     // A part takes its speed from one source only (src/state/validate.ts).
-    const { drive: _drive, wheel: _wheel, ...rest } = p;
+    const { drive: _drive, wheel: _wheel, origin: _origin, ...rest } = p;
     return { ...rest, motor: { ...motor }, speedRpm: sign * rpm };
   });
 }

@@ -1,14 +1,18 @@
-// Share a set-up as a link: the set-up travels in the page address after "#", so it never
-// reaches a server. Fragment layout (docs/file-format.md, "Share links"):
-//   #s=<version>.<set-up as JSON, UTF-8, base64url without padding>
-// e.g. "#s=1.eyJwYXJ0cyI6…". Whatever a link holds is untrusted: it is decoded strictly and
-// goes through validateSetup; callers show names from it as text, never as markup.
+// Share a machine as a link: the whole machine on screen (its name, site, notes, parts, sampler
+// and every tool's inputs) travels in the page address after "#", so it never reaches a server.
+// Fragment layout (docs/file-format.md, "Share links"):
+//   #s=<version>.<machine content as JSON, UTF-8, base64url without padding>
+// e.g. "#s=2.eyJuYW1lIjo…". Version 1 links carried a set-up only and still open. Whatever a
+// link holds is untrusted: it is decoded strictly and goes through validateContent; callers show
+// names from it as text, never as markup.
 
-import type { Setup } from './model';
-import { DataError, validateSetup } from './validate';
+import { blankHeader, defaultToolInputs, type MachineContent } from './model';
+import { DataError, validateContent, validateSetup } from './validate';
 
-/** Version of the link payload this app writes and reads. */
-export const SHARE_LINK_VERSION = 1;
+/** Version of the link payload this app writes; it reads this one and version 1. */
+export const SHARE_LINK_VERSION = 2;
+/** Oldest link payload this app still reads (a set-up only). */
+export const OLDEST_SHARE_LINK_VERSION = 1;
 /** Longest share payload accepted or made, in characters after "s=" (8 KiB). */
 export const MAX_SHARE_CHARS = 8 * 1024;
 /**
@@ -20,31 +24,33 @@ export const MAX_FRAGMENT_CHARS = 2 * MAX_SHARE_CHARS;
 const FIELD = 's';
 
 /**
- * The fragment ("#s=1.…") that carries `setup`. The set-up is checked and copied field by field
- * first, so only known fields travel.
- * Throws DataError if the set-up is invalid or too large for a link (MAX_SHARE_CHARS).
+ * The fragment ("#s=2.…") that carries a machine's content. It is checked and copied field by
+ * field first, so only known fields travel.
+ * Throws DataError if it is invalid or too large for a link (MAX_SHARE_CHARS).
  */
-export function encodeShareFragment(setup: Setup): string {
-  const clean = validateSetup(setup);
+export function encodeShareFragment(content: MachineContent): string {
+  const clean = validateContent(content);
   const payload = `${SHARE_LINK_VERSION}.${toBase64Url(new TextEncoder().encode(JSON.stringify(clean)))}`;
   if (payload.length > MAX_SHARE_CHARS) {
     throw new DataError(
       'set-up',
-      'This set-up is too large to share as a link (too many parts or long names); export it as a file instead.',
+      'This machine is too large to share as a link (too many parts, readings or long notes); export it as a file instead.',
     );
   }
   return `#${FIELD}=${payload}`;
 }
 
-/** What a page address fragment held: a checked set-up, a refusal, or no share data at all. */
+/** What a page address fragment held: a checked machine, a refusal, or no share data at all. */
 export type DecodeShareResult =
-  { ok: true; setup: Setup } | { ok: false; error: string } | { ok: false; error: null };
+  | { ok: true; content: MachineContent }
+  | { ok: false; error: string }
+  | { ok: false; error: null };
 
 const BROKEN = 'This share link is damaged or cut short; ask for the link again.';
 const TOO_LONG = 'This share link is too long to be a Trueturn link; it was not opened.';
 
 /**
- * Reads a set-up from a page address fragment (`location.hash`, with or without "#").
+ * Reads a machine from a page address fragment (`location.hash`, with or without "#").
  * Never throws. `error: null` means the fragment carries no share data (nothing to report);
  * a string error is a message for the user (tampered, truncated, too long, newer version,
  * invalid set-up).
@@ -58,12 +64,12 @@ export function decodeShareFragment(hash: string): DecodeShareResult {
   const m = /^(\d{1,6})\.([A-Za-z0-9_-]+)$/.exec(payload);
   if (!m) return { ok: false, error: BROKEN };
   const version = Number(m[1]);
-  if (version !== SHARE_LINK_VERSION) {
+  if (version > SHARE_LINK_VERSION || version < OLDEST_SHARE_LINK_VERSION) {
     const newer =
       version > SHARE_LINK_VERSION ? ' It was made by a newer Trueturn: update this app.' : '';
     return {
       ok: false,
-      error: `This share link is version ${version}; this app reads version ${SHARE_LINK_VERSION}.${newer}`,
+      error: `This share link is version ${version}; this app reads versions ${OLDEST_SHARE_LINK_VERSION} to ${SHARE_LINK_VERSION}.${newer}`,
     };
   }
   const bytes = fromBase64Url(m[2]);
@@ -75,7 +81,11 @@ export function decodeShareFragment(hash: string): DecodeShareResult {
     return { ok: false, error: BROKEN };
   }
   try {
-    return { ok: true, setup: validateSetup(parsed, 'link') };
+    if (version === 1) {
+      const setup = validateSetup(parsed, 'link');
+      return { ok: true, content: { ...blankHeader(), setup, tools: defaultToolInputs() } };
+    }
+    return { ok: true, content: validateContent(parsed, 'link') };
   } catch (e) {
     if (e instanceof DataError)
       return { ok: false, error: `This share link was refused: ${e.message}` };

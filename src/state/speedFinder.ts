@@ -1,7 +1,7 @@
 // The speed finder: what the technician recorded at the strobe, what they expect, and the next
 // step of the usual procedure from the core's speedFinderSteps (docs/physics.md §7). The readings
 // live here, outside the screen, so changing tabs loses none of them.
-import { computed, signal } from '@preact/signals';
+import { computed } from '@preact/signals';
 import {
   InputError,
   motorExpectedRange,
@@ -9,65 +9,36 @@ import {
   type Range,
   type SpeedFinderStep,
 } from '../core';
+import { setupWithDerivedSpeed } from './derivedSpeed';
+import { deriveParts, speedSourceOf } from './driveChain';
+import { saveMachine, updateMachine, type SaveResult } from './machines';
 import {
-  deriveParts,
-  speedSourceOf,
-  withChainSpeeds,
-  withPartFields,
-  withSpeedSource,
-} from './driveChain';
-import { saveMachine, updateMachine } from './machines';
-import { partLabel, type Machine, type Setup, activeIndex } from './model';
+  defaultExpectation,
+  partLabel,
+  type Expectation,
+  type OriginMethod,
+  type Setup,
+  activeIndex,
+} from './model';
 import { keepLastGood } from './outcome';
 import { activePart, setSamplerKind, setStrobeRateFpm, setup } from './setup';
-import { openMachineId } from './session';
+import {
+  expectation,
+  finderFeatures,
+  readingId,
+  readings,
+  type RecordedReading,
+} from './toolInputs';
+import { markSaved, openBaseVersion, openMachineId, workContent } from './work';
 
-/** A reading: at rateFpm flashes per minute, `images` images stood still (1 = a single image). */
-export interface RecordedReading {
-  /** Stable key for the table row. */
-  id: number;
-  rateFpm: number;
-  images: number;
-}
+export type { Expectation, RecordedReading };
+export { defaultExpectation, expectation, finderFeatures, readings };
 
 /** Most images a technician is asked to count: beyond about eight nobody counts them reliably (a judgement). */
 export const MAX_IMAGES_SEEN = 8;
 
-/** What the technician expects of the speed: nothing, a range in rpm, or a motor's nameplate. */
-export interface Expectation {
-  mode: 'none' | 'rpm' | 'motor';
-  fromRpm: number;
-  toRpm: number;
-  mainsHz: 50 | 60;
-  poles: number;
-  /** Slip range of the motor, percent of synchronous speed (loaded to unloaded). */
-  minSlipPercent: number;
-  maxSlipPercent: number;
-}
-
-/**
- * Until the technician types one: a motor slips between 0 % (unloaded) and 5 % (full load),
- * motorExpectedRange's default (common practice; Engineering ToolBox's typical speeds are 1.7–4 %).
- */
-export const defaultExpectation: Expectation = {
-  mode: 'none',
-  fromRpm: 1000,
-  toRpm: 2000,
-  mainsHz: 50,
-  poles: 4,
-  minSlipPercent: 0,
-  maxSlipPercent: 5,
-};
-
-export const readings = signal<RecordedReading[]>([]);
-/** Features counted on the part; null follows the chosen part of the set-up. */
-export const finderFeatures = signal<number | null>(null);
-export const expectation = signal<Expectation>({ ...defaultExpectation });
-
-let nextId = 1;
-
 export function addReading(rateFpm: number, images: number): void {
-  readings.value = [...readings.value, { id: nextId++, rateFpm, images }];
+  readings.value = [...readings.value, { id: readingId(), rateFpm, images }];
 }
 
 export function changeReading(id: number, change: Partial<Omit<RecordedReading, 'id'>>): void {
@@ -140,14 +111,17 @@ export type SpeedChange =
 
 /**
  * The set-up with the chosen part turning at the speed found, and what changed. A strobe
- * cannot tell direction, so the part keeps its own; the speed is now a measured (typed) one,
- * no longer taken from a motor, a drive or a wheel; parts it drives follow it.
+ * cannot tell direction, so the part keeps its own; the speed is applied as the part's own
+ * (applyDerivedSpeed's step), with where it came from, no longer taken from a motor or a drive;
+ * parts it drives follow it.
  * @example withMeasuredSpeed(defaultSetup, 29.5, 6).changes // [{ kind: 'speed', part: 'Fan', fromRpm: 1770, toRpm: 1770 }]
  */
 export function withMeasuredSpeed(
   s: Setup,
   speedHz: number,
   features: number,
+  method: OriginMethod = 'strobe',
+  at?: string,
 ): { setup: Setup; changes: SpeedChange[] } {
   const index = activeIndex(s);
   const before = s.parts[index];
@@ -157,15 +131,17 @@ export function withMeasuredSpeed(
   const changes: SpeedChange[] = [{ kind: 'speed', part, fromRpm: before.speedRpm, toRpm: rpm }];
   const source = speedSourceOf(before);
   if (source === 'motor') changes.push({ kind: 'leaves-motor', part });
-  if (source === 'wheel') changes.push({ kind: 'leaves-wheel', part });
   if (source === 'drive' && before.drive) {
     changes.push({ kind: 'leaves-drive', part, driver: partLabel(s, before.drive.from) });
   }
   if (features !== before.features)
     changes.push({ kind: 'features', part, from: before.features, to: features });
-  let next = withPartFields(withSpeedSource(s, index, 'typed'), index, { speedRpm: rpm, features });
+  const next = setupWithDerivedSpeed(s, index, {
+    speedRpm: rpm,
+    features,
+    origin: { method, detail: { features }, at },
+  });
   try {
-    next = withChainSpeeds(next);
     const beforeParts = deriveParts(s);
     next.parts.forEach((p, i) => {
       const was = beforeParts[i].speedHz * 60;
@@ -192,29 +168,34 @@ export type SaveTarget = { kind: 'open' } | { kind: 'new'; name: string } | { ki
 export interface SavedSpeed {
   changes: SpeedChange[];
   machineName: string | null;
+  /** What the store did with the machine (absent for the set-up only). */
+  saved?: SaveResult;
 }
 
 /**
- * Puts the speed found into the set-up on screen and keeps it as asked. Throws DataError,
- * changing nothing, for a machine name or set-up the saved list refuses, or an open machine
- * that was deleted meanwhile.
+ * Applies the speed found to the chosen part of the machine on screen (with where it came from:
+ * the strobe, or `method` — 'sound' for a speed found by ear) and keeps it as asked. This is the
+ * speed finder's one entry point for a found speed. Throws DataError, changing nothing, for a
+ * machine name or set-up the saved list refuses, or an open machine that was deleted meanwhile.
  */
 export async function saveFoundSpeed(
   speedHz: number,
   features: number,
   target: SaveTarget,
+  method: OriginMethod = 'strobe',
 ): Promise<SavedSpeed> {
-  const { setup: next, changes } = withMeasuredSpeed(setup.peek(), speedHz, features);
-  let machine: Machine | null = null;
+  const { setup: next, changes } = withMeasuredSpeed(setup.peek(), speedHz, features, method);
+  const content = { ...workContent.peek(), setup: next };
+  let saved: SaveResult | undefined;
   if (target.kind === 'open') {
     const id = openMachineId.peek();
     if (id === null)
       throw new InputError('machine', 'No saved machine is open: give a name to save a new one.');
-    machine = await updateMachine(id, next);
+    saved = await updateMachine(id, content, openBaseVersion.peek());
   } else if (target.kind === 'new') {
-    machine = await saveMachine(target.name, next);
-    openMachineId.value = machine.id;
+    saved = await saveMachine(target.name, { ...content, name: target.name });
+    markSaved(saved.machine.id, 'version' in saved.outcome ? saved.outcome.version : null);
   }
   setup.value = next;
-  return { changes, machineName: machine ? machine.name : null };
+  return { changes, machineName: saved ? saved.machine.name : null, saved };
 }

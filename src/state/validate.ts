@@ -10,26 +10,35 @@
 // Results are always built from fresh object literals, never by spreading or assigning the
 // input, so nothing hidden in the input (prototype tricks, extra fields) survives the check.
 
-import type {
-  CameraSpec,
-  LightingSpec,
-  Machine,
-  PartDrive,
-  PartSpec,
-  Setup,
-  StrobeSpec,
-  WheelSpec,
+import {
+  DataError,
+  MAX_NAME_CHARS,
+  MAX_NOTES_CHARS,
+  aboveZero,
+  between,
+  finite,
+  oneOf,
+  pathTo,
+  plainText,
+  readList,
+  readRecord,
+  validateIsoTime,
+  whole,
+  describe,
+} from './read';
+import { originFrom, toolsFrom } from './validateTools';
+import {
+  PART_KINDS,
+  type CameraSpec,
+  type LightingSpec,
+  type Machine,
+  type MachineContent,
+  type PartDrive,
+  type PartSpec,
+  type Setup,
+  type StrobeSpec,
+  type WheelSpec,
 } from './model';
-
-/** Refused outside data. `path` says where ("machine 3 › parts › 1 › features"). */
-export class DataError extends Error {
-  readonly path: string;
-  constructor(path: string, message: string) {
-    super(message);
-    this.name = 'DataError';
-    this.path = path;
-  }
-}
 
 /** Most parts one set-up may hold: enough for a drive train, small enough to fit a share link. */
 export const MAX_PARTS = 20;
@@ -43,186 +52,6 @@ export function requirePartRoom(s: Setup): void {
     );
   }
 }
-/** Longest name of a machine or part, in characters. */
-export const MAX_NAME_CHARS = 80;
-/** Longest crew note of a machine, in characters. */
-export const MAX_NOTES_CHARS = 2000;
-
-/** Keys that could reach an object's prototype if some later code copied the data carelessly. */
-const HOSTILE_KEYS: ReadonlySet<string> = new Set(['__proto__', 'constructor', 'prototype']);
-
-/** Joins a path and a field name: "machine 3" + "parts" → "machine 3 › parts". */
-export function pathTo(path: string, field: string | number): string {
-  return typeof field === 'number' ? `${path} › ${field + 1}` : `${path} › ${field}`;
-}
-
-/**
- * Reads `x` as a plain group of fields holding exactly the `required` keys and any of the
- * `optional` ones. Returns the own values in a prototype-free record (read it, never return it).
- * Throws DataError for anything else: not an object, an array, an unknown, hostile or missing key,
- * an accessor instead of a plain value.
- * @example readRecord({ a: 1 }, 'file', ['a']).a // 1
- */
-export function readRecord(
-  x: unknown,
-  path: string,
-  required: readonly string[],
-  optional: readonly string[] = [],
-): Record<string, unknown> {
-  if (typeof x !== 'object' || x === null || Array.isArray(x)) {
-    throw new DataError(path, `${path} must be a group of fields {…} (got ${describe(x)}).`);
-  }
-  const proto: unknown = Object.getPrototypeOf(x);
-  if (proto !== Object.prototype && proto !== null) {
-    throw new DataError(path, `${path} must be a plain group of fields.`);
-  }
-  const out: Record<string, unknown> = Object.create(null) as Record<string, unknown>;
-  for (const key of Reflect.ownKeys(x)) {
-    if (typeof key !== 'string') throw new DataError(path, `${path} holds a field without a name.`);
-    if (HOSTILE_KEYS.has(key)) {
-      throw new DataError(
-        path,
-        `${path} contains a field called "${key}", which is never allowed in Trueturn data.`,
-      );
-    }
-    if (!required.includes(key) && !optional.includes(key)) {
-      throw new DataError(path, `${path} has a field this app does not know: ${quoteKey(key)}.`);
-    }
-    const d = Object.getOwnPropertyDescriptor(x, key);
-    if (!d || !('value' in d)) throw new DataError(path, `${path} › ${key} must be plain data.`);
-    // An optional field stored as undefined (possible in a browser store) counts as absent.
-    if (d.value === undefined && optional.includes(key)) continue;
-    out[key] = d.value;
-  }
-  for (const key of required) {
-    if (!(key in out)) throw new DataError(pathTo(path, key), `${pathTo(path, key)} is missing.`);
-  }
-  return out;
-}
-
-/**
- * Reads `x` as a list of `min` to `max` items and returns a fresh array of them.
- * `what` names the items in the message ("parts", "machines").
- * @example readList([1, 2], 'set-up › parts', 1, 20, 'parts') // [1, 2]
- */
-export function readList(
-  x: unknown,
-  path: string,
-  min: number,
-  max: number,
-  what: string,
-): unknown[] {
-  if (!Array.isArray(x) || Object.getPrototypeOf(x) !== Array.prototype) {
-    throw new DataError(path, `${path} must be a list […] (got ${describe(x)}).`);
-  }
-  if (x.length < min || x.length > max) {
-    throw new DataError(path, `${path} must hold ${min} to ${max} ${what} (it holds ${x.length}).`);
-  }
-  const out: unknown[] = [];
-  for (let i = 0; i < x.length; i++) {
-    const d = Object.getOwnPropertyDescriptor(x, i);
-    if (!d || !('value' in d))
-      throw new DataError(pathTo(path, i), `${pathTo(path, i)} is missing.`);
-    out.push(d.value);
-  }
-  return out;
-}
-
-/** A finite number, or DataError. */
-function finite(x: unknown, path: string): number {
-  if (typeof x !== 'number' || !Number.isFinite(x)) {
-    throw new DataError(path, `${path} must be a number (got ${describe(x)}).`);
-  }
-  return x;
-}
-
-/** A finite number in [min, max]. */
-function between(x: unknown, path: string, min: number, max: number): number {
-  const v = finite(x, path);
-  if (v < min || v > max) {
-    throw new DataError(path, `${path} must be a number from ${min} to ${max} (got ${v}).`);
-  }
-  return v;
-}
-
-/** A finite number in (0, max]. */
-function aboveZero(x: unknown, path: string, max: number): number {
-  const v = finite(x, path);
-  if (v <= 0 || v > max) {
-    throw new DataError(path, `${path} must be a number above 0 and at most ${max} (got ${v}).`);
-  }
-  return v;
-}
-
-/** A whole number in [min, max]. */
-function whole(x: unknown, path: string, min: number, max: number): number {
-  const v = finite(x, path);
-  if (!Number.isInteger(v) || v < min || v > max) {
-    throw new DataError(path, `${path} must be a whole number from ${min} to ${max} (got ${v}).`);
-  }
-  return v;
-}
-
-/** One of the listed values. */
-function oneOf<T extends string | number>(x: unknown, path: string, allowed: readonly T[]): T {
-  const found = allowed.find((a) => a === x);
-  if (found === undefined) {
-    const list = allowed.map((a) => (typeof a === 'string' ? `"${a}"` : String(a))).join(', ');
-    throw new DataError(path, `${path} must be one of ${list} (got ${describe(x)}).`);
-  }
-  return found;
-}
-
-// Characters refused in names and notes: control characters (line breaks are allowed in notes
-// only), unpaired surrogates (not valid text, they would not survive UTF-8), the direction
-// overrides that can make text display differently from what it holds, and line/paragraph
-// separators.
-const FORBIDDEN_IN_NAME = /[\p{Cc}\p{Cs}\u2028\u2029\u202A-\u202E\u2066-\u2069]/u;
-const FORBIDDEN_IN_NOTES = /[\p{Cs}\u2028\u2029\u202A-\u202E\u2066-\u2069]|(?![\t\n\r])\p{Cc}/u;
-
-/** Plain text of at most `maxChars` characters; `minChars` 1 also refuses a blank name. */
-function plainText(
-  x: unknown,
-  path: string,
-  minChars: 0 | 1,
-  maxChars: number,
-  allowLineBreaks = false,
-): string {
-  if (typeof x !== 'string')
-    throw new DataError(path, `${path} must be text (got ${describe(x)}).`);
-  if (minChars === 1 && x.trim() === '') throw new DataError(path, `${path} must not be blank.`);
-  const chars = [...x].length;
-  if (chars > maxChars) {
-    throw new DataError(path, `${path} must be at most ${maxChars} characters (it has ${chars}).`);
-  }
-  if ((allowLineBreaks ? FORBIDDEN_IN_NOTES : FORBIDDEN_IN_NAME).test(x)) {
-    const what = allowLineBreaks ? 'plain text' : 'plain text on one line';
-    throw new DataError(path, `${path} must be ${what}, without control or direction characters.`);
-  }
-  return x;
-}
-
-const ISO_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d{1,9})?)?(Z|[+-]\d{2}:\d{2})$/;
-
-/**
- * An ISO 8601 date and time with a zone, e.g. "2025-03-12T08:30:00.000Z", or DataError.
- * @example validateIsoTime('2025-03-12T08:30:00Z', 'exportedAt') // '2025-03-12T08:30:00Z'
- */
-export function validateIsoTime(x: unknown, path: string): string {
-  if (
-    typeof x !== 'string' ||
-    x.length > 40 ||
-    !ISO_TIME.test(x) ||
-    !Number.isFinite(Date.parse(x))
-  ) {
-    throw new DataError(
-      path,
-      `${path} must be a date and time such as "2025-03-12T08:30:00Z" (got ${describe(x)}).`,
-    );
-  }
-  return x;
-}
-
 const ID = /^[A-Za-z0-9_-]{1,100}$/;
 
 function partFrom(x: unknown, path: string, index: number): PartSpec {
@@ -230,10 +59,12 @@ function partFrom(x: unknown, path: string, index: number): PartSpec {
     x,
     path,
     ['name', 'speedRpm', 'features', 'tolerancePercent'],
-    ['motor', 'drive', 'wheel'],
+    ['kind', 'motor', 'drive', 'wheel', 'origin'],
   );
   const part: PartSpec = {
     name: plainText(r.name, pathTo(path, 'name'), 0, MAX_NAME_CHARS),
+    // Older data has no kind; it reads as 'other' (kindOf) and is written without one.
+    ...('kind' in r ? { kind: oneOf(r.kind, pathTo(path, 'kind'), PART_KINDS) } : {}),
     speedRpm: between(r.speedRpm, pathTo(path, 'speedRpm'), -1e7, 1e7),
     features: whole(r.features, pathTo(path, 'features'), 1, 100_000),
     tolerancePercent: between(r.tolerancePercent, pathTo(path, 'tolerancePercent'), 0, 50),
@@ -256,6 +87,7 @@ function partFrom(x: unknown, path: string, index: number): PartSpec {
   }
   if ('drive' in r) part.drive = driveFrom(r.drive, pathTo(path, 'drive'), index);
   if ('wheel' in r) part.wheel = wheelFrom(r.wheel, pathTo(path, 'wheel'));
+  if ('origin' in r) part.origin = originFrom(r.origin, pathTo(path, 'origin'));
   const sources = ['motor', 'drive', 'wheel'].filter((key) => key in r);
   if (sources.length > 1) {
     throw new DataError(
@@ -444,6 +276,34 @@ export function validateSetup(x: unknown, path = 'set-up'): Setup {
   return setupFrom(x, path, path);
 }
 
+/** The fields of a machine's content (machine.ts), and of a saved machine besides. */
+const CONTENT_KEYS = ['name', 'site', 'notes', 'assessedBy', 'assessedOn', 'setup', 'tools'];
+const MACHINE_KEYS = ['id', ...CONTENT_KEYS, 'createdAt', 'updatedAt'];
+
+const DAY = /^\d{4}-\d{2}-\d{2}$/;
+
+/** A day as YYYY-MM-DD, or '' for none. */
+function dayFrom(x: unknown, path: string): string {
+  if (x === '') return '';
+  if (typeof x !== 'string' || !DAY.test(x) || !Number.isFinite(Date.parse(`${x}T00:00:00Z`))) {
+    throw new DataError(path, `${path} must be a day such as "2025-03-12", or empty (got ${describe(x)}).`);
+  }
+  return x;
+}
+
+/** A machine's content read from a record whose other keys the caller has checked. */
+function contentFrom(r: Record<string, unknown>, path: string, nameMin: 0 | 1): MachineContent {
+  return {
+    name: plainText(r.name, pathTo(path, 'name'), nameMin, MAX_NAME_CHARS),
+    site: plainText(r.site, pathTo(path, 'site'), 0, MAX_NAME_CHARS),
+    notes: plainText(r.notes, pathTo(path, 'notes'), 0, MAX_NOTES_CHARS, true),
+    assessedBy: plainText(r.assessedBy, pathTo(path, 'assessedBy'), 0, MAX_NAME_CHARS),
+    assessedOn: dayFrom(r.assessedOn, pathTo(path, 'assessedOn')),
+    setup: setupFrom(r.setup, pathTo(path, 'setup'), path),
+    tools: toolsFrom(r.tools, pathTo(path, 'tools')),
+  };
+}
+
 /**
  * Checks a saved machine from outside (a file, a stored record) and returns a fresh copy.
  * `path` names it in messages (default "machine"); the set-up's fields are named directly
@@ -451,7 +311,7 @@ export function validateSetup(x: unknown, path = 'set-up'): Setup {
  * Throws DataError naming the first bad field.
  */
 export function validateMachine(x: unknown, path = 'machine'): Machine {
-  const r = readRecord(x, path, ['id', 'name', 'setup', 'createdAt', 'updatedAt', 'notes']);
+  const r = readRecord(x, path, MACHINE_KEYS);
   const idPath = pathTo(path, 'id');
   if (typeof r.id !== 'string' || !ID.test(r.id)) {
     throw new DataError(
@@ -459,14 +319,22 @@ export function validateMachine(x: unknown, path = 'machine'): Machine {
       `${idPath} must be 1 to 100 letters, digits, "-" or "_" (got ${describe(r.id)}).`,
     );
   }
+  const content = contentFrom(r, path, 1);
   return {
     id: r.id,
-    name: plainText(r.name, pathTo(path, 'name'), 1, MAX_NAME_CHARS),
-    setup: setupFrom(r.setup, pathTo(path, 'setup'), path),
+    ...content,
     createdAt: validateIsoTime(r.createdAt, pathTo(path, 'createdAt')),
     updatedAt: validateIsoTime(r.updatedAt, pathTo(path, 'updatedAt')),
-    notes: plainText(r.notes, pathTo(path, 'notes'), 0, MAX_NOTES_CHARS, true),
   };
+}
+
+/**
+ * Checks a machine's content from outside (a share link, the working copy kept for the next
+ * visit): as a saved machine, but without id or times, and its name may still be blank.
+ * Throws DataError naming the first bad field.
+ */
+export function validateContent(x: unknown, path = 'machine'): MachineContent {
+  return contentFrom(readRecord(x, path, CONTENT_KEYS), path, 0);
 }
 
 /**
@@ -478,23 +346,14 @@ export function validateMachineName(x: unknown, path = 'name'): string {
   return plainText(typeof x === 'string' ? x.trim() : x, path, 1, MAX_NAME_CHARS);
 }
 
-/** A short, safe description of a value for a message; never the whole of a long text. */
-export function describe(x: unknown): string {
-  if (x === null) return 'null';
-  if (x === undefined) return 'nothing';
-  if (typeof x === 'string') {
-    const chars = [...x];
-    const shown = chars.slice(0, 20).join('');
-    return `the text ${JSON.stringify(shown)}${chars.length > 20 ? '…' : ''}`;
-  }
-  if (typeof x === 'number') return String(x);
-  if (typeof x === 'boolean') return String(x);
-  if (Array.isArray(x)) return 'a list';
-  if (typeof x === 'object') return 'a group of fields';
-  return `a ${typeof x}`;
-}
 
-function quoteKey(key: string): string {
-  const chars = [...key];
-  return JSON.stringify(chars.slice(0, 40).join('')) + (chars.length > 40 ? '…' : '');
-}
+export {
+  DataError,
+  MAX_NAME_CHARS,
+  MAX_NOTES_CHARS,
+  describe,
+  pathTo,
+  readList,
+  readRecord,
+  validateIsoTime,
+} from './read';

@@ -1,7 +1,7 @@
 // Shared test data: a valid set-up and machine (invented values for tests only, in the style of
 // the first-run example), and a way to bend one field at a time.
 
-import { defaultSetup, type Machine, type Setup } from '../../src/state/model';
+import { defaultSetup, defaultToolInputs, type Machine, type Setup } from '../../src/state/model';
 
 /** A valid set-up with two parts, one of them driven by a motor. */
 export function sampleSetup(): Setup {
@@ -25,7 +25,11 @@ export function sampleMachine(overrides: Partial<Machine> = {}): Machine {
   return {
     id: 'machine-1',
     name: 'Blower, test bay',
+    site: '',
+    assessedBy: '',
+    assessedOn: '',
     setup: sampleSetup(),
+    tools: defaultToolInputs(),
     createdAt: '2025-03-12T08:30:00.000Z',
     updatedAt: '2025-03-13T09:00:00.000Z',
     notes: 'Line one\nLine two',

@@ -1,7 +1,17 @@
 // The shapes the app keeps: what the user set up, and the machines they saved.
 // Plain data in user-facing units (rpm, flashes per minute, percent), so a saved file reads
 // naturally; the converters at the end of this file are the one way to the core's units.
-import type { Part, Sampler } from '../core';
+// Beside it: the kinds of part (kinds.ts), where a speed came from (origin.ts), each tool's
+// inputs (tools.ts) and the machine that holds them all (machine.ts).
+import type { Part, Sampler } from '../../core';
+import type { PartKind } from './kinds';
+import type { SpeedOrigin } from './origin';
+
+export * from './kinds';
+export * from './origin';
+export * from './tools';
+export * from './machine';
+export * from './derived';
 
 export type SpeedUnit = 'rpm' | 'Hz' | 'rad/s';
 
@@ -15,6 +25,8 @@ export type SamplerKind = 'camera' | 'strobe' | 'lighting';
 export interface PartSpec {
   /** What the crew calls it: "cooling fan", "drive pulley". */
   name: string;
+  /** What sort of part it is (sets the words and the part form); absent reads as 'other'. */
+  kind?: PartKind;
   /** Signed speed in rpm (+ = the viewer's reference direction). */
   speedRpm: number;
   /** Identical, equally spaced features: blades, spokes, jaws, bolts. 1 = a single mark. */
@@ -28,8 +40,13 @@ export interface PartSpec {
    * screen), and speedRpm and tolerancePercent hold what the drive gives.
    */
   drive?: PartDrive;
-  /** When set, the part is a wheel rolling on the ground, and speedRpm holds what that gives. */
+  /**
+   * A wheel's road speed and tyre size, kept with the part: the speed they give is applied with
+   * one tap (applyDerivedSpeed), never written behind the user's back.
+   */
   wheel?: WheelSpec;
+  /** Where a speed applied from a derivation came from; absent for a speed typed or followed live. */
+  origin?: SpeedOrigin;
 }
 
 /**
@@ -116,6 +133,7 @@ export function newPartLike(parts: readonly PartSpec[], like: PartSpec): PartSpe
   while (taken.has(`part ${n}`)) n++;
   return {
     name: `Part ${n}`,
+    kind: 'other',
     speedRpm: like.speedRpm,
     features: 1,
     tolerancePercent: like.tolerancePercent,
@@ -158,20 +176,9 @@ export function samplerOf(kind: SamplerKind): Sampler {
   return kind === 'camera' ? 'frames' : 'flash';
 }
 
-/** A saved machine: a named set-up. */
-export interface Machine {
-  id: string;
-  name: string;
-  setup: Setup;
-  /** ISO 8601 times. */
-  createdAt: string;
-  updatedAt: string;
-  notes: string;
-}
-
 /** The set-up a first visit opens with. */
 export const defaultSetup: Setup = {
-  parts: [{ name: 'Fan', speedRpm: 1770, features: 6, tolerancePercent: 1 }],
+  parts: [{ name: 'Fan', kind: 'fan', speedRpm: 1770, features: 6, tolerancePercent: 1 }],
   activePart: 0,
   samplerKind: 'strobe',
   // 30000/1001 frames/s (SMPTE ST 12-1), 180° shutter, a typical phone readout (Ringaby & Forssén 2011).
