@@ -1,6 +1,11 @@
 import type { ComponentChildren } from 'preact';
 import { currentScreen } from '../state/navigation';
-import { sessionMessage, storageOpened } from '../state/session';
+import {
+  acceptOfferedShare,
+  offeredShare,
+  sessionMessage,
+  storageOpened,
+} from '../state/session';
 import { storageMessage, storageStatus } from '../state/store';
 import { Banner } from './banner';
 import { AppFrame } from './frame';
@@ -18,6 +23,7 @@ export function App({ updateNotice }: Props) {
   const session = sessionMessage.value;
   const status = storageStatus.value;
   const problem = storageMessage.value;
+  const offer = offeredShare.value;
   const entry = screenEntry(currentScreen.value);
   const notices = (
     <>
@@ -31,7 +37,16 @@ export function App({ updateNotice }: Props) {
           {session.text}
         </Banner>
       )}
-      {storageOpened.value && status.mode === 'memory' && (
+      {offer && (
+        <Banner kind="info" onClose={() => (offeredShare.value = null)} testId="share-offer">
+          A share link for {offer.name.trim() ? `"${offer.name.trim()}"` : 'a machine'} was
+          opened. Open it in place of what is on screen?{' '}
+          <button type="button" onClick={acceptOfferedShare}>
+            Open the shared machine
+          </button>
+        </Banner>
+      )}
+      {storageOpened.value && status.mode !== 'saved' && (
         <Banner kind="problem" testId="storage-status">
           {status.reason ?? 'Saving is off: changes last only until this tab is closed.'}
         </Banner>

@@ -106,3 +106,28 @@ export function formatExposure(seconds: number): string {
   if (seconds >= 1) return `${formatNumber(seconds)} s`;
   return `1/${formatNumber(1 / seconds)} s`;
 }
+
+/**
+ * A number rounded as formatNumber shows it (about four significant figures), for a table cell:
+ * a spreadsheet gets the figure on screen, never 2000.0000000000002. NaN or Infinity give null
+ * (an empty cell).
+ * @example shownNumber(2000.0000000000002) // 2000
+ * @example shownNumber(29.97002997) // 29.97
+ */
+export function shownNumber(value: number, decimals?: number): number | null {
+  if (typeof value !== 'number' || !Number.isFinite(value)) return null;
+  const d = decimals ?? decimalsFor(Math.abs(value));
+  const rounded = Number(value.toFixed(d));
+  return Object.is(rounded, -0) ? 0 : rounded;
+}
+
+/**
+ * A rate rounded as formatPrecise shows it (five significant figures, at least whole units).
+ * @example preciseNumber(1769.64) // 1769.6
+ */
+export function preciseNumber(value: number): number | null {
+  if (typeof value !== 'number' || !Number.isFinite(value)) return null;
+  const abs = Math.abs(value);
+  const decimals = abs === 0 ? 0 : Math.max(0, Math.min(6, 4 - Math.floor(Math.log10(abs))));
+  return shownNumber(value, decimals);
+}

@@ -22,7 +22,6 @@ import {
   toggleStandardRate,
   type GoalKind,
 } from '../../state/cameraPlanning';
-import { openMachineName } from '../../state/session';
 import { setCreepRpm, setup } from '../../state/setup';
 import { Cautions } from '../../ui/cautions';
 import { ChoiceGroup } from '../../ui/choice-group';
@@ -249,7 +248,6 @@ export function CameraScreen(_props: Props) {
   const report = (
     <ReportBar
       title="Camera plan"
-      machineName={openMachineName.value}
       cautions={cautions}
       csv={plan ? () => cameraCsv(plan) : undefined}
     />

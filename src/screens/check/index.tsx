@@ -14,6 +14,10 @@ import { VerdictPanel } from './verdict-panel';
 import { CheckPreview, CheckRateMap } from './connected-widgets';
 import { RESULT_FIELDS, VERDICT_FIELDS } from './field-ids';
 import { CHECK_NOTE_WORDS } from '../../words/check';
+import { ReportBar } from '../../ui/report-bar';
+import { partLabel, activeIndex } from '../../state/model';
+import { flashUnit, setup } from '../../state/setup';
+import { checkCsv } from './csv';
 import style from './style.module.css';
 
 interface Props {
@@ -91,6 +95,24 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
           <LightingReadout />
         </NotCurrent>
         <KeepShare />
+        <ReportBar
+          title="Check"
+          cautions={{
+            apparentStillness: r.showSafety || withdrawn,
+            flashRatesHz: r.showPhotosensitivity ? [r.rateHz] : [],
+          }}
+          csv={
+            withdrawn
+              ? undefined
+              : () =>
+                  checkCsv(
+                    r,
+                    partLabel(setup.value, activeIndex(setup.value)),
+                    r.samplerKind,
+                    flashUnit.value,
+                  )
+          }
+        />
       </div>
     </div>
   );

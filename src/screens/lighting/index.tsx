@@ -7,7 +7,6 @@ import {
 } from '../../core';
 import { formatNumber } from '../../words/format';
 import { lighting, lightingCautions } from '../../state/lighting';
-import { openMachineName } from '../../state/session';
 import { lightWaveOf, setup } from '../../state/setup';
 import { Cautions } from '../../ui/cautions';
 import { LightingReadout } from '../../ui/lighting-readout';
@@ -150,7 +149,6 @@ export function LightingScreen(_props: Props) {
   const report = (
     <ReportBar
       title="Lighting check"
-      machineName={openMachineName.value}
       cautions={cautions}
       csv={result ? () => lightingCsv(result, rows, modulation) : undefined}
     />

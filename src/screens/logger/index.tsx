@@ -1,5 +1,4 @@
 import { converterRangeDb, type LoggerPlan } from '../../core';
-import { readSpeedRpm } from '../../ui/fields';
 import { formatNumber, formatPrecise, numberForField } from '../../words/format';
 import {
   readBits,
@@ -27,8 +26,8 @@ import {
   sampleHz,
   type FilterKind,
 } from '../../state/loggerPlanning';
-import { openMachineName } from '../../state/session';
-import { activePart, setSpeedRpm } from '../../state/setup';
+import { activePart } from '../../state/setup';
+import { PartSpeedLine } from '../../ui/part-speed-line';
 import { ChoiceGroup } from '../../ui/choice-group';
 import { NumberField } from '../../ui/number-field';
 import { NumberListField } from '../../ui/number-list-field';
@@ -112,15 +111,11 @@ export function LoggerScreen(_props: Props) {
     <>
       <Panel title="The machine" id="logger-machine">
         <PartChoice id="logger-part" label="Shaft of" />
-        <NumberField
+        {/* The planner reads the part's speed and never writes it: the part is edited in its own form. */}
+        <PartSpeedLine
           id="logger-shaft"
-          label="Shaft speed"
-          value={part.speedRpm}
-          toText={numberForField}
-          read={(text) => readSpeedRpm(text, 'rpm')}
-          onValue={setSpeedRpm}
-          unit="rpm"
-          hint={`${formatNumber(Math.abs(part.speedRpm) / 60)} Hz: the 1× frequency. The same speed as the chosen part.`}
+          part={part}
+          extra={`${formatNumber(Math.abs(part.speedRpm) / 60)} Hz: the 1× frequency.`}
         />
         <NumberField
           id="logger-harmonics"
@@ -285,7 +280,6 @@ export function LoggerScreen(_props: Props) {
   const report = (
     <ReportBar
       title="Data logger plan"
-      machineName={openMachineName.value}
       cautions={{}}
       csv={plan ? () => loggerCsv(plan, sampleHzOf(plan)) : undefined}
     />

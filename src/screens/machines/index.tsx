@@ -1,4 +1,4 @@
-import { useState } from 'preact/hooks';
+import { useEffect, useRef, useState } from 'preact/hooks';
 import { openCheckScreen } from '../../state/navigation';
 import type { Machine } from '../../state/model';
 import {
@@ -6,18 +6,21 @@ import {
   duplicateMachine,
   exportAll,
   forgetDeleted,
+  heldIds,
   importMachines,
   lastDeleted,
   machines,
   renameMachine,
   undoDelete,
 } from '../../state/machines';
-import { replaceSetup } from '../../state/setup';
-import { openMachineId } from '../../state/session';
-import { Panel } from '../../ui/panel';
 import { readImportFile } from '../../state/importFile';
+import { openMachine, openMachineId, setHeader } from '../../state/work';
+import { downloadText } from '../../ui/download';
+import { Panel } from '../../ui/panel';
 import { NameLengthNote, nameIsFull, nameNoteId } from '../../ui/name-length-note';
-import { setupSummary } from './summary';
+import { saveWords } from '../../words/saving';
+import { KeptAside, StorageState } from './kept-aside';
+import { machineSummary } from './summary';
 import style from './style.module.css';
 
 interface Props {}
@@ -33,23 +36,25 @@ function dateStamp(now = new Date()): string {
   return now.toISOString().slice(0, 10);
 }
 
-/** The saved machines: open, rename, duplicate, delete with undo; export and import them as a file. */
+/** Moves focus to the element with this id once it is on the page (after the next render). */
+function focusSoon(id: string): void {
+  requestAnimationFrame(() => document.getElementById(id)?.focus());
+}
+
+/**
+ * The saved machines: open, rename, duplicate, delete with undo; what storage is doing; data
+ * set aside; export and import as a file. After Delete, focus goes to Undo; after Undo, to the
+ * machine brought back; after a rename, to its Rename button again.
+ */
 export function MachinesScreen(_props: Props) {
   const [outcome, setOutcome] = useState<Outcome>(null);
   const list = machines.value;
   const deleted = lastDeleted.value;
+  const held = heldIds.value;
 
   const exportFile = () => {
     try {
-      const blob = new Blob([exportAll()], { type: 'application/json' });
-      const url = URL.createObjectURL(blob);
-      const a = document.createElement('a');
-      a.href = url;
-      a.download = `trueturn-machines-${dateStamp()}.json`;
-      document.body.append(a);
-      a.click();
-      a.remove();
-      setTimeout(() => URL.revokeObjectURL(url), 1000);
+      downloadText(`trueturn-machines-${dateStamp()}.json`, exportAll(), 'application/json');
       setOutcome({
         kind: 'done',
         text: `Exported ${list.length} machine${list.length === 1 ? '' : 's'}.`,
@@ -79,10 +84,23 @@ export function MachinesScreen(_props: Props) {
       result.renamed.length > 0
         ? ` Renamed to avoid clashes: ${result.renamed.map((r) => `"${r.to}"`).join(', ')}.`
         : '';
-    setOutcome({
-      kind: 'done',
-      text: `Imported ${result.added.length} machine${result.added.length === 1 ? '' : 's'}.${renamed}`,
+    const count = `${result.added.length} machine${result.added.length === 1 ? '' : 's'}`;
+    setOutcome(
+      result.held
+        ? {
+            kind: 'problem',
+            text: `Imported ${count} into this tab, not yet saved on this device: they are saved by themselves once it takes writes again.${renamed}`,
+          }
+        : { kind: 'done', text: `Imported ${count}.${renamed}` },
+    );
+  };
+
+  const undo = async () => {
+    const restored = await undoDelete().catch((error: unknown) => {
+      setOutcome({ kind: 'problem', text: messageOf(error) });
+      return null;
     });
+    if (restored) focusSoon(`open-${restored.id}`);
   };
 
   return (
@@ -93,7 +111,7 @@ export function MachinesScreen(_props: Props) {
             <p>
               Deleted <strong>{deleted.machine.name}</strong>.
             </p>
-            <button type="button" class={style.primary} onClick={() => void undoDelete()}>
+            <button type="button" id="undo-delete" class={style.primary} onClick={() => void undo()}>
               Undo
             </button>
             <button type="button" class={style.quiet} onClick={forgetDeleted}>
@@ -102,90 +120,119 @@ export function MachinesScreen(_props: Props) {
           </div>
         )}
         {list.length === 0 ? (
-          <p class={style.empty}>
+          <p class={style.empty} tabIndex={-1} id="machines-empty">
             No machines saved yet. Set one up on the Check screen and save it there.
           </p>
         ) : (
           <ul class={style.list} data-testid="machine-list">
             {list.map((m) => (
               <li key={m.id}>
-                <MachineRow machine={m} onOutcome={setOutcome} />
+                <MachineRow machine={m} held={held.has(m.id)} onOutcome={setOutcome} />
               </li>
             ))}
           </ul>
         )}
       </Panel>
-      <Panel title="Move to another device" id="transfer">
-        <p class={style.help}>
-          Export writes every saved machine to one file. Import adds the machines of such a file to
-          this list.
-        </p>
-        <div class={style.actions}>
-          <button
-            type="button"
-            class={style.primary}
-            onClick={exportFile}
-            disabled={list.length === 0}
-          >
-            Export all machines
-          </button>
-          <label class={style.fileButton}>
-            <input
-              type="file"
-              accept=".json,application/json"
-              class={style.file}
-              onChange={importFile}
-              data-testid="import-file"
-            />
-            <span>Import from a file</span>
-          </label>
-        </div>
-        {outcome && (
-          <p
-            class={style.outcome}
-            data-kind={outcome.kind}
-            role={outcome.kind === 'problem' ? 'alert' : 'status'}
-            data-testid="machines-outcome"
-          >
-            {outcome.text}
+      <div class={style.side}>
+        <StorageState />
+        <Panel title="Move to another device" id="transfer">
+          <p class={style.help}>
+            Export writes every machine this tab holds to one file, whatever the device's storage
+            is doing. Import adds the machines of such a file to this list.
           </p>
-        )}
-      </Panel>
+          <div class={style.actions}>
+            <button
+              type="button"
+              class={style.primary}
+              onClick={exportFile}
+              disabled={list.length === 0}
+            >
+              Export all machines
+            </button>
+            <label class={style.fileButton}>
+              <input
+                type="file"
+                accept=".json,application/json"
+                class={style.file}
+                onChange={importFile}
+                data-testid="import-file"
+              />
+              <span>Import from a file</span>
+            </label>
+          </div>
+          {outcome && (
+            <p
+              class={style.outcome}
+              data-kind={outcome.kind}
+              role={outcome.kind === 'problem' ? 'alert' : 'status'}
+              data-testid="machines-outcome"
+            >
+              {outcome.text}
+            </p>
+          )}
+        </Panel>
+        <KeptAside />
+      </div>
     </div>
   );
 }
 
 interface RowProps {
   machine: Machine;
+  /** Its latest change is held in this tab, not yet on the device. */
+  held: boolean;
   onOutcome: (o: Outcome) => void;
 }
 
-function MachineRow({ machine, onOutcome }: RowProps) {
+function MachineRow({ machine, held, onOutcome }: RowProps) {
   const [renaming, setRenaming] = useState(false);
   const [name, setName] = useState(machine.name);
   const [problem, setProblem] = useState<string | null>(null);
   const inputId = `rename-${machine.id}`;
+  const field = useRef<HTMLInputElement>(null);
+  useEffect(() => {
+    if (renaming) field.current?.focus();
+  }, [renaming]);
 
   const open = () => {
-    replaceSetup(machine.setup);
-    openMachineId.value = machine.id;
+    openMachine(machine);
     openCheckScreen();
+  };
+
+  const stopRenaming = () => {
+    setRenaming(false);
+    setProblem(null);
+    focusSoon(`rename-button-${machine.id}`);
   };
 
   const rename = async (event: Event) => {
     event.preventDefault();
     try {
-      await renameMachine(machine.id, name);
-      setRenaming(false);
-      setProblem(null);
+      const result = await renameMachine(machine.id, name);
+      if (openMachineId.peek() === machine.id) setHeader({ name: result.machine.name });
+      const words = saveWords(result.machine.name, result.outcome, '');
+      if (words.kind === 'problem') onOutcome(words);
+      stopRenaming();
     } catch (error) {
       setProblem(messageOf(error));
     }
   };
 
-  const act = async (action: () => Promise<unknown>) => {
+  const remove = async () => {
     try {
-      await action();
+      await deleteMachine(machine.id);
+      focusSoon('undo-delete');
+    } catch (error) {
+      onOutcome({ kind: 'problem', text: messageOf(error) });
+    }
+  };
+
+  const duplicate = async () => {
+    try {
+      const result = await duplicateMachine(machine.id);
+      const words = saveWords(result.machine.name, result.outcome, '');
+      if (words.kind === 'problem') onOutcome(words);
+      focusSoon(`open-${result.machine.id}`);
     } catch (error) {
       onOutcome({ kind: 'problem', text: messageOf(error) });
     }
@@ -196,7 +243,13 @@ function MachineRow({ machine, onOutcome }: RowProps) {
       <h3 id={`${machine.id}-name`} class={style.name}>
         {machine.name}
       </h3>
-      <p class={style.summary}>{setupSummary(machine.setup)}</p>
+      {machine.site && <p class={style.site}>{machine.site}</p>}
+      <p class={style.summary}>{machineSummary(machine)}</p>
+      {held && (
+        <p class={style.held} data-testid="held-mark">
+          Not saved on this device yet: kept in this tab until it can be.
+        </p>
+      )}
       {machine.notes && <p class={style.notes}>{machine.notes}</p>}
       {renaming ? (
         <form class={style.rename} onSubmit={rename}>
@@ -206,6 +259,7 @@ function MachineRow({ machine, onOutcome }: RowProps) {
           <div class={style.row}>
             <input
               id={inputId}
+              ref={field}
               class={style.input}
               type="text"
               maxLength={80}
@@ -225,9 +279,8 @@ function MachineRow({ machine, onOutcome }: RowProps) {
               type="button"
               class={style.quiet}
               onClick={() => {
-                setRenaming(false);
                 setName(machine.name);
-                setProblem(null);
+                stopRenaming();
               }}
             >
               Cancel
@@ -242,24 +295,24 @@ function MachineRow({ machine, onOutcome }: RowProps) {
         </form>
       ) : (
         <div class={style.actions}>
-          <button type="button" class={style.primary} onClick={open}>
+          <button type="button" id={`open-${machine.id}`} class={style.primary} onClick={open}>
             Open
           </button>
-          <button type="button" class={style.quiet} onClick={() => setRenaming(true)}>
+          <button
+            type="button"
+            id={`rename-button-${machine.id}`}
+            class={style.quiet}
+            onClick={() => {
+              setName(machine.name);
+              setRenaming(true);
+            }}
+          >
             Rename
           </button>
-          <button
-            type="button"
-            class={style.quiet}
-            onClick={() => void act(() => duplicateMachine(machine.id))}
-          >
+          <button type="button" class={style.quiet} onClick={() => void duplicate()}>
             Duplicate
           </button>
-          <button
-            type="button"
-            class={style.quiet}
-            onClick={() => void act(() => deleteMachine(machine.id))}
-          >
+          <button type="button" class={style.quiet} onClick={() => void remove()}>
             Delete
           </button>
         </div>

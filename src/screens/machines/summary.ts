@@ -1,14 +1,14 @@
-// A one-line description of a saved machine's set-up for the list.
+// A one-line description of a saved machine for the list.
 import { formatNumber, formatPrecise } from '../../words/format';
-import { type Setup, activePartOf } from '../../state/model';
+import { featureWords } from '../../words/partKinds';
+import { type Machine, type Setup, activePartOf } from '../../state/model';
 
 /**
- * "Cooler fan (8 blades): 1,015 rpm, 8 features · strobe at 1,015 fpm".
- * @example setupSummary(defaultSetup) // "Fan: 1,770 rpm, 6 features · strobe at 1,770 fpm"
+ * "Fan: 1,770 rpm, 6 blades · strobe at 1,770 fpm" (the chosen part and the sampler).
+ * @example setupSummary(defaultSetup) // "Fan: 1,770 rpm, 6 blades · strobe at 1,770 fpm"
  */
 export function setupSummary(s: Setup): string {
   const part = activePartOf(s);
-  const features = part.features === 1 ? '1 mark' : `${formatNumber(part.features)} features`;
   const name = part.name.trim() ? `${part.name.trim()}: ` : '';
   const sampler =
     s.samplerKind === 'strobe'
@@ -16,5 +16,14 @@ export function setupSummary(s: Setup): string {
       : s.samplerKind === 'camera'
         ? `camera at ${formatPrecise(s.camera.frameRate)} fps`
         : `lighting on ${s.lighting.mainsHz} Hz mains`;
-  return `${name}${formatNumber(part.speedRpm)} rpm, ${features} · ${sampler}`;
+  return `${name}${formatNumber(part.speedRpm)} rpm, ${featureWords(part)} · ${sampler}`;
+}
+
+/**
+ * A saved machine in one line: how many parts, then the chosen part and the sampler.
+ * @example machineSummary(example) // "2 parts · Cooler fan (8 blades): 1,015 rpm, 8 blades · strobe at 1,015 fpm"
+ */
+export function machineSummary(m: Machine): string {
+  const count = m.setup.parts.length;
+  return `${count === 1 ? '1 part' : `${count} parts`} · ${setupSummary(m.setup)}`;
 }

@@ -3,7 +3,6 @@ import { type CautionContext, type StepCandidate } from '../../core';
 import { formatNumber } from '../../words/format';
 import { openCheckScreen } from '../../state/navigation';
 import { formatRate } from '../../words/rates';
-import { openMachineName } from '../../state/session';
 import { attempt } from '../../state/outcome';
 import { flashUnit } from '../../state/setup';
 import {
@@ -173,7 +172,6 @@ export function SpeedFinderScreen(_props: Props) {
       <SavePanel speedHz={step?.stage === 'done' ? step.speedHz : undefined} />
       <ReportBar
         title="Speed finder"
-        machineName={openMachineName.value}
         cautions={cautions}
         csv={() => finderCsv(candidates, readings.value, step?.rateFpm)}
       />

@@ -13,7 +13,6 @@ import {
 import { wholeMachineRates } from '../../state/wholeMachine';
 import { check, verdictOf } from '../../state/check';
 import { partLabel, type SamplerKind, activeIndex } from '../../state/model';
-import { openMachineName } from '../../state/session';
 import { flashUnit, setSamplerKind, setSamplerRateHz, setup } from '../../state/setup';
 import { MAX_PARTS } from '../../state/validate';
 import { Cautions } from '../../ui/cautions';
@@ -234,7 +233,6 @@ export function WholeMachineScreen(_props: Props) {
       </Panel>
       <ReportBar
         title="Whole machine"
-        machineName={openMachineName.value}
         cautions={cautions}
         csv={() => wholeMachineCsv(parts, rates, kind, unit)}
       />

@@ -14,7 +14,7 @@ import {
   type DerivedPart,
   type SpeedSource,
 } from '../../state/driveChain';
-import { partLabel, type Setup } from '../../state/model';
+import { kindOf, partLabel, type Setup } from '../../state/model';
 import { ChoiceGroup } from '../../ui/choice-group';
 import { MotorFields } from '../../ui/motor-fields';
 import { problemsAmong } from '../../state/fieldProblems';
@@ -24,7 +24,9 @@ import { NameLengthNote, nameIsFull, nameNoteId } from '../../ui/name-length-not
 
 import { speedWords } from '../../words/wholeMachine';
 import { DriveFields } from './drive-fields';
-import { WheelFields } from './wheel-fields';
+import { WheelApply, WheelFields } from '../../ui/wheel-fields';
+import { KIND_WORDS } from '../../words/partKinds';
+import { originLine } from '../../words/origin';
 import style from './style.module.css';
 
 interface Props {
@@ -49,6 +51,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
   const id = (field: string) => `part-${index}-${field}`;
   // Several parts share labels ("Speed"): a "fix …" note names the part too.
   const named = (label: string) => `${partLabel(setup, index)}: ${label}`;
+  const words = KIND_WORDS[kindOf(part)];
   const act = (edit: (s: Setup) => Setup) => {
     try {
       editChain(edit);
@@ -76,8 +79,8 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
       </div>
       <NumberField
         id={id('features')}
-        label="Blades or marks"
-        name={named('Blades or marks')}
+        label={words.field}
+        name={named(words.field)}
         value={part.features}
         toText={numberForField}
         read={readFeatures}
@@ -113,12 +116,20 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         </div>
       )}
       {source === 'wheel' && part.wheel && (
-        <WheelFields
-          id={id}
-          named={named}
-          wheel={part.wheel}
-          onWheel={(w) => act((s) => withWheel(s, index, w))}
-        />
+        <>
+          <WheelFields
+            id={id}
+            named={named}
+            wheel={part.wheel}
+            onWheel={(w) => act((s) => withWheel(s, index, w))}
+          />
+          <WheelApply index={index} part={part} wheel={part.wheel} />
+        </>
+      )}
+      {part.origin && source !== 'drive' && source !== 'motor' && (
+        <p class={style.derived} data-testid={`chain-origin-${index}`}>
+          {originLine(part.origin)}
+        </p>
       )}
       {source === 'drive' && part.drive && (
         <DriveFields

@@ -178,7 +178,7 @@ export function samplerOf(kind: SamplerKind): Sampler {
 
 /** The set-up a first visit opens with. */
 export const defaultSetup: Setup = {
-  parts: [{ name: 'Fan', kind: 'fan', speedRpm: 1770, features: 6, tolerancePercent: 1 }],
+  parts: [{ name: 'Fan', speedRpm: 1770, features: 6, tolerancePercent: 1 }],
   activePart: 0,
   samplerKind: 'strobe',
   // 30000/1001 frames/s (SMPTE ST 12-1), 180° shutter, a typical phone readout (Ringaby & Forssén 2011).

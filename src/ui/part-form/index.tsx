@@ -1,19 +1,33 @@
 import { motorSpeedHz, synchronousSpeedHz } from '../../core';
 import { formatNumber, numberForField } from '../../words/format';
+import { KIND_WORDS } from '../../words/partKinds';
+import { originLine } from '../../words/origin';
 import { readFeatures, readSpeedRpm, readTolerancePercent } from '../fields';
-import type { SpeedUnit } from '../../state/model';
+import { applyDerivedSpeed } from '../../state/derivedSpeed';
+import {
+  PART_KINDS,
+  activeIndex,
+  kindOf,
+  type PartKind,
+  type PartSpec,
+  type SpeedUnit,
+} from '../../state/model';
 import {
   activePart,
   defaultMotor,
   setFeatures,
+  setKind,
   setMotor,
   setSpeedRpm,
   setTolerancePercent,
+  setWheel,
+  setup,
   speedUnit,
 } from '../../state/setup';
 import { MotorFields } from '../motor-fields';
 import { NumberField } from '../number-field';
 import { Panel } from '../panel';
+import { WheelApply, WheelFields } from '../wheel-fields';
 import style from './style.module.css';
 
 interface Props {
@@ -30,11 +44,27 @@ function speedInUnit(rpm: number, unit: SpeedUnit): number {
   return (rpm / 60) * 2 * Math.PI;
 }
 
-/** The turning part: its speed (typed, or from a motor), its features and the speed tolerance. */
+/** How a motor's speed is given: straight from its nameplate, or from mains, poles and slip. */
+type MotorGiven = 'none' | 'nameplate' | 'poles';
+
+function motorGivenOf(part: PartSpec): MotorGiven {
+  if (part.motor) return 'poles';
+  return part.origin?.method === 'nameplate' ? 'nameplate' : 'none';
+}
+
+/**
+ * The turning part: its kind (which sets its words and fields), its speed (typed, from a
+ * motor's nameplate rpm or its mains, poles and slip, or applied from a wheel's road speed),
+ * its features and the speed tolerance, with where the speed came from.
+ */
 export function PartForm({ class: extra }: Props) {
   const part = activePart.value;
+  const index = activeIndex(setup.value);
   const unit = speedUnit.value;
   const motor = part.motor;
+  const kind = kindOf(part);
+  const words = KIND_WORDS[kind];
+  const given = motorGivenOf(part);
 
   const unitChooser = (
     <select
@@ -53,8 +83,37 @@ export function PartForm({ class: extra }: Props) {
     </select>
   );
 
+  const setGiven = (next: MotorGiven) => {
+    if (next === 'poles') setMotor({ ...defaultMotor });
+    else if (next === 'nameplate') {
+      const rpm = Math.abs(part.speedRpm);
+      applyDerivedSpeed(index, {
+        speedRpm: part.speedRpm,
+        origin: { method: 'nameplate', detail: { rpm } },
+      });
+    } else if (motor) setMotor(undefined);
+    else setSpeedRpm(part.speedRpm);
+  };
+
   return (
     <Panel title="The part" id="part" class={extra}>
+      <div class={style.field}>
+        <label class={style.label} for="part-kind">
+          Kind of part
+        </label>
+        <select
+          id="part-kind"
+          class={style.kind}
+          value={kind}
+          onChange={(e) => setKind((e.currentTarget as HTMLSelectElement).value as PartKind)}
+        >
+          {PART_KINDS.map((k) => (
+            <option key={k} value={k}>
+              {KIND_WORDS[k].label}
+            </option>
+          ))}
+        </select>
+      </div>
       <NumberField
         id="speed"
         label="Speed"
@@ -67,31 +126,84 @@ export function PartForm({ class: extra }: Props) {
         hint={
           motor
             ? 'From the motor below. Typing a speed here stops following the motor.'
-            : 'A unit may be typed too: 1780 rpm, 29.7 Hz.'
+            : part.origin
+              ? `${originLine(part.origin)} Typing a speed here replaces it.`
+              : 'A unit may be typed too: 1780 rpm, 29.7 Hz.'
         }
       />
-      <label class={style.toggle}>
-        <input
-          type="checkbox"
-          checked={motor !== undefined}
-          onChange={(e) =>
-            setMotor(
-              (e.currentTarget as HTMLInputElement).checked ? { ...defaultMotor } : undefined,
-            )
-          }
-        />
-        <span>Speed from an induction motor</span>
-      </label>
-      {motor && <MotorWithSpeeds motor={motor} />}
+      {kind === 'wheel' && part.wheel && (
+        <>
+          <WheelFields
+            id={(field) => `wheel-${field}`}
+            named={(label) => label}
+            wheel={part.wheel}
+            onWheel={setWheel}
+          />
+          <WheelApply index={index} part={part} wheel={part.wheel} />
+        </>
+      )}
+      {kind !== 'wheel' && (
+        <label class={style.toggle}>
+          <input
+            type="checkbox"
+            checked={given !== 'none'}
+            onChange={(e) => setGiven((e.currentTarget as HTMLInputElement).checked ? 'poles' : 'none')}
+          />
+          <span>Speed from an induction motor</span>
+        </label>
+      )}
+      {kind !== 'wheel' && given !== 'none' && (
+        <div class={style.motor}>
+          <fieldset class={style.given}>
+            <legend class={style.label}>The motor's speed from</legend>
+            <label class={style.radio}>
+              <input
+                type="radio"
+                name="motor-given"
+                checked={given === 'nameplate'}
+                onChange={() => setGiven('nameplate')}
+              />
+              <span>Its nameplate rpm</span>
+            </label>
+            <label class={style.radio}>
+              <input
+                type="radio"
+                name="motor-given"
+                checked={given === 'poles'}
+                onChange={() => setGiven('poles')}
+              />
+              <span>Mains, poles and slip</span>
+            </label>
+          </fieldset>
+          {given === 'poles' && motor && <MotorWithSpeeds motor={motor} />}
+          {given === 'nameplate' && (
+            <NumberField
+              id="nameplate-rpm"
+              label="Nameplate speed"
+              value={Math.abs(part.speedRpm)}
+              toText={numberForField}
+              read={(text) => readSpeedRpm(text, 'rpm')}
+              onValue={(rpm) =>
+                applyDerivedSpeed(index, {
+                  speedRpm: (part.speedRpm < 0 ? -1 : 1) * Math.abs(rpm),
+                  origin: { method: 'nameplate', detail: { rpm: Math.abs(rpm) } },
+                })
+              }
+              unit="rpm"
+              hint="The rated speed on the motor's plate, at full load."
+            />
+          )}
+        </div>
+      )}
       <div class={style.pair}>
         <NumberField
           id="features"
-          label="Blades or marks"
+          label={words.field}
           value={part.features}
           toText={numberForField}
           read={readFeatures}
           onValue={setFeatures}
-          hint="Identical blades, spokes, jaws or bolts; 1 = one mark."
+          hint={words.hint}
         />
         <NumberField
           id="tolerance"
@@ -109,19 +221,19 @@ export function PartForm({ class: extra }: Props) {
 }
 
 interface MotorProps {
-  motor: NonNullable<ReturnType<typeof activePart.peek>['motor']>;
+  motor: NonNullable<PartSpec['motor']>;
 }
 
 function MotorWithSpeeds({ motor }: MotorProps) {
   const syncRpm = synchronousSpeedHz(motor.mainsHz, motor.poles) * 60;
   const runRpm = motorSpeedHz(motor.mainsHz, motor.poles, motor.slipPercent / 100) * 60;
   return (
-    <div class={style.motor}>
+    <>
       <MotorFields id={(field) => `motor-${field}`} motor={motor} onMotor={setMotor} />
       <p class={style.note}>
         Synchronous {formatNumber(syncRpm)} rpm (120 × mains ÷ poles); running{' '}
         {formatNumber(runRpm)} rpm.
       </p>
-    </div>
+    </>
   );
 }

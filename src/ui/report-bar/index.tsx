@@ -1,13 +1,15 @@
+import { useState } from 'preact/hooks';
 import type { CautionContext } from '../../core';
-import { safetyCautions } from '../../words/cautions';
+import { header } from '../../state/work';
+import { PLANNING_AID_CAUTION, safetyCautions } from '../../words/cautions';
+import { headerLines, reportCsv } from '../../words/report';
 import { downloadText, fileStem } from '../download';
+import { ReportHeaderFields } from './header-fields';
 import style from './style.module.css';
 
 interface Props {
   /** The tool's title, printed at the top of the report and used in file names. */
   title: string;
-  /** The machine the result belongs to, when one is open. */
-  machineName?: string;
   /** The tool's main table as CSV (RFC 4180, built with the core's csv helpers); omit when there is none. */
   csv?: () => string;
   /** Which cautions the printed page must carry (docs/physics.md §10). */
@@ -15,13 +17,26 @@ interface Props {
 }
 
 /**
- * "Print report" and "Save table (CSV)" for any tool. Printing uses the print stylesheet:
- * the tab bar and inputs are hidden, and this bar's print-only header adds the title, machine,
- * date and the cautions that apply, so a printed page never loses them.
+ * "Print report" and "Save table (CSV)" for any screen, and the report header filled once per
+ * machine (site, machine, assessed by, date, notes). Printing uses the print stylesheet: the tab
+ * bar and inputs are hidden, and this bar's print-only header adds the title, the header lines
+ * and the cautions that apply; the CSV starts with the same header and cautions.
  */
-export function ReportBar({ title, machineName, csv, cautions }: Props) {
+export function ReportBar({ title, csv, cautions }: Props) {
+  const [problem, setProblem] = useState<string | null>(null);
   const printed = new Date();
+  const h = header.value;
   const lines = safeCautions(cautions);
+  const save = () => {
+    if (!csv) return;
+    try {
+      const text = reportCsv(title, h, lines, csv(), new Date());
+      downloadText(`${fileStem(`${title} ${h.name}`)}.csv`, text, 'text/csv;charset=utf-8');
+      setProblem(null);
+    } catch (error) {
+      setProblem(error instanceof Error ? error.message : String(error));
+    }
+  };
   return (
     <div class={style.bar}>
       <div class={style.actions} data-print="hide">
@@ -29,27 +44,28 @@ export function ReportBar({ title, machineName, csv, cautions }: Props) {
           Print report
         </button>
         {csv && (
-          <button
-            type="button"
-            class={style.button}
-            onClick={() =>
-              downloadText(
-                `${fileStem(`${title} ${machineName ?? ''}`)}.csv`,
-                csv(),
-                'text/csv;charset=utf-8',
-              )
-            }
-          >
+          <button type="button" class={style.button} onClick={save}>
             Save table (CSV)
           </button>
         )}
       </div>
+      <ReportHeaderFields />
+      {problem && (
+        <p class={style.problem} role="alert" data-print="hide">
+          {problem}
+        </p>
+      )}
       <header class={style.printHeader} data-print="only">
         <p class={style.printTitle}>Trueturn · {title}</p>
-        <p>
-          {machineName ? `Machine: ${machineName} · ` : ''}
-          Printed {printed.toLocaleString()}
-        </p>
+        <dl class={style.printLines}>
+          {headerLines(h, printed).map(([label, value]) => (
+            <div key={label}>
+              <dt>{label}</dt>
+              <dd>{value || '—'}</dd>
+            </div>
+          ))}
+        </dl>
+        <p>Printed {printed.toLocaleString()}</p>
         <ul class={style.printCautions}>
           {lines.map((line) => (
             <li key={line}>{line}</li>
@@ -60,11 +76,16 @@ export function ReportBar({ title, machineName, csv, cautions }: Props) {
   );
 }
 
-/** Cautions never fail to print: a bad rate in the context still leaves the stillness caution. */
+/**
+ * Cautions never fail to print: a bad rate in the context still leaves the stillness caution;
+ * the planning-aid line is always there.
+ */
 function safeCautions(context: CautionContext): string[] {
+  let lines: string[];
   try {
-    return safetyCautions(context);
+    lines = safetyCautions(context);
   } catch {
-    return safetyCautions({ apparentStillness: true });
+    lines = safetyCautions({ apparentStillness: true });
   }
+  return lines.includes(PLANNING_AID_CAUTION) ? lines : [...lines, PLANNING_AID_CAUTION];
 }

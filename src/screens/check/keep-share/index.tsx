@@ -1,36 +1,50 @@
 import { useState } from 'preact/hooks';
-import { machines, saveMachine, updateMachine } from '../../../state/machines';
+import { machines, saveMachine, updateMachine, type SaveResult } from '../../../state/machines';
 import { encodeShareFragment } from '../../../state/shareLink';
-import { setup } from '../../../state/setup';
-import { openMachineId } from '../../../state/session';
+import {
+  header,
+  markSaved,
+  openBaseVersion,
+  openMachineId,
+  setHeader,
+  startNewMachine,
+  workContent,
+} from '../../../state/work';
 import { Panel } from '../../../ui/panel';
 import { NameLengthNote, nameIsFull, nameNoteId } from '../../../ui/name-length-note';
+import { saveWords, type SaveWords } from '../../../words/saving';
 import style from './style.module.css';
 
 interface Props {
   class?: string;
 }
 
-type Outcome = { kind: 'done' | 'problem'; text: string } | null;
-
 function messageOf(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }
 
-/** Keep the set-up as a named machine, save changes to the machine it came from, or share it as a link. */
+function versionAfter(result: SaveResult): number | null {
+  return 'version' in result.outcome ? result.outcome.version : null;
+}
+
+/**
+ * The machine on screen: its name, saving it (changes to the machine it was opened from, or as
+ * a new one), starting a new machine, and sharing it as a link.
+ */
 export function KeepShare({ class: extra }: Props) {
-  const [name, setName] = useState('');
-  const [outcome, setOutcome] = useState<Outcome>(null);
+  const [outcome, setOutcome] = useState<SaveWords | null>(null);
   const [link, setLink] = useState<string | null>(null);
+  const [confirmNew, setConfirmNew] = useState(false);
+  const name = header.value.name;
   const opened = machines.value.find((m) => m.id === openMachineId.value);
 
   const saveNew = async (event: Event) => {
     event.preventDefault();
     try {
-      const m = await saveMachine(name, setup.peek());
-      openMachineId.value = m.id;
-      setName('');
-      setOutcome({ kind: 'done', text: `Saved as "${m.name}".` });
+      const result = await saveMachine(name, workContent.peek());
+      markSaved(result.machine.id, versionAfter(result));
+      setHeader({ name: result.machine.name });
+      setOutcome(saveWords(result.machine.name, result.outcome, `Saved as "${result.machine.name}".`));
     } catch (error) {
       setOutcome({ kind: 'problem', text: messageOf(error) });
     }
@@ -39,8 +53,10 @@ export function KeepShare({ class: extra }: Props) {
   const saveChanges = async () => {
     if (!opened) return;
     try {
-      const m = await updateMachine(opened.id, setup.peek());
-      setOutcome({ kind: 'done', text: `Changes saved to "${m.name}".` });
+      const result = await updateMachine(opened.id, workContent.peek(), openBaseVersion.peek());
+      setOutcome(
+        saveWords(result.machine.name, result.outcome, `Changes saved to "${result.machine.name}".`),
+      );
     } catch (error) {
       setOutcome({ kind: 'problem', text: messageOf(error) });
     }
@@ -48,7 +64,7 @@ export function KeepShare({ class: extra }: Props) {
 
   const makeLink = () => {
     try {
-      const url = `${location.origin}${location.pathname}${encodeShareFragment(setup.peek())}`;
+      const url = `${location.origin}${location.pathname}${encodeShareFragment(workContent.peek())}`;
       setLink(url);
       setOutcome(null);
     } catch (error) {
@@ -71,7 +87,7 @@ export function KeepShare({ class: extra }: Props) {
   };
 
   return (
-    <Panel title="Keep and share" id="keep" class={extra}>
+    <Panel title="This machine" id="keep" class={extra}>
       {opened && (
         <div class={style.opened}>
           <p class={style.from}>
@@ -96,15 +112,45 @@ export function KeepShare({ class: extra }: Props) {
             placeholder="e.g. Line 2 cooler fan"
             value={name}
             aria-describedby={nameIsFull(name) ? nameNoteId('machine-name') : undefined}
-            onInput={(e) => setName((e.currentTarget as HTMLInputElement).value)}
+            onInput={(e) => setHeader({ name: (e.currentTarget as HTMLInputElement).value })}
           />
           <button type="submit" class={style.button}>
             Save as new machine
           </button>
         </div>
         <NameLengthNote id={nameNoteId('machine-name')} name={name} />
+        <p class={style.hint}>
+          Its parts, every tool's entries and the report header are saved with it.
+        </p>
       </form>
       <div class={style.share}>
+        {confirmNew ? (
+          <div class={style.confirm} role="group" aria-label="Start a new machine">
+            <p class={style.from}>
+              {opened
+                ? `Changes not saved to "${opened.name}" will be lost.`
+                : 'What is on screen is not saved as a machine and will be lost.'}
+            </p>
+            <button
+              type="button"
+              class={style.button}
+              onClick={() => {
+                startNewMachine();
+                setConfirmNew(false);
+                setOutcome(null);
+              }}
+            >
+              Start the new machine
+            </button>
+            <button type="button" class={style.quiet} onClick={() => setConfirmNew(false)}>
+              Keep working on this one
+            </button>
+          </div>
+        ) : (
+          <button type="button" class={style.quiet} onClick={() => setConfirmNew(true)}>
+            Start a new machine
+          </button>
+        )}
         <button type="button" class={style.button} onClick={makeLink}>
           Make a share link
         </button>
@@ -125,7 +171,7 @@ export function KeepShare({ class: extra }: Props) {
           </div>
         )}
         <p class={style.hint}>
-          The set-up travels inside the link itself; it never passes through a server.
+          The whole machine travels inside the link itself; it never passes through a server.
         </p>
       </div>
       {outcome && (
@@ -133,6 +179,7 @@ export function KeepShare({ class: extra }: Props) {
           class={style.outcome}
           data-kind={outcome.kind}
           role={outcome.kind === 'problem' ? 'alert' : 'status'}
+          data-testid="keep-outcome"
         >
           {outcome.text}
         </p>

@@ -1,15 +1,16 @@
-// A wheel rolling on the ground: its ground speed (km/h or mph) and its tyre size.
-import { kmhToMps, mpsToKmh, mpsToMph, mphToMps } from '../../core';
-import { readField } from '../../ui/fields';
-import { useFollowingText } from '../../ui/followingText';
-import { numberForField } from '../../words/format';
-
-import { type WheelSpec } from '../../state/model';
-
-import { NumberField } from '../../ui/number-field';
-import { useReportedProblem } from '../../ui/number-field/text-field';
-import { readGroundSpeed, readTyreSize } from './fields';
-
+// A wheel rolling on the ground: its road speed (km/h or mph) and its tyre size, and the speed
+// they give, applied to the part with one tap (applyDerivedSpeed) and never behind its back.
+import { InputError, kmhToMps, mpsToKmh, mpsToMph, mphToMps } from '../../core';
+import { applyDerivedSpeed } from '../../state/derivedSpeed';
+import { wheelSpeedRpm } from '../../state/driveChain';
+import type { PartSpec, WheelSpec } from '../../state/model';
+import { formatNumber, numberForField } from '../../words/format';
+import { originWords } from '../../words/origin';
+import { readField } from '../fields';
+import { useFollowingText } from '../followingText';
+import { NumberField } from '../number-field';
+import { useReportedProblem } from '../number-field/text-field';
+import { readGroundSpeed, readTyreSize } from './read';
 import style from './style.module.css';
 
 interface WheelProps {
@@ -93,7 +94,7 @@ function TyreField({
     if (reading.ok && clean !== size) onSize(clean);
   };
   return (
-    <div class={style.nameField}>
+    <div class={style.field}>
       <label class={style.label} for={id}>
         Tyre size
       </label>
@@ -116,6 +117,51 @@ function TyreField({
       <p id={`${id}-hint`} class={style.hint}>
         As on the sidewall: width/aspect R rim, e.g. 205/55R16 (ISO metric size).
       </p>
+    </div>
+  );
+}
+
+interface ApplyProps {
+  /** The part's place in the machine. */
+  index: number;
+  part: PartSpec;
+  wheel: WheelSpec;
+}
+
+/** The speed the road speed and tyre give, and the one tap that makes it the part's speed. */
+export function WheelApply({ index, part, wheel }: ApplyProps) {
+  let rpm: number;
+  try {
+    rpm = wheelSpeedRpm(wheel);
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    return null;
+  }
+  const detail = { groundSpeed: wheel.groundSpeed, unit: wheel.unit, tyreSize: wheel.tyreSize };
+  const inUse =
+    part.origin?.method === 'road-speed' &&
+    part.origin.detail.groundSpeed === wheel.groundSpeed &&
+    part.origin.detail.unit === wheel.unit &&
+    part.origin.detail.tyreSize === wheel.tyreSize &&
+    Math.abs(part.speedRpm - rpm) <= 1e-9 * Math.abs(rpm);
+  return (
+    <div class={style.apply} data-testid={`wheel-apply-${index}`}>
+      <p class={style.gives}>
+        At {formatNumber(wheel.groundSpeed)} {wheel.unit} on {wheel.tyreSize} the wheel turns at{' '}
+        <strong>{formatNumber(rpm)} rpm</strong>
+        {inUse ? ': the part uses this speed.' : '.'}
+      </p>
+      {!inUse && (
+        <button
+          type="button"
+          class={style.button}
+          onClick={() =>
+            applyDerivedSpeed(index, { speedRpm: rpm, origin: { method: 'road-speed', detail } })
+          }
+        >
+          Use {formatNumber(rpm)} rpm ({originWords({ method: 'road-speed', detail, at: '' })})
+        </button>
+      )}
     </div>
   );
 }
