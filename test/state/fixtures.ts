@@ -1,7 +1,13 @@
 // Shared test data: a valid set-up and machine (invented values for tests only, in the style of
 // the first-run example), and a way to bend one field at a time.
 
-import { defaultSetup, defaultToolInputs, type Machine, type Setup } from '../../src/state/model';
+import {
+  defaultSetup,
+  defaultToolInputs,
+  type Machine,
+  type MachineContent,
+  type Setup,
+} from '../../src/state/model';
 
 /** A valid set-up with two parts, one of them driven by a motor. */
 export function sampleSetup(): Setup {
@@ -54,3 +60,9 @@ export function prototypeIsClean(): boolean {
   );
 }
 const BASELINE = new Set(Object.getOwnPropertyNames(Object.prototype));
+
+/** The content of sampleMachine (what the working copy holds), for saving as a new machine. */
+export function sampleContent(overrides: Partial<MachineContent> = {}): MachineContent {
+  const { id: _id, createdAt: _c, updatedAt: _u, ...content } = sampleMachine();
+  return { ...content, ...overrides };
+}

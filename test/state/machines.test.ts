@@ -1,16 +1,13 @@
 import 'fake-indexeddb/auto';
 import { IDBFactory } from 'fake-indexeddb';
-import { createStore, get, setMany } from 'idb-keyval';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';
 import { FILE_FORMAT_NAME, MAX_MACHINES, parseMachinesFile } from '../../src/state/fileFormat';
 import type { Machine } from '../../src/state/model';
-import { prototypeIsClean, sampleMachine, sampleSetup } from './fixtures';
+import { deviceWith, storedNames, storedRecords } from './device';
+import { prototypeIsClean, sampleContent, sampleMachine, sampleSetup } from './fixtures';
 
 type MachinesModule = typeof import('../../src/state/machines');
-
-const MACHINES = 'trueturn/machines';
-const raw = () => createStore('trueturn', 'records');
 
 beforeEach(() => {
   globalThis.indexedDB = new IDBFactory() as unknown as typeof globalThis.indexedDB;
@@ -26,17 +23,6 @@ async function pageLoad(): Promise<MachinesModule> {
   const m = await import('../../src/state/machines');
   await m.loadMachines();
   return m;
-}
-
-/** A device that already holds these machines, and no example. */
-async function deviceWith(machines: Machine[]): Promise<void> {
-  await setMany(
-    [
-      ['trueturn/meta', { schema: 1 }],
-      [MACHINES, machines],
-    ],
-    raw(),
-  );
 }
 
 const names = (m: MachinesModule) => m.machines.value.map((x) => x.name);
@@ -56,7 +42,9 @@ describe('loading', () => {
     const m = await pageLoad();
     expect(names(m)).toEqual([EXAMPLE_MACHINE_NAME]);
     expect(m.machines.value[0].setup).toEqual(exampleSetup);
-    expect(await get(MACHINES, raw())).toEqual(m.machines.value);
+    expect([...(await storedRecords()).values()]).toEqual([
+      { version: 1, machine: m.machines.value[0] },
+    ]);
     expect(m.storageStatus.value).toEqual({ mode: 'saved' });
   });
 
@@ -71,7 +59,7 @@ describe('loading', () => {
     const first = await pageLoad();
     const saved = [];
     for (const name of ['Kiln fan', 'Auger 2', 'Auger 10', 'bucket elevator']) {
-      saved.push(await first.saveMachine(name, sampleSetup()));
+      saved.push(await first.saveMachine(name, sampleContent()));
     }
     const second = await pageLoad();
     expect(second.machines.value).toEqual(first.machines.value);
@@ -91,26 +79,25 @@ describe('loading', () => {
     await deviceWith([sampleMachine()]);
     vi.resetModules();
     const m = await import('../../src/state/machines');
-    await m.saveMachine('New one', sampleSetup());
+    await m.saveMachine('New one', sampleContent());
     expect(names(m)).toEqual(['Blower, test bay', 'New one']);
-    expect(((await get(MACHINES, raw())) as Machine[]).map((x) => x.name)).toEqual([
-      'Blower, test bay',
-      'New one',
-    ]);
+    expect(await storedNames()).toEqual(['Blower, test bay', 'New one']);
   });
 
   it('keeps every change when several are made at once', async () => {
     const m = await pageLoad();
-    await Promise.all(['A', 'B', 'C', 'D', 'E'].map((n) => m.saveMachine(n, sampleSetup())));
+    await Promise.all(['A', 'B', 'C', 'D', 'E'].map((n) => m.saveMachine(n, sampleContent())));
     const again = await pageLoad();
     expect(names(again)).toEqual(['A', 'B', 'C', 'D', 'E', EXAMPLE_MACHINE_NAME]);
   });
 });
 
 describe('saving, updating, renaming', () => {
-  it('saves a set-up under a trimmed name with fresh times and id', async () => {
+  it('saves a machine under a trimmed name with fresh times and id, and says it is on the device', async () => {
     const m = await pageLoad();
-    const saved = await m.saveMachine('  Pellet press  ', sampleSetup(), 'oil weekly');
+    const result = await m.saveMachine('  Pellet press  ', sampleContent({ notes: 'oil weekly' }));
+    expect(result.outcome).toEqual({ kind: 'saved', version: 1 });
+    const saved = result.machine;
     expect(saved.name).toBe('Pellet press');
     expect(saved.setup).toEqual(sampleSetup());
     expect(saved.notes).toBe('oil weekly');
@@ -121,22 +108,22 @@ describe('saving, updating, renaming', () => {
 
   it('refuses a blank or taken name and an invalid set-up, changing nothing', async () => {
     const m = await pageLoad();
-    await m.saveMachine('Pellet press', sampleSetup());
+    await m.saveMachine('Pellet press', sampleContent());
     const before = m.machines.value;
-    const stored = await get(MACHINES, raw());
-    expect((await rejection(m.saveMachine('  ', sampleSetup()))).message).toBe(
+    const stored = await storedRecords();
+    expect((await rejection(m.saveMachine('  ', sampleContent()))).message).toBe(
       'name must not be blank.',
     );
-    expect((await rejection(m.saveMachine('pellet PRESS ', sampleSetup()))).message).toBe(
+    expect((await rejection(m.saveMachine('pellet PRESS ', sampleContent()))).message).toBe(
       'A machine called "pellet PRESS" is already saved; choose another name.',
     );
     const bad = sampleSetup();
     bad.strobe.minFpm = 1e5;
-    const e = await rejection(m.saveMachine('Other', bad));
+    const e = await rejection(m.saveMachine('Other', sampleContent({ setup: bad })));
     expect(e.name).toBe('DataError');
-    expect(e.message).toBe('set-up › strobe › maxFpm must be above minFpm (got 100000 to 12000).');
+    expect(e.message).toBe('machine › strobe › maxFpm must be above minFpm (got 100000 to 12000).');
     expect(m.machines.value).toBe(before);
-    expect(await get(MACHINES, raw())).toEqual(stored);
+    expect(await storedRecords()).toEqual(stored);
   });
 
   it('refuses a new machine once the list is full', async () => {
@@ -146,7 +133,7 @@ describe('saving, updating, renaming', () => {
       ),
     );
     const m = await pageLoad();
-    expect((await rejection(m.saveMachine('One more', sampleSetup()))).message).toBe(
+    expect((await rejection(m.saveMachine('One more', sampleContent()))).message).toBe(
       'At most 500 machines can be saved; delete some before adding more.',
     );
     expect(m.machines.value).toHaveLength(MAX_MACHINES);
@@ -157,7 +144,11 @@ describe('saving, updating, renaming', () => {
     const m = await pageLoad();
     const next = sampleSetup();
     next.creepRpm = 5;
-    const updated = await m.updateMachine('machine-1', next);
+    const { machine: updated, outcome } = await m.updateMachine(
+      'machine-1',
+      sampleContent({ setup: next }),
+    );
+    expect(outcome).toEqual({ kind: 'saved', version: 2 });
     expect(updated.setup.creepRpm).toBe(5);
     expect(updated.createdAt).toBe(sampleMachine().createdAt);
     expect(Date.parse(updated.updatedAt)).toBeGreaterThan(Date.parse(sampleMachine().updatedAt));
@@ -171,7 +162,7 @@ describe('saving, updating, renaming', () => {
 
   it('refuses to update or rename a machine that is gone', async () => {
     const m = await pageLoad();
-    expect((await rejection(m.updateMachine('nope', sampleSetup()))).message).toBe(
+    expect((await rejection(m.updateMachine('nope', sampleContent()))).message).toBe(
       'That machine is no longer in the saved list.',
     );
     expect((await rejection(m.renameMachine('nope', 'X'))).message).toBe(
@@ -182,7 +173,9 @@ describe('saving, updating, renaming', () => {
   it('renames a machine, allowing a change of case of its own name but not a taken name', async () => {
     await deviceWith([sampleMachine(), sampleMachine({ id: 'other', name: 'Other' })]);
     const m = await pageLoad();
-    expect((await m.renameMachine('machine-1', 'BLOWER, test bay')).name).toBe('BLOWER, test bay');
+    expect((await m.renameMachine('machine-1', 'BLOWER, test bay')).machine.name).toBe(
+      'BLOWER, test bay',
+    );
     expect((await rejection(m.renameMachine('machine-1', 'other'))).message).toBe(
       'A machine called "other" is already saved; choose another name.',
     );
@@ -193,7 +186,9 @@ describe('saving, updating, renaming', () => {
   it('replaces the notes of a machine, refusing notes that are too long', async () => {
     await deviceWith([sampleMachine()]);
     const m = await pageLoad();
-    expect((await m.setMachineNotes('machine-1', 'belt\nchanged')).notes).toBe('belt\nchanged');
+    expect((await m.setMachineNotes('machine-1', 'belt\nchanged')).machine.notes).toBe(
+      'belt\nchanged',
+    );
     expect((await rejection(m.setMachineNotes('machine-1', 'x'.repeat(2001)))).message).toBe(
       'Notes can hold at most 2000 characters.',
     );
@@ -204,8 +199,8 @@ describe('duplicating', () => {
   it('saves a copy called "… copy", then "… copy 2", with the same set-up and a new id', async () => {
     await deviceWith([sampleMachine()]);
     const m = await pageLoad();
-    const one = await m.duplicateMachine('machine-1');
-    const two = await m.duplicateMachine('machine-1');
+    const one = (await m.duplicateMachine('machine-1')).machine;
+    const two = (await m.duplicateMachine('machine-1')).machine;
     expect([one.name, two.name]).toEqual(['Blower, test bay copy', 'Blower, test bay copy 2']);
     expect(one.setup).toEqual(sampleMachine().setup);
     expect(one.id).not.toBe('machine-1');
@@ -220,7 +215,7 @@ describe('duplicating', () => {
   it('shortens a long name so the copy stays within 80 characters', async () => {
     await deviceWith([sampleMachine({ name: 'L'.repeat(80) })]);
     const m = await pageLoad();
-    const copy = await m.duplicateMachine('machine-1');
+    const copy = (await m.duplicateMachine('machine-1')).machine;
     expect(copy.name).toBe('L'.repeat(75) + ' copy');
   });
 });
@@ -239,7 +234,7 @@ describe('deleting and undoing', () => {
       machine: sampleMachine({ id: 'b', name: 'B' }),
       position: 1,
     });
-    expect(((await get(MACHINES, raw())) as Machine[]).map((x) => x.id)).toEqual(['a', 'c']);
+    expect([...(await storedRecords()).keys()].sort()).toEqual(['a', 'c']);
 
     const back = await m.undoDelete();
     expect(back).toEqual(sampleMachine({ id: 'b', name: 'B' }));
@@ -274,7 +269,7 @@ describe('deleting and undoing', () => {
     await deviceWith([sampleMachine()]);
     const m = await pageLoad();
     await m.deleteMachine('machine-1');
-    await m.saveMachine('Blower, test bay', sampleSetup());
+    await m.saveMachine('Blower, test bay', sampleContent());
     expect((await m.undoDelete())?.name).toBe('Blower, test bay (restored)');
   });
 
@@ -289,7 +284,7 @@ describe('import and export', () => {
   function fileWith(machines: unknown[]): string {
     return JSON.stringify({
       format: FILE_FORMAT_NAME,
-      version: 1,
+      version: 2,
       exportedAt: '2025-04-01T10:00:00Z',
       machines,
     });
@@ -339,7 +334,7 @@ describe('import and export', () => {
     await deviceWith([sampleMachine()]);
     const m = await pageLoad();
     const before = m.machines.value;
-    const stored = await get(MACHINES, raw());
+    const stored = await storedRecords();
     const good = JSON.parse(JSON.stringify(sampleMachine({ id: 'n', name: 'New' })));
     const bad = { ...good, id: 'm', name: 'Bad', setup: { ...good.setup, creepRpm: 'slow' } };
     const attempts: Array<[string, string]> = [
@@ -357,14 +352,14 @@ describe('import and export', () => {
             name: `N ${i}`,
           })),
         ),
-        'This file holds 500 machines but only 499 more can be saved (at most 500); nothing was imported.',
+        'This holds 500 machines but only 499 more can be saved (at most 500); nothing was added.',
       ],
     ];
     for (const [text, error] of attempts) {
       expect(await m.importMachines(text)).toEqual({ ok: false, error });
     }
     expect(m.machines.value).toBe(before);
-    expect(await get(MACHINES, raw())).toEqual(stored);
+    expect(await storedRecords()).toEqual(stored);
     expect(prototypeIsClean()).toBe(true);
   });
 });
@@ -375,28 +370,36 @@ describe('when the browser cannot save', () => {
     const m = await pageLoad();
     expect(m.storageStatus.value.mode).toBe('memory');
     expect(names(m)).toEqual([EXAMPLE_MACHINE_NAME]);
-    const kept = await m.saveMachine('Kept for now', sampleSetup());
+    const kept = (await m.saveMachine('Kept for now', sampleContent())).machine;
     await m.deleteMachine(kept.id);
     expect(names(m)).toEqual([EXAMPLE_MACHINE_NAME]);
     expect((await m.undoDelete())?.name).toBe('Kept for now');
     expect(names(m)).toEqual([EXAMPLE_MACHINE_NAME, 'Kept for now']);
   });
 
-  it('keeps the machine on screen and says so when a save fails', async () => {
+  it('keeps a machine in the tab, never says saved, and saves it by itself once writes work again', async () => {
     await deviceWith([sampleMachine()]);
     const m = await pageLoad();
-    vi.spyOn(globalThis.IDBObjectStore.prototype, 'put').mockImplementation(() => {
+    const put = vi.spyOn(globalThis.IDBObjectStore.prototype, 'put').mockImplementation(() => {
       throw new DOMException('full', 'QuotaExceededError');
     });
-    const saved = await m.saveMachine('New', sampleSetup());
+    const { machine: saved, outcome } = await m.saveMachine('New', sampleContent());
+    expect(outcome).toEqual({ kind: 'held' });
     expect(m.machines.value).toContainEqual(saved);
-    expect(m.storageMessage.value).toMatch(
-      /^The last change could not be saved on this device \(the storage on this device is full\)/,
-    );
-    expect(m.storageStatus.value.mode).toBe('memory');
-    // Later changes keep working in memory.
+    expect(m.heldIds.value.has(saved.id)).toBe(true);
+    expect(m.storageStatus.value.mode).toBe('failing');
+    expect(m.storageStatus.value.reason).toMatch(/the storage on this device is full/);
+    // Later changes are held too, and the device keeps what it had.
     await m.renameMachine(saved.id, 'Renamed');
     expect(names(m)).toEqual(['Blower, test bay', 'Renamed']);
+    expect(await storedNames()).toEqual(['Blower, test bay']);
+    // Space is freed: the next try (on the store's own timer) writes everything held.
+    put.mockRestore();
+    await vi.waitFor(async () => expect(await storedNames()).toEqual(['Blower, test bay', 'Renamed']), {
+      timeout: 5000,
+    });
+    expect(m.storageStatus.value).toEqual({ mode: 'saved' });
+    expect(m.heldIds.value.size).toBe(0);
   });
 });
 
