@@ -395,9 +395,12 @@ describe('when the browser cannot save', () => {
     expect(await storedNames()).toEqual(['Blower, test bay']);
     // Space is freed: the next try (on the store's own timer) writes everything held.
     put.mockRestore();
-    await vi.waitFor(async () => expect(await storedNames()).toEqual(['Blower, test bay', 'Renamed']), {
-      timeout: 5000,
-    });
+    await vi.waitFor(
+      async () => expect(await storedNames()).toEqual(['Blower, test bay', 'Renamed']),
+      {
+        timeout: 5000,
+      },
+    );
     expect(m.storageStatus.value).toEqual({ mode: 'saved' });
     expect(m.heldIds.value.size).toBe(0);
   });

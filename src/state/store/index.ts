@@ -210,6 +210,8 @@ function openChannel(): BroadcastChannel | null {
   if (typeof BroadcastChannel !== 'function') return null;
   const c = new BroadcastChannel(CHANNEL_NAME);
   c.onmessage = () => listener?.remoteChange();
+  // Outside a browser (Node's channel) a channel would keep the process alive.
+  (c as { unref?: () => void }).unref?.();
   return c;
 }
 
