@@ -39,7 +39,7 @@ describe('exportMachinesJson', () => {
     const parsed = JSON.parse(text);
     expect(Object.keys(parsed)).toEqual(['format', 'version', 'exportedAt', 'machines']);
     expect(parsed.format).toBe('trueturn-machines');
-    expect(parsed.version).toBe(1);
+    expect(parsed.version).toBe(2);
     expect(parsed.exportedAt).toBe('2025-04-01T10:00:00.000Z');
     expect(parsed.machines).toEqual([sampleMachine()]);
     expect(text).toContain('\n  "format": "trueturn-machines",\n');
@@ -57,15 +57,19 @@ describe('exportMachinesJson', () => {
   });
 
   it('drops the indentation when that keeps a large export readable again', () => {
-    // About 2.6 kB per machine compact, 3.2 kB indented: 360 machines fit only without indentation.
+    // As many machines as fit compact (measured on one), which do not fit indented.
     const long = 'ü'.repeat(1000); // 2000 UTF-8 bytes of notes per machine
-    const many = Array.from({ length: 360 }, (_, i) => sampleMachine({ id: `m${i}`, notes: long }));
+    const one = utf8Bytes(JSON.stringify(sampleMachine({ id: 'm000', notes: long }))) + 1;
+    const count = Math.floor((MAX_FILE_BYTES - 200) / one);
+    const many = Array.from({ length: count }, (_, i) =>
+      sampleMachine({ id: `m${String(i).padStart(3, '0')}`, notes: long }),
+    );
     expect(utf8Bytes(JSON.stringify({ machines: many }, null, 2))).toBeGreaterThan(MAX_FILE_BYTES);
     const text = exportMachinesJson(many, EXPORTED_AT);
     expect(utf8Bytes(text)).toBeLessThanOrEqual(MAX_FILE_BYTES);
     expect(text.startsWith('{"format":"trueturn-machines"')).toBe(true);
     const back = parseMachinesFile(text);
-    expect(back.ok && back.machines.length).toBe(360);
+    expect(back.ok && back.machines.length).toBe(count);
   });
 
   it('refuses an export that could not be imported again', () => {
@@ -107,14 +111,14 @@ describe('parseMachinesFile', () => {
   });
 
   it('refuses a newer version and says which version this app reads', () => {
-    expect(errorOf(fileOf([], { version: 2 }))).toBe(
-      'This file is machines-file version 2; this app reads versions 0 to 1. It was made by a newer Trueturn: update this app, then import it again.',
+    expect(errorOf(fileOf([], { version: 3 }))).toBe(
+      'This file is machines-file version 3; this app reads versions 0 to 2. It was made by a newer Trueturn: update this app, then import it again.',
     );
   });
 
   it('refuses a version it has no upgrade for, and versions that are not whole numbers', () => {
     expect(errorOf(fileOf([], { version: -1 }))).toBe(
-      'This file is machines-file version -1; this app reads versions 0 to 1.',
+      'This file is machines-file version -1; this app reads versions 0 to 2.',
     );
     expect(errorOf(fileOf([], { version: '1' }))).toBe(
       `The file's "version" must be a whole number (got the text "1").`,
@@ -266,6 +270,29 @@ describe('migrations', () => {
     }) as { exportedAt: string; version: number };
     expect(upgraded.version).toBe(1);
     expect(upgraded.exportedAt).toBe('2024-06-01T00:00:00.000Z');
+  });
+
+  it('a version 1 file (the layout before this one) still imports, with a blank site and header and every tool at its start', () => {
+    const { site: _s, assessedBy: _a, assessedOn: _o, tools: _t, ...old } = sampleMachine();
+    const file = JSON.stringify({
+      format: FILE_FORMAT_NAME,
+      version: 1,
+      exportedAt: '2025-04-01T10:00:00Z',
+      machines: [old],
+    });
+    expect(parseMachinesFile(file)).toEqual({ ok: true, machines: [sampleMachine()] });
+  });
+
+  it('a version 1 machine with a field of the new layout is refused, naming it', () => {
+    const file = JSON.stringify({
+      format: FILE_FORMAT_NAME,
+      version: 1,
+      exportedAt: '2025-04-01T10:00:00Z',
+      machines: [sampleMachine()],
+    });
+    expect(errorOf(file)).toMatch(
+      /^machine 1 has a field this app does not know: "(site|assessedBy|assessedOn|tools)"\.$/,
+    );
   });
 
   it('refuses a version 0 file that does not have the version 0 shape', () => {

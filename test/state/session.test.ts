@@ -1,53 +1,75 @@
 import { beforeEach, describe, expect, test } from 'vitest';
-import { defaultSetup, type Setup } from '../../src/state/model';
-import { openSession, sessionMessage } from '../../src/state/session';
-import { activePart, replaceSetup, setFeatures, setup } from '../../src/state/setup';
+import { defaultSetup, type MachineContent, type Setup } from '../../src/state/model';
+import {
+  acceptOfferedShare,
+  offerShare,
+  offeredShare,
+  openSession,
+  sessionMessage,
+} from '../../src/state/session';
+import { encodeShareFragment } from '../../src/state/shareLink';
+import { activePart, setFeatures, setup } from '../../src/state/setup';
+import { harmonics } from '../../src/state/toolInputs';
+import { header, startNewMachine, workRecord } from '../../src/state/work';
+import { sampleContent } from './fixtures';
 
 beforeEach(() => {
-  replaceSetup(defaultSetup);
+  startNewMachine();
   sessionMessage.value = null;
+  offeredShare.value = null;
+});
+
+const holding = (setup: Setup, name = ''): MachineContent => ({
+  ...sampleContent({ setup, name }),
 });
 
 describe('opening the session', () => {
-  const shared: Setup = { ...structuredClone(defaultSetup), creepRpm: 7 };
-  const last: Setup = { ...structuredClone(defaultSetup), creepRpm: 3 };
+  const shared = holding({ ...structuredClone(defaultSetup), creepRpm: 7 }, 'Shared press');
+  const last = holding({ ...structuredClone(defaultSetup), creepRpm: 3 }, 'Last visit');
+  const lastRecord = { openId: null, baseVersion: null, content: last };
 
-  test('a share link wins over the last set-up and is cleared from the address', async () => {
+  test('a share link wins over the last visit, carries the machine name, and is cleared from the address', async () => {
     let cleared = false;
     await openSession({
-      hash: '#s=1.x',
-      decodeShare: () => ({ ok: true, setup: shared }),
-      loadLast: async () => last,
+      hash: '#s=2.x',
+      decodeShare: () => ({ ok: true, content: shared }),
+      loadLast: async () => lastRecord,
       clearHash: () => (cleared = true),
     });
     expect(setup.value.creepRpm).toBe(7);
+    expect(header.value.name).toBe('Shared press');
     expect(cleared).toBe(true);
-    expect(sessionMessage.value?.kind).toBe('info');
-  });
-
-  test('a refused link shows its message and the default set-up, not the last one', async () => {
-    setFeatures(9);
-    await openSession({
-      hash: '#s=1.broken',
-      decodeShare: () => ({ ok: false, error: 'This share link is damaged.' }),
-      loadLast: async () => last,
-      clearHash: () => undefined,
-    });
-    expect(setup.value).toEqual(defaultSetup);
     expect(sessionMessage.value).toEqual({
-      kind: 'problem',
-      text: 'This share link is damaged. The default set-up is shown instead.',
+      kind: 'info',
+      text: 'Opened "Shared press" from a share link. Save it as a machine to keep it.',
     });
   });
 
-  test('without a link, the last set-up comes back', async () => {
+  test('a refused link says why and replaces nothing: the last visit comes back', async () => {
     await openSession({
-      hash: '',
-      decodeShare: () => ({ ok: false, error: null }),
-      loadLast: async () => last,
+      hash: '#s=2.broken',
+      decodeShare: () => ({ ok: false, error: 'This share link is damaged.' }),
+      loadLast: async () => lastRecord,
       clearHash: () => undefined,
     });
     expect(setup.value.creepRpm).toBe(3);
+    expect(sessionMessage.value).toEqual({
+      kind: 'problem',
+      text: 'This share link is damaged. Nothing was replaced: what you had on screen is kept.',
+    });
+  });
+
+  test('without a link, the last visit comes back, every tool included', async () => {
+    const withTools = structuredClone(lastRecord);
+    withTools.content.tools.logger.harmonics = 9;
+    await openSession({
+      hash: '',
+      decodeShare: () => ({ ok: false, error: null }),
+      loadLast: async () => withTools,
+      clearHash: () => undefined,
+    });
+    expect(setup.value.creepRpm).toBe(3);
+    expect(harmonics.value).toBe(9);
     expect(sessionMessage.value).toBeNull();
   });
 
@@ -57,7 +79,7 @@ describe('opening the session', () => {
       decodeShare: () => ({ ok: false, error: null }),
       loadLast: async () => {
         setFeatures(11);
-        return last;
+        return lastRecord;
       },
       clearHash: () => undefined,
     });
@@ -65,20 +87,50 @@ describe('opening the session', () => {
     expect(setup.value.creepRpm).toBe(defaultSetup.creepRpm);
   });
 
-  test('a change finished before the last set-up is asked for is not overwritten either', async () => {
-    // The page opens with `untouched`; the user types while storage is still opening.
-    const untouched = setup.peek();
+  test('a change finished before the last visit is asked for is not overwritten either', async () => {
+    const untouched = workRecord.peek();
     setFeatures(12);
     await openSession(
       {
         hash: '',
         decodeShare: () => ({ ok: false, error: null }),
-        loadLast: async () => last,
+        loadLast: async () => lastRecord,
         clearHash: () => undefined,
       },
       untouched,
     );
     expect(activePart.value.features).toBe(12);
     expect(setup.value.creepRpm).toBe(defaultSetup.creepRpm);
+  });
+});
+
+describe('a share link opened while the app is open', () => {
+  test('is offered, not opened over what is on screen, until the user accepts it', () => {
+    setFeatures(5);
+    let cleared = false;
+    offerShare(encodeShareFragment(sampleContent({ name: 'Offered fan' })), () => (cleared = true));
+    expect(cleared).toBe(true);
+    expect(offeredShare.value?.name).toBe('Offered fan');
+    expect(activePart.value.features).toBe(5);
+    acceptOfferedShare();
+    expect(header.value.name).toBe('Offered fan');
+    expect(setup.value).toEqual(sampleContent().setup);
+    expect(offeredShare.value).toBeNull();
+  });
+
+  test('a refused one says why and changes nothing', () => {
+    setFeatures(5);
+    offerShare('#s=2.AAAA', () => undefined);
+    expect(offeredShare.value).toBeNull();
+    expect(activePart.value.features).toBe(5);
+    expect(sessionMessage.value?.kind).toBe('problem');
+    expect(sessionMessage.value?.text).toMatch(/Nothing was replaced/);
+  });
+
+  test('an address with no share data is left alone', () => {
+    let cleared = false;
+    offerShare('#about', () => (cleared = true));
+    expect(cleared).toBe(false);
+    expect(sessionMessage.value).toBeNull();
   });
 });

@@ -1,6 +1,13 @@
 import fc from 'fast-check';
 import { describe, expect, it, vi } from 'vitest';
-import { defaultSetup, type PartSpec, type Setup } from '../../src/state/model';
+import {
+  blankHeader,
+  defaultSetup,
+  defaultToolInputs,
+  type MachineContent,
+  type PartSpec,
+  type Setup,
+} from '../../src/state/model';
 import {
   decodeShareFragment,
   encodeShareFragment,
@@ -9,7 +16,10 @@ import {
   SHARE_LINK_VERSION,
 } from '../../src/state/shareLink';
 import { DataError } from '../../src/state/validate';
-import { prototypeIsClean, sampleSetup } from './fixtures';
+import { prototypeIsClean, sampleContent, sampleSetup } from './fixtures';
+
+/** A machine's content holding `setup`, as the working copy would. */
+const holding = (setup: Setup): MachineContent => sampleContent({ setup });
 
 // Node's own base64url codec (RFC 4648 §5), an independent check of ours. Typed by hand: the
 // project's type-check does not load Node's types.
@@ -28,24 +38,24 @@ const BROKEN = 'This share link is damaged or cut short; ask for the link again.
 
 describe('encodeShareFragment', () => {
   it('writes "#s=", the version, a dot and base64url text only', () => {
-    expect(encodeShareFragment(defaultSetup)).toMatch(/^#s=1\.[A-Za-z0-9_-]+$/);
+    expect(encodeShareFragment(holding(defaultSetup))).toMatch(/^#s=2\.[A-Za-z0-9_-]+$/);
   });
 
-  it('carries the set-up as UTF-8 JSON that Node decodes to the same text', () => {
-    const setup = sampleSetup();
-    setup.parts[0].name = 'Lüfter Ø 300 — 風扇';
-    const payload = encodeShareFragment(setup).slice('#s=1.'.length);
-    expect(NodeBuffer.from(payload, 'base64url').toString('utf8')).toBe(JSON.stringify(setup));
+  it('carries the whole machine, name, site and tools included, as UTF-8 JSON that Node decodes to the same text', () => {
+    const content = sampleContent({ name: 'Lüfter Ø 300 — 風扇', site: 'Halle 2' });
+    content.tools.logger.sampleHz = 2000;
+    const payload = encodeShareFragment(content).slice('#s=2.'.length);
+    expect(JSON.parse(NodeBuffer.from(payload, 'base64url').toString('utf8'))).toEqual(content);
   });
 
-  it('keeps a typical set-up well under the size limit', () => {
-    expect(encodeShareFragment(sampleSetup()).length).toBeLessThan(1000);
+  it('keeps a typical machine well under the size limit', () => {
+    expect(encodeShareFragment(sampleContent()).length).toBeLessThan(2500);
   });
 
   it('refuses an invalid set-up', () => {
     const s = sampleSetup();
     s.parts[0].features = 0;
-    expect(() => encodeShareFragment(s)).toThrow(DataError);
+    expect(() => encodeShareFragment(holding(s))).toThrow(DataError);
   });
 
   it('refuses a set-up too large for a link', () => {
@@ -56,23 +66,32 @@ describe('encodeShareFragment', () => {
       tolerancePercent: 1,
     };
     const big: Setup = { ...sampleSetup(), parts: Array.from({ length: 20 }, () => ({ ...part })) };
-    expect(() => encodeShareFragment(big)).toThrow('This set-up is too large to share as a link');
+    expect(() => encodeShareFragment(holding(big))).toThrow(
+      'This machine is too large to share as a link',
+    );
   });
 });
 
 describe('decodeShareFragment', () => {
-  it('gets back exactly the set-up that was encoded', () => {
-    for (const setup of [defaultSetup, sampleSetup()]) {
-      expect(decodeShareFragment(encodeShareFragment(setup))).toEqual({ ok: true, setup });
+  it('gets back exactly the machine that was encoded', () => {
+    for (const content of [holding(defaultSetup), sampleContent()]) {
+      expect(decodeShareFragment(encodeShareFragment(content))).toEqual({ ok: true, content });
     }
   });
 
+  it('still opens a version 1 link, which carried a set-up only, with a blank name and tools at their start', () => {
+    expect(decodeShareFragment(fragmentOf(JSON.stringify(sampleSetup()), 1))).toEqual({
+      ok: true,
+      content: { ...blankHeader(), setup: sampleSetup(), tools: defaultToolInputs() },
+    });
+  });
+
   it('reads a fragment without "#" and among other fields', () => {
-    const payload = encodeShareFragment(sampleSetup()).slice(1);
+    const payload = encodeShareFragment(sampleContent()).slice(1);
     expect(decodeShareFragment(payload).ok).toBe(true);
     expect(decodeShareFragment(`#view=chart&${payload}&x=1`)).toEqual({
       ok: true,
-      setup: sampleSetup(),
+      content: sampleContent(),
     });
   });
 
@@ -83,7 +102,7 @@ describe('decodeShareFragment', () => {
   });
 
   it('refuses a link cut short at any point', () => {
-    const fragment = encodeShareFragment(sampleSetup());
+    const fragment = encodeShareFragment(sampleContent());
     for (let end = '#s='.length; end < fragment.length; end++) {
       const r = decodeShareFragment(fragment.slice(0, end));
       expect(r.ok).toBe(false);
@@ -92,7 +111,7 @@ describe('decodeShareFragment', () => {
   });
 
   it('refuses characters that base64url does not use', () => {
-    const fragment = encodeShareFragment(sampleSetup());
+    const fragment = encodeShareFragment(sampleContent());
     expect(decodeShareFragment(fragment.slice(0, 20) + '+/=' + fragment.slice(20))).toEqual({
       ok: false,
       error: BROKEN,
@@ -109,13 +128,13 @@ describe('decodeShareFragment', () => {
   });
 
   it('refuses a tampered set-up with the field that is wrong', () => {
-    const tampered = JSON.stringify(sampleSetup()).replace('"features":12', '"features":-12');
+    const tampered = JSON.stringify(sampleContent()).replace('"features":12', '"features":-12');
     expect(decodeShareFragment(fragmentOf(tampered))).toEqual({
       ok: false,
       error:
         'This share link was refused: link › parts › 2 › features must be a whole number from 1 to 100000 (got -12).',
     });
-    const extra = JSON.stringify({ ...sampleSetup(), script: 'alert(1)' });
+    const extra = JSON.stringify({ ...sampleContent(), script: 'alert(1)' });
     expect(decodeShareFragment(fragmentOf(extra))).toEqual({
       ok: false,
       error: 'This share link was refused: link has a field this app does not know: "script".',
@@ -123,13 +142,13 @@ describe('decodeShareFragment', () => {
   });
 
   it('refuses hostile keys and pollutes nothing', () => {
-    const hostile = JSON.stringify(sampleSetup()).replace('{', '{"__proto__":{"polluted":true},');
+    const hostile = JSON.stringify(sampleContent()).replace('{', '{"__proto__":{"polluted":true},');
     expect(decodeShareFragment(fragmentOf(hostile))).toEqual({
       ok: false,
       error:
         'This share link was refused: link contains a field called "__proto__", which is never allowed in Trueturn data.',
     });
-    const inPart = JSON.stringify(sampleSetup()).replace(
+    const inPart = JSON.stringify(sampleContent()).replace(
       '"name":"Motor"',
       '"constructor":{"prototype":{"polluted":true}},"name":"Motor"',
     );
@@ -170,30 +189,31 @@ describe('decodeShareFragment', () => {
   });
 
   it(`still reads a good link among other fields, up to ${MAX_FRAGMENT_CHARS} characters in all`, () => {
-    const good = encodeShareFragment(sampleSetup()).slice(1);
+    const good = encodeShareFragment(sampleContent()).slice(1);
     const padded = `#${good}&note=${'x'.repeat(MAX_FRAGMENT_CHARS - good.length - 7)}`;
     expect(padded.length).toBe(MAX_FRAGMENT_CHARS);
-    expect(decodeShareFragment(padded)).toEqual({ ok: true, setup: sampleSetup() });
+    expect(decodeShareFragment(padded)).toEqual({ ok: true, content: sampleContent() });
     expect(decodeShareFragment(padded + 'x').ok).toBe(false);
   });
 
   it('refuses a link from a newer version and says which version it reads', () => {
-    expect(decodeShareFragment(fragmentOf(JSON.stringify(sampleSetup()), 2))).toEqual({
+    expect(decodeShareFragment(fragmentOf(JSON.stringify(sampleContent()), 3))).toEqual({
       ok: false,
       error:
-        'This share link is version 2; this app reads version 1. It was made by a newer Trueturn: update this app.',
+        'This share link is version 3; this app reads versions 1 to 2. It was made by a newer Trueturn: update this app.',
     });
     expect(decodeShareFragment(fragmentOf('{}', 0))).toEqual({
       ok: false,
-      error: 'This share link is version 0; this app reads version 1.',
+      error: 'This share link is version 0; this app reads versions 1 to 2.',
     });
   });
 
   it('hands back markup in a name as the same plain text, for callers to show as text', () => {
-    const s = sampleSetup();
-    s.parts[0].name = '<img src=x onerror=alert(1)>';
-    const r = decodeShareFragment(encodeShareFragment(s));
-    expect(r.ok && r.setup.parts[0].name).toBe('<img src=x onerror=alert(1)>');
+    const c = sampleContent({ name: '<b>Fan</b>' });
+    c.setup.parts[0].name = '<img src=x onerror=alert(1)>';
+    const r = decodeShareFragment(encodeShareFragment(c));
+    expect(r.ok && r.content.setup.parts[0].name).toBe('<img src=x onerror=alert(1)>');
+    expect(r.ok && r.content.name).toBe('<b>Fan</b>');
   });
 
   it('never throws, whatever the fragment', () => {
@@ -272,7 +292,10 @@ describe('share links, for any valid set-up', () => {
   it('decoding an encoded set-up gives it back unchanged', () => {
     fc.assert(
       fc.property(setup, (s) => {
-        expect(decodeShareFragment(encodeShareFragment(s))).toEqual({ ok: true, setup: s });
+        expect(decodeShareFragment(encodeShareFragment(holding(s)))).toEqual({
+          ok: true,
+          content: holding(s),
+        });
       }),
       { numRuns: 300 },
     );
