@@ -110,21 +110,23 @@ export async function startSession(): Promise<void> {
   // What the page opened with: anything typed while storage opens must win over the last visit,
   // and is kept from the first keystroke (a reload a moment later must not lose it).
   const untouched = workRecord.peek();
+  const hash = location.hash;
   keepWork();
   const clearHash = () =>
     history.replaceState(history.state, '', location.pathname + location.search);
-  addEventListener('hashchange', () => offerShare(location.hash, clearHash));
   await openStore();
   storageOpened.value = true;
   await openSession(
     {
-      hash: location.hash,
+      hash,
       decodeShare: decodeShareFragment,
       loadLast: async () => (await loadAll()).work,
       clearHash,
     },
     untouched,
   );
+  // Links opened from now on are offered, never opened over what is on screen.
+  addEventListener('hashchange', () => offerShare(location.hash, clearHash));
   await loadMachines();
   // A working copy opened from a machine deleted meanwhile is no longer one of the saved ones.
   const id = openMachineId.peek();

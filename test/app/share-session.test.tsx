@@ -3,9 +3,16 @@ import 'fake-indexeddb/auto';
 import { cleanup, render, screen } from '@testing-library/preact';
 import { afterEach, describe, expect, test } from 'vitest';
 import { App } from '../../src/app/app';
-import { defaultSetup, type Setup } from '../../src/state/model';
+import {
+  blankHeader,
+  defaultSetup,
+  defaultToolInputs,
+  type MachineContent,
+  type Setup,
+} from '../../src/state/model';
 import { decodeShareFragment, encodeShareFragment } from '../../src/state/shareLink';
 import { replaceSetup, setup } from '../../src/state/setup';
+import { header } from '../../src/state/work';
 import { openSession, sessionMessage, startSession } from '../../src/state/session';
 
 afterEach(cleanup);
@@ -16,20 +23,30 @@ const shared: Setup = {
   samplerKind: 'camera',
 };
 
+/** A shared machine holding `s`. */
+const machineOf = (s: Setup, name = 'Pump 3'): MachineContent => ({
+  ...blankHeader(name),
+  setup: s,
+  tools: defaultToolInputs(),
+});
+
 describe('opening a share link', () => {
-  test('a link in the address opens its set-up, and the address is cleaned', async () => {
-    location.hash = encodeShareFragment(shared);
+  test('a link in the address opens its machine, name included, and the address is cleaned', async () => {
+    location.hash = encodeShareFragment(machineOf(shared));
     await startSession();
     expect(setup.value).toEqual(shared);
+    expect(header.value.name).toBe('Pump 3');
     expect(location.hash).toBe('');
     render(<App />);
-    expect(screen.getByTestId('session-message').textContent).toMatch(/shared set-up/);
+    expect(screen.getByTestId('session-message').textContent).toMatch(
+      /^Opened "Pump 3" from a share link\. Save it as a machine to keep it\./,
+    );
     expect(screen.getByTestId('part-name').textContent).toContain('Pump impeller');
   });
 
-  test('a tampered link shows a message and the default set-up', async () => {
+  test('a tampered link shows a message and leaves what was on screen', async () => {
     replaceSetup(shared);
-    const good = encodeShareFragment(shared);
+    const good = encodeShareFragment(machineOf(shared));
     const tampered = good.slice(0, -6) + 'AAAAAA';
     await openSession({
       hash: tampered,
@@ -37,18 +54,20 @@ describe('opening a share link', () => {
       loadLast: async () => null,
       clearHash: () => {},
     });
-    expect(setup.value).toEqual(defaultSetup);
+    expect(setup.value).toEqual(shared);
     render(<App />);
-    expect(screen.getByTestId('session-message').textContent).toMatch(/default set-up is shown/);
+    expect(screen.getByTestId('session-message').textContent).toMatch(
+      /Nothing was replaced: what you had on screen is kept\./,
+    );
     expect(sessionMessage.value?.kind).toBe('problem');
   });
 
-  test('a 1 MB link is refused by its length: a plain message, the default set-up, nothing loaded', async () => {
+  test('a 1 MB link is refused by its length: a plain message, and what was on screen stays', async () => {
     replaceSetup(shared);
     let lastLoaded = false;
     let cleared = false;
     await openSession({
-      hash: `#s=1.${'A'.repeat(1024 * 1024)}`,
+      hash: `#s=2.${'A'.repeat(1024 * 1024)}`,
       decodeShare: decodeShareFragment,
       loadLast: async () => {
         lastLoaded = true;
@@ -56,12 +75,12 @@ describe('opening a share link', () => {
       },
       clearHash: () => (cleared = true),
     });
-    expect(setup.value).toEqual(defaultSetup);
+    expect(setup.value).toEqual(shared);
     expect(sessionMessage.value).toEqual({
       kind: 'problem',
-      text: 'This share link is too long to be a Trueturn link; it was not opened. The default set-up is shown instead.',
+      text: 'This share link is too long to be a Trueturn link; it was not opened. Nothing was replaced: what you had on screen is kept.',
     });
-    expect(lastLoaded).toBe(false);
+    expect(lastLoaded).toBe(true);
     expect(cleared).toBe(true);
   });
 
@@ -78,7 +97,7 @@ describe('opening a share link', () => {
       ],
     };
     await openSession({
-      hash: encodeShareFragment(hostile),
+      hash: encodeShareFragment(machineOf(hostile, '<b onclick="globalThis.__hit=2">x</b>')),
       decodeShare: decodeShareFragment,
       loadLast: async () => null,
       clearHash: () => {},
