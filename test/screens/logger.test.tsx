@@ -15,7 +15,7 @@ import {
   sampleHz,
 } from '../../src/state/loggerPlanning';
 import { defaultSetup, type Setup } from '../../src/state/model';
-import { replaceSetup, setup } from '../../src/state/setup';
+import { replaceSetup, setSpeedRpm, setup } from '../../src/state/setup';
 import { startSession } from '../../src/state/session';
 import { LoggerScreen } from '../../src/screens/logger';
 import { loggerCsv } from '../../src/screens/logger/csv';
@@ -155,10 +155,26 @@ describe('the data logger screen', () => {
     expect(rowOf('added tone 2').textContent).toContain('2,000 Hz');
   });
 
-  test('the shaft speed is the chosen part\u2019s speed, edited from here too', () => {
-    type('Shaft speed', '3000');
-    expect(setup.value.parts[0].speedRpm).toBe(3000);
+  test('the shaft speed is read from the chosen part and follows it', () => {
+    act(() => setSpeedRpm(3000));
+    expect(screen.getByTestId('logger-shaft').textContent).toContain('3,000 rpm');
     expect(rowOf('1× shaft').textContent).toContain('50 Hz');
+  });
+
+  test('nothing typed in the logger writes a speed into the machine\u2019s parts', () => {
+    const before = setup.value.parts;
+    expect(screen.queryByLabelText('Shaft speed')).toBeNull();
+    for (const [label, text] of [
+      ['Shaft harmonics', '6'],
+      ['Blade counts', '5'],
+      ['Gear teeth', '23'],
+      ['Other tones', '50'],
+      ['Sample rate', '2000'],
+      ['Converter bits', '12'],
+    ] as const) {
+      type(label, text);
+    }
+    expect(setup.value.parts).toEqual(before);
   });
 
   test('bad text gets a message beside its field and the last good table stays', () => {
@@ -183,7 +199,7 @@ describe('the data logger screen', () => {
 
   test('a shaft that does not turn: the core refuses it and the last table stays with its message', () => {
     const before = loggerPlanning.result.value;
-    type('Shaft speed', '0');
+    act(() => setSpeedRpm(0));
     // docs/physics.md §10: the answer is withdrawn with the core's words; the table stays, marked not current.
     expect(screen.getByTestId('withdrawn').textContent).toMatch(/shaft speed/);
     expect(screen.getByTestId('not-current')).toBeTruthy();
@@ -198,7 +214,6 @@ describe('the data logger screen', () => {
     fireEvent.click(screen.getByLabelText('Butterworth'));
     for (const text of ['', 'abc', 'NaN', '1e999', '-', '0', '-0', '1e-320', '99999999999']) {
       for (const label of [
-        'Shaft speed',
         'Shaft harmonics',
         'Blade counts',
         'Gear teeth',
@@ -221,7 +236,8 @@ describe('the data logger screen', () => {
     expect(lines[0]).toBe(
       'component,frequency (Hz),sample rate (Hz),lands at (Hz),aliased,filter gain (dB),attenuation needed (dB),converter range (dB),pass,in words',
     );
-    expect(lines[1].startsWith('1× shaft,29.5,1000,29.5,false,0,0,98.08,true,')).toBe(true);
+    // Rounded as on screen, yes and no in words (no true/false for a spreadsheet to misread).
+    expect(lines[1].startsWith('1× shaft,29.5,1000,29.5,no,0,0,98.08,yes,')).toBe(true);
     expect(lines).toHaveLength(plan.components.length + 2);
   });
 });

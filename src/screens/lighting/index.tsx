@@ -5,7 +5,7 @@ import {
   type LightingCheck,
   type PartUnderLight,
 } from '../../core';
-import { formatNumber } from '../../words/format';
+import { formatNumber, preciseNumber, shownNumber } from '../../words/format';
 import { lighting, lightingCautions } from '../../state/lighting';
 import { lightWaveOf, setup } from '../../state/setup';
 import { Cautions } from '../../ui/cautions';
@@ -209,17 +209,17 @@ export function lightingCsv(
 ): string {
   const columns: CsvColumn<PartRow>[] = [
     { label: 'part', value: (r) => r.part.name },
-    { label: 'speed (rpm)', value: (r) => r.speedRpm },
+    { label: 'speed (rpm)', value: (r) => shownNumber(r.speedRpm) },
     { label: 'blades or marks', value: (r) => r.features },
-    { label: 'tolerance (± %)', value: (r) => r.tolerancePercent },
-    { label: 'flicker (Hz)', value: () => result.flickerHz },
-    { label: 'modulation (%)', value: () => modulationPercent },
+    { label: 'tolerance (± %)', value: (r) => shownNumber(r.tolerancePercent) },
+    { label: 'flicker (Hz)', value: () => preciseNumber(result.flickerHz) },
+    { label: 'modulation (%)', value: () => shownNumber(modulationPercent) },
     { label: 'IEEE 1789 class', value: () => result.risk },
-    { label: 'IEEE 1789 no-effect line (%)', value: () => result.noEffectPercent },
-    { label: 'IEEE 1789 low-risk line (%)', value: () => result.lowRiskPercent },
-    { label: 'SVM', value: () => result.svm },
+    { label: 'IEEE 1789 no-effect line (%)', value: () => shownNumber(result.noEffectPercent) },
+    { label: 'IEEE 1789 low-risk line (%)', value: () => shownNumber(result.lowRiskPercent) },
+    { label: 'SVM', value: () => shownNumber(result.svm) },
     { label: 'look at nominal speed', value: (r) => r.part.look },
-    { label: 'apparent speed (rpm)', value: (r) => r.part.apparentRpm },
+    { label: 'apparent speed (rpm)', value: (r) => shownNumber(r.part.apparentRpm) },
     { label: 'worst look within tolerance', value: (r) => r.part.worstLook },
     { label: 'images', value: (r) => r.part.images },
     { label: 'verdict', value: (r) => r.part.verdict },

@@ -1,5 +1,6 @@
 // The speed finder's table as CSV (RFC 4180 via the core): the candidates, then the readings.
 import { csvTable, type StepCandidate } from '../../core';
+import { preciseNumber, shownNumber } from '../../words/format';
 import type { RecordedReading } from '../../state/speedFinder';
 import { viewWords } from '../../words/look';
 import { candidateNote, candidateStatus } from '../../words/speedFinder';
@@ -20,7 +21,7 @@ export function finderCsv(
       : `at ${Math.round(nextRateFpm * 100) / 100} flashes/min`;
   const table = csvTable(
     [
-      { label: 'speed (rpm)', value: (c: StepCandidate) => c.rpm },
+      { label: 'speed (rpm)', value: (c: StepCandidate) => shownNumber(c.rpm) },
       { label: 'status', value: (c: StepCandidate) => candidateStatus(c) },
       { label: 'why', value: (c: StepCandidate) => candidateNote(c) },
       {
@@ -34,7 +35,10 @@ export function finderCsv(
   const recorded = csvTable(
     [
       { label: 'reading', value: (r: RecordedReading & { n: number }) => r.n },
-      { label: 'rate (flashes/min)', value: (r: RecordedReading & { n: number }) => r.rateFpm },
+      {
+        label: 'rate (flashes/min)',
+        value: (r: RecordedReading & { n: number }) => preciseNumber(r.rateFpm),
+      },
       { label: 'images standing still', value: (r: RecordedReading & { n: number }) => r.images },
     ],
     readings.map((r, i) => ({ ...r, n: i + 1 })),

@@ -1,6 +1,7 @@
 // The whole-machine tables as one CSV file: the parts with their speed bands, the freeze bands
 // of the chosen part, and the bands where no part looks still (RFC 4180 via the core).
 import { csvTable } from '../../core';
+import { preciseNumber, shownNumber } from '../../words/format';
 import { rateNumber, rateUnit, type FlashUnit } from '../../words/rates';
 import type { DerivedPart } from '../../state/driveChain';
 import { SOURCE_WORDS } from '../../words/wholeMachine';
@@ -18,7 +19,7 @@ export function wholeMachineCsv(
   flashUnit: FlashUnit,
 ): string {
   const unit = rateUnit(kind, flashUnit);
-  const r = (hz: number) => tidy(rateNumber(hz, kind, flashUnit));
+  const r = (hz: number) => preciseNumber(rateNumber(hz, kind, flashUnit));
   const partTable = csvTable(
     [
       { label: 'part', value: (p: DerivedPart) => p.name },
@@ -65,7 +66,7 @@ export function wholeMachineCsv(
   return `${partTable}\r\n${freezeTable}\r\n${noStillTable}`;
 }
 
-/** Twelve significant figures: unit conversions leave no 0.9999999999 in a spreadsheet. */
-function tidy(value: number): number {
-  return Number(value.toPrecision(12));
+/** A speed or tolerance as rounded on screen (formatNumber), never 2000.0000000000002. */
+function tidy(value: number): number | null {
+  return shownNumber(value);
 }
