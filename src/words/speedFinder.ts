@@ -1,5 +1,6 @@
 // The speed finder in words: the stage headings, the next instruction, and why each candidate
 // stands where it does, from the codes and numbers of the core's speedFinderSteps.
+import { saveWords } from './saving';
 import {
   hzToFpm,
   hzToRpm,
@@ -187,11 +188,17 @@ export function speedChangeWords(c: SpeedChange): string {
   }
 }
 
-/** What saving the speed did, a sentence a line: each change, then where it went. */
+/**
+ * What saving the speed did, a sentence a line: each change, then where it went — "Saved" only
+ * when the machine reached the device (saving.ts says what happened otherwise).
+ */
 export function savedSpeedLines(saved: SavedSpeed): string[] {
   const where =
-    saved.machineName !== null
-      ? `Saved to "${saved.machineName}".`
-      : 'Changed in the set-up on the Check screen only (no machine saved).';
+    saved.machineName === null
+      ? 'Changed in the set-up on the Check screen only (no machine saved).'
+      : saved.saved
+        ? saveWords(saved.machineName, saved.saved.outcome, `Saved to "${saved.machineName}".`)
+            .text
+        : `Saved to "${saved.machineName}".`;
   return [...saved.changes.map(speedChangeWords), where];
 }

@@ -18,7 +18,8 @@ import { App } from '../../src/app/app';
 import { toolScreens } from '../../src/app/screen-list';
 import { openScreen } from '../../src/state/navigation';
 import { machines, saveMachine } from '../../src/state/machines';
-import { defaultSetup, type Setup } from '../../src/state/model';
+import { blankHeader, defaultSetup, defaultToolInputs, type Setup } from '../../src/state/model';
+import { markSaved } from '../../src/state/work';
 import { flashUnit, replaceSetup, setup } from '../../src/state/setup';
 import { openMachineId, startSession } from '../../src/state/session';
 import {
@@ -247,8 +248,12 @@ describe('the speed finder', () => {
   });
 
   test('saving to the open machine changes its part and says what changed', async () => {
-    const machine = await saveMachine('Extract fan, kiln 3', setup.value);
-    openMachineId.value = machine.id;
+    const { machine } = await saveMachine('Extract fan, kiln 3', {
+      ...blankHeader(),
+      setup: setup.value,
+      tools: defaultToolInputs(),
+    });
+    markSaved(machine.id, 1);
     record('1780', 1);
     record('3560', 2);
     fireEvent.click(screen.getByRole('button', { name: 'Save speed to “Extract fan, kiln 3”' }));
@@ -262,6 +267,8 @@ describe('the speed finder', () => {
     );
     const saved = machines.value.find((m) => m.id === machine.id)!;
     expect(saved.setup.parts[0].speedRpm).toBeCloseTo(1780 / 6, 9);
+    // The part says where its speed came from.
+    expect(saved.setup.parts[0].origin?.method).toBe('strobe');
     expect(setup.value.parts[0].speedRpm).toBeCloseTo(1780 / 6, 9);
   });
 
@@ -293,7 +300,8 @@ describe('the speed finder', () => {
     const text = finderCsv(step.candidates, readings.value, step.rateFpm);
     const lines = text.split('\r\n');
     expect(lines[0]).toBe('speed (rpm),status,why,at 3560 flashes/min');
-    expect(lines[1]).toBe(`${1780 / 6},Likeliest,Fits every reading.,2 images stand still`);
+    // Rounded as on screen: 296.7, not 296.6666666666667.
+    expect(lines[1]).toBe('296.7,Likeliest,Fits every reading.,2 images stand still');
     expect(lines.length).toBe(step.candidates.length + 5);
     expect(lines.at(-3)).toBe('reading,rate (flashes/min),images standing still');
     expect(lines.at(-2)).toBe('1,1780,1');
@@ -313,6 +321,7 @@ describe('keeping the speed found', () => {
       speedRpm: 1470,
       features: 1,
       tolerancePercent: 1,
+      origin: { method: 'strobe', detail: { features: 1 }, at: expect.any(String) },
     });
     // Belt: f2 = f1 · D1/D2 (docs/physics.md §8): 1470 · 100/250 = 588 rpm.
     expect(next.parts[1].speedRpm).toBeCloseTo(588, 9);
@@ -333,6 +342,7 @@ describe('keeping the speed found', () => {
       speedRpm: -594,
       features: 3,
       tolerancePercent: 1,
+      origin: { method: 'strobe', detail: { features: 3 }, at: expect.any(String) },
     });
     expect(changes).toContainEqual({ kind: 'leaves-drive', part: 'Fan', driver: 'Motor' });
     expect(changes).toContainEqual({ kind: 'features', part: 'Fan', from: 6, to: 3 });

@@ -134,12 +134,24 @@ describe('the whole machine', () => {
     type(0, 'Ground speed', '100');
     // Core doc example: 100 km/h on a 205/55R16 (ISO 4000-1: 0.6319 m) = 13.9926 rev/s.
     const rpm = wheelSpeedHz(100 / 3.6, 0.6319) * 60;
+    // The road speed offers its speed; nothing changes until it is applied with one tap.
+    expect(setup.value.parts[0].speedRpm).toBe(1770);
+    fireEvent.click(
+      card(0).getByRole('button', {
+        name: /^Use 839\.6 rpm \(from road speed 100 km\/h on 205\/55R16\)$/,
+      }),
+    );
+    expect(setup.value.parts[0].origin?.method).toBe('road-speed');
+    expect(card(0).getByTestId('chain-origin-0').textContent).toMatch(
+      /^Speed from road speed 100 km\/h on 205\/55R16 on \d{4}-\d{2}-\d{2}\.$/,
+    );
     expect(speedOf(0)).toMatch(new RegExp(`^${formatNumber(rpm).replace('.', '\\.')} rpm ± 1 %`));
     fireEvent.change(card(0).getByLabelText('Ground speed unit'), { target: { value: 'mph' } });
     // The same speed in mph: 100 / 1.609344 = 62.14 mph.
     expect(
       (card(0).getByLabelText('Ground speed', { exact: true }) as HTMLInputElement).value,
     ).toBe('62.13712');
+    // The same ground speed in another unit gives the same speed, already in use.
     expect(setup.value.parts[0].speedRpm).toBeCloseTo(rpm, 6);
   });
 
@@ -306,7 +318,8 @@ describe('the whole machine', () => {
     expect(lines[0]).toBe(
       'part,blades or marks,speed from,speed (rpm),tolerance (± %),lowest (rpm),highest (rpm)',
     );
-    expect(lines[1]).toMatch(/^Motor,1,motor nameplate,1455,1,1440\.45,1469\.55$/);
+    // Rounded as on screen: 1,440.45 shows as 1,440.
+    expect(lines[1]).toBe('Motor,1,motor nameplate,1455,1,1440,1470');
     expect(lines[4]).toBe(
       'freezes Motor: from (fpm),to (fpm),single image at nominal speed (fpm),turns between flashes (pitches),exact rate depends on actual speed',
     );

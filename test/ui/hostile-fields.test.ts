@@ -38,12 +38,8 @@ import {
   readToneHz,
   splitList,
 } from '../../src/ui/toolFields';
-import {
-  readBeltSlipPercent,
-  readGroundSpeed,
-  readPulleyMm,
-  readTyreSize,
-} from '../../src/screens/whole-machine/fields';
+import { readBeltSlipPercent, readPulleyMm } from '../../src/screens/whole-machine/fields';
+import { readGroundSpeed, readTyreSize } from '../../src/ui/wheel-fields/read';
 
 const READERS: Array<[string, (text: string) => unknown]> = [
   ['speed', (t) => readSpeedRpm(t, 'rpm')],

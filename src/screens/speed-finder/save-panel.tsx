@@ -1,6 +1,7 @@
 import { useState } from 'preact/hooks';
 import { formatNumber } from '../../words/format';
-import { openMachineName } from '../../state/session';
+import { machines } from '../../state/machines';
+import { openMachineId } from '../../state/work';
 import { partLabel, activeIndex } from '../../state/model';
 import { setup } from '../../state/setup';
 import { featuresInUse, saveFoundSpeed, type SaveTarget } from '../../state/speedFinder';
@@ -24,7 +25,8 @@ export function SavePanel({ speedHz }: Props) {
   const [name, setName] = useState('');
   const [outcome, setOutcome] = useState<Outcome>(null);
   const [busy, setBusy] = useState(false);
-  const machineName = openMachineName.value;
+  // The saved machine the working copy was opened from (the speed goes to it), if any.
+  const machineName = machines.value.find((m) => m.id === openMachineId.value)?.name;
   const s = setup.value;
   const part = partLabel(s, activeIndex(s));
 
