@@ -29,7 +29,7 @@ import {
   readings,
   type RecordedReading,
 } from './toolInputs';
-import { markSaved, openBaseVersion, openMachineId, workContent } from './work';
+import { markSaved, openBaseVersion, openMachineId, setHeader, workContent } from './work';
 
 export type { Expectation, RecordedReading };
 export { defaultExpectation, expectation, finderFeatures, readings };
@@ -195,6 +195,8 @@ export async function saveFoundSpeed(
   } else if (target.kind === 'new') {
     saved = await saveMachine(target.name, { ...content, name: target.name });
     markSaved(saved.machine.id, 'version' in saved.outcome ? saved.outcome.version : null);
+    // The working copy is now that machine: it carries its name, so a later save to it keeps it.
+    setHeader({ name: saved.machine.name });
   }
   setup.value = next;
   return { changes, machineName: saved ? saved.machine.name : null, saved };

@@ -4,6 +4,7 @@ import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import type { MachineContent, Setup } from '../../src/state/model';
 
 export const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
@@ -86,9 +87,9 @@ export async function typeInto(page: Page, label: string | RegExp, text: string)
 }
 
 /**
- * What the app has stored in IndexedDB under `key` (idb-keyval's database and store, as in
- * src/state/storage.ts), or undefined. A test that reloads waits on this for the write it relies
- * on: the page writes after each change, and a reload could otherwise come before the write.
+ * What the app has stored in IndexedDB under `key` (the database and store of
+ * src/state/store/backend.ts), or undefined. A test that reloads waits on this for the write it
+ * relies on: the page writes after each change, and a reload could otherwise come before the write.
  */
 export function storedRecord(page: Page, key: string): Promise<unknown> {
   return page.evaluate(async (k) => {
@@ -115,10 +116,45 @@ export function storedRecord(page: Page, key: string): Promise<unknown> {
   }, key);
 }
 
-/** The set-up stored for the next visit (src/state/storage.ts KEYS.currentSetup). */
-export async function storedSetup(
-  page: Page,
-): Promise<{ parts: Array<{ speedRpm: number; features: number }> } | undefined> {
-  return (await storedRecord(page, 'trueturn/current-setup')) as
-    { parts: Array<{ speedRpm: number; features: number }> } | undefined;
+/**
+ * The working copy kept for the next visit (src/state/store/records.ts, "trueturn/work"): the
+ * machine on screen, with its header, set-up and every tool's inputs.
+ */
+export async function storedWork(page: Page): Promise<MachineContent | undefined> {
+  const record = (await storedRecord(page, 'trueturn/work')) as
+    { work?: { content?: MachineContent } } | undefined;
+  return record?.work?.content;
+}
+
+/** The set-up of the working copy kept for the next visit (see storedWork). */
+export async function storedSetup(page: Page): Promise<Setup | undefined> {
+  return (await storedWork(page))?.setup;
+}
+
+/** The saved machines on the device ("trueturn/machine/<id>" records), by name. */
+export function storedMachineNames(page: Page): Promise<string[]> {
+  return page.evaluate(async () => {
+    const names = (await indexedDB.databases()).map((d) => d.name);
+    if (!names.includes('trueturn')) return [];
+    return new Promise<string[]>((done, fail) => {
+      const open = indexedDB.open('trueturn');
+      open.onerror = () => fail(open.error);
+      open.onsuccess = () => {
+        const db = open.result;
+        if (!db.objectStoreNames.contains('records')) {
+          db.close();
+          return done([]);
+        }
+        const range = IDBKeyRange.bound('trueturn/machine/', 'trueturn/machine/\uffff');
+        const all = db.transaction('records', 'readonly').objectStore('records').getAll(range);
+        all.onsuccess = () => {
+          db.close();
+          done(
+            (all.result as Array<{ machine: { name: string } }>).map((r) => r.machine.name).sort(),
+          );
+        };
+        all.onerror = () => fail(all.error);
+      };
+    });
+  });
 }

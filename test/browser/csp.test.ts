@@ -5,7 +5,7 @@
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { policyText } from '../../scripts/content-security-policy';
-import { defaultSetup } from '../../src/state/model';
+import { blankHeader, defaultSetup, defaultToolInputs } from '../../src/state/model';
 import { encodeShareFragment } from '../../src/state/shareLink';
 import { openApp, openBrowser, type Session } from './browser';
 import { TOURS } from './every-screen';
@@ -87,11 +87,15 @@ describe('the Content-Security-Policy of the built page', () => {
     const violations = await recordViolations(session);
 
     // Opened from a share link.
-    const shared = { ...structuredClone(defaultSetup), creepRpm: 7 };
+    const shared = {
+      ...blankHeader('Shared kiln fan'),
+      setup: { ...structuredClone(defaultSetup), creepRpm: 7 },
+      tools: defaultToolInputs(),
+    };
     await openApp(page, server.url + encodeShareFragment(shared));
     await expect
       .poll(() => page.getByTestId('session-message').innerText())
-      .toMatch(/shared set-up/);
+      .toMatch(/Opened "Shared kiln fan" from a share link/);
     await expect.poll(() => page.getByLabel('Creep speed wanted').inputValue()).toBe('7');
 
     await visitEveryScreen(page);

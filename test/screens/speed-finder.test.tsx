@@ -17,9 +17,9 @@ import { speedFinderSteps } from '../../src/core';
 import { App } from '../../src/app/app';
 import { toolScreens } from '../../src/app/screen-list';
 import { openScreen } from '../../src/state/navigation';
-import { machines, saveMachine } from '../../src/state/machines';
+import { machines, saveMachine, versionOf } from '../../src/state/machines';
 import { blankHeader, defaultSetup, defaultToolInputs, type Setup } from '../../src/state/model';
-import { markSaved } from '../../src/state/work';
+import { header, openMachine } from '../../src/state/work';
 import { flashUnit, replaceSetup, setup } from '../../src/state/setup';
 import { openMachineId, startSession } from '../../src/state/session';
 import {
@@ -44,6 +44,7 @@ beforeAll(async () => {
 beforeEach(() => {
   replaceSetup(defaultSetup);
   openMachineId.value = null;
+  header.value = blankHeader();
   clearReadings();
   finderFeatures.value = null;
   expectation.value = { ...defaultExpectation };
@@ -253,7 +254,8 @@ describe('the speed finder', () => {
       setup: setup.value,
       tools: defaultToolInputs(),
     });
-    markSaved(machine.id, 1);
+    // Opened from the Machines screen: the working copy carries its name and version.
+    openMachine(machine);
     record('1780', 1);
     record('3560', 2);
     fireEvent.click(screen.getByRole('button', { name: 'Save speed to “Extract fan, kiln 3”' }));
@@ -288,6 +290,27 @@ describe('the speed finder', () => {
       ),
     );
     expect(setup.value.parts[0].speedRpm).toBeCloseTo(1780 / 6, 9);
+  });
+
+  test('a speed saved to a new machine opens it by name, so the next speed saves to it too', async () => {
+    record('1780', 1);
+    record('3560', 2);
+    type("New machine's name", 'Kiln 4 extract fan');
+    fireEvent.click(screen.getByRole('button', { name: 'Save speed to a new machine' }));
+    await waitFor(() =>
+      expect(screen.getByTestId('save-outcome').textContent).toMatch(/Saved to "Kiln 4 extract fan"\./),
+    );
+    expect(header.value.name).toBe('Kiln 4 extract fan');
+    const id = openMachineId.value!;
+    expect(versionOf(id)).toBe(1);
+    fireEvent.click(screen.getByRole('button', { name: 'Save speed to “Kiln 4 extract fan”' }));
+    // Written over the first save (version 1 → 2), not refused for a blank name.
+    await waitFor(() => expect(versionOf(id)).toBe(2));
+    expect(screen.getByTestId('save-outcome').dataset.kind).toBe('done');
+    expect(screen.getByTestId('save-outcome').textContent).toMatch(/Saved to "Kiln 4 extract fan"\./);
+    expect(machines.value.filter((m) => m.name === 'Kiln 4 extract fan').map((m) => m.id)).toEqual([
+      id,
+    ]);
   });
 
   test('the CSV holds every candidate and the readings behind them', () => {

@@ -114,8 +114,10 @@ describe('the parts list of the set-up', () => {
 
   test('adding a part chooses it; the list holds at most MAX_PARTS parts', () => {
     addPart();
+    // Every part has a kind; a new one is 'other' until the user chooses.
     expect(setup.value.parts[1]).toEqual({
       name: 'Part 2',
+      kind: 'other',
       speedRpm: 1770,
       features: 1,
       tolerancePercent: 1,
