@@ -1,11 +1,6 @@
 import type { ComponentChildren } from 'preact';
 import { currentScreen } from '../state/navigation';
-import {
-  acceptOfferedShare,
-  offeredShare,
-  sessionMessage,
-  storageOpened,
-} from '../state/session';
+import { acceptOfferedShare, offeredShare, sessionMessage, storageOpened } from '../state/session';
 import { storageMessage, storageStatus } from '../state/store';
 import { Banner } from './banner';
 import { AppFrame } from './frame';
@@ -39,8 +34,8 @@ export function App({ updateNotice }: Props) {
       )}
       {offer && (
         <Banner kind="info" onClose={() => (offeredShare.value = null)} testId="share-offer">
-          A share link for {offer.name.trim() ? `"${offer.name.trim()}"` : 'a machine'} was
-          opened. Open it in place of what is on screen?{' '}
+          A share link for {offer.name.trim() ? `"${offer.name.trim()}"` : 'a machine'} was opened.
+          Open it in place of what is on screen?{' '}
           <button type="button" onClick={acceptOfferedShare}>
             Open the shared machine
           </button>

@@ -1,6 +1,5 @@
 // New ids for saved machines.
 
-
 let counter = 0;
 
 /**

@@ -134,7 +134,11 @@ export function whole(x: unknown, path: string, min: number, max: number): numbe
 }
 
 /** One of the listed values. */
-export function oneOf<T extends string | number>(x: unknown, path: string, allowed: readonly T[]): T {
+export function oneOf<T extends string | number>(
+  x: unknown,
+  path: string,
+  allowed: readonly T[],
+): T {
   const found = allowed.find((a) => a === x);
   if (found === undefined) {
     const list = allowed.map((a) => (typeof a === 'string' ? `"${a}"` : String(a))).join(', ');
@@ -193,7 +197,6 @@ export function validateIsoTime(x: unknown, path: string): string {
   return x;
 }
 
-
 /** A short, safe description of a value for a message; never the whole of a long text. */
 export function describe(x: unknown): string {
   if (x === null) return 'null';
@@ -214,4 +217,3 @@ function quoteKey(key: string): string {
   const chars = [...key];
   return JSON.stringify(chars.slice(0, 40).join('')) + (chars.length > 40 ? '…' : '');
 }
-

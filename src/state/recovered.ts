@@ -26,7 +26,13 @@ function asMachine(value: unknown, label: string): Machine | null {
     () => validateMachine(machineV1toV2(value, label)),
     () => {
       const content = validateContent((value as { work?: { content?: unknown } }).work?.content);
-      return { ...content, name: content.name.trim() || label, id: newId(), createdAt: stamp(), updatedAt: stamp() };
+      return {
+        ...content,
+        name: content.name.trim() || label,
+        id: newId(),
+        createdAt: stamp(),
+        updatedAt: stamp(),
+      };
     },
     () => ({
       ...blankHeader(label),
@@ -75,7 +81,8 @@ export async function restoreRecovered(record: RecoveredRecord): Promise<Restore
   if (machines.length === 0) {
     return {
       ok: false,
-      error: 'Nothing in it can be read as a machine yet; it stays set aside. Download it to keep a copy.',
+      error:
+        'Nothing in it can be read as a machine yet; it stays set aside. Download it to keep a copy.',
     };
   }
   const added = await addMachines(machines, 'restored');

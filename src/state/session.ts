@@ -68,7 +68,8 @@ export async function openSession(
     sources.clearHash();
   }
   const last = await sources.loadLast();
-  if (last && workRecord.peek() === untouched) loadWork(last.content, last.openId, last.baseVersion);
+  if (last && workRecord.peek() === untouched)
+    loadWork(last.content, last.openId, last.baseVersion);
 }
 
 /**

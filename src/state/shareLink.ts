@@ -42,9 +42,7 @@ export function encodeShareFragment(content: MachineContent): string {
 
 /** What a page address fragment held: a checked machine, a refusal, or no share data at all. */
 export type DecodeShareResult =
-  | { ok: true; content: MachineContent }
-  | { ok: false; error: string }
-  | { ok: false; error: null };
+  { ok: true; content: MachineContent } | { ok: false; error: string } | { ok: false; error: null };
 
 const BROKEN = 'This share link is damaged or cut short; ask for the link again.';
 const TOO_LONG = 'This share link is too long to be a Trueturn link; it was not opened.';

@@ -286,7 +286,10 @@ const DAY = /^\d{4}-\d{2}-\d{2}$/;
 function dayFrom(x: unknown, path: string): string {
   if (x === '') return '';
   if (typeof x !== 'string' || !DAY.test(x) || !Number.isFinite(Date.parse(`${x}T00:00:00Z`))) {
-    throw new DataError(path, `${path} must be a day such as "2025-03-12", or empty (got ${describe(x)}).`);
+    throw new DataError(
+      path,
+      `${path} must be a day such as "2025-03-12", or empty (got ${describe(x)}).`,
+    );
   }
   return x;
 }
@@ -345,7 +348,6 @@ export function validateContent(x: unknown, path = 'machine'): MachineContent {
 export function validateMachineName(x: unknown, path = 'name'): string {
   return plainText(typeof x === 'string' ? x.trim() : x, path, 1, MAX_NAME_CHARS);
 }
-
 
 export {
   DataError,

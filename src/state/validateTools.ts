@@ -181,7 +181,8 @@ function loggerFrom(x: unknown, path: string): LoggerInputs {
 export function toolsFrom(x: unknown, path: string): ToolInputs {
   const r = readRecord(x, path, [], ['speedFinder', 'camera', 'logger']);
   const tools = defaultToolInputs();
-  if ('speedFinder' in r) tools.speedFinder = finderFrom(r.speedFinder, pathTo(path, 'speedFinder'));
+  if ('speedFinder' in r)
+    tools.speedFinder = finderFrom(r.speedFinder, pathTo(path, 'speedFinder'));
   if ('camera' in r) tools.camera = cameraFrom(r.camera, pathTo(path, 'camera'));
   if ('logger' in r) tools.logger = loggerFrom(r.logger, pathTo(path, 'logger'));
   return tools;

@@ -47,7 +47,9 @@ export function originWords(origin: SpeedOrigin): string {
       return 'found by sound';
     case 'nameplate': {
       const rpm = num(d, 'rpm');
-      return rpm === undefined ? 'from the motor nameplate' : `from the motor nameplate, ${formatNumber(rpm)} rpm`;
+      return rpm === undefined
+        ? 'from the motor nameplate'
+        : `from the motor nameplate, ${formatNumber(rpm)} rpm`;
     }
   }
 }

@@ -197,8 +197,7 @@ export function savedSpeedLines(saved: SavedSpeed): string[] {
     saved.machineName === null
       ? 'Changed in the set-up on the Check screen only (no machine saved).'
       : saved.saved
-        ? saveWords(saved.machineName, saved.saved.outcome, `Saved to "${saved.machineName}".`)
-            .text
+        ? saveWords(saved.machineName, saved.saved.outcome, `Saved to "${saved.machineName}".`).text
         : `Saved to "${saved.machineName}".`;
   return [...saved.changes.map(speedChangeWords), where];
 }

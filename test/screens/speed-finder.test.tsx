@@ -298,7 +298,9 @@ describe('the speed finder', () => {
     type("New machine's name", 'Kiln 4 extract fan');
     fireEvent.click(screen.getByRole('button', { name: 'Save speed to a new machine' }));
     await waitFor(() =>
-      expect(screen.getByTestId('save-outcome').textContent).toMatch(/Saved to "Kiln 4 extract fan"\./),
+      expect(screen.getByTestId('save-outcome').textContent).toMatch(
+        /Saved to "Kiln 4 extract fan"\./,
+      ),
     );
     expect(header.value.name).toBe('Kiln 4 extract fan');
     const id = openMachineId.value!;
@@ -307,7 +309,9 @@ describe('the speed finder', () => {
     // Written over the first save (version 1 → 2), not refused for a blank name.
     await waitFor(() => expect(versionOf(id)).toBe(2));
     expect(screen.getByTestId('save-outcome').dataset.kind).toBe('done');
-    expect(screen.getByTestId('save-outcome').textContent).toMatch(/Saved to "Kiln 4 extract fan"\./);
+    expect(screen.getByTestId('save-outcome').textContent).toMatch(
+      /Saved to "Kiln 4 extract fan"\./,
+    );
     expect(machines.value.filter((m) => m.name === 'Kiln 4 extract fan').map((m) => m.id)).toEqual([
       id,
     ]);

@@ -45,10 +45,19 @@ export function checkCsv(
   );
   const locks = csvTable(
     [
-      { label: `rate that locks (${unit})`, value: (l: CheckResult['locks'][number]) => rate(l.rateHz) },
+      {
+        label: `rate that locks (${unit})`,
+        value: (l: CheckResult['locks'][number]) => rate(l.rateHz),
+      },
       { label: 'images', value: (l: CheckResult['locks'][number]) => imagesWords(l.images) },
-      { label: `lowest within tolerance (${unit})`, value: (l: CheckResult['locks'][number]) => rate(l.lowHz) },
-      { label: `highest within tolerance (${unit})`, value: (l: CheckResult['locks'][number]) => rate(l.highHz) },
+      {
+        label: `lowest within tolerance (${unit})`,
+        value: (l: CheckResult['locks'][number]) => rate(l.lowHz),
+      },
+      {
+        label: `highest within tolerance (${unit})`,
+        value: (l: CheckResult['locks'][number]) => rate(l.highHz),
+      },
       { label: 'side of the current rate', value: (l: CheckResult['locks'][number]) => l.side },
     ],
     r.locks,

@@ -111,7 +111,12 @@ export function MachinesScreen(_props: Props) {
             <p>
               Deleted <strong>{deleted.machine.name}</strong>.
             </p>
-            <button type="button" id="undo-delete" class={style.primary} onClick={() => void undo()}>
+            <button
+              type="button"
+              id="undo-delete"
+              class={style.primary}
+              onClick={() => void undo()}
+            >
               Undo
             </button>
             <button type="button" class={style.quiet} onClick={forgetDeleted}>
@@ -137,8 +142,8 @@ export function MachinesScreen(_props: Props) {
         <StorageState />
         <Panel title="Move to another device" id="transfer">
           <p class={style.help}>
-            Export writes every machine this tab holds to one file, whatever the device's storage
-            is doing. Import adds the machines of such a file to this list.
+            Export writes every machine this tab holds to one file, whatever the device's storage is
+            doing. Import adds the machines of such a file to this list.
           </p>
           <div class={style.actions}>
             <button

@@ -25,8 +25,8 @@ export function StorageState() {
       </p>
       {persistence.value === 'refused' && (
         <p class={style.help} data-testid="persist-note">
-          This browser did not promise to keep Trueturn's data: it may clear it when the device
-          runs short of space. Export your machines now and then to be safe.
+          This browser did not promise to keep Trueturn's data: it may clear it when the device runs
+          short of space. Export your machines now and then to be safe.
         </p>
       )}
     </Panel>
@@ -57,7 +57,10 @@ export function KeptAside() {
       setOutcome({ kind: 'problem', text: result.error });
       return;
     }
-    const left = result.unreadable > 0 ? ` ${result.unreadable} item(s) still cannot be read and stay set aside.` : '';
+    const left =
+      result.unreadable > 0
+        ? ` ${result.unreadable} item(s) still cannot be read and stay set aside.`
+        : '';
     setOutcome({
       kind: result.held ? 'problem' : 'done',
       text: `Restored ${result.added.length} machine${result.added.length === 1 ? '' : 's'}${result.held ? ' into this tab (not yet saved on this device)' : ''}.${left}`,

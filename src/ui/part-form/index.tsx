@@ -147,7 +147,9 @@ export function PartForm({ class: extra }: Props) {
           <input
             type="checkbox"
             checked={given !== 'none'}
-            onChange={(e) => setGiven((e.currentTarget as HTMLInputElement).checked ? 'poles' : 'none')}
+            onChange={(e) =>
+              setGiven((e.currentTarget as HTMLInputElement).checked ? 'poles' : 'none')
+            }
           />
           <span>Speed from an induction motor</span>
         </label>

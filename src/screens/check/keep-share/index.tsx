@@ -44,7 +44,9 @@ export function KeepShare({ class: extra }: Props) {
       const result = await saveMachine(name, workContent.peek());
       markSaved(result.machine.id, versionAfter(result));
       setHeader({ name: result.machine.name });
-      setOutcome(saveWords(result.machine.name, result.outcome, `Saved as "${result.machine.name}".`));
+      setOutcome(
+        saveWords(result.machine.name, result.outcome, `Saved as "${result.machine.name}".`),
+      );
     } catch (error) {
       setOutcome({ kind: 'problem', text: messageOf(error) });
     }
@@ -55,7 +57,11 @@ export function KeepShare({ class: extra }: Props) {
     try {
       const result = await updateMachine(opened.id, workContent.peek(), openBaseVersion.peek());
       setOutcome(
-        saveWords(result.machine.name, result.outcome, `Changes saved to "${result.machine.name}".`),
+        saveWords(
+          result.machine.name,
+          result.outcome,
+          `Changes saved to "${result.machine.name}".`,
+        ),
       );
     } catch (error) {
       setOutcome({ kind: 'problem', text: messageOf(error) });
