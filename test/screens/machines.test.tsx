@@ -200,4 +200,71 @@ describe('saved machines', () => {
     fireEvent.click(within(rowOf(EXAMPLE_MACHINE_NAME)).getByRole('button', { name: 'Open' }));
     expect(setup.value).toEqual(exampleSetup);
   });
+
+  test('Rename puts focus in the name field; Save name and Cancel bring it back to that Rename button', async () => {
+    await saveAs('Kiln 7 booster fan');
+    fireEvent.click(screen.getByRole('button', { name: 'Machines' }));
+    const renameButton = () =>
+      within(rowOf('Kiln 7 booster fan')).getByRole('button', { name: 'Rename' });
+    fireEvent.click(renameButton());
+    await waitFor(() => expect(document.activeElement).toBe(screen.getByLabelText('New name')));
+    fireEvent.click(screen.getByRole('button', { name: 'Cancel' }));
+    await waitFor(() => expect(document.activeElement).toBe(renameButton()));
+
+    fireEvent.click(renameButton());
+    await waitFor(() => expect(document.activeElement).toBe(screen.getByLabelText('New name')));
+    const placeBefore = names().indexOf('Kiln 7 booster fan');
+    // A new name that moves the machine to another place in the (sorted) list.
+    fireEvent.input(screen.getByLabelText('New name'), { target: { value: 'Aa kiln 7 booster' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save name' }));
+    await waitFor(() =>
+      expect(document.activeElement).toBe(
+        within(rowOf('Aa kiln 7 booster')).getByRole('button', { name: 'Rename' }),
+      ),
+    );
+    expect(names().indexOf('Aa kiln 7 booster')).toBeLessThan(placeBefore);
+  });
+
+  test('after Delete focus goes to the next machine, or to Undo when the last one went', async () => {
+    await saveAs('Zz focus one');
+    await saveAs('Zz focus two');
+    fireEvent.click(screen.getByRole('button', { name: 'Machines' }));
+    expect(names().slice(-2)).toEqual(['Zz focus one', 'Zz focus two']);
+    fireEvent.click(within(rowOf('Zz focus one')).getByRole('button', { name: 'Delete' }));
+    await waitFor(() => expect(document.activeElement).toBe(rowOf('Zz focus two')));
+    expect(document.activeElement?.getAttribute('aria-labelledby')).toBeTruthy();
+
+    fireEvent.click(within(rowOf('Zz focus two')).getByRole('button', { name: 'Delete' }));
+    await waitFor(() =>
+      expect(document.activeElement).toBe(
+        within(screen.getByTestId('undo-bar')).getByRole('button', { name: 'Undo' }),
+      ),
+    );
+    // Undo brings it back and focus goes with it.
+    fireEvent.click(within(screen.getByTestId('undo-bar')).getByRole('button', { name: 'Undo' }));
+    await waitFor(() =>
+      expect(document.activeElement).toBe(
+        within(rowOf('Zz focus two')).getByRole('button', { name: 'Open' }),
+      ),
+    );
+  });
+
+  test('with the list emptied, closing the undo bar puts focus on the list heading, never the page', async () => {
+    fireEvent.click(screen.getByRole('button', { name: 'Machines' }));
+    while (machines.value.length > 0) {
+      const count = machines.value.length;
+      const first = within(screen.getByTestId('machine-list')).getAllByRole('article')[0];
+      fireEvent.click(within(first).getByRole('button', { name: 'Delete' }));
+      await waitFor(() => expect(machines.value.length).toBe(count - 1));
+      // Focus is on the next machine, or on Undo after the last one: never the page.
+      await waitFor(() => expect(document.activeElement).not.toBe(document.body));
+    }
+    const undo = within(screen.getByTestId('undo-bar')).getByRole('button', { name: 'Undo' });
+    await waitFor(() => expect(document.activeElement).toBe(undo));
+    fireEvent.click(within(screen.getByTestId('undo-bar')).getByRole('button', { name: 'Close' }));
+    await waitFor(() =>
+      expect(document.activeElement).toBe(screen.getByRole('heading', { name: 'Saved machines' })),
+    );
+    expect(screen.getByText(/No machines saved yet/)).toBeTruthy();
+  });
 });

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'preact/hooks';
+import { useLayoutEffect, useRef, useState } from 'preact/hooks';
 import { openCheckScreen } from '../../state/navigation';
 import type { Machine } from '../../state/model';
 import {
@@ -36,21 +36,48 @@ function dateStamp(now = new Date()): string {
   return now.toISOString().slice(0, 10);
 }
 
-/** Moves focus to the element with this id once it is on the page (after the next render). */
-function focusSoon(id: string): void {
-  requestAnimationFrame(() => document.getElementById(id)?.focus());
+/**
+ * Where focus goes once the page shows a change: the element a request finds, or null while the
+ * page does not show the change yet (the request waits for the next render).
+ */
+type FocusRequest = () => HTMLElement | null;
+
+/** Focus requests of the rows and the screen, carried out after the render that shows the change. */
+function useFocusAfterRender(): (request: FocusRequest) => void {
+  const pending = useRef<FocusRequest | null>(null);
+  const [, rerender] = useState(0);
+  useLayoutEffect(() => {
+    const target = pending.current?.();
+    if (!target) return;
+    pending.current = null;
+    target.focus();
+  });
+  return (request) => {
+    pending.current = request;
+    // Render once more even when nothing else changes (the change may already be on screen).
+    rerender((n) => n + 1);
+  };
 }
+
+const byId = (id: string): HTMLElement | null => document.getElementById(id);
+
+/** The id of a machine's card, which takes focus (tabIndex -1) when it is where focus lands. */
+const cardId = (id: string): string => `machine-${id}`;
 
 /**
  * The saved machines: open, rename, duplicate, delete with undo; what storage is doing; data
- * set aside; export and import as a file. After Delete, focus goes to Undo; after Undo, to the
- * machine brought back; after a rename, to its Rename button again.
+ * set aside; export and import as a file. Focus never falls to the page: after Delete it goes
+ * to the next machine in the list (when the last of the list was deleted, to Undo; with no
+ * Undo shown, to the list's heading); after Undo, to the machine brought back; after Close on
+ * the undo bar, to the heading; during a rename it is in the name field, and afterwards on that
+ * machine's Rename button.
  */
 export function MachinesScreen(_props: Props) {
   const [outcome, setOutcome] = useState<Outcome>(null);
   const list = machines.value;
   const deleted = lastDeleted.value;
   const held = heldIds.value;
+  const focusAfterRender = useFocusAfterRender();
 
   const exportFile = () => {
     try {
@@ -100,12 +127,34 @@ export function MachinesScreen(_props: Props) {
       setOutcome({ kind: 'problem', text: messageOf(error) });
       return null;
     });
-    if (restored) focusSoon(`open-${restored.id}`);
+    if (restored) focusAfterRender(() => byId(`open-${restored.id}`));
+  };
+
+  const remove = async (id: string) => {
+    const at = machines.peek().findIndex((m) => m.id === id);
+    const nextId = machines.peek()[at + 1]?.id ?? null;
+    // Once the card is gone: the machine after it, else Undo, else the heading of the list.
+    focusAfterRender(() => {
+      if (machines.peek().some((m) => m.id === id)) return null;
+      return (nextId && byId(cardId(nextId))) || byId('undo-delete') || byId('machines-title');
+    });
+    try {
+      await deleteMachine(id);
+    } catch (error) {
+      // Not deleted: focus stays with the machine, and the message says why.
+      focusAfterRender(() => byId(cardId(id)));
+      setOutcome({ kind: 'problem', text: messageOf(error) });
+    }
+  };
+
+  const closeUndo = () => {
+    forgetDeleted();
+    focusAfterRender(() => (byId('undo-delete') ? null : byId('machines-title')));
   };
 
   return (
     <div class={style.screen}>
-      <Panel title="Saved machines" id="machines">
+      <Panel title="Saved machines" id="machines" focusableTitle>
         {deleted && (
           <div class={style.undo} role="status" data-testid="undo-bar">
             <p>
@@ -119,7 +168,7 @@ export function MachinesScreen(_props: Props) {
             >
               Undo
             </button>
-            <button type="button" class={style.quiet} onClick={forgetDeleted}>
+            <button type="button" class={style.quiet} onClick={closeUndo}>
               Close
             </button>
           </div>
@@ -132,7 +181,13 @@ export function MachinesScreen(_props: Props) {
           <ul class={style.list} data-testid="machine-list">
             {list.map((m) => (
               <li key={m.id}>
-                <MachineRow machine={m} held={held.has(m.id)} onOutcome={setOutcome} />
+                <MachineRow
+                  machine={m}
+                  held={held.has(m.id)}
+                  onOutcome={setOutcome}
+                  onDelete={remove}
+                  focusAfterRender={focusAfterRender}
+                />
               </li>
             ))}
           </ul>
@@ -187,27 +242,32 @@ interface RowProps {
   /** Its latest change is held in this tab, not yet on the device. */
   held: boolean;
   onOutcome: (o: Outcome) => void;
+  onDelete: (id: string) => Promise<void>;
+  focusAfterRender: (request: FocusRequest) => void;
 }
 
-function MachineRow({ machine, held, onOutcome }: RowProps) {
+function MachineRow({ machine, held, onOutcome, onDelete, focusAfterRender }: RowProps) {
   const [renaming, setRenaming] = useState(false);
   const [name, setName] = useState(machine.name);
   const [problem, setProblem] = useState<string | null>(null);
   const inputId = `rename-${machine.id}`;
-  const field = useRef<HTMLInputElement>(null);
-  useEffect(() => {
-    if (renaming) field.current?.focus();
-  }, [renaming]);
+  const renameButtonId = `rename-button-${machine.id}`;
 
   const open = () => {
     openMachine(machine);
     openCheckScreen();
   };
 
+  const startRenaming = () => {
+    setName(machine.name);
+    setRenaming(true);
+    focusAfterRender(() => byId(inputId));
+  };
+
   const stopRenaming = () => {
     setRenaming(false);
     setProblem(null);
-    focusSoon(`rename-button-${machine.id}`);
+    focusAfterRender(() => byId(renameButtonId));
   };
 
   const rename = async (event: Event) => {
@@ -223,28 +283,24 @@ function MachineRow({ machine, held, onOutcome }: RowProps) {
     }
   };
 
-  const remove = async () => {
-    try {
-      await deleteMachine(machine.id);
-      focusSoon('undo-delete');
-    } catch (error) {
-      onOutcome({ kind: 'problem', text: messageOf(error) });
-    }
-  };
-
   const duplicate = async () => {
     try {
       const result = await duplicateMachine(machine.id);
       const words = saveWords(result.machine.name, result.outcome, '');
       if (words.kind === 'problem') onOutcome(words);
-      focusSoon(`open-${result.machine.id}`);
+      focusAfterRender(() => byId(`open-${result.machine.id}`));
     } catch (error) {
       onOutcome({ kind: 'problem', text: messageOf(error) });
     }
   };
 
   return (
-    <article class={style.machine} aria-labelledby={`${machine.id}-name`}>
+    <article
+      class={style.machine}
+      id={cardId(machine.id)}
+      tabIndex={-1}
+      aria-labelledby={`${machine.id}-name`}
+    >
       <h3 id={`${machine.id}-name`} class={style.name}>
         {machine.name}
       </h3>
@@ -264,7 +320,6 @@ function MachineRow({ machine, held, onOutcome }: RowProps) {
           <div class={style.row}>
             <input
               id={inputId}
-              ref={field}
               class={style.input}
               type="text"
               maxLength={80}
@@ -303,21 +358,13 @@ function MachineRow({ machine, held, onOutcome }: RowProps) {
           <button type="button" id={`open-${machine.id}`} class={style.primary} onClick={open}>
             Open
           </button>
-          <button
-            type="button"
-            id={`rename-button-${machine.id}`}
-            class={style.quiet}
-            onClick={() => {
-              setName(machine.name);
-              setRenaming(true);
-            }}
-          >
+          <button type="button" id={renameButtonId} class={style.quiet} onClick={startRenaming}>
             Rename
           </button>
           <button type="button" class={style.quiet} onClick={() => void duplicate()}>
             Duplicate
           </button>
-          <button type="button" class={style.quiet} onClick={() => void remove()}>
+          <button type="button" class={style.quiet} onClick={() => void onDelete(machine.id)}>
             Delete
           </button>
         </div>
