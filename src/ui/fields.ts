@@ -78,7 +78,11 @@ const SPEED_UNIT_WORD: Record<SpeedUnit, string> = { rpm: 'rpm', Hz: 'hz', 'rad/
 /** Signed speed typed in `unit` (or with its own unit word) → rpm. */
 export function readSpeedRpm(text: string, unit: SpeedUnit): number {
   const hz = parseQuantity(text, 'speed', SPEED_UNIT_WORD[unit], 'speed');
-  return within(hz * 60, -MAX_SPEED_RPM, MAX_SPEED_RPM, 'speed', 'rpm');
+  // Through rev/s and back, "2000" rpm comes out as 2000.0000000000002; 15 significant digits
+  // (more than anyone types, fewer than a double holds) give back the number typed, which is
+  // what a saved machine, a share link and a CSV should carry.
+  const rpm = Number((hz * 60).toPrecision(15));
+  return within(rpm, -MAX_SPEED_RPM, MAX_SPEED_RPM, 'speed', 'rpm');
 }
 
 /** Text that stands for a plain number: an optional sign, digits with grouping or a decimal mark, nothing else. */

@@ -158,3 +158,41 @@ export function storedMachineNames(page: Page): Promise<string[]> {
     });
   });
 }
+
+/**
+ * A report CSV file (src/words/report.ts) in its two parts: the report's head (title, header
+ * lines and cautions, as [label, value] rows) and the tool's table lines. Checks the UTF-8
+ * byte-order mark that opens it and the blank line between the two.
+ */
+export function splitReportCsv(text: string): { head: Array<[string, string]>; table: string[] } {
+  if (!text.startsWith('\uFEFF'))
+    throw new Error('the CSV file does not start with a byte-order mark');
+  const gap = text.indexOf('\r\n\r\n');
+  if (gap < 0) throw new Error('the CSV file has no blank line after its report head');
+  const head = text
+    .slice(1, gap)
+    .split('\r\n')
+    .map((line): [string, string] => {
+      const comma = line.indexOf(',');
+      const value = line.slice(comma + 1);
+      // A value with a comma or a quote is quoted (RFC 4180): unquote it.
+      const plain = /^".*"$/.test(value) ? value.slice(1, -1).replace(/""/g, '"') : value;
+      return [line.slice(0, comma), plain];
+    });
+  return { head, table: text.slice(gap + 4).split('\r\n') };
+}
+
+/** The printed report header's lines (Site, Machine, Assessed by, Date, Notes) by label. */
+export async function printedHeaderLines(page: Page): Promise<Record<string, string>> {
+  return page
+    .locator('header[data-print="only"] dl')
+    .first()
+    .evaluate((dl) => {
+      const out: Record<string, string> = {};
+      for (const row of dl.querySelectorAll('div')) {
+        out[row.querySelector('dt')?.textContent ?? ''] =
+          row.querySelector('dd')?.textContent ?? '';
+      }
+      return out;
+    });
+}

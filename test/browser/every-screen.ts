@@ -1,6 +1,6 @@
 // A walk through every screen of the app and the choices on it that bring more fields on
-// screen (camera and lighting modes, motor and wheel, exposure as a time, RC and Butterworth
-// filters, speed-finder readings, belt and gear drives, renaming a machine). Each step ends
+// screen (camera and lighting modes, motor and wheel, exposure as a time, the report header, RC
+// and Butterworth filters, speed-finder readings, belt and gear drives, renaming a machine). Each step ends
 // when the field it brings is on screen. Shared by the paste and the security-policy tests.
 import type { Page } from 'playwright-core';
 
@@ -57,6 +57,14 @@ export const TOURS: Tour[] = [
       choose(['Camera'], 'Frame rate'),
       choose(['As a time'], 'Exposure time'),
       choose(['Lighting', 'Other', 'PWM (on–off)'], 'Duty cycle'),
+      {
+        // The report header every screen carries (site, machine, assessed by, date, notes).
+        name: 'the report header opened',
+        go: async (page) => {
+          await page.getByText('Report header', { exact: false }).first().click();
+          await field(page, 'Assessed by').waitFor();
+        },
+      },
     ],
   },
   {
@@ -70,7 +78,7 @@ export const TOURS: Tour[] = [
   {
     tab: 'Logger',
     steps: [
-      openTab('Logger', 'Shaft speed'),
+      openTab('Logger', 'Sample rate'),
       choose(['RC'], 'Cutoff'),
       choose(['R and C'], 'Resistance'),
       choose(['Butterworth'], 'Order'),

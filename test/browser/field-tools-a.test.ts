@@ -11,7 +11,7 @@ import { beltSpeedHz, driveChain, freezeRates, motorSpeedHz } from '../../src/co
 import { formatNumber } from '../../src/words/format';
 import { formatRate } from '../../src/words/rates';
 import { freezeRateToSet } from '../../src/screens/whole-machine/band-lists';
-import { openApp, openBrowser, typeInto, type Session } from './browser';
+import { openApp, openBrowser, printedHeaderLines, typeInto, type Session } from './browser';
 
 let session: Session | undefined;
 
@@ -54,7 +54,7 @@ async function checkPrinted(
   expect(await header.isVisible()).toBe(true);
   const text = await header.innerText();
   expect(text).toContain(`Trueturn · ${title}`);
-  if (machine) expect(text).toContain(`Machine: ${machine}`);
+  if (machine) expect((await printedHeaderLines(page)).Machine).toBe(machine);
   expect(text).toMatch(/Printed /);
   expect(text).toMatch(/still turning at full speed/);
   expect(text).toMatch(/Flashing between about 3 and 60 times a second/);

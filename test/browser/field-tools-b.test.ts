@@ -6,7 +6,7 @@ import { afterEach, describe, expect, inject, test } from 'vitest';
 import type { Page } from 'playwright-core';
 import { mkdirSync, readFileSync } from 'node:fs';
 import { cameraPlan, lightingCheck, loggerPlan, lockRates } from '../../src/core';
-import { formatPrecise, numberForField } from '../../src/words/format';
+import { formatPrecise, numberForField, preciseNumber } from '../../src/words/format';
 import { safetyCautions } from '../../src/words/cautions';
 import { lookWords } from '../../src/words/look';
 import { lightingSummary } from '../../src/words/lighting';
@@ -16,7 +16,16 @@ import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';
 import { lampOf, lightingCautions, litPartsOf } from '../../src/state/lighting';
 import { type Setup, activeCorePart } from '../../src/state/model';
 import { defaultLoggerEntries, tonesOf } from '../../src/state/loggerPlanning';
-import { GARBAGE, openApp, openBrowser, shownText, typeInto, type Session } from './browser';
+import {
+  GARBAGE,
+  openApp,
+  openBrowser,
+  printedHeaderLines,
+  shownText,
+  splitReportCsv,
+  typeInto,
+  type Session,
+} from './browser';
 
 let session: Session | undefined;
 
@@ -82,13 +91,24 @@ function withdrawnOrStale(page: Page, testId: string): Promise<boolean> {
     );
 }
 
-/** Clicks "Save table (CSV)" and returns the file's name and text. */
-async function saveCsv(page: Page): Promise<{ name: string; text: string }> {
+/**
+ * Clicks "Save table (CSV)" and returns the file's name and its table lines, after checking the
+ * report head above the table: the tool's title, the machine and every caution of the printout.
+ */
+async function saveCsv(
+  page: Page,
+  title: string,
+  cautions: string[],
+): Promise<{ name: string; lines: string[] }> {
   const [download] = await Promise.all([
     page.waitForEvent('download'),
     page.getByRole('button', { name: 'Save table (CSV)' }).click(),
   ]);
-  return { name: download.suggestedFilename(), text: readFileSync(await download.path(), 'utf8') };
+  const { head, table } = splitReportCsv(readFileSync(await download.path(), 'utf8'));
+  expect(head[0]).toEqual(['Report', title]);
+  expect(head).toContainEqual(['Machine', EXAMPLE_MACHINE_NAME]);
+  expect(head.filter(([label]) => label === 'Caution').map(([, line]) => line)).toEqual(cautions);
+  return { name: download.suggestedFilename(), lines: table };
 }
 
 /**
@@ -103,7 +123,7 @@ async function checkPrint(page: Page, title: string, cautions: string[], file: s
   expect(await page.getByText(`Trueturn · ${title}`).isVisible()).toBe(true);
   const header = page.locator('header', { hasText: `Trueturn · ${title}` });
   const text = await header.innerText();
-  expect(text).toContain(`Machine: ${EXAMPLE_MACHINE_NAME}`);
+  expect((await printedHeaderLines(page)).Machine).toBe(EXAMPLE_MACHINE_NAME);
   expect(text).toMatch(/Printed /);
   expect(text).toContain(String(new Date().getFullYear()));
   const items = header.locator('li');
@@ -195,11 +215,12 @@ describe('the field tools in a real browser, at phone size', () => {
       await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth),
     ).toBeLessThanOrEqual(0);
 
-    const csv = await saveCsv(page);
+    const lightingLines = safetyCautions(lightingCautions(second, 30));
+    const csv = await saveCsv(page, 'Lighting check', lightingLines);
     expect(csv.name).toMatch(
       /^lighting-check-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/,
     );
-    const lines = csv.text.split('\r\n');
+    const lines = csv.lines;
     expect(lines).toHaveLength(second.parts.length + 2);
     expect(
       lines[0].startsWith(
@@ -213,12 +234,7 @@ describe('the field tools in a real browser, at phone size', () => {
     expect(lines[3]).toContain(',still,');
     expect(lines[3]).toContain(',hazard,');
 
-    await checkPrint(
-      page,
-      'Lighting check',
-      safetyCautions(lightingCautions(second, 30)),
-      'field-tools-b-lighting-print.png',
-    );
+    await checkPrint(page, 'Lighting check', lightingLines, 'field-tools-b-lighting-print.png');
   });
 
   test('camera plan: near misses when nothing freezes, a typed rate that does, "Open in check", garbage refused, CSV and print', async () => {
@@ -287,14 +303,17 @@ describe('the field tools in a real browser, at phone size', () => {
       await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth),
     ).toBeLessThanOrEqual(0);
 
-    const csv = await saveCsv(page);
+    const csv = await saveCsv(page, 'Camera plan', safetyCautions({ apparentStillness: true }));
     expect(csv.name).toMatch(
       /^camera-plan-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/,
     );
-    const lines = csv.text.split('\r\n');
+    const lines = csv.lines;
     expect(lines).toHaveLength(reached.settings.length + 2);
     expect(
-      lines[1].startsWith(`1,${reached.settings[0].frameRate},${reached.settings[0].exposureS},`),
+      // Rounded as on screen: the rate to five significant figures, the exposure to four.
+      lines[1].startsWith(
+        `1,${preciseNumber(reached.settings[0].frameRate)},${Number(reached.settings[0].exposureS.toPrecision(4))},`,
+      ),
     ).toBe(true);
 
     await checkPrint(
@@ -403,14 +422,17 @@ describe('the field tools in a real browser, at phone size', () => {
       await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth),
     ).toBeLessThanOrEqual(0);
 
-    const csv = await saveCsv(page);
+    const csv = await saveCsv(page, 'Data logger plan', safetyCautions({}));
     expect(csv.name).toMatch(
       /^data-logger-plan-example-cooler-fan-pellet-line-2-\d{4}-\d{2}-\d{2}\.csv$/,
     );
-    const lines = csv.text.split('\r\n');
+    const lines = csv.lines;
     expect(lines).toHaveLength(clean.components.length + 2);
     expect(
-      lines[1].startsWith(`1× shaft,${clean.components[0].hz},${slow.proposal!.sampleHz},`),
+      // Rounded as on screen (five significant figures).
+      lines[1].startsWith(
+        `1× shaft,${preciseNumber(clean.components[0].hz)},${preciseNumber(slow.proposal!.sampleHz)},`,
+      ),
     ).toBe(true);
 
     await checkPrint(

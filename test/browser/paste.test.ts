@@ -81,7 +81,8 @@ function unvisitedFields(page: Page): Promise<string[]> {
     const inputs = [...document.querySelectorAll<HTMLInputElement>('main input[type="text"]')];
     const marks: string[] = [];
     for (const el of inputs) {
-      if (el.readOnly || el.disabled || el.offsetParent === null) continue;
+      // checkVisibility: a field inside a closed <details> keeps its layout box but is not shown.
+      if (el.readOnly || el.disabled || !el.checkVisibility()) continue;
       if (el.dataset.pasted) continue;
       const mark = el.id || `unnamed-${document.querySelectorAll('[data-pasted]').length}`;
       el.dataset.pasted = mark;

@@ -32,6 +32,9 @@ describe('reading the speed', () => {
   test('reads rpm, Hz and rad/s into rpm', () => {
     expect(value('1780', (t) => readSpeedRpm(t, 'rpm'))).toBe(1780);
     expect(value('1,780', (t) => readSpeedRpm(t, 'rpm'))).toBe(1780);
+    // Exactly as typed, not 2000.0000000000002 (2000 / 60 · 60 in binary floating point).
+    expect(value('2000', (t) => readSpeedRpm(t, 'rpm'))).toBe(2000);
+    expect(value('29.7 Hz', (t) => readSpeedRpm(t, 'rpm'))).toBe(1782);
     expect(value('30', (t) => readSpeedRpm(t, 'Hz'))).toBe(1800);
     expect(value(String(2 * Math.PI), (t) => readSpeedRpm(t, 'rad/s'))).toBeCloseTo(60, 9);
   });
