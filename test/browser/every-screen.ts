@@ -61,7 +61,7 @@ export const TOURS: Tour[] = [
         // The report header every screen carries (site, machine, assessed by, date, notes).
         name: 'the report header opened',
         go: async (page) => {
-          await page.getByText('Report header', { exact: false }).first().click();
+          await page.locator('summary', { hasText: 'Report header' }).click();
           await field(page, 'Assessed by').waitFor();
         },
       },

@@ -1,6 +1,7 @@
 // Saved machines in a real browser: they survive a reload, go out to a file and come back.
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import { readFileSync } from 'node:fs';
+import type { Page } from 'playwright-core';
 import { openApp, openBrowser, storedSetup, typeInto, type Session } from './browser';
 
 let session: Session | undefined;
@@ -15,6 +16,22 @@ async function saveMachine(session: Session, name: string) {
   await page.getByLabel('Machine name').fill(name);
   await page.getByRole('button', { name: 'Save as new machine' }).click();
   await page.getByText(`Saved as "${name}".`).waitFor();
+}
+
+/**
+ * What has focus: its tag and its accessible name as the page gives it (the text of the element
+ * aria-labelledby names, else its own text). "BODY" means focus fell to the page.
+ */
+function focused(page: Page): Promise<string> {
+  return page.evaluate(() => {
+    const el = document.activeElement;
+    if (!el || el === document.body) return 'BODY';
+    const labelledBy = el.getAttribute('aria-labelledby');
+    const name = labelledBy
+      ? (document.getElementById(labelledBy)?.textContent ?? '')
+      : (el.textContent ?? '');
+    return `${el.tagName} ${name.trim()}`;
+  });
 }
 
 describe('saved machines', () => {
@@ -70,16 +87,29 @@ describe('saved machines', () => {
     });
     await row.getByRole('button', { name: 'Delete' }).click();
     await page.getByTestId('undo-bar').waitFor();
+    // The last machine of the list went: focus is on Undo, never on the page itself.
+    await expect.poll(() => focused(page)).toBe('BUTTON Undo');
     await page.getByTestId('undo-bar').getByRole('button', { name: 'Close' }).click();
     await expect
       .poll(() => page.getByTestId('machine-list').innerText())
       .not.toContain('Granulator rotor');
+    // The undo bar went too: focus is on the list's heading.
+    await expect.poll(() => focused(page)).toBe('H2 Saved machines');
 
     await page.getByTestId('import-file').setInputFiles(path);
     await expect
       .poll(() => page.getByTestId('machines-outcome').innerText())
       .toMatch(/^Imported 2 machines/);
     expect(await page.getByTestId('machine-list').innerText()).toContain('Granulator rotor');
+
+    // Deleting a machine with others after it puts focus on the next one, read by its name.
+    const example = page.locator('article', {
+      has: page.getByRole('heading', { name: 'Example: cooler fan, pellet line 2', exact: true }),
+    });
+    await example.getByRole('button', { name: 'Delete' }).click();
+    await expect
+      .poll(() => focused(page))
+      .toBe('ARTICLE Example: cooler fan, pellet line 2 (imported)');
   });
 
   test('a bad import file shows a message and changes nothing', async () => {
