@@ -11,7 +11,7 @@ import {
   parseMachinesFile,
   utf8Bytes,
 } from '../../src/state/fileFormat';
-import type { Machine } from '../../src/state/model';
+import { defaultToolInputs, type Machine } from '../../src/state/model';
 import { DataError } from '../../src/state/validate';
 import { prototypeIsClean, sampleMachine } from './fixtures';
 
@@ -330,11 +330,87 @@ describe('migrations', () => {
 });
 
 describe('docs/file-format.md', () => {
-  it('shows an example file that this app reads', async () => {
+  async function jsonBlocks(): Promise<string[]> {
     const doc = (await import('../../docs/file-format.md?raw')).default;
-    const example = /```json\n([\s\S]*?)\n```/.exec(doc)?.[1];
-    expect(example).toBeDefined();
-    const r = parseMachinesFile(example!);
-    expect(r.ok && r.machines.map((m) => m.name)).toEqual(['Cooler fan, pellet line 2']);
+    return [...doc.matchAll(/```json\n([\s\S]*?)\n```/g)].map((m) => m[1]);
+  }
+
+  it('shows an example version 2 file that this app reads, with kinds, an origin and tools', async () => {
+    const [example] = await jsonBlocks();
+    expect(JSON.parse(example).version).toBe(FILE_FORMAT_VERSION);
+    const r = parseMachinesFile(example);
+    if (!r.ok) throw new Error(r.error);
+    expect(r.machines.map((m) => m.name)).toEqual(['Cooler fan, pellet line 2']);
+    const [m] = r.machines;
+    expect(m.setup.parts.map((p) => p.kind)).toEqual(['disc', 'fan']);
+    expect(m.setup.parts[1].origin?.method).toBe('strobe');
+    expect(m.tools.speedFinder.readings).toHaveLength(2);
+    // The example leaves the logger out: it starts from its defaults, as the page says.
+    expect(m.tools.logger).toEqual(defaultToolInputs().logger);
+  });
+
+  it('shows a version 1 file that imports as the page says: blank header, every tool at its start', async () => {
+    const [, old] = await jsonBlocks();
+    expect(JSON.parse(old).version).toBe(1);
+    const r = parseMachinesFile(old);
+    if (!r.ok) throw new Error(r.error);
+    const [m] = r.machines;
+    expect(m.name).toBe('Sifter drive');
+    expect([m.site, m.assessedBy, m.assessedOn, m.notes]).toEqual(['', '', '', '']);
+    expect(m.tools).toEqual(defaultToolInputs());
+    expect(m.setup.parts[0].kind).toBeUndefined();
+  });
+
+  it('names every field a machine can hold', async () => {
+    const doc = (await import('../../docs/file-format.md?raw')).default;
+    // A machine with every optional field present somewhere: kinds, motor, drive, wheel,
+    // origin, the lighting's waveform and duty, and every tool's inputs.
+    const m = sampleMachine();
+    const full = {
+      ...m,
+      setup: {
+        ...m.setup,
+        parts: [
+          {
+            name: 'Motor',
+            kind: 'disc',
+            speedRpm: 1450,
+            features: 1,
+            tolerancePercent: 1,
+            motor: { mainsHz: 50, poles: 4, slipPercent: 3 },
+            origin: { method: 'nameplate', detail: { rpm: 1450 }, at: '2025-01-01T00:00:00Z' },
+          },
+          {
+            name: 'Fan',
+            speedRpm: 700,
+            features: 6,
+            tolerancePercent: 1,
+            drive: { from: 0, kind: 'belt', driverMm: 100, drivenMm: 200, slipPercent: 1 },
+          },
+          {
+            name: 'Wheel',
+            speedRpm: 400,
+            features: 5,
+            tolerancePercent: 1,
+            wheel: { groundSpeed: 50, unit: 'km/h', tyreSize: '205/55R16' },
+          },
+        ],
+        lighting: { ...m.setup.lighting, waveform: 'rectangular', dutyPercent: 40 },
+      },
+      tools: defaultToolInputs(),
+    };
+    const keys = new Set<string>();
+    const walk = (x: unknown): void => {
+      if (Array.isArray(x)) x.forEach(walk);
+      else if (typeof x === 'object' && x !== null) {
+        for (const [k, v] of Object.entries(x)) {
+          keys.add(k);
+          walk(v);
+        }
+      }
+    };
+    walk(full);
+    const missing = [...keys].filter((k) => !doc.includes(`\`${k}\``));
+    expect(missing).toEqual([]);
   });
 });
