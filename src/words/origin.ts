@@ -55,9 +55,10 @@ export function originWords(origin: SpeedOrigin): string {
 }
 
 /**
- * Where the speed came from and when: "found with the strobe on 2026-12-02".
- * @example originLine({ method: 'strobe', detail: {}, at: '2026-12-02T08:00:00Z' }) // "Speed found with the strobe on 2026-12-02."
+ * Where the speed came from and when it was applied. "Applied" keeps the day apart from the
+ * words before it ("from road speed 50 km/h on 205/55R16, applied on …", not "… on 205/55R16 on …").
+ * @example originLine({ method: 'strobe', detail: {}, at: '2026-12-02T08:00:00Z' }) // "Speed found with the strobe, applied on 2026-12-02."
  */
 export function originLine(origin: SpeedOrigin): string {
-  return `Speed ${originWords(origin)} on ${originDay(origin)}.`;
+  return `Speed ${originWords(origin)}, applied on ${originDay(origin)}.`;
 }

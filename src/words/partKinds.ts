@@ -1,6 +1,7 @@
 // The words each kind of part is described in: what it is called in the kind chooser, and what
 // its identical features are (blades, spokes, teeth, jaws), one and many.
-import { kindOf, type PartKind, type PartSpec } from '../state/model';
+import { kindOf, type PartKind } from '../state/model';
+import { formatNumber } from './format';
 
 interface KindWords {
   /** In the kind chooser. */
@@ -84,8 +85,8 @@ export const KIND_WORDS: Readonly<Record<PartKind, KindWords>> = {
  * A part's features in its kind's words: "8 blades", "1 mark", "36 teeth".
  * @example featureWords({ kind: 'gear', features: 36 }) // "36 teeth"
  */
-export function featureWords(part: Pick<PartSpec, 'kind' | 'features'>): string {
+export function featureWords(part: { kind?: PartKind; features: number }): string {
   const w = KIND_WORDS[kindOf(part)];
   if (part.features === 1) return kindOf(part) === 'other' ? '1 mark' : `1 ${w.one}`;
-  return `${part.features} ${w.many}`;
+  return `${formatNumber(part.features)} ${w.many}`;
 }

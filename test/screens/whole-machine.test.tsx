@@ -103,7 +103,7 @@ describe('the whole machine', () => {
     });
     expect(setup.value.parts[1].speedRpm).toBeCloseTo(582, 9);
     expect(screen.getByTestId('chain-speed-table').textContent).toMatch(
-      /Motor \(1 mark\).*Fan \(6 features\)/,
+      /Motor \(1 mark\).*Fan \(6 blades or marks\)/,
     );
   });
 
@@ -143,7 +143,7 @@ describe('the whole machine', () => {
     );
     expect(setup.value.parts[0].origin?.method).toBe('road-speed');
     expect(card(0).getByTestId('chain-origin-0').textContent).toMatch(
-      /^Speed from road speed 100 km\/h on 205\/55R16 on \d{4}-\d{2}-\d{2}\.$/,
+      /^Speed from road speed 100 km\/h on 205\/55R16, applied on \d{4}-\d{2}-\d{2}\.$/,
     );
     expect(speedOf(0)).toMatch(new RegExp(`^${formatNumber(rpm).replace('.', '\\.')} rpm ± 1 %`));
     fireEvent.change(card(0).getByLabelText('Ground speed unit'), { target: { value: 'mph' } });

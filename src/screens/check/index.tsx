@@ -95,6 +95,8 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
           <LightingReadout />
         </NotCurrent>
         <KeepShare />
+      </div>
+      <div class={style.report}>
         <ReportBar
           title="Check"
           cautions={{

@@ -1,6 +1,5 @@
 import { useState } from 'preact/hooks';
 import { apparentMotion, cautionFlags, type CautionContext } from '../../core';
-import { formatNumber } from '../../words/format';
 import { openCheckScreen } from '../../state/navigation';
 import { formatRate, formatRateSpan } from '../../words/rates';
 import {
@@ -26,6 +25,7 @@ import { ToolLayout } from '../../ui/tool-layout';
 import { wholeMachineCsv } from './csv';
 import { PartCard } from './part-card';
 import { speedWords } from '../../words/wholeMachine';
+import { featureWords } from '../../words/partKinds';
 import { verdictHeadline } from '../../words/check';
 import { BandTables } from './band-tables';
 import style from './style.module.css';
@@ -88,7 +88,7 @@ export function WholeMachineScreen(_props: Props) {
       cell: (p) => (
         <span>
           <strong>{p.name}</strong> (
-          {p.symmetry === 1 ? '1 mark' : `${formatNumber(p.symmetry)} features`})
+          {featureWords({ kind: setup.value.parts[p.index]?.kind, features: p.symmetry })})
           {p.index === target && <span class={style.tag}> · to freeze</span>}
         </span>
       ),

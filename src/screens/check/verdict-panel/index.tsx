@@ -7,6 +7,8 @@ import { VERDICT_FIELDS } from '../field-ids';
 import { Withdrawn } from '../../../ui/not-current';
 import { TrustMark } from '../../../ui/trust-mark';
 import { verdictHeadline } from '../../../words/check';
+import { KIND_WORDS, featureWords } from '../../../words/partKinds';
+import { kindOf } from '../../../state/model';
 import style from './style.module.css';
 
 interface Props {
@@ -58,7 +60,9 @@ export function VerdictPanel({ class: extra }: Props) {
       ? `${formatNumber(Math.abs(v.apparentRpm))} rpm, either way`
       : formatRpmWithDirection(v.apparentRpm, sign);
   const trueSpeed = `${formatNumber(Math.abs(v.trueRpm))} rpm`;
-  const features = r.part.symmetry === 1 ? '1 mark' : `${formatNumber(r.part.symmetry)} features`;
+  // In the part's own words: "8 blades", "5 spokes", "3 jaws".
+  const kind = activePart.value.kind;
+  const features = featureWords({ kind, features: r.part.symmetry });
   const partName = activePart.value.name.trim();
   return (
     <section
@@ -90,7 +94,8 @@ export function VerdictPanel({ class: extra }: Props) {
       </dl>
       {r.camera?.blurLook === 'smeared' && (
         <p class={style.aside} data-testid="smear-note">
-          Each frame smears the features into an even disc: single blades cannot be made out.
+          Each frame smears the {KIND_WORDS[kindOf({ kind })].many} into an even disc: single ones
+          cannot be made out.
         </p>
       )}
       <p class={style.context}>
