@@ -93,6 +93,17 @@ describe('saved machines', () => {
     );
   });
 
+  test('saving changes with the name field emptied says so in words and changes nothing', async () => {
+    await saveAs('Pelleter die');
+    const id = openMachineId.value!;
+    fireEvent.input(screen.getByLabelText('Machine name'), { target: { value: '  ' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save changes to this machine' }));
+    expect(screen.getByTestId('keep-outcome').textContent).toBe(
+      'The machine name is empty: type a name above (it was "Pelleter die"), then save.',
+    );
+    expect(machines.value.find((m) => m.id === id)?.name).toBe('Pelleter die');
+  });
+
   test('rename, duplicate, delete and undo', async () => {
     await saveAs('Conveyor idler');
     fireEvent.click(screen.getByRole('button', { name: 'Machines' }));

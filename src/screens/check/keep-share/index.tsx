@@ -54,6 +54,14 @@ export function KeepShare({ class: extra }: Props) {
 
   const saveChanges = async () => {
     if (!opened) return;
+    if (name.trim() === '') {
+      // Said in the words of this panel, not the saved list's field path ("name must not be blank").
+      setOutcome({
+        kind: 'problem',
+        text: `The machine name is empty: type a name above (it was "${opened.name}"), then save.`,
+      });
+      return;
+    }
     try {
       const result = await updateMachine(opened.id, workContent.peek(), openBaseVersion.peek());
       setOutcome(
