@@ -116,7 +116,7 @@ listen({
 
 /** What the store finally did with a change (at once, or when a held change reached the device). */
 function settled(id: string, outcome: Outcome): void {
-  if (outcome.kind === 'saved' || outcome.kind === 'restored') {
+  if (outcome.kind === 'saved' || outcome.kind === 'tabOnly' || outcome.kind === 'restored') {
     versions.set(id, outcome.version);
     lastSettled.value = { id, version: outcome.version };
   }

@@ -3,7 +3,6 @@ import { IDBFactory } from 'fake-indexeddb';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';
 import { FILE_FORMAT_NAME, MAX_MACHINES, parseMachinesFile } from '../../src/state/fileFormat';
-import type { Machine } from '../../src/state/model';
 import { deviceWith, storedNames, storedRecords } from './device';
 import { prototypeIsClean, sampleContent, sampleMachine, sampleSetup } from './fixtures';
 

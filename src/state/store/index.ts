@@ -61,6 +61,8 @@ export interface Change {
 /** What became of a change. */
 export type Outcome =
   | { kind: 'saved'; version: number }
+  /** The browser offers no storage: kept in this tab only, lost when it closes. */
+  | { kind: 'tabOnly'; version: number }
   | { kind: 'deleted' }
   /** Not on the device yet: kept in this tab, written when the device takes writes again. */
   | { kind: 'held' }
@@ -305,6 +307,8 @@ export function queueWork(work: WorkRecord): void {
 let latestWork: WorkRecord | null = null;
 
 let writing: Promise<Map<string, Outcome>> = Promise.resolve(new Map());
+/** Saved data was found cleared by a write that could not write everything back itself. */
+let writeBackDue = false;
 let retryTimer: ReturnType<typeof setTimeout> | undefined;
 let failures = 0;
 
@@ -316,7 +320,9 @@ export function flush(): Promise<Map<string, Outcome>> {
 
 async function writeHeld(): Promise<Map<string, Outcome>> {
   const results = new Map<string, Outcome>();
-  if (pending.size === 0 && pendingWork === undefined && rawPuts.length === 0) return results;
+  if (pending.size === 0 && pendingWork === undefined && rawPuts.length === 0 && !writeBackDue) {
+    return results;
+  }
   const batch = pending;
   const work = pendingWork;
   const puts = rawPuts;
@@ -326,20 +332,35 @@ async function writeHeld(): Promise<Map<string, Outcome>> {
   rawPuts = [];
   rawDeletes = [];
   let cleared = false;
+  let clearedUnseen = false;
   try {
     await backend.write(async (tx) => {
+      // Read before anything is written: a meta record gone means saved data was cleared.
+      const metaRead = tx.get(KEYS.meta);
+      // Writes that depend on no read are queued at once, in this same task: when the page is
+      // being left (pagehide) nothing after this point may run, and they must still land.
       for (const key of deletes) tx.delete(key);
-      const meta = await tx.get(KEYS.meta);
-      if (meta === undefined && metaSeen && backend.kind === 'device') {
+      for (const [key, value] of puts) tx.put(key, value);
+      if (work) tx.put(KEYS.work, { work });
+      tx.put(KEYS.meta, { schema: SCHEMA_VERSION });
+      const blind = batch.size === 0 && !writeBackDue;
+      if (blind) tx.commit();
+      const meta = await metaRead;
+      const gone = meta === undefined && metaSeen && backend.kind === 'device';
+      if (blind) {
+        // Too late to write back in this transaction: the next one does.
+        clearedUnseen = gone;
+        return;
+      }
+      if (gone || writeBackDue) {
         cleared = true;
         await writeBack(tx, batch);
       }
-      for (const [key, value] of puts) tx.put(key, value);
-      tx.put(KEYS.meta, { schema: SCHEMA_VERSION });
       for (const change of batch.values()) {
-        results.set(change.id, await write(tx, change, cleared));
+        const outcome = await write(tx, change, cleared);
+        const tabOnly = backend.kind === 'memory' && outcome.kind === 'saved';
+        results.set(change.id, tabOnly ? { kind: 'tabOnly', version: outcome.version } : outcome);
       }
-      if (work) tx.put(KEYS.work, { work });
     });
   } catch (e) {
     // Nothing of this try reached the device: hold it all again, under anything newer.
@@ -356,6 +377,11 @@ async function writeHeld(): Promise<Map<string, Outcome>> {
   }
   metaSeen = true;
   heldUpgrade = null;
+  if (cleared) writeBackDue = false;
+  if (clearedUnseen) {
+    writeBackDue = true;
+    void flush();
+  }
   // Changes made while this write was under way were made from the version it wrote.
   for (const [id, outcome] of results) {
     const next = pending.get(id);
