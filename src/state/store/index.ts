@@ -337,6 +337,8 @@ async function writeHeld(): Promise<Map<string, Outcome>> {
     await backend.write(async (tx) => {
       // Read before anything is written: a meta record gone means saved data was cleared.
       const metaRead = tx.get(KEYS.meta);
+      // A write refused below aborts the read too; the refusal is what gets reported.
+      metaRead.catch(() => undefined);
       // Writes that depend on no read are queued at once, in this same task: when the page is
       // being left (pagehide) nothing after this point may run, and they must still land.
       for (const key of deletes) tx.delete(key);
