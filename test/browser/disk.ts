@@ -141,6 +141,12 @@ export function fullDiskScript(startFull: boolean): void {
       return request;
     };
 
+  // A page that commits by itself (IDBTransaction.commit) meets the same refusal at the commit.
+  const realCommit = IDBTransaction.prototype.commit;
+  IDBTransaction.prototype.commit = function (this: IDBTransaction) {
+    if (!doomed.has(this)) realCommit.call(this);
+  };
+
   const proto = IDBObjectStore.prototype;
   const realGet = proto.get;
   proto.get = track(realGet, false);
