@@ -48,10 +48,20 @@ export function setHeader(change: Partial<MachineHeader>): void {
  * `openId` is the saved machine it comes from (null: not a saved machine) and `baseVersion`
  * the version it was read at.
  */
-export function loadWork(content: MachineContent, openId: string | null, baseVersion: number | null): void {
+export function loadWork(
+  content: MachineContent,
+  openId: string | null,
+  baseVersion: number | null,
+): void {
   const c = contentOf(content);
   batch(() => {
-    header.value = { name: c.name, site: c.site, notes: c.notes, assessedBy: c.assessedBy, assessedOn: c.assessedOn };
+    header.value = {
+      name: c.name,
+      site: c.site,
+      notes: c.notes,
+      assessedBy: c.assessedBy,
+      assessedOn: c.assessedOn,
+    };
     replaceSetup(c.setup);
     setToolInputs(c.tools);
     openMachineId.value = openId;

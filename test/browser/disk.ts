@@ -107,8 +107,7 @@ export function fullDiskScript(startFull: boolean): void {
   w.__refusedWrites = 0;
   const waiting = new WeakMap<IDBTransaction, number>();
   const doomed = new WeakSet<IDBTransaction>();
-  const quota = () =>
-    new DOMException('The quota has been exceeded.', 'QuotaExceededError');
+  const quota = () => new DOMException('The quota has been exceeded.', 'QuotaExceededError');
 
   // After each request of the page, an extra read queued behind it: when that read returns and
   // the page queued nothing more, the transaction is at its commit, and fails there.

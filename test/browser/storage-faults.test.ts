@@ -105,9 +105,7 @@ describe('two tabs of the app', () => {
     await first.getByRole('button', { name: 'Check', exact: true }).click();
     await typeInto(first, 'Speed', '1500');
     await first.getByRole('button', { name: 'Save changes to this machine' }).click();
-    await expect
-      .poll(() => shown(first, 'keep-outcome'))
-      .toBe('Changes saved to "Press".');
+    await expect.poll(() => shown(first, 'keep-outcome')).toBe('Changes saved to "Press".');
 
     await typeInto(second, 'Speed', '1600');
     await second.getByRole('button', { name: 'Save changes to this machine' }).click();
@@ -284,7 +282,10 @@ describe('a browser that offers no storage', () => {
       how: 'IndexedDB blocked (opening it throws)',
       script: () => {
         IDBFactory.prototype.open = () => {
-          throw new DOMException('The user denied permission to access the database.', 'SecurityError');
+          throw new DOMException(
+            'The user denied permission to access the database.',
+            'SecurityError',
+          );
         };
       },
       reason:
@@ -325,7 +326,9 @@ describe('asking the browser to keep the data', () => {
     await page.addInitScript(persistAnswerScript, granted);
     await openApp(page, inject('baseUrl'));
     await expect
-      .poll(() => page.evaluate(() => (window as unknown as { __persistAsked: number }).__persistAsked))
+      .poll(() =>
+        page.evaluate(() => (window as unknown as { __persistAsked: number }).__persistAsked),
+      )
       .toBe(1);
     await page.getByRole('button', { name: 'Machines', exact: true }).click();
     await page.getByTestId('storage-state').waitFor();

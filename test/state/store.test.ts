@@ -135,6 +135,32 @@ describe('saved data cleared while the app is open', () => {
   });
 });
 
+describe('saved data cleared, then only the working copy written', () => {
+  it('the write that finds it cleared is followed by one that writes every machine back', async () => {
+    await deviceWith([sampleMachine(), sampleMachine({ id: 'machine-2', name: 'Second' })]);
+    const m = await pageLoad();
+    const store = await import('../../src/state/store');
+    await new Promise<void>((done, fail) => {
+      const request = indexedDB.deleteDatabase('trueturn');
+      request.onsuccess = () => done();
+      request.onerror = () => fail(request.error);
+    });
+    // The working copy alone is written without waiting on any read (a page being left must
+    // keep it), so it cannot write back in the same transaction: the next one does, by itself.
+    store.queueWork({ openId: null, baseVersion: null, content: sampleContent() });
+    await store.flush();
+    // Any later flush runs after the write-back it queued.
+    await store.flush();
+    expect(await storedNames()).toEqual(['Blower, test bay', 'Second']);
+    expect(m.storageMessage.value).toMatch(
+      /^Saved data on this device was cleared while Trueturn was open .* Everything this tab held was written back: 2 machines and the set-up on screen\.$/,
+    );
+    expect(await getRecord('trueturn/work')).toEqual({
+      work: { openId: null, baseVersion: null, content: sampleContent() },
+    });
+  });
+});
+
 describe('storage that refuses writes', () => {
   it('at start-up: the saved list is still read from the device, and the example is not forced on it', async () => {
     await deviceWith([sampleMachine()]);

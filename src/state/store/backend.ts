@@ -114,7 +114,11 @@ export function deviceBackend(onLost: () => void): Backend {
     return result;
   }
 
-  return { kind: 'device', read: (work) => run('readonly', work), write: (work) => run('readwrite', work) };
+  return {
+    kind: 'device',
+    read: (work) => run('readonly', work),
+    write: (work) => run('readwrite', work),
+  };
 }
 
 function isClosed(error: unknown): boolean {

@@ -140,7 +140,8 @@ async function open(timeoutMs: number): Promise<void> {
   metaSeen = meta !== undefined;
   let schema: number;
   try {
-    schema = meta === undefined ? (found.list !== undefined ? 1 : SCHEMA_VERSION) : readSchema(meta);
+    schema =
+      meta === undefined ? (found.list !== undefined ? 1 : SCHEMA_VERSION) : readSchema(meta);
   } catch {
     // An unreadable meta record: keep everything aside and start afresh.
     const all = await device.read(async (tx) => {
@@ -260,7 +261,9 @@ export async function loadAll(): Promise<Loaded> {
     if (found.problems.length > 0) await setAside(found.bad, found.problems);
     return { machines: found.good, work: found.work, firstRun, read: true };
   } catch (e) {
-    reportStorageProblem(`Saved machines could not be read just now (${reasonFor(e)}); reload the page to try again.`);
+    reportStorageProblem(
+      `Saved machines could not be read just now (${reasonFor(e)}); reload the page to try again.`,
+    );
     return { machines: [], work: null, firstRun: false, read: false };
   }
 }
@@ -397,7 +400,9 @@ async function writeHeld(): Promise<Map<string, Outcome>> {
   clearTimeout(retryTimer);
   retryTimer = undefined;
   if (wasFailing) {
-    reportStorageProblem('Saving works again: every change held in this tab is now on this device.');
+    reportStorageProblem(
+      'Saving works again: every change held in this tab is now on this device.',
+    );
   }
   if (cleared) {
     const count = listener?.held().length ?? 0;
@@ -423,7 +428,10 @@ async function write(tx: Tx, change: Change, cleared: boolean): Promise<Outcome>
       stored = readStoredMachine(raw, change.id);
     } catch {
       // An unreadable record is never written over: keep it aside with the change.
-      const [rkey, entry] = recoveredEntry('A saved machine could not be read when it was changed.', { [key]: raw });
+      const [rkey, entry] = recoveredEntry(
+        'A saved machine could not be read when it was changed.',
+        { [key]: raw },
+      );
       tx.put(rkey, entry);
     }
   }
@@ -460,7 +468,12 @@ async function write(tx: Tx, change: Change, cleared: boolean): Promise<Outcome>
 /** The name a conflicting change is kept under ("Fan (this tab)", within the longest name). */
 function copyName(name: string): string {
   const end = ' (this tab)';
-  return [...name].slice(0, 80 - end.length).join('').trimEnd() + end;
+  return (
+    [...name]
+      .slice(0, 80 - end.length)
+      .join('')
+      .trimEnd() + end
+  );
 }
 
 async function writeBack(tx: Tx, batch: Map<string, Change>): Promise<void> {
