@@ -278,6 +278,11 @@ describe('unreadable data is set aside, never lost', () => {
     const m = await pageLoad();
     expect(m.storageStatus.value).toEqual({ mode: 'saved' });
     expect(await getRecord('trueturn/meta')).toEqual({ schema: 2 });
+    // The one true cause, not "cleared while open" (the unreadable meta record was removed by
+    // the app itself).
+    expect(m.storageMessage.value).toBe(
+      'The saved data on this device was not in a form Trueturn can read; it was set aside (Machines screen) and saving starts afresh.',
+    );
     const recovered = await import('../../src/state/recovered');
     await recovered.refreshRecovered();
     expect(recovered.recovered.value[0].records).toEqual({
