@@ -24,7 +24,13 @@ import {
   type StoredMachine,
   type WorkRecord,
 } from './store';
-import { DataError, MAX_NAME_CHARS, MAX_NOTES_CHARS, validateMachine, validateMachineName } from './validate';
+import {
+  DataError,
+  MAX_NAME_CHARS,
+  MAX_NOTES_CHARS,
+  validateMachine,
+  validateMachineName,
+} from './validate';
 
 export { heldIds, storageMessage, storageStatus } from './store';
 export { newId } from './ids';
@@ -116,14 +122,16 @@ listen({
 
 /** What the store finally did with a change (at once, or when a held change reached the device). */
 function settled(id: string, outcome: Outcome): void {
-  if (outcome.kind === 'saved' || outcome.kind === 'restored') {
+  if (outcome.kind === 'saved' || outcome.kind === 'tabOnly' || outcome.kind === 'restored') {
     versions.set(id, outcome.version);
     lastSettled.value = { id, version: outcome.version };
   }
   if (outcome.kind === 'deleted') versions.delete(id);
   if (outcome.kind === 'restored') {
     const name = machines.peek().find((m) => m.id === id)?.name ?? 'A machine';
-    reportStorageProblem(`"${name}" had been deleted in another tab; your change here brought it back.`);
+    reportStorageProblem(
+      `"${name}" had been deleted in another tab; your change here brought it back.`,
+    );
   }
   if (outcome.kind === 'copied') {
     const { theirs, copy } = outcome;
@@ -228,7 +236,10 @@ function requireRoom(adding: number): void {
 
 function requireFreeName(name: string, exceptId?: string): void {
   if (takenNames(machines.value, exceptId).has(nameKey(name))) {
-    throw new DataError('name', `A machine called "${name}" is already saved; choose another name.`);
+    throw new DataError(
+      'name',
+      `A machine called "${name}" is already saved; choose another name.`,
+    );
   }
 }
 
@@ -374,7 +385,10 @@ export type ImportResult =
  * Adds machines read from a file or a set-aside record (each with a new id); a name already in
  * use becomes "<name> (imported)". All or nothing: too many for the list changes nothing.
  */
-export async function addMachines(found: readonly Machine[], suffix = 'imported'): Promise<ImportResult> {
+export async function addMachines(
+  found: readonly Machine[],
+  suffix = 'imported',
+): Promise<ImportResult> {
   await ready();
   const room = MAX_MACHINES - machines.value.length;
   if (found.length > room) {

@@ -118,7 +118,13 @@ export function keepWork(): () => void {
   });
   const stopFollowing = effect(() => {
     const conflict = lastConflict.value;
-    if (conflict && conflict.id === openMachineId.peek()) markSaved(conflict.copy.id, 1);
+    if (conflict && conflict.id === openMachineId.peek()) {
+      // The copy has a name of its own: saving again must go to it under that name.
+      batch(() => {
+        markSaved(conflict.copy.id, 1);
+        setHeader({ name: conflict.copy.name });
+      });
+    }
   });
   // This tab's own writes of the open machine (perhaps held a while) advance the version it
   // works from; another tab's never do, so saving over them keeps both.

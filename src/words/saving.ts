@@ -17,6 +17,11 @@ export function saveWords(name: string, outcome: Outcome, done: string): SaveWor
     case 'saved':
     case 'deleted':
       return { kind: 'done', text: done };
+    case 'tabOnly':
+      return {
+        kind: 'problem',
+        text: `Kept in this tab only as "${name}": this browser offers no storage, so it is lost when the tab closes. Export your machines to keep them.`,
+      };
     case 'held':
       return {
         kind: 'problem',

@@ -99,9 +99,9 @@ describe('two tabs', () => {
       'from the first tab',
       'from the second tab',
     ]);
-    expect(names(second)).toEqual(['Blower, test bay', 'Blower, test bay (this tab)']);
+    expect(names(second)).toEqual(['Blower, test bay', 'Blower, test bay (kept copy)']);
     expect(second.storageMessage.value).toBe(
-      'Another tab saved "Blower, test bay" while it was changed here: both are kept, this tab\'s version as "Blower, test bay (this tab)".',
+      'Another tab saved "Blower, test bay" while it was changed here: both are kept, this tab\'s version as "Blower, test bay (kept copy)".',
     );
   });
 
@@ -132,6 +132,32 @@ describe('saved data cleared while the app is open', () => {
     expect(m.storageMessage.value).toMatch(
       /^Saved data on this device was cleared while Trueturn was open .* Everything this tab held was written back: 3 machines/,
     );
+  });
+});
+
+describe('saved data cleared, then only the working copy written', () => {
+  it('the write that finds it cleared is followed by one that writes every machine back', async () => {
+    await deviceWith([sampleMachine(), sampleMachine({ id: 'machine-2', name: 'Second' })]);
+    const m = await pageLoad();
+    const store = await import('../../src/state/store');
+    await new Promise<void>((done, fail) => {
+      const request = indexedDB.deleteDatabase('trueturn');
+      request.onsuccess = () => done();
+      request.onerror = () => fail(request.error);
+    });
+    // The working copy alone is written without waiting on any read (a page being left must
+    // keep it), so it cannot write back in the same transaction: the next one does, by itself.
+    store.queueWork({ openId: null, baseVersion: null, content: sampleContent() });
+    await store.flush();
+    // Any later flush runs after the write-back it queued.
+    await store.flush();
+    expect(await storedNames()).toEqual(['Blower, test bay', 'Second']);
+    expect(m.storageMessage.value).toMatch(
+      /^Saved data on this device was cleared while Trueturn was open .* Everything this tab held was written back: 2 machines and the set-up on screen\.$/,
+    );
+    expect(await getRecord('trueturn/work')).toEqual({
+      work: { openId: null, baseVersion: null, content: sampleContent() },
+    });
   });
 });
 
@@ -252,6 +278,11 @@ describe('unreadable data is set aside, never lost', () => {
     const m = await pageLoad();
     expect(m.storageStatus.value).toEqual({ mode: 'saved' });
     expect(await getRecord('trueturn/meta')).toEqual({ schema: 2 });
+    // The one true cause, not "cleared while open" (the unreadable meta record was removed by
+    // the app itself).
+    expect(m.storageMessage.value).toBe(
+      'The saved data on this device was not in a form Trueturn can read; it was set aside (Machines screen) and saving starts afresh.',
+    );
     const recovered = await import('../../src/state/recovered');
     await recovered.refreshRecovered();
     expect(recovered.recovered.value[0].records).toEqual({

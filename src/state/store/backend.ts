@@ -9,12 +9,20 @@ export const DB_NAME = 'trueturn';
 /** Name of the one object store inside it. */
 export const STORE_NAME = 'records';
 
-/** What a transaction may do: reads awaited in turn, writes queued in order. */
+/**
+ * What a transaction may do: reads awaited in turn, writes queued in order. Every request is
+ * made when the call is made, so requests run in the order of the calls.
+ */
 export interface Tx {
   get(key: string): Promise<unknown>;
   keys(): Promise<string[]>;
   put(key: string, value: unknown): void;
   delete(key: string): void;
+  /**
+   * No more requests: the browser commits what was queued without waiting for this page to read
+   * the answers, so the writes land even when the page is being left (pagehide).
+   */
+  commit(): void;
 }
 
 export interface Backend {
@@ -88,6 +96,10 @@ export function deviceBackend(onLost: () => void): Backend {
           ),
         put: (key, value) => void store.put(value, key),
         delete: (key) => void store.delete(key),
+        commit: () => {
+          // Older browsers commit by themselves once the page stops making requests.
+          if (typeof tx.commit === 'function') tx.commit();
+        },
       });
     } catch (error) {
       done.catch(() => undefined);
@@ -102,7 +114,11 @@ export function deviceBackend(onLost: () => void): Backend {
     return result;
   }
 
-  return { kind: 'device', read: (work) => run('readonly', work), write: (work) => run('readwrite', work) };
+  return {
+    kind: 'device',
+    read: (work) => run('readonly', work),
+    write: (work) => run('readwrite', work),
+  };
 }
 
 function isClosed(error: unknown): boolean {
@@ -126,6 +142,7 @@ export function memoryBackend(): Backend {
         if (!writable) throw new DOMException('Read-only transaction', 'ReadOnlyError');
         deletes.push(key);
       },
+      commit: () => undefined,
     });
     for (const [key, value] of puts) map.set(key, value);
     for (const key of deletes) map.delete(key);

@@ -61,6 +61,8 @@ export interface Change {
 /** What became of a change. */
 export type Outcome =
   | { kind: 'saved'; version: number }
+  /** The browser offers no storage: kept in this tab only, lost when it closes. */
+  | { kind: 'tabOnly'; version: number }
   | { kind: 'deleted' }
   /** Not on the device yet: kept in this tab, written when the device takes writes again. */
   | { kind: 'held' }
@@ -138,7 +140,8 @@ async function open(timeoutMs: number): Promise<void> {
   metaSeen = meta !== undefined;
   let schema: number;
   try {
-    schema = meta === undefined ? (found.list !== undefined ? 1 : SCHEMA_VERSION) : readSchema(meta);
+    schema =
+      meta === undefined ? (found.list !== undefined ? 1 : SCHEMA_VERSION) : readSchema(meta);
   } catch {
     // An unreadable meta record: keep everything aside and start afresh.
     const all = await device.read(async (tx) => {
@@ -258,7 +261,9 @@ export async function loadAll(): Promise<Loaded> {
     if (found.problems.length > 0) await setAside(found.bad, found.problems);
     return { machines: found.good, work: found.work, firstRun, read: true };
   } catch (e) {
-    reportStorageProblem(`Saved machines could not be read just now (${reasonFor(e)}); reload the page to try again.`);
+    reportStorageProblem(
+      `Saved machines could not be read just now (${reasonFor(e)}); reload the page to try again.`,
+    );
     return { machines: [], work: null, firstRun: false, read: false };
   }
 }
@@ -305,6 +310,8 @@ export function queueWork(work: WorkRecord): void {
 let latestWork: WorkRecord | null = null;
 
 let writing: Promise<Map<string, Outcome>> = Promise.resolve(new Map());
+/** Saved data was found cleared by a write that could not write everything back itself. */
+let writeBackDue = false;
 let retryTimer: ReturnType<typeof setTimeout> | undefined;
 let failures = 0;
 
@@ -316,7 +323,9 @@ export function flush(): Promise<Map<string, Outcome>> {
 
 async function writeHeld(): Promise<Map<string, Outcome>> {
   const results = new Map<string, Outcome>();
-  if (pending.size === 0 && pendingWork === undefined && rawPuts.length === 0) return results;
+  if (pending.size === 0 && pendingWork === undefined && rawPuts.length === 0 && !writeBackDue) {
+    return results;
+  }
   const batch = pending;
   const work = pendingWork;
   const puts = rawPuts;
@@ -326,20 +335,37 @@ async function writeHeld(): Promise<Map<string, Outcome>> {
   rawPuts = [];
   rawDeletes = [];
   let cleared = false;
+  let clearedUnseen = false;
   try {
     await backend.write(async (tx) => {
+      // Read before anything is written: a meta record gone means saved data was cleared.
+      const metaRead = tx.get(KEYS.meta);
+      // A write refused below aborts the read too; the refusal is what gets reported.
+      metaRead.catch(() => undefined);
+      // Writes that depend on no read are queued at once, in this same task: when the page is
+      // being left (pagehide) nothing after this point may run, and they must still land.
       for (const key of deletes) tx.delete(key);
-      const meta = await tx.get(KEYS.meta);
-      if (meta === undefined && metaSeen && backend.kind === 'device') {
+      for (const [key, value] of puts) tx.put(key, value);
+      if (work) tx.put(KEYS.work, { work });
+      tx.put(KEYS.meta, { schema: SCHEMA_VERSION });
+      const blind = batch.size === 0 && !writeBackDue;
+      if (blind) tx.commit();
+      const meta = await metaRead;
+      const gone = meta === undefined && metaSeen && backend.kind === 'device';
+      if (blind) {
+        // Too late to write back in this transaction: the next one does.
+        clearedUnseen = gone;
+        return;
+      }
+      if (gone || writeBackDue) {
         cleared = true;
         await writeBack(tx, batch);
       }
-      for (const [key, value] of puts) tx.put(key, value);
-      tx.put(KEYS.meta, { schema: SCHEMA_VERSION });
       for (const change of batch.values()) {
-        results.set(change.id, await write(tx, change, cleared));
+        const outcome = await write(tx, change, cleared);
+        const tabOnly = backend.kind === 'memory' && outcome.kind === 'saved';
+        results.set(change.id, tabOnly ? { kind: 'tabOnly', version: outcome.version } : outcome);
       }
-      if (work) tx.put(KEYS.work, { work });
     });
   } catch (e) {
     // Nothing of this try reached the device: hold it all again, under anything newer.
@@ -356,6 +382,11 @@ async function writeHeld(): Promise<Map<string, Outcome>> {
   }
   metaSeen = true;
   heldUpgrade = null;
+  if (cleared) writeBackDue = false;
+  if (clearedUnseen) {
+    writeBackDue = true;
+    void flush();
+  }
   // Changes made while this write was under way were made from the version it wrote.
   for (const [id, outcome] of results) {
     const next = pending.get(id);
@@ -369,7 +400,9 @@ async function writeHeld(): Promise<Map<string, Outcome>> {
   clearTimeout(retryTimer);
   retryTimer = undefined;
   if (wasFailing) {
-    reportStorageProblem('Saving works again: every change held in this tab is now on this device.');
+    reportStorageProblem(
+      'Saving works again: every change held in this tab is now on this device.',
+    );
   }
   if (cleared) {
     const count = listener?.held().length ?? 0;
@@ -395,7 +428,10 @@ async function write(tx: Tx, change: Change, cleared: boolean): Promise<Outcome>
       stored = readStoredMachine(raw, change.id);
     } catch {
       // An unreadable record is never written over: keep it aside with the change.
-      const [rkey, entry] = recoveredEntry('A saved machine could not be read when it was changed.', { [key]: raw });
+      const [rkey, entry] = recoveredEntry(
+        'A saved machine could not be read when it was changed.',
+        { [key]: raw },
+      );
       tx.put(rkey, entry);
     }
   }
@@ -429,10 +465,15 @@ async function write(tx: Tx, change: Change, cleared: boolean): Promise<Outcome>
   return { kind: 'copied', theirs: stored, copy };
 }
 
-/** The name a conflicting change is kept under ("Fan (this tab)", within the longest name). */
+/** The name a conflicting change is kept under ("Fan (kept copy)", within the longest name). */
 function copyName(name: string): string {
-  const end = ' (this tab)';
-  return [...name].slice(0, 80 - end.length).join('').trimEnd() + end;
+  const end = ' (kept copy)';
+  return (
+    [...name]
+      .slice(0, 80 - end.length)
+      .join('')
+      .trimEnd() + end
+  );
 }
 
 async function writeBack(tx: Tx, batch: Map<string, Change>): Promise<void> {

@@ -73,7 +73,8 @@ export function readStoredMachine(x: unknown, id: string): StoredMachine {
 /** The working copy record, checked. */
 export function readWork(x: unknown): WorkRecord {
   const r = readRecord(x, 'working copy', ['openId', 'baseVersion', 'content']);
-  const openId = typeof r.openId === 'string' && /^[A-Za-z0-9_-]{1,100}$/.test(r.openId) ? r.openId : null;
+  const openId =
+    typeof r.openId === 'string' && /^[A-Za-z0-9_-]{1,100}$/.test(r.openId) ? r.openId : null;
   const baseVersion =
     typeof r.baseVersion === 'number' && Number.isInteger(r.baseVersion) && r.baseVersion >= 1
       ? r.baseVersion
@@ -109,8 +110,12 @@ export function upgradeSchema1(list: unknown, currentSetup: unknown): Schema1Upg
     const ids = new Set<string>();
     list.forEach((item: unknown, i) => {
       try {
-        const machine = validateMachine(machineV1toV2(item, `saved machine ${i + 1}`), `saved machine ${i + 1}`);
-        if (ids.has(machine.id)) throw new DataError('id', `saved machine ${i + 1} repeats the id of another machine.`);
+        const machine = validateMachine(
+          machineV1toV2(item, `saved machine ${i + 1}`),
+          `saved machine ${i + 1}`,
+        );
+        if (ids.has(machine.id))
+          throw new DataError('id', `saved machine ${i + 1} repeats the id of another machine.`);
         ids.add(machine.id);
         out.machines.push({ version: 1, machine });
       } catch (e) {

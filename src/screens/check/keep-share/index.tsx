@@ -1,5 +1,12 @@
 import { useState } from 'preact/hooks';
-import { machines, saveMachine, updateMachine, type SaveResult } from '../../../state/machines';
+import {
+  heldIds,
+  lastConflict,
+  machines,
+  saveMachine,
+  updateMachine,
+  type SaveResult,
+} from '../../../state/machines';
 import { encodeShareFragment } from '../../../state/shareLink';
 import {
   header,
@@ -32,7 +39,28 @@ function versionAfter(result: SaveResult): number | null {
  * a new one), starting a new machine, and sharing it as a link.
  */
 export function KeepShare({ class: extra }: Props) {
-  const [outcome, setOutcome] = useState<SaveWords | null>(null);
+  const [said, setSaid] = useState<SaveWords | null>(null);
+  // A save held in this tab (the device refused it) is written by itself later: then the
+  // message says what finally happened instead of that it waits.
+  const [waiting, setWaiting] = useState<{ id: string; done: string } | null>(null);
+  const conflict = lastConflict.value;
+  const outcome: SaveWords | null =
+    waiting && said?.kind === 'problem' && !heldIds.value.has(waiting.id)
+      ? conflict?.id === waiting.id
+        ? {
+            kind: 'problem',
+            text: `Another tab saved this machine meanwhile: both are kept, this one as "${conflict.copy.name}".`,
+          }
+        : { kind: 'done', text: waiting.done }
+      : said;
+  const setOutcome = (words: SaveWords | null) => {
+    setWaiting(null);
+    setSaid(words);
+  };
+  const show = (result: SaveResult, done: string) => {
+    setSaid(saveWords(result.machine.name, result.outcome, done));
+    setWaiting(result.outcome.kind === 'held' ? { id: result.machine.id, done } : null);
+  };
   const [link, setLink] = useState<string | null>(null);
   const [confirmNew, setConfirmNew] = useState(false);
   const name = header.value.name;
@@ -44,9 +72,7 @@ export function KeepShare({ class: extra }: Props) {
       const result = await saveMachine(name, workContent.peek());
       markSaved(result.machine.id, versionAfter(result));
       setHeader({ name: result.machine.name });
-      setOutcome(
-        saveWords(result.machine.name, result.outcome, `Saved as "${result.machine.name}".`),
-      );
+      show(result, `Saved as "${result.machine.name}".`);
     } catch (error) {
       setOutcome({ kind: 'problem', text: messageOf(error) });
     }
@@ -64,13 +90,7 @@ export function KeepShare({ class: extra }: Props) {
     }
     try {
       const result = await updateMachine(opened.id, workContent.peek(), openBaseVersion.peek());
-      setOutcome(
-        saveWords(
-          result.machine.name,
-          result.outcome,
-          `Changes saved to "${result.machine.name}".`,
-        ),
-      );
+      show(result, `Changes saved to "${result.machine.name}".`);
     } catch (error) {
       setOutcome({ kind: 'problem', text: messageOf(error) });
     }
