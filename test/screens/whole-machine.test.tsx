@@ -261,7 +261,7 @@ describe('the whole machine', () => {
 
   test('removing the motor leaves the fan at the speed it had', () => {
     buildMotorBeltFan();
-    fireEvent.click(screen.getByRole('button', { name: 'Remove Motor' }));
+    fireEvent.click(screen.getByRole('button', { name: 'Remove this part: Motor' }));
     expect(setup.value.parts.map((p) => p.name)).toEqual(['Fan']);
     expect(setup.value.parts[0].drive).toBeUndefined();
     expect(setup.value.parts[0].speedRpm).toBeCloseTo(582, 9);

@@ -155,7 +155,7 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
           type="button"
           class={style.quietButton}
           onClick={() => act((s) => withoutPart(s, index))}
-          aria-label={`Remove ${partLabel(setup, index)}`}
+          aria-label={`Remove this part: ${partLabel(setup, index)}`}
         >
           Remove this part
         </button>
