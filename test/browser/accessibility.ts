@@ -114,7 +114,7 @@ export function focusStop(page: Page): Promise<FocusStop | null> {
       name,
       covered: shown
         ? null
-        : `its centre shows ${hit ? `${hit.tagName.toLowerCase()}.${hit.className}` : 'nothing'}`,
+        : `its centre (${Math.round(box.left + box.width / 2)}, ${Math.round(box.top + box.height / 2)} px in a ${innerWidth} × ${innerHeight} window) shows ${hit ? `${hit.tagName.toLowerCase()}.${hit.className}` : 'nothing'}`,
     };
   });
 }

@@ -67,6 +67,11 @@ export function AppFrame({ notices, current, children }: Props) {
               class={style.tab}
               aria-current={t.id === screen ? 'page' : undefined}
               onClick={() => openScreen(t.id)}
+              // Chromium leaves a tab that peeks in at the edge where it is, under the fade:
+              // bring the whole tab into view when the keyboard reaches it.
+              onFocus={(e) =>
+                e.currentTarget.scrollIntoView?.({ block: 'nearest', inline: 'nearest' })
+              }
             >
               <svg class={style.icon} viewBox="0 0 24 24" aria-hidden="true">
                 <path d={t.icon} />

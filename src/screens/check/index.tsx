@@ -1,4 +1,5 @@
 import type { ComponentChildren } from 'preact';
+import { useRef } from 'preact/hooks';
 import { check, checkProblem } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
 import { CameraReadout } from './camera-readout';
@@ -14,6 +15,7 @@ import { VerdictPanel } from './verdict-panel';
 import { CheckPreview, CheckRateMap } from './connected-widgets';
 import { RESULT_FIELDS, VERDICT_FIELDS } from './field-ids';
 import { CHECK_NOTE_WORDS } from '../../words/check';
+import { useStickyInset } from './sticky-inset';
 import style from './style.module.css';
 
 interface Props {
@@ -42,9 +44,11 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
   const r = check.value;
   const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
   const stale = problemsAmong(RESULT_FIELDS);
+  const verdict = useRef<HTMLDivElement>(null);
+  useStickyInset(verdict);
   return (
     <div class={style.screen}>
-      <div class={style.verdict}>
+      <div class={style.verdict} ref={verdict}>
         <VerdictPanel />
       </div>
       <div class={style.warnings}>
