@@ -245,6 +245,7 @@ export function WholeMachineScreen(_props: Props) {
     <ToolLayout
       testId="whole-machine-screen"
       summary={summary}
+      announce={`Speeds of the machine: ${parts.map((p) => `${p.name}, ${speedWords(p)}`).join('; ')}.`}
       warnings={warnings}
       entries={entries}
       results={results}

@@ -85,6 +85,27 @@ interface WithdrawnProps {
   testId?: string;
 }
 
+/** "No verdict until Speed is fixed", "No answer: these entries cannot be worked out". */
+function withdrawnHeadline(problems: readonly FieldProblem[], what: string): string {
+  return problems.length > 0
+    ? `No ${what} until ${fieldNames(problems)} ${problems.length === 1 ? 'is' : 'are'} fixed`
+    : `No ${what}: these entries cannot be worked out`;
+}
+
+/** What a withdrawn answer says, in one line to be read out: its headline, then each message. */
+export function withdrawnWords(
+  problems: readonly FieldProblem[],
+  refusal: string | undefined,
+  what: string,
+): string {
+  const lines = [
+    withdrawnHeadline(problems, what),
+    ...problems.map((p) => `${p.label}: ${p.message}`),
+    ...(refusal !== undefined ? [refusal] : []),
+  ];
+  return lines.map((line) => (/[.!?]$/.test(line) ? line : `${line}.`)).join(' ');
+}
+
 /**
  * An answer withdrawn where it stood because its entries are refused (docs/physics.md §10): which
  * field to fix, the field's own message, and a button that takes the cursor there.
@@ -93,9 +114,7 @@ export function Withdrawn({ problems, refusal, what, testId }: WithdrawnProps) {
   return (
     <div class={style.withdrawn} data-testid="withdrawn">
       <p class={style.headline} data-testid={testId}>
-        {problems.length > 0
-          ? `No ${what} until ${fieldNames(problems)} ${problems.length === 1 ? 'is' : 'are'} fixed`
-          : `No ${what}: these entries cannot be worked out`}
+        {withdrawnHeadline(problems, what)}
       </p>
       <ul class={style.messages}>
         {problems.map((p) => (
