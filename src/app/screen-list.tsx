@@ -3,12 +3,11 @@
 // screen is added here (DEVELOPERS.md, "Add a tool screen") and nowhere else.
 import type { ComponentChildren } from 'preact';
 import { CheckScreen } from '../screens/check';
-import { MachinesScreen } from '../screens/machines';
 import { CHECK_SCREEN } from '../state/navigation';
 import { lazyModule } from '../ui/lazyModule';
 
 /**
- * The five field tools load after the first paint, keeping the first screen's JavaScript small;
+ * The Machines screen and the five field tools load after the first paint, keeping the first screen's JavaScript small;
  * the service worker precaches their chunk, so they open offline too. main.tsx asks for them
  * once the first screen is up, so a tap on their tab rarely waits.
  */
@@ -46,7 +45,7 @@ export const SCREENS = [
     heading: 'Saved machines',
     // A list of saved entries.
     icon: 'M4 6h16M4 12h16M4 18h10',
-    screen: { now: MachinesScreen },
+    screen: { later: (tools) => tools.MachinesScreen },
   },
   {
     id: 'lighting',
