@@ -40,10 +40,8 @@ interface Props {
  * result worked out from it is marked not current (docs/physics.md §10).
  */
 export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap /> }: Props) {
-  const refusal = checkProblem.value;
-  const r = check.value;
-  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
-  const stale = problemsAmong(RESULT_FIELDS);
+  // The screen reads no signal itself: each part below reads what it shows, so a keystroke
+  // re-renders the parts whose inputs changed, not the whole screen.
   const verdict = useRef<HTMLDivElement>(null);
   useStickyInset(verdict);
   return (
@@ -52,50 +50,70 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
         <VerdictPanel />
       </div>
       <div class={style.warnings}>
-        {/* With the verdict withdrawn nothing says the view is true: keep the stillness caution. */}
-        <Cautions
-          show={{
-            safety: r.showSafety || withdrawn,
-            photosensitivity: r.showPhotosensitivity,
-          }}
-        />
-        {r.notes.length > 0 && (
-          <NotCurrent problems={stale} refusal={refusal}>
-            <ul class={style.notes} data-testid="check-notes">
-              {r.notes.map((n) => (
-                <li key={n}>{CHECK_NOTE_WORDS[n]}</li>
-              ))}
-            </ul>
-          </NotCurrent>
-        )}
+        <CheckWarnings />
       </div>
       <div class={style.entries}>
         <PartForm />
         <SamplerForm />
         {chart && (
           <div class={style.slot}>
-            <NotCurrent problems={stale} refusal={refusal}>
-              {chart}
-            </NotCurrent>
+            <ResultsGuard>{chart}</ResultsGuard>
           </div>
         )}
       </div>
       <div class={style.results}>
         {preview && (
           <div class={style.slot}>
-            <NotCurrent problems={stale} refusal={refusal}>
-              {preview}
-            </NotCurrent>
+            <ResultsGuard>{preview}</ResultsGuard>
           </div>
         )}
         <RateSuggestions />
-        <NotCurrent problems={stale} refusal={refusal}>
+        <ResultsGuard>
           <SafeBands />
           <CameraReadout />
           <LightingReadout />
-        </NotCurrent>
+        </ResultsGuard>
         <KeepShare />
       </div>
     </div>
+  );
+}
+
+/** The cautions and notes under the verdict. */
+function CheckWarnings() {
+  const refusal = checkProblem.value;
+  const r = check.value;
+  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
+  return (
+    <>
+      {/* With the verdict withdrawn nothing says the view is true: keep the stillness caution. */}
+      <Cautions
+        show={{
+          safety: r.showSafety || withdrawn,
+          photosensitivity: r.showPhotosensitivity,
+        }}
+      />
+      {r.notes.length > 0 && (
+        <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={refusal}>
+          <ul class={style.notes} data-testid="check-notes">
+            {r.notes.map((n) => (
+              <li key={n}>{CHECK_NOTE_WORDS[n]}</li>
+            ))}
+          </ul>
+        </NotCurrent>
+      )}
+    </>
+  );
+}
+
+/**
+ * Results worked out from the entries, marked not current while one is refused. Reads only the
+ * refusals: the results inside follow the check result themselves.
+ */
+function ResultsGuard({ children }: { children: ComponentChildren }) {
+  return (
+    <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={checkProblem.value}>
+      {children}
+    </NotCurrent>
   );
 }

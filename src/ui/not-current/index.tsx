@@ -1,4 +1,5 @@
 import type { ComponentChildren } from 'preact';
+import { memoWith } from '../memo';
 import type { FieldProblem } from '../../state/fieldProblems';
 import style from './style.module.css';
 
@@ -50,7 +51,7 @@ interface Props {
  * act on a stale rate, no screen reader reads it as current) and marked "Not current" with the
  * fields to fix. The content stays in place, with its state, so it comes back as it was.
  */
-export function NotCurrent({ problems, refusal, children }: Props) {
+function NotCurrentView({ problems, refusal, children }: Props) {
   const stale = problems.length > 0 || refusal !== undefined;
   return (
     <div class={style.wrap} data-current={stale ? 'false' : 'true'}>
@@ -75,6 +76,26 @@ export function NotCurrent({ problems, refusal, children }: Props) {
     </div>
   );
 }
+
+/** The same refused fields, field by field (a new list of the same refusals changes nothing). */
+function sameProblems(a: readonly FieldProblem[], b: readonly FieldProblem[]): boolean {
+  return (
+    a.length === b.length &&
+    a.every((p, i) => p.id === b[i].id && p.label === b[i].label && p.message === b[i].message)
+  );
+}
+
+/**
+ * Re-renders only when the refusals or the content change: a guard whose parent re-renders
+ * with the same content and the same refusals does nothing.
+ */
+export const NotCurrent = memoWith(
+  NotCurrentView,
+  (before, after) =>
+    before.children === after.children &&
+    before.refusal === after.refusal &&
+    sameProblems(before.problems, after.problems),
+);
 
 interface WithdrawnProps {
   problems: readonly FieldProblem[];
