@@ -17,8 +17,23 @@ export function useFloatInset(ref: MutableRef<HTMLElement | null>): void {
     if (!notice || typeof ResizeObserver !== 'function') return;
     const root = document.documentElement;
     const write = () => {
-      const fromBottomPx = window.innerHeight - notice.getBoundingClientRect().top;
-      root.style.setProperty(PROPERTY, `${Math.ceil(Math.max(0, fromBottomPx) + GAP_PX)}px`);
+      const top = notice.getBoundingClientRect().top;
+      root.style.setProperty(
+        PROPERTY,
+        `${Math.ceil(Math.max(0, window.innerHeight - top) + GAP_PX)}px`,
+      );
+      // The notice may come while focus is on a control it now covers: scroll that control up
+      // above it (the new scroll padding keeps the room).
+      const focused = document.activeElement;
+      if (
+        focused instanceof HTMLElement &&
+        focused !== document.body &&
+        !notice.contains(focused)
+      ) {
+        if (focused.getBoundingClientRect().bottom > top) {
+          focused.scrollIntoView?.({ block: 'nearest' });
+        }
+      }
     };
     const observer = new ResizeObserver(write);
     observer.observe(notice);
