@@ -51,7 +51,20 @@ export default defineConfig({
       },
     }),
   ],
-  build: { target: 'es2022' },
+  build: {
+    target: 'es2022',
+    // Every browser the app targets (ES2022) preloads modules itself: no polyfill in the page.
+    modulePreload: { polyfill: false },
+    rolldownOptions: {
+      // The core is pure (no DOM, no storage, no clock), so a core module
+      // whose exports go unused can be dropped, and src/core/index.ts re-exporting everything
+      // does not pull the whole core into the first screen's chunk. Other modules keep the
+      // bundler's default.
+      treeshake: {
+        moduleSideEffects: (id) => (id.includes('/src/core/') ? false : undefined),
+      },
+    },
+  },
   test: {
     projects: [
       {

@@ -22,7 +22,6 @@ export function App({ updateNotice }: Props) {
   const entry = screenEntry(currentScreen.value);
   const notices = (
     <>
-      {updateNotice}
       {session && (
         <Banner
           kind={session.kind}
@@ -58,9 +57,13 @@ export function App({ updateNotice }: Props) {
     </>
   );
   return (
-    <AppFrame notices={notices} current={entry.id}>
-      <Screen key={entry.id} entry={entry} />
-    </AppFrame>
+    <>
+      <AppFrame notices={notices} current={entry.id}>
+        <Screen key={entry.id} entry={entry} />
+      </AppFrame>
+      {/* It floats at the foot of the window (it comes late and must not push the page). */}
+      {updateNotice}
+    </>
   );
 }
 

@@ -3,12 +3,15 @@
 import { cleanup, configure, fireEvent, render, screen, waitFor } from '@testing-library/preact';
 import { afterEach, beforeAll, describe, expect, test } from 'vitest';
 import { App } from '../../src/app/app';
+import { toolScreens } from '../../src/app/screen-list';
 import { machines } from '../../src/state/machines';
 import { startSession } from '../../src/state/session';
 
 beforeAll(async () => {
   expect(globalThis.indexedDB).toBeUndefined();
   await startSession();
+  // The Machines screen loads after the first paint, with the field tools.
+  await toolScreens.load();
 });
 
 afterEach(cleanup);

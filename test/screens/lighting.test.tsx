@@ -45,11 +45,16 @@ describe('the lighting check screen', () => {
       'Hazard: a part can look still or backward',
     );
     expect(screen.getByTestId('lighting-summary').textContent).toBe(lightingSummary(expected));
-    // Said once, loudly, at the top: the answer box is the alert, naming the part.
+    // Said once, at the top, naming the part; read out as an alert (once typing pauses).
     const shout = screen.getByTestId('lighting-hazard');
-    expect(shout.getAttribute('role')).toBe('alert');
     expect(shout.textContent).toContain('Hazard');
     expect(shout.textContent).toContain('Fan');
+    const alert = screen.getByTestId('tool-status-urgent');
+    expect(alert.getAttribute('role')).toBe('alert');
+    expect(alert.textContent).toBe(
+      `Hazard: a part can look still or backward. ${lightingSummary(expected)}`,
+    );
+    expect(screen.getByTestId('tool-status').textContent).toBe('');
     const [row] = rows();
     expect(row.getAttribute('data-state')).toBe('hazard');
     expect(row.textContent).toContain('Turns backward (230 rpm)');
@@ -211,9 +216,12 @@ describe('the lighting check screen', () => {
     const panel = screen.getByRole('region', { name: 'Under this light' });
     expect([...panel.children].map((e) => e.tagName)).toEqual(['H2', 'DIV']);
     expect(panel.querySelector('[data-testid="lighting-hazard"]')).toBe(panel.children[1]);
-    const boxes = [...document.querySelectorAll('[role="alert"], aside')].filter((e) =>
-      /hazard|still turning/i.test(e.textContent ?? ''),
-    );
+    // Boxes on screen; the live regions that read the answer out are not shown.
+    const boxes = [
+      ...document.querySelectorAll('[data-testid="lighting-hazard"], [role="alert"], aside'),
+    ]
+      .filter((e) => !e.matches('[data-testid^="tool-status"]'))
+      .filter((e) => /hazard|still turning/i.test(e.textContent ?? ''));
     expect(boxes.map((e) => e.getAttribute('data-testid'))).toEqual([
       'lighting-hazard',
       'safety-notice',

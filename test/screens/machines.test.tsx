@@ -11,6 +11,7 @@ import {
 } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
 import { App } from '../../src/app/app';
+import { toolScreens } from '../../src/app/screen-list';
 import { currentScreen, openScreen } from '../../src/state/navigation';
 import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';
 import { exportAll, machines } from '../../src/state/machines';
@@ -20,6 +21,8 @@ import { openMachineId, startSession } from '../../src/state/session';
 
 beforeAll(async () => {
   await startSession();
+  // The Machines screen loads after the first paint, with the field tools.
+  await toolScreens.load();
 });
 
 beforeEach(() => {

@@ -33,6 +33,7 @@ import {
 } from '../../src/screens/whole-machine/band-lists';
 import { wholeMachineCsv } from '../../src/screens/whole-machine/csv';
 
+/** Each drawing of the rate map, first and after new data: how many parts it shows. */
 const charts: Array<{ parts: number }> = [];
 vi.mock('../../src/ui/rate-map/chart', () => ({
   createRateChart: (
@@ -41,7 +42,14 @@ vi.mock('../../src/ui/rate-map/chart', () => ({
     series: { apparentRpm: unknown[] },
   ) => {
     charts.push({ parts: series.apparentRpm.length });
-    return { update() {}, setRate() {}, resize() {}, destroy() {} };
+    return {
+      update(next: { apparentRpm: unknown[] }) {
+        charts.push({ parts: next.apparentRpm.length });
+      },
+      setRate() {},
+      resize() {},
+      destroy() {},
+    };
   },
 }));
 
@@ -273,7 +281,7 @@ describe('the whole machine', () => {
 
   test('removing the motor leaves the fan at the speed it had', () => {
     buildMotorBeltFan();
-    fireEvent.click(screen.getByRole('button', { name: 'Remove Motor' }));
+    fireEvent.click(screen.getByRole('button', { name: 'Remove this part: Motor' }));
     expect(setup.value.parts.map((p) => p.name)).toEqual(['Fan']);
     expect(setup.value.parts[0].drive).toBeUndefined();
     expect(setup.value.parts[0].speedRpm).toBeCloseTo(582, 9);

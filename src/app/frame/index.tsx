@@ -1,7 +1,7 @@
 import type { ComponentChildren } from 'preact';
 import { useEffect, useRef } from 'preact/hooks';
 import { openScreen } from '../../state/navigation';
-import { SCREENS } from '../screen-list';
+import { SCREENS, screenEntry } from '../screen-list';
 import style from './style.module.css';
 
 interface Props {
@@ -12,15 +12,24 @@ interface Props {
   children: ComponentChildren;
 }
 
-/** The page: our mark and name, the tab bar (one tab per entry of the list of screens), notices, and the open screen. */
+/**
+ * The page: our mark and name, the tab bar (one tab per entry of the list of screens), notices,
+ * and the open screen under its heading, the page's one h1 (read out, not shown: the marked tab
+ * names the screen on sight).
+ */
 export function AppFrame({ notices, current, children }: Props) {
   const screen = current;
+  const heading = screenEntry(screen).heading;
   const tabBar = useRef<HTMLElement>(null);
   // On a phone the tab row scrolls sideways: keep the open tab in view.
   useEffect(() => {
     const open = tabBar.current?.querySelector<HTMLElement>('[aria-current="page"]');
     open?.scrollIntoView?.({ block: 'nearest', inline: 'nearest' });
   }, [screen]);
+  // The window's title names the screen too (WCAG 2.4.2 Page Titled).
+  useEffect(() => {
+    document.title = `${heading} · Trueturn`;
+  }, [heading]);
   return (
     <div class={style.frame}>
       <header class={style.header}>
@@ -58,6 +67,11 @@ export function AppFrame({ notices, current, children }: Props) {
               class={style.tab}
               aria-current={t.id === screen ? 'page' : undefined}
               onClick={() => openScreen(t.id)}
+              // Chromium leaves a tab that peeks in at the edge where it is, under the fade:
+              // bring the whole tab into view when the keyboard reaches it.
+              onFocus={(e) =>
+                e.currentTarget.scrollIntoView?.({ block: 'nearest', inline: 'nearest' })
+              }
             >
               <svg class={style.icon} viewBox="0 0 24 24" aria-hidden="true">
                 <path d={t.icon} />
@@ -72,7 +86,10 @@ export function AppFrame({ notices, current, children }: Props) {
           {notices}
         </div>
       )}
-      <main class={style.main}>{children}</main>
+      <main class={style.main}>
+        <h1 class={style.heading}>{heading}</h1>
+        {children}
+      </main>
     </div>
   );
 }

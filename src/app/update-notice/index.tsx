@@ -1,3 +1,6 @@
+import type { ComponentChildren } from 'preact';
+import { useRef } from 'preact/hooks';
+import { useFloatInset } from './float-inset';
 import style from './style.module.css';
 
 interface Props {
@@ -13,7 +16,7 @@ interface Props {
 export function UpdateNotice({ updateReady, offlineReady, onUpdate, onDismiss }: Props) {
   if (!updateReady && !offlineReady) return null;
   return (
-    <div class={style.notice} role="status" data-testid="update-notice">
+    <FloatingNotice>
       {updateReady ? (
         <>
           <p class={style.text}>
@@ -40,6 +43,17 @@ export function UpdateNotice({ updateReady, offlineReady, onUpdate, onDismiss }:
           </div>
         </>
       )}
+    </FloatingNotice>
+  );
+}
+
+/** The notice's box, floating at the foot of the window with room kept for it. */
+function FloatingNotice({ children }: { children: ComponentChildren }) {
+  const box = useRef<HTMLDivElement>(null);
+  useFloatInset(box);
+  return (
+    <div class={style.notice} role="status" data-testid="update-notice" ref={box}>
+      {children}
     </div>
   );
 }

@@ -79,21 +79,25 @@ export function CameraScreen(_props: Props) {
     openCheckScreen();
   };
 
+  const headline = !plan
+    ? 'Nothing to show yet'
+    : reached.length > 0
+      ? `${reached.length} ${reached.length === 1 ? 'setting reaches' : 'settings reach'} the goal`
+      : 'No setting of this camera reaches the goal';
+  const bestWords =
+    plan && best
+      ? `Best: ${formatPrecise(best.frameRate)} fps at ${formatExposure(best.exposureS)}.`
+      : '';
   const summary = (
     <Panel title="Camera plan" id="camera-plan-answer">
       <div class={style.answer} data-found={reached.length > 0 ? 'yes' : 'no'}>
         <p class={style.headline} data-testid="plan-headline">
-          {!plan
-            ? 'Nothing to show yet'
-            : reached.length > 0
-              ? `${reached.length} ${reached.length === 1 ? 'setting reaches' : 'settings reach'} the goal`
-              : 'No setting of this camera reaches the goal'}
+          {headline}
         </p>
         <p>Goal: {GOAL_WORDS[plan?.goal ?? kind]}.</p>
         {plan && best && (
           <p data-testid="plan-best">
-            Best: {formatPrecise(best.frameRate)} fps at {formatExposure(best.exposureS)}.{' '}
-            {settingWords(best, plan)}
+            {bestWords} {settingWords(best, plan)}
           </p>
         )}
         {plan && reached.length === 0 && (
@@ -257,6 +261,7 @@ export function CameraScreen(_props: Props) {
     <ToolLayout
       testId="camera-screen"
       summary={summary}
+      announce={[`${headline}.`, bestWords].filter(Boolean).join(' ')}
       warnings={warnings}
       entries={entries}
       results={results}

@@ -1,4 +1,5 @@
 import type { ComponentChildren } from 'preact';
+import { useRef } from 'preact/hooks';
 import { check, checkProblem } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
 import { CameraReadout } from './camera-readout';
@@ -18,6 +19,7 @@ import { ReportBar } from '../../ui/report-bar';
 import { partLabel, activeIndex } from '../../state/model';
 import { flashUnit, setup } from '../../state/setup';
 import { checkCsv } from './csv';
+import { useStickyInset } from './sticky-inset';
 import style from './style.module.css';
 
 interface Props {
@@ -42,80 +44,110 @@ interface Props {
  * result worked out from it is marked not current (docs/physics.md §10).
  */
 export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap /> }: Props) {
-  const refusal = checkProblem.value;
-  const r = check.value;
-  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
-  const stale = problemsAmong(RESULT_FIELDS);
+  // The screen reads no signal itself: each part below reads what it shows, so a keystroke
+  // re-renders the parts whose inputs changed, not the whole screen.
+  const verdict = useRef<HTMLDivElement>(null);
+  useStickyInset(verdict);
   return (
     <div class={style.screen}>
-      <div class={style.verdict}>
+      <div class={style.verdict} ref={verdict}>
         <VerdictPanel />
       </div>
       <div class={style.warnings}>
-        {/* With the verdict withdrawn nothing says the view is true: keep the stillness caution. */}
-        <Cautions
-          show={{
-            safety: r.showSafety || withdrawn,
-            photosensitivity: r.showPhotosensitivity,
-          }}
-        />
-        {r.notes.length > 0 && (
-          <NotCurrent problems={stale} refusal={refusal}>
-            <ul class={style.notes} data-testid="check-notes">
-              {r.notes.map((n) => (
-                <li key={n}>{CHECK_NOTE_WORDS[n]}</li>
-              ))}
-            </ul>
-          </NotCurrent>
-        )}
+        <CheckWarnings />
       </div>
       <div class={style.entries}>
         <PartForm />
         <SamplerForm />
         {chart && (
           <div class={style.slot}>
-            <NotCurrent problems={stale} refusal={refusal}>
-              {chart}
-            </NotCurrent>
+            <ResultsGuard>{chart}</ResultsGuard>
           </div>
         )}
       </div>
       <div class={style.results}>
         {preview && (
           <div class={style.slot}>
-            <NotCurrent problems={stale} refusal={refusal}>
-              {preview}
-            </NotCurrent>
+            <ResultsGuard>{preview}</ResultsGuard>
           </div>
         )}
         <RateSuggestions />
-        <NotCurrent problems={stale} refusal={refusal}>
+        <ResultsGuard>
           <SafeBands />
           <CameraReadout />
           <LightingReadout />
-        </NotCurrent>
+        </ResultsGuard>
         <KeepShare />
       </div>
       <div class={style.report}>
-        <ReportBar
-          title="Check"
-          cautions={{
-            apparentStillness: r.showSafety || withdrawn,
-            flashRatesHz: r.showPhotosensitivity ? [r.rateHz] : [],
-          }}
-          csv={
-            withdrawn
-              ? undefined
-              : () =>
-                  checkCsv(
-                    r,
-                    partLabel(setup.value, activeIndex(setup.value)),
-                    r.samplerKind,
-                    flashUnit.value,
-                  )
-          }
-        />
+        <CheckReport />
       </div>
     </div>
+  );
+}
+
+/** The cautions and notes under the verdict. */
+function CheckWarnings() {
+  const refusal = checkProblem.value;
+  const r = check.value;
+  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
+  return (
+    <>
+      {/* With the verdict withdrawn nothing says the view is true: keep the stillness caution. */}
+      <Cautions
+        show={{
+          safety: r.showSafety || withdrawn,
+          photosensitivity: r.showPhotosensitivity,
+        }}
+      />
+      {r.notes.length > 0 && (
+        <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={refusal}>
+          <ul class={style.notes} data-testid="check-notes">
+            {r.notes.map((n) => (
+              <li key={n}>{CHECK_NOTE_WORDS[n]}</li>
+            ))}
+          </ul>
+        </NotCurrent>
+      )}
+    </>
+  );
+}
+
+/** Print and CSV of the check, with the cautions the verdict carries; no CSV while it is withdrawn. */
+function CheckReport() {
+  const refusal = checkProblem.value;
+  const r = check.value;
+  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
+  return (
+    <ReportBar
+      title="Check"
+      cautions={{
+        apparentStillness: r.showSafety || withdrawn,
+        flashRatesHz: r.showPhotosensitivity ? [r.rateHz] : [],
+      }}
+      csv={
+        withdrawn
+          ? undefined
+          : () =>
+              checkCsv(
+                r,
+                partLabel(setup.value, activeIndex(setup.value)),
+                r.samplerKind,
+                flashUnit.value,
+              )
+      }
+    />
+  );
+}
+
+/**
+ * Results worked out from the entries, marked not current while one is refused. Reads only the
+ * refusals: the results inside follow the check result themselves.
+ */
+function ResultsGuard({ children }: { children: ComponentChildren }) {
+  return (
+    <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={checkProblem.value}>
+      {children}
+    </NotCurrent>
   );
 }

@@ -58,15 +58,18 @@ export function LightingScreen(_props: Props) {
   const rows = result ? partRowsOf(result, s) : [];
   const hazards = result ? result.parts.filter((p) => p.hazard) : [];
 
-  // The hazard is said once, here at the top with the verdict; the stillness caution under it
-  // is the one wording every screen shares (src/core/plans/safetyCautions.ts).
+  // The hazard is said once, here at the top with the verdict (and read out as an alert once
+  // typing pauses); the stillness caution under it is the one wording every screen shares
+  // (src/core/plans/safetyCautions.ts).
+  const announce = result
+    ? `${LIGHTING_HEADLINES[result.verdict]}. ${lightingSummary(result)}`
+    : `Nothing to show yet: ${problem}`;
   const summary = (
     <Panel title="Under this light" id="lighting-verdict">
       {result ? (
         <div
           class={style.verdict}
           data-verdict={result.verdict}
-          role={hazards.length > 0 ? 'alert' : undefined}
           data-testid={hazards.length > 0 ? 'lighting-hazard' : undefined}
         >
           <p class={style.headline} data-testid="lighting-headline">
@@ -158,6 +161,8 @@ export function LightingScreen(_props: Props) {
     <ToolLayout
       testId="lighting-screen"
       summary={summary}
+      announce={announce}
+      urgent={hazards.length > 0}
       warnings={warnings}
       entries={entries}
       results={results}

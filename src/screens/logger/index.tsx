@@ -75,16 +75,19 @@ export function LoggerScreen(_props: Props) {
     : [];
   const failing = plan ? plan.components.filter((c) => !c.pass) : [];
 
+  const headline = !plan
+    ? `Nothing to show yet: ${problem}`
+    : plan.allPass
+      ? 'The record is clean'
+      : failing.length > 0
+        ? 'False tones will reach the record'
+        : 'Aliases can reach the record';
   const summary = (
     <Panel title="Data logger" id="logger-answer">
       {plan ? (
         <div class={style.answer} data-pass={plan.allPass ? 'yes' : 'no'}>
           <p class={style.headline} data-testid="logger-headline">
-            {plan.allPass
-              ? 'The record is clean'
-              : failing.length > 0
-                ? 'False tones will reach the record'
-                : 'Aliases can reach the record'}
+            {headline}
           </p>
           <p data-testid="logger-facts">
             Sampling at {formatPrecise(sampleHzOf(plan))} Hz records up to{' '}
@@ -289,6 +292,7 @@ export function LoggerScreen(_props: Props) {
     <ToolLayout
       testId="logger-screen"
       summary={summary}
+      announce={plan ? `${headline}.` : headline}
       warnings={warnings}
       entries={entries}
       results={results}

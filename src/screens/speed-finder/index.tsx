@@ -182,6 +182,7 @@ export function SpeedFinderScreen(_props: Props) {
     <ToolLayout
       testId="speed-finder-screen"
       summary={summary}
+      announce={step ? `${STAGE_TITLES[step.stage]}. ${stepInstruction(step)}` : (problem ?? '')}
       warnings={warnings}
       entries={entries}
       results={results}

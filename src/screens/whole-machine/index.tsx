@@ -1,4 +1,4 @@
-import { useState } from 'preact/hooks';
+import { useEffect, useRef, useState } from 'preact/hooks';
 import { apparentMotion, cautionFlags, type CautionContext } from '../../core';
 import { openCheckScreen } from '../../state/navigation';
 import { formatRate, formatRateSpan } from '../../words/rates';
@@ -56,6 +56,22 @@ export function WholeMachineScreen(_props: Props) {
   const [editProblem, setEditProblem] = useState<string | null>(null);
   const [addFrom, setAddFrom] = useState<number | null>(null);
   const [applied, setApplied] = useState<number | null>(null);
+  // A removed part takes its focused remove button with it, and focus would drop to the page
+  // body: it moves to the remove button of the part now in its place (or the one before), or
+  // to "Add part" when only one part is left (WCAG 2.4.3 Focus Order).
+  const cardList = useRef<HTMLOListElement>(null);
+  const addButton = useRef<HTMLButtonElement>(null);
+  const removedAt = useRef<number | null>(null);
+  useEffect(() => {
+    const at = removedAt.current;
+    if (at === null) return;
+    removedAt.current = null;
+    const removes = cardList.current?.querySelectorAll<HTMLButtonElement>(
+      'button[data-remove-part]',
+    );
+    const next = removes && removes.length > 0 ? removes[Math.min(at, removes.length - 1)] : null;
+    (next ?? addButton.current)?.focus();
+  });
   const rate = (hz: number) => formatRate(hz, kind, unit);
 
   // Tapping a rate sets it on the check screen, whose part then shows the chain's speed too.
@@ -122,7 +138,7 @@ export function WholeMachineScreen(_props: Props) {
 
   const entries = (
     <Panel title="Parts and drives" id="chain-parts">
-      <ol class={style.cards}>
+      <ol class={style.cards} ref={cardList}>
         {s.parts.map((_, i) => (
           <PartCard
             key={i}
@@ -130,6 +146,7 @@ export function WholeMachineScreen(_props: Props) {
             index={i}
             derived={parts[i]?.index === i ? parts[i] : undefined}
             onProblem={setEditProblem}
+            onRemoved={(at) => (removedAt.current = at)}
           />
         ))}
       </ol>
@@ -153,6 +170,7 @@ export function WholeMachineScreen(_props: Props) {
           <button
             type="button"
             class={style.primary}
+            ref={addButton}
             onClick={addPart}
             disabled={s.parts.length >= MAX_PARTS}
           >
@@ -243,6 +261,7 @@ export function WholeMachineScreen(_props: Props) {
     <ToolLayout
       testId="whole-machine-screen"
       summary={summary}
+      announce={`Speeds of the machine: ${parts.map((p) => `${p.name}, ${speedWords(p)}`).join('; ')}.`}
       warnings={warnings}
       entries={entries}
       results={results}

@@ -36,6 +36,8 @@ interface Props {
   derived?: DerivedPart;
   /** Reports an edit the saved list refuses (DataError), or clears the report. */
   onProblem: (message: string | null) => void;
+  /** Called once this part has been removed, so the screen can move the keyboard's focus. */
+  onRemoved: (index: number) => void;
 }
 
 /**
@@ -43,7 +45,7 @@ interface Props {
  * a wheel, or a drive from an earlier part) with the fields that go with it, and the speed band
  * that gives.
  */
-export function PartCard({ setup, index, derived, onProblem }: Props) {
+export function PartCard({ setup, index, derived, onProblem, onRemoved }: Props) {
   const part = setup.parts[index];
   const source = speedSourceOf(part);
   // Any refused entry on the page may feed this part's speed along the chain.
@@ -165,8 +167,12 @@ export function PartCard({ setup, index, derived, onProblem }: Props) {
         <button
           type="button"
           class={style.quietButton}
-          onClick={() => act((s) => withoutPart(s, index))}
-          aria-label={`Remove ${partLabel(setup, index)}`}
+          onClick={() => {
+            act((s) => withoutPart(s, index));
+            onRemoved(index);
+          }}
+          aria-label={`Remove this part: ${partLabel(setup, index)}`}
+          data-remove-part
         >
           Remove this part
         </button>

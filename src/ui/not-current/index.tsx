@@ -1,4 +1,5 @@
 import type { ComponentChildren } from 'preact';
+import { memoWith } from '../memo';
 import type { FieldProblem } from '../../state/fieldProblems';
 import style from './style.module.css';
 
@@ -50,7 +51,7 @@ interface Props {
  * act on a stale rate, no screen reader reads it as current) and marked "Not current" with the
  * fields to fix. The content stays in place, with its state, so it comes back as it was.
  */
-export function NotCurrent({ problems, refusal, children }: Props) {
+function NotCurrentView({ problems, refusal, children }: Props) {
   const stale = problems.length > 0 || refusal !== undefined;
   return (
     <div class={style.wrap} data-current={stale ? 'false' : 'true'}>
@@ -76,6 +77,26 @@ export function NotCurrent({ problems, refusal, children }: Props) {
   );
 }
 
+/** The same refused fields, field by field (a new list of the same refusals changes nothing). */
+function sameProblems(a: readonly FieldProblem[], b: readonly FieldProblem[]): boolean {
+  return (
+    a.length === b.length &&
+    a.every((p, i) => p.id === b[i].id && p.label === b[i].label && p.message === b[i].message)
+  );
+}
+
+/**
+ * Re-renders only when the refusals or the content change: a guard whose parent re-renders
+ * with the same content and the same refusals does nothing.
+ */
+export const NotCurrent = memoWith(
+  NotCurrentView,
+  (before, after) =>
+    before.children === after.children &&
+    before.refusal === after.refusal &&
+    sameProblems(before.problems, after.problems),
+);
+
 interface WithdrawnProps {
   problems: readonly FieldProblem[];
   refusal?: string;
@@ -83,6 +104,27 @@ interface WithdrawnProps {
   what: string;
   /** Test id of the headline (the place the answer's headline has when there is one). */
   testId?: string;
+}
+
+/** "No verdict until Speed is fixed", "No answer: these entries cannot be worked out". */
+function withdrawnHeadline(problems: readonly FieldProblem[], what: string): string {
+  return problems.length > 0
+    ? `No ${what} until ${fieldNames(problems)} ${problems.length === 1 ? 'is' : 'are'} fixed`
+    : `No ${what}: these entries cannot be worked out`;
+}
+
+/** What a withdrawn answer says, in one line to be read out: its headline, then each message. */
+export function withdrawnWords(
+  problems: readonly FieldProblem[],
+  refusal: string | undefined,
+  what: string,
+): string {
+  const lines = [
+    withdrawnHeadline(problems, what),
+    ...problems.map((p) => `${p.label}: ${p.message}`),
+    ...(refusal !== undefined ? [refusal] : []),
+  ];
+  return lines.map((line) => (/[.!?]$/.test(line) ? line : `${line}.`)).join(' ');
 }
 
 /**
@@ -93,9 +135,7 @@ export function Withdrawn({ problems, refusal, what, testId }: WithdrawnProps) {
   return (
     <div class={style.withdrawn} data-testid="withdrawn">
       <p class={style.headline} data-testid={testId}>
-        {problems.length > 0
-          ? `No ${what} until ${fieldNames(problems)} ${problems.length === 1 ? 'is' : 'are'} fixed`
-          : `No ${what}: these entries cannot be worked out`}
+        {withdrawnHeadline(problems, what)}
       </p>
       <ul class={style.messages}>
         {problems.map((p) => (

@@ -1,4 +1,4 @@
-import { useState } from 'preact/hooks';
+import { useEffect, useRef, useState } from 'preact/hooks';
 import { formatNumber } from '../../words/format';
 import { useFollowingText } from '../followingText';
 import { partLabel, activeIndex } from '../../state/model';
@@ -28,6 +28,15 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
   const active = activeIndex(s);
   const chosen = s.parts[active];
   const [problem, setProblem] = useState<string | null>(null);
+  const list = useRef<HTMLUListElement>(null);
+  // The remove button goes disabled (or its part away) under the keyboard's focus, which would
+  // drop to the page body: after a removal, focus moves to the part now chosen (WCAG 2.4.3).
+  const focusChosen = useRef(false);
+  useEffect(() => {
+    if (!focusChosen.current) return;
+    focusChosen.current = false;
+    list.current?.querySelector<HTMLButtonElement>('button[aria-pressed="true"]')?.focus();
+  });
   // Another part chosen, or its name changed elsewhere: the field follows, in the same render.
   const { text: name, edit } = useFollowingText(
     `${active} ${chosen.name}`,
@@ -52,7 +61,7 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
 
   return (
     <Panel title={title} id="parts-list" class={extra}>
-      <ul class={style.list} data-testid="parts-list">
+      <ul class={style.list} data-testid="parts-list" ref={list}>
         {s.parts.map((p, i) => (
           <li key={i}>
             <button
@@ -93,7 +102,12 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
         <button
           type="button"
           class={style.button}
-          onClick={() => act(() => removePart(active))}
+          onClick={() =>
+            act(() => {
+              removePart(active);
+              focusChosen.current = true;
+            })
+          }
           disabled={s.parts.length <= 1}
         >
           Remove the chosen part

@@ -45,9 +45,12 @@ export interface RateChartOptions {
 }
 
 export interface RateChart {
-  /** New data (parts, range or sampler changed); the cursor moves to `rateHz`. */
-  update(series: RateMapSeries, rateHz: number, speedLimitRpm: number): void;
-  /** Moves the current-rate cursor; redraws without rebuilding the lines. */
+  /**
+   * New data (parts, range or sampler changed); the cursor moves to `rateHz`. Drawn in the next
+   * animation frame, then `drawn` is called.
+   */
+  update(series: RateMapSeries, rateHz: number, speedLimitRpm: number, drawn?: () => void): void;
+  /** Moves the current-rate cursor; redraws in the next frame without rebuilding the lines. */
   setRate(rateHz: number): void;
   resize(width: number, height: number): void;
   destroy(): void;
@@ -179,22 +182,46 @@ export function createRateChart(
   over.addEventListener('pointerup', up);
   over.addEventListener('pointercancel', up);
 
+  // At most one drawing per animation frame, of the newest data and rate: new lines (setData)
+  // when the data changed since the last drawing, else only the overlay with the cursor.
+  let newData = false;
+  let frame = 0;
+  let onDrawn: Array<() => void> = [];
+  const draw = () => {
+    frame = 0;
+    if (newData) {
+      plot.scales.y.asinh = speedLinearWithinRpm(current.speedLimitRpm);
+      plot.setData(toChartColumns(current.series) as uPlot.AlignedData);
+    } else {
+      plot.redraw(false, false);
+    }
+    newData = false;
+    const waiting = onDrawn;
+    onDrawn = [];
+    for (const done of waiting) done();
+  };
+  const drawSoon = () => {
+    frame ||= requestAnimationFrame(draw);
+  };
+
   return {
-    update(next, nextRate, speedLimitRpm) {
+    update(next, nextRate, speedLimitRpm, drawn) {
       current = { series: next, rateHz: nextRate, speedLimitRpm };
-      plot.scales.y.asinh = speedLinearWithinRpm(speedLimitRpm);
-      plot.setData(toChartColumns(next) as uPlot.AlignedData);
+      newData = true;
+      if (drawn) onDrawn.push(drawn);
+      drawSoon();
     },
     setRate(nextRate) {
       if (nextRate === current.rateHz) return;
       current = { ...current, rateHz: nextRate };
-      plot.redraw(false, false);
+      drawSoon();
     },
     resize(width, height) {
       if (width > 0 && height > 0 && (width !== plot.width || height !== plot.height))
         plot.setSize({ width, height });
     },
     destroy() {
+      cancelAnimationFrame(frame);
       over.removeEventListener('pointerdown', down);
       over.removeEventListener('pointermove', move);
       over.removeEventListener('pointerup', up);

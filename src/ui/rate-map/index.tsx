@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
+import { useEffect, useRef, useState } from 'preact/hooks';
 import { InputError, rateMapSeries, type Part, type Range, type RateMapSeries } from '../../core';
 import type { SamplerKind } from '../../state/model';
 import { formatNumber } from '../../words/format';
@@ -68,22 +68,19 @@ export function RateMap(props: Props) {
 
   const sampler = samplerKind === 'camera' ? 'frames' : 'flash';
   const key = partsKey(parts);
-  const computed = useMemo((): { series: RateMapSeries; limit: number } | { error: string } => {
-    try {
-      return {
-        series: rateMapSeries([...parts], range, { points: MAP_POINTS, log, sampler }),
-        limit: speedAxisLimitRpm(parts),
-      };
-    } catch (error) {
-      return {
-        error:
-          error instanceof InputError
-            ? error.message
-            : 'The rate map cannot be drawn for these settings.',
-      };
-    }
-    // `key` stands for the parts' numbers: a new array with the same parts reuses the map.
-  }, [key, range.minHz, range.maxHz, log, sampler]);
+  // Everything the series is worked out from; `key` stands for the parts' numbers, so a new
+  // array with the same parts reuses the map.
+  const inputsKey = `${key}|${range.minHz}|${range.maxHz}|${log}|${sampler}`;
+  // Worked out at once for the first drawing; after that, out of the keystroke's way: once per
+  // animation frame at most, and only for the newest inputs (a newer key cancels the frame).
+  const [computed, setComputed] = useState(() => computeMap(parts, range, log, sampler, key));
+  useEffect(() => {
+    if (computed.inputsKey === inputsKey) return;
+    const frame = requestAnimationFrame(() =>
+      setComputed(computeMap(parts, range, log, sampler, key)),
+    );
+    return () => cancelAnimationFrame(frame);
+  }, [inputsKey]);
   const series = 'series' in computed ? computed.series : null;
 
   // uPlot, lazily, once.
@@ -112,8 +109,9 @@ export function RateMap(props: Props) {
         holder,
         {
           ...size,
-          log,
-          range,
+          // The axis and range the series was worked out for (it follows a frame later).
+          log: computed.log,
+          range: computed.range,
           speedLimitRpm: computed.limit,
           colours: readColours(root),
           rateTitle: `${samplerKind === 'camera' ? 'Frame rate' : samplerKind === 'strobe' ? 'Flash rate' : 'Flicker'}, ${unit}`,
@@ -131,7 +129,7 @@ export function RateMap(props: Props) {
     }
     setDrawFailed(false);
     chart.current = made;
-    markDrawn(holder, log, key);
+    markDrawn(holder, computed.log, computed.partsKey);
     const observer =
       typeof ResizeObserver === 'function'
         ? new ResizeObserver(() => made.resize(chartSize(holder).width, chartSize(holder).height))
@@ -144,12 +142,24 @@ export function RateMap(props: Props) {
       markDrawn(holder, null, null);
     };
     // Data and rate changes go through update() and setRate() below, without a rebuild.
-  }, [chartModule, log, samplerKind, flashUnit, hasSeries, range.minHz, range.maxHz, scheme]);
+  }, [
+    chartModule,
+    computed.log,
+    samplerKind,
+    flashUnit,
+    hasSeries,
+    computed.range.minHz,
+    computed.range.maxHz,
+    scheme,
+  ]);
 
   useEffect(() => {
-    if (series && 'limit' in computed && chart.current && holderRef.current) {
-      chart.current.update(series, latest.current.rateHz, computed.limit);
-      markDrawn(holderRef.current, log, key);
+    const holder = holderRef.current;
+    if (series && 'limit' in computed && chart.current && holder) {
+      // The markers say what is drawn: set once the chart has drawn this series.
+      chart.current.update(series, latest.current.rateHz, computed.limit, () =>
+        markDrawn(holder, computed.log, computed.partsKey),
+      );
     }
   }, [computed]);
 
@@ -230,16 +240,53 @@ export function RateMap(props: Props) {
           Looks still (a number: images standing still)
         </li>
       </ul>
-      {series && unresolvedShare(series.resolvedFromHz, range, log) > NOTE_SHARE && (
-        <p class={style.note}>
-          Below {formatRate(Math.max(...series.resolvedFromHz), samplerKind, flashUnit)} the
-          sawtooth has more teeth than the map has room for: speeds there show as scattered dots,
-          and lock markers are left out.
-        </p>
-      )}
+      {series &&
+        unresolvedShare(series.resolvedFromHz, computed.range, computed.log) > NOTE_SHARE && (
+          <p class={style.note}>
+            Below {formatRate(Math.max(...series.resolvedFromHz), samplerKind, flashUnit)} the
+            sawtooth has more teeth than the map has room for: speeds there show as scattered dots,
+            and lock markers are left out.
+          </p>
+        )}
       {caution && <p class={style.caution}>{caution}</p>}
     </div>
   );
+}
+
+type Computed = { inputsKey: string; log: boolean; partsKey: string; range: Range } & (
+  { series: RateMapSeries; limit: number } | { error: string }
+);
+
+/** The map's series and speed-axis limit for these inputs, or the reason it cannot be drawn. */
+function computeMap(
+  parts: Props['parts'],
+  range: Range,
+  log: boolean,
+  sampler: 'frames' | 'flash',
+  partsKey: string,
+): Computed {
+  const inputsKey = `${partsKey}|${range.minHz}|${range.maxHz}|${log}|${sampler}`;
+  try {
+    return {
+      inputsKey,
+      log,
+      partsKey,
+      range,
+      series: rateMapSeries([...parts], range, { points: MAP_POINTS, log, sampler }),
+      limit: speedAxisLimitRpm(parts),
+    };
+  } catch (error) {
+    return {
+      inputsKey,
+      log,
+      partsKey,
+      range,
+      error:
+        error instanceof InputError
+          ? error.message
+          : 'The rate map cannot be drawn for these settings.',
+    };
+  }
 }
 
 /**

@@ -1,11 +1,19 @@
 import type { ComponentChildren } from 'preact';
 import { problemsAmong } from '../../state/fieldProblems';
-import { NotCurrent, Withdrawn } from '../not-current';
+import { NotCurrent, Withdrawn, withdrawnWords } from '../not-current';
+import { SettledStatus } from '../settled-status';
 import style from './style.module.css';
 
 interface Props {
   /** The tool's answer in a few words, first on a phone. */
   summary: ComponentChildren;
+  /**
+   * The answer's headline in a sentence or two, read out once typing pauses (a withdrawn
+   * answer says what to fix instead).
+   */
+  announce: string;
+  /** Given where the answer can be a hazard: true says it as an alert (SettledStatus). */
+  urgent?: boolean;
   /** Cautions and refusals, under the answer. */
   warnings?: ComponentChildren;
   /** What the user enters. */
@@ -31,10 +39,13 @@ interface Props {
 
 /**
  * The page of a field tool: on a phone one column (answer, warnings, entries, results); on a
- * desktop entries on the left and everything the tool found on the right.
+ * desktop entries on the left and everything the tool found on the right. The answer's headline
+ * is read out once typing pauses.
  */
 export function ToolLayout({
   summary,
+  announce,
+  urgent,
   warnings,
   entries,
   results,
@@ -47,16 +58,18 @@ export function ToolLayout({
     : [];
   const refusal = withdraw?.refusal;
   const withdrawn = problems.length > 0 || refusal !== undefined;
+  const shownRefusal = problems.length > 0 ? undefined : refusal;
   return (
     <div class={style.screen} data-testid={testId}>
       <div class={style.summary}>
+        <SettledStatus
+          text={withdrawn ? withdrawnWords(problems, shownRefusal, 'answer') : announce}
+          urgent={urgent === undefined ? undefined : urgent && !withdrawn}
+          testId="tool-status"
+        />
         {withdrawn && (
-          <section class={style.withdrawn} aria-label="Answer withdrawn" role="status">
-            <Withdrawn
-              problems={problems}
-              refusal={problems.length > 0 ? undefined : refusal}
-              what="answer"
-            />
+          <section class={style.withdrawn} aria-label="Answer withdrawn">
+            <Withdrawn problems={problems} refusal={shownRefusal} what="answer" />
           </section>
         )}
         {/* Kept, hidden, so it comes back as it was once the entries are good again. */}

@@ -1,6 +1,6 @@
 // The build `bench:ui --profile` records: the app as it ships but not minified (function and
 // component names kept), with source maps, and with render-counter.ts bundled in front of
-// src/main.tsx (the app's source is not changed).
+// src/app/main.tsx (the app's source is not changed).
 import { resolve } from 'node:path';
 import { build, type Plugin } from 'vite';
 
@@ -11,7 +11,7 @@ function countRenders(): Plugin {
   return {
     name: 'trueturn-bench-count-renders',
     transform(code, id) {
-      if (!id.endsWith('/src/main.tsx')) return null;
+      if (!id.endsWith('/src/app/main.tsx')) return null;
       return { code: `import ${JSON.stringify(counter)};\n${code}`, map: null };
     },
   };

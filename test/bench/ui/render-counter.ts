@@ -1,5 +1,5 @@
 // Bundled into the app by `bench:ui --profile` only (profile-build.ts puts it first in
-// src/main.tsx's build; the app's source is not changed): counts each component's renders
+// src/app/main.tsx's build; the app's source is not changed): counts each component's renders
 // through Preact's render hook, so the profile can say what re-renders per keystroke.
 // Preact names that hook "__r" in its published build (the same name @preact/signals uses).
 import { Fragment, options, type VNode } from 'preact';

@@ -66,11 +66,14 @@ describe('the check screen', () => {
     expect(screen.getByTestId('true-speed').textContent).toBe('3,600 rpm');
   });
 
-  test('the verdict sits in a polite live region', () => {
-    const region = screen.getByTestId('verdict').parentElement!;
-    expect(region.getAttribute('role')).toBe('status');
+  test('the verdict panel holds a polite live region that says the verdict and its speeds', () => {
+    const panel = screen.getByRole('region', { name: 'What you will see' });
+    const region = within(panel).getByRole('status');
     expect(region.getAttribute('aria-live')).toBe('polite');
-    expect(region.textContent).toContain('Looks still');
+    expect(region.getAttribute('aria-atomic')).toBe('true');
+    expect(region.textContent).toBe('Looks still. Seen at 0 rpm; true speed 1,770 rpm.');
+    // The headline on screen is no live region of its own: it would speak every keystroke.
+    expect(screen.getByTestId('verdict').closest('[aria-live]')).toBeNull();
   });
 
   test('bad text gets a message beside its field, keeps the set-up, and withdraws the verdict', () => {

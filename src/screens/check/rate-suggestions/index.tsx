@@ -1,6 +1,8 @@
 import { formatNumber, numberForField } from '../../../words/format';
 import { readCreepRpm } from '../../../ui/fields';
-import { formatRate, formatRateSpan } from '../../../words/rates';
+import { formatRate, formatRateSpan, type FlashUnit } from '../../../words/rates';
+import type { SamplerKind } from '../../../state/model';
+import { memoWith } from '../../../ui/memo';
 import { check, checkProblem, type SuggestedRate } from '../../../state/check';
 import { problemsAmong } from '../../../state/fieldProblems';
 import { CREEP_FIELDS, RESULT_FIELDS } from '../field-ids';
@@ -22,7 +24,6 @@ export function RateSuggestions({ class: extra }: Props) {
   const unit = flashUnit.value;
   const kind = r.samplerKind;
   const rate = (hz: number) => formatRate(hz, kind, unit);
-  const span = (fromHz: number, toHz: number) => formatRateSpan(fromHz, toHz, kind, unit);
   const tolerance = r.part.tolerance > 0;
   // Rates worked out from a refused entry are marked not current, out of reach (docs/physics.md §10).
   const refusal = checkProblem.value;
@@ -45,7 +46,7 @@ export function RateSuggestions({ class: extra }: Props) {
             <ul class={style.list} data-testid="lock-list">
               {r.locks.map((l) => (
                 <li key={`${l.rateHz}-${l.images}`}>
-                  <LockButton lock={l} rate={rate} span={span} tolerance={tolerance} />
+                  <LockButton lock={l} kind={kind} unit={unit} tolerance={tolerance} />
                 </li>
               ))}
             </ul>
@@ -108,13 +109,14 @@ export function RateSuggestions({ class: extra }: Props) {
 
 interface LockProps {
   lock: SuggestedRate;
-  rate: (hz: number) => string;
-  span: (fromHz: number, toHz: number) => string;
+  kind: SamplerKind;
+  unit: FlashUnit;
   tolerance: boolean;
 }
 
-function LockButton({ lock, rate, span, tolerance }: LockProps) {
+function LockButtonView({ lock, kind, unit, tolerance }: LockProps) {
   const here = lock.side === 'here';
+  const rate = (hz: number) => formatRate(hz, kind, unit);
   return (
     <button
       type="button"
@@ -128,7 +130,25 @@ function LockButton({ lock, rate, span, tolerance }: LockProps) {
         {imagesWords(lock.images)}
         {here ? ' · this rate' : ''}
       </span>
-      {tolerance && <span class={style.span}>± tolerance: {span(lock.lowHz, lock.highHz)}</span>}
+      {tolerance && (
+        <span class={style.span}>
+          ± tolerance: {formatRateSpan(lock.lowHz, lock.highHz, kind, unit)}
+        </span>
+      )}
     </button>
   );
 }
+
+/** A suggested rate's button, drawn again only when what it shows changes (a list of up to ten). */
+const LockButton = memoWith(
+  LockButtonView,
+  (a, b) =>
+    a.kind === b.kind &&
+    a.unit === b.unit &&
+    a.tolerance === b.tolerance &&
+    a.lock.rateHz === b.lock.rateHz &&
+    a.lock.images === b.lock.images &&
+    a.lock.side === b.lock.side &&
+    a.lock.lowHz === b.lock.lowHz &&
+    a.lock.highHz === b.lock.highHz,
+);

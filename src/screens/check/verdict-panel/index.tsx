@@ -4,7 +4,8 @@ import { check, checkProblem } from '../../../state/check';
 import { problemsAmong } from '../../../state/fieldProblems';
 import { activePart, flashUnit } from '../../../state/setup';
 import { VERDICT_FIELDS } from '../field-ids';
-import { Withdrawn } from '../../../ui/not-current';
+import { Withdrawn, withdrawnWords } from '../../../ui/not-current';
+import { SettledStatus } from '../../../ui/settled-status';
 import { TrustMark } from '../../../ui/trust-mark';
 import { verdictHeadline } from '../../../words/check';
 import { KIND_WORDS, featureWords } from '../../../words/partKinds';
@@ -25,12 +26,14 @@ const SAMPLER_WORDS = {
  * What the viewer will see, in big words: the verdict, the apparent speed and the true speed.
  * While a field the verdict reads is refused, or the core refuses the set-up, the verdict is
  * withdrawn in its place and says what to fix (docs/physics.md §10): never the last good answer for
- * a value no longer on screen.
+ * a value no longer on screen. The screen shows each keystroke's verdict at once; a screen reader
+ * hears it once typing pauses (SettledStatus, first in the panel in both states so it stays put).
  */
 export function VerdictPanel({ class: extra }: Props) {
   const problems = problemsAmong(VERDICT_FIELDS);
   const refusal = checkProblem.value;
   if (problems.length > 0 || refusal !== undefined) {
+    const shownRefusal = problems.length > 0 ? undefined : refusal;
     return (
       <section
         class={`${style.verdict} ${extra ?? ''}`}
@@ -40,14 +43,11 @@ export function VerdictPanel({ class: extra }: Props) {
         <h2 id="verdict-title" class={style.title}>
           What you will see
         </h2>
-        <div role="status" aria-live="polite" aria-atomic="true">
-          <Withdrawn
-            problems={problems}
-            refusal={problems.length > 0 ? undefined : refusal}
-            what="verdict"
-            testId="verdict"
-          />
-        </div>
+        <SettledStatus
+          text={withdrawnWords(problems, shownRefusal, 'verdict')}
+          testId="verdict-status"
+        />
+        <Withdrawn problems={problems} refusal={shownRefusal} what="verdict" testId="verdict" />
       </section>
     );
   }
@@ -64,6 +64,7 @@ export function VerdictPanel({ class: extra }: Props) {
   const kind = activePart.value.kind;
   const features = featureWords({ kind, features: r.part.symmetry });
   const partName = activePart.value.name.trim();
+  const speeds = `Seen at ${seen}; true speed ${trueSpeed}.`;
   return (
     <section
       class={`${style.verdict} ${extra ?? ''}`}
@@ -73,13 +74,12 @@ export function VerdictPanel({ class: extra }: Props) {
       <h2 id="verdict-title" class={style.title}>
         What you will see
       </h2>
-      <div class={style.head} role="status" aria-live="polite" aria-atomic="true">
+      <SettledStatus text={`${verdictHeadline(v)}. ${speeds}`} testId="verdict-status" />
+      <div class={style.head}>
         <TrustMark trust={v.trust} />
         <p class={style.headline} data-testid="verdict">
           {verdictHeadline(v)}
-          <span class={style.quiet}>
-            . Seen at {seen}; true speed {trueSpeed}.
-          </span>
+          <span class={style.quiet}>. {speeds}</span>
         </p>
       </div>
       <dl class={style.speeds}>
