@@ -17,7 +17,7 @@ import {
   withSpeedSource,
 } from './driveChain';
 import { saveMachine, updateMachine } from './machines';
-import { partLabel, type Machine, type Setup, activeIndex } from './model';
+import { partLabel, type Machine, type Setup, activeIndex, activePartOf } from './model';
 import { keepLastGood } from './outcome';
 import { activePart, setSamplerKind, setStrobeRateFpm, setup } from './setup';
 import { openMachineId } from './session';
@@ -33,9 +33,15 @@ export interface RecordedReading {
 /** Most images a technician is asked to count: beyond about eight nobody counts them reliably (a judgement). */
 export const MAX_IMAGES_SEEN = 8;
 
-/** What the technician expects of the speed: nothing, a range in rpm, or a motor's nameplate. */
+/**
+ * What the technician expects of the speed: nothing, a speed ± percent (a nameplate's), a range
+ * in rpm, or a motor's poles and mains. Both methods (strobe and sound) read it.
+ */
 export interface Expectation {
-  mode: 'none' | 'rpm' | 'motor';
+  mode: 'none' | 'nameplate' | 'rpm' | 'motor';
+  nameplateRpm: number;
+  /** How far the speed may lie from nameplateRpm, ± percent. */
+  plusMinusPercent: number;
   fromRpm: number;
   toRpm: number;
   mainsHz: 50 | 60;
@@ -46,11 +52,14 @@ export interface Expectation {
 }
 
 /**
- * Until the technician types one: a motor slips between 0 % (unloaded) and 5 % (full load),
+ * Until the technician types one: a nameplate speed ± 5 % (nameplates are commonly 2–4 % off
+ * the running speed: belts slip, drives vary; a judgement). A motor slips between 0 % (unloaded) and 5 % (full load),
  * motorExpectedRange's default (common practice; Engineering ToolBox's typical speeds are 1.7–4 %).
  */
 export const defaultExpectation: Expectation = {
   mode: 'none',
+  nameplateRpm: 1500,
+  plusMinusPercent: 5,
   fromRpm: 1000,
   toRpm: 2000,
   mainsHz: 50,
@@ -59,9 +68,13 @@ export const defaultExpectation: Expectation = {
   maxSlipPercent: 5,
 };
 
+/** What kind of part it is: its features are blades, teeth or marks (the words, and the tone's name, follow it). */
+export type FinderPartKind = 'fan' | 'gear' | 'other';
+
 export const readings = signal<RecordedReading[]>([]);
 /** Features counted on the part; null follows the chosen part of the set-up. */
 export const finderFeatures = signal<number | null>(null);
+export const finderPartKind = signal<FinderPartKind>('fan');
 export const expectation = signal<Expectation>({ ...defaultExpectation });
 
 let nextId = 1;
@@ -98,6 +111,19 @@ export const strobeRangeHz = computed<Range>(() => {
  */
 export function expectedRange(e: Expectation): Range | undefined {
   if (e.mode === 'none') return undefined;
+  if (e.mode === 'nameplate') {
+    if (!(e.nameplateRpm > 0) || !(e.plusMinusPercent > 0 && e.plusMinusPercent <= 50)) {
+      throw new InputError(
+        'expected speed',
+        'Give the expected speed above 0 rpm and how far off it may be, more than 0 and at most 50 %.',
+      );
+    }
+    const share = e.plusMinusPercent / 100;
+    return {
+      minHz: (e.nameplateRpm * (1 - share)) / 60,
+      maxHz: (e.nameplateRpm * (1 + share)) / 60,
+    };
+  }
   if (e.mode === 'motor') {
     return motorExpectedRange(e.mainsHz, e.poles, {
       min: e.minSlipPercent / 100,
@@ -136,18 +162,46 @@ export type SpeedChange =
   | { kind: 'leaves-motor' | 'leaves-wheel'; part: string }
   | { kind: 'leaves-drive'; part: string; driver: string }
   | { kind: 'features'; part: string; from: number; to: number }
+  | { kind: 'tolerance'; part: string; fromPercent: number; toPercent: number }
   | { kind: 'driven-speed'; part: string; fromRpm: number; toRpm: number };
+
+/**
+ * Where a speed found came from, when it carries its own precision: heard (by sound), or heard
+ * and confirmed by a strobe reading. The precision becomes the part's tolerance.
+ */
+export interface SpeedOrigin {
+  method: 'sound' | 'sound-and-strobe';
+  /** ± rev/s. */
+  precisionHz: number;
+  /** When the sound was heard (ms since 1970), for the note "by sound, 12 Dec, ±0.1 %". */
+  heardAtMs: number;
+}
+
+/**
+ * A precision as a tolerance, ± percent of the speed, rounded up to two significant figures (a
+ * tolerance is never tighter than the measurement), within what a part's tolerance accepts.
+ * @example toleranceFromPrecision(29.1667, 0.01) // 0.035
+ */
+export function toleranceFromPrecision(speedHz: number, precisionHz: number): number {
+  const percent = (100 * Math.abs(precisionHz)) / Math.abs(speedHz);
+  if (!(percent > 0) || !Number.isFinite(percent)) return 0;
+  const step = 10 ** (Math.floor(Math.log10(percent)) - 1);
+  const rounded = Number((Math.ceil(percent / step - 1e-9) * step).toPrecision(2));
+  return Math.min(50, rounded);
+}
 
 /**
  * The set-up with the chosen part turning at the speed found, and what changed. A strobe
  * cannot tell direction, so the part keeps its own; the speed is now a measured (typed) one,
- * no longer taken from a motor, a drive or a wheel; parts it drives follow it.
+ * no longer taken from a motor, a drive or a wheel; parts it drives follow it. A speed with an
+ * origin (heard by sound) brings its precision as the part's tolerance.
  * @example withMeasuredSpeed(defaultSetup, 29.5, 6).changes // [{ kind: 'speed', part: 'Fan', fromRpm: 1770, toRpm: 1770 }]
  */
 export function withMeasuredSpeed(
   s: Setup,
   speedHz: number,
   features: number,
+  origin?: SpeedOrigin,
 ): { setup: Setup; changes: SpeedChange[] } {
   const index = activeIndex(s);
   const before = s.parts[index];
@@ -163,7 +217,22 @@ export function withMeasuredSpeed(
   }
   if (features !== before.features)
     changes.push({ kind: 'features', part, from: before.features, to: features });
-  let next = withPartFields(withSpeedSource(s, index, 'typed'), index, { speedRpm: rpm, features });
+  const tolerancePercent = origin
+    ? toleranceFromPrecision(speedHz, origin.precisionHz)
+    : before.tolerancePercent;
+  if (tolerancePercent !== before.tolerancePercent) {
+    changes.push({
+      kind: 'tolerance',
+      part,
+      fromPercent: before.tolerancePercent,
+      toPercent: tolerancePercent,
+    });
+  }
+  let next = withPartFields(withSpeedSource(s, index, 'typed'), index, {
+    speedRpm: rpm,
+    features,
+    tolerancePercent,
+  });
   try {
     next = withChainSpeeds(next);
     const beforeParts = deriveParts(s);
@@ -192,19 +261,24 @@ export type SaveTarget = { kind: 'open' } | { kind: 'new'; name: string } | { ki
 export interface SavedSpeed {
   changes: SpeedChange[];
   machineName: string | null;
+  /** Where the speed came from, when it was given, and the tolerance it gave the part, ± percent. */
+  origin?: SpeedOrigin & { tolerancePercent: number };
 }
 
 /**
- * Puts the speed found into the set-up on screen and keeps it as asked. Throws DataError,
- * changing nothing, for a machine name or set-up the saved list refuses, or an open machine
- * that was deleted meanwhile.
+ * Puts the speed found into the set-up on screen and keeps it as asked: the one way a speed
+ * found, by strobe or by sound, reaches the part. `origin` (a speed heard by sound) sets the
+ * part's tolerance from its precision and is handed back for the note that says where the
+ * speed came from. Throws DataError, changing nothing, for a machine name or set-up the saved
+ * list refuses, or an open machine that was deleted meanwhile.
  */
 export async function saveFoundSpeed(
   speedHz: number,
   features: number,
   target: SaveTarget,
+  origin?: SpeedOrigin,
 ): Promise<SavedSpeed> {
-  const { setup: next, changes } = withMeasuredSpeed(setup.peek(), speedHz, features);
+  const { setup: next, changes } = withMeasuredSpeed(setup.peek(), speedHz, features, origin);
   let machine: Machine | null = null;
   if (target.kind === 'open') {
     const id = openMachineId.peek();
@@ -216,5 +290,10 @@ export async function saveFoundSpeed(
     openMachineId.value = machine.id;
   }
   setup.value = next;
-  return { changes, machineName: machine ? machine.name : null };
+  const tolerancePercent = activePartOf(next).tolerancePercent;
+  return {
+    changes,
+    machineName: machine ? machine.name : null,
+    ...(origin ? { origin: { ...origin, tolerancePercent } } : {}),
+  };
 }

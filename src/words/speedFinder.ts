@@ -12,6 +12,7 @@ import {
 import type { SavedSpeed, SpeedChange } from '../state/speedFinder';
 import { formatNumber } from './format';
 import { viewWords } from './look';
+import { originWords } from './sound';
 
 /** The heading over the instruction, per stage of the procedure. */
 export const STAGE_TITLES: Record<SpeedFinderStage, string> = {
@@ -182,16 +183,21 @@ export function speedChangeWords(c: SpeedChange): string {
       return `${c.part} is no longer worked out from the drive from ${c.driver}.`;
     case 'features':
       return `${c.part}: features ${c.from} → ${c.to}.`;
+    case 'tolerance':
+      return `${c.part}: tolerance ±${formatNumber(c.fromPercent)} % → ±${formatNumber(c.toPercent)} %.`;
     case 'driven-speed':
       return `${c.part}, driven from it: speed ${rpmText(c.fromRpm)} → ${rpmText(c.toRpm)}.`;
   }
 }
 
-/** What saving the speed did, a sentence a line: each change, then where it went. */
+/** What saving the speed did, a sentence a line: each change, where the speed came from, then where it went. */
 export function savedSpeedLines(saved: SavedSpeed): string[] {
   const where =
     saved.machineName !== null
       ? `Saved to "${saved.machineName}".`
       : 'Changed in the set-up on the Check screen only (no machine saved).';
-  return [...saved.changes.map(speedChangeWords), where];
+  const origin = saved.origin
+    ? [`Speed found ${originWords(saved.origin, saved.origin.tolerancePercent)}.`]
+    : [];
+  return [...saved.changes.map(speedChangeWords), ...origin, where];
 }

@@ -41,7 +41,10 @@ vi.mock('../../src/ui/rate-map/chart', () => ({
     series: { apparentRpm: unknown[] },
   ) => {
     charts.push({ parts: series.apparentRpm.length });
-    return { update() {}, setRate() {}, resize() {}, destroy() {} };
+    // A chart drawn before the parts changed takes the new ones through update().
+    const update = (next: { apparentRpm: unknown[] }) =>
+      charts.push({ parts: next.apparentRpm.length });
+    return { update, setRate() {}, resize() {}, destroy() {} };
   },
 }));
 
