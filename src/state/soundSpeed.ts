@@ -5,10 +5,17 @@
 // spectrum is kept, in memory only, so that a change of the part or the expected speed reads
 // it again without another recording.
 import { computed, signal } from '@preact/signals';
+import type {
+  ListenOptions,
+  ListeningSession,
+  SoundCaptureProblem,
+  SoundRecording,
+} from '../audio';
 import {
   apparentMotion,
   type joinSoundWithStrobe,
   type Look,
+  type soundSpectrum,
   type SoundSpectrum,
   type SoundSpeeds,
   type SoundStrobeJoin,
@@ -23,11 +30,16 @@ import {
   featuresInUse,
   finderStep,
   readings,
+  saveFoundSpeed,
   strobeRangeHz,
+  type SavedSpeed,
+  type SaveTarget,
+  type SpeedOrigin,
 } from './speedFinder';
 
 /** The core's sound functions the state needs, once their code has loaded. */
 export interface SoundCore {
+  soundSpectrum: typeof soundSpectrum;
   speedsFromSound: typeof speedsFromSound;
   joinSoundWithStrobe: typeof joinSoundWithStrobe;
 }
@@ -55,6 +67,202 @@ export function forgetSound(): void {
   heardSound.value = null;
 }
 
+/** The limits a picked file is held to, for the sentences that name them. */
+export interface FileLimits {
+  maxFileBytes: number;
+  maxRecordingS: number;
+}
+
+/**
+ * Where sound comes from: the phone's microphone and picked files (screens/speed-finder/sound/
+ * capture.ts), or a fake in the tests. Its failures are SoundCaptureErrors (src/audio); only
+ * their shape is read here, so the capture code stays in the sound method's own chunk.
+ */
+export interface SoundCapture {
+  /** Starts listening (from a user's action): a session that ends with a recording or a SoundCaptureError. */
+  listen(opts: ListenOptions): ListeningSession;
+  /** Decodes a picked file; rejects with a SoundCaptureError. */
+  decodeFile(file: Blob): Promise<SoundRecording>;
+  /** The limits a picked file is held to, for the sentences that name them. */
+  limits: FileLimits;
+}
+
+/**
+ * Where sound comes from: the phone's own microphone and files, set when the sound method's
+ * code loads (load.ts), unless something was set before (the behaviour tests set a fake).
+ */
+export const soundCapture = signal<SoundCapture | null>(null);
+
+/** Seconds recorded when nobody stops early: enough for a spectrum to 0.05 % (docs/physics.md §11). */
+export const LISTEN_S = 4;
+
+/** Where a recording came from. */
+export interface SoundSource {
+  source: 'microphone' | 'file';
+  fileName?: string;
+}
+
+/**
+ * Where getting the sound stands: idle (with or without a result in heardSound), listening,
+ * analysing (a file being decoded, or any recording being read), or a problem. A problem
+ * never clears what was heard before; a clipped recording is kept to analyse anyway.
+ */
+export type ListenStatus =
+  | { kind: 'idle' }
+  | { kind: 'listening'; recordedS: number; totalS: number }
+  | { kind: 'analysing'; from: SoundSource }
+  | {
+      kind: 'problem';
+      /** What went wrong: a capture problem, or 'unreadable' with the core's or the browser's words. */
+      code: SoundCaptureProblem | 'unreadable';
+      /** For 'unreadable' only: what the core or the browser said (capture problems are worded on screen). */
+      message?: string;
+      /** A clipped recording, kept to analyse anyway. */
+      kept?: { recording: SoundRecording; from: SoundSource };
+    };
+
+export const listenStatus = signal<ListenStatus>({ kind: 'idle' });
+
+let session: ListeningSession | null = null;
+/** Counts the starts, so that an abandoned attempt's late answer is dropped. */
+let attemptNo = 0;
+
+/** A SoundCaptureError, told by its shape (the class lives in the lazy chunk). */
+function captureCode(error: unknown): SoundCaptureProblem | undefined {
+  return error instanceof Error && error.name === 'SoundCaptureError'
+    ? (error as Error & { code: SoundCaptureProblem }).code
+    : undefined;
+}
+
+/** Reads a recording into a spectrum (the samples are dropped here) and makes it what was heard. */
+export function analyseRecording(recording: SoundRecording, from: SoundSource): void {
+  const core = soundCore.peek();
+  if (!core) {
+    listenStatus.value = {
+      kind: 'problem',
+      code: 'unreadable',
+      message: 'The sound method is not loaded yet: open it again in a moment.',
+    };
+    return;
+  }
+  listenStatus.value = { kind: 'analysing', from };
+  const spectrum = attempt(() => core.soundSpectrum(recording.samples, recording.sampleRateHz));
+  if (!spectrum.ok) {
+    listenStatus.value = { kind: 'problem', code: 'unreadable', message: spectrum.message };
+    return;
+  }
+  heardSound.value = {
+    spectrum: spectrum.result,
+    ...from,
+    heardAtMs: Date.now(),
+  };
+  listenStatus.value = { kind: 'idle' };
+}
+
+function failed(error: unknown, from: SoundSource): void {
+  const code = captureCode(error);
+  if (code === undefined) {
+    listenStatus.value = {
+      kind: 'problem',
+      code: 'unreadable',
+      message: 'The sound could not be read in this browser.',
+    };
+    return;
+  }
+  if (code === 'cancelled') {
+    listenStatus.value = { kind: 'idle' };
+    return;
+  }
+  const recording = (error as { recording?: SoundRecording }).recording;
+  listenStatus.value = {
+    kind: 'problem',
+    code,
+    ...(recording ? { kept: { recording, from } } : {}),
+  };
+}
+
+/** Listens for LISTEN_S seconds (call from the Listen button: browsers start audio only on a user's action). */
+export function listen(capture: SoundCapture): void {
+  session?.cancel();
+  const mine = ++attemptNo;
+  const from: SoundSource = { source: 'microphone' };
+  const current = (): boolean => mine === attemptNo;
+  listenStatus.value = { kind: 'listening', recordedS: 0, totalS: LISTEN_S };
+  let started: ListeningSession;
+  try {
+    started = capture.listen({
+      seconds: LISTEN_S,
+      onProgress: (recordedS, totalS) => {
+        if (current() && listenStatus.peek().kind === 'listening')
+          listenStatus.value = { kind: 'listening', recordedS, totalS };
+      },
+    });
+  } catch (error) {
+    failed(error, from);
+    return;
+  }
+  session = started;
+  started.recording
+    .then(
+      (recording) => current() && analyseRecording(recording, from),
+      (error: unknown) => current() && failed(error, from),
+    )
+    .finally(() => {
+      if (session === started) session = null;
+    });
+}
+
+/** Ends listening now and reads what was recorded so far. */
+export function stopListening(): void {
+  session?.stop();
+}
+
+/** Ends listening and drops the recording (leaving the screen): what was heard before stays. */
+export function cancelListening(): void {
+  attemptNo++;
+  session?.cancel();
+  session = null;
+  if (listenStatus.peek().kind !== 'problem') listenStatus.value = { kind: 'idle' };
+}
+
+/** Decodes and reads a picked recording. */
+export function analyseFile(capture: SoundCapture, file: File): Promise<void> {
+  session?.cancel();
+  const mine = ++attemptNo;
+  const from: SoundSource = { source: 'file', fileName: file.name };
+  listenStatus.value = { kind: 'analysing', from };
+  return capture.decodeFile(file).then(
+    (recording) => {
+      if (mine === attemptNo) analyseRecording(recording, from);
+    },
+    (error: unknown) => {
+      if (mine === attemptNo) failed(error, from);
+    },
+  );
+}
+
+/** Reads the clipped recording a problem kept, as the user asked. */
+export function analyseKept(): void {
+  const status = listenStatus.peek();
+  if (status.kind === 'problem' && status.kept)
+    analyseRecording(status.kept.recording, status.kept.from);
+}
+
+/**
+ * The one way a speed heard reaches the part: the speed, with its precision (origin.precisionHz)
+ * as the part's tolerance, and its origin (how, when, how precise) handed back for the note
+ * "by sound, 12 Dec, ±0.035 %" (words/sound.ts originWords). Kept in one place so that it can
+ * follow the set-up's own way of taking a derived speed. Throws DataError, changing nothing,
+ * as saveFoundSpeed does.
+ */
+export async function applyHeardSpeed(
+  speedHz: number,
+  origin: SpeedOrigin,
+  target: SaveTarget = { kind: 'setup' },
+): Promise<SavedSpeed> {
+  return saveFoundSpeed(speedHz, featuresInUse.peek(), target, origin);
+}
+
 /**
  * The speeds the sound holds for the part as set now (its features, the expected speed, the
  * mains of a motor nameplate); the last good ones while the core refuses the entries.
@@ -71,12 +279,6 @@ export const soundSpeeds = keepLastGood<SoundSpeeds | undefined>(() => {
   });
 });
 
-/**
- * The sound joined with the strobe readings (joinSoundWithStrobe): the speeds both allow and
- * the rate that confirms the one they agree on. Undefined while nothing was heard or the sound
- * gave no speed. Every speed that fits the readings takes part, those the strobe procedure
- * rules out too: that ruling assumes a sweep from the top, and a sound-guided reading is not one.
- */
 export const soundJoin = keepLastGood<SoundStrobeJoin | undefined>(() => {
   const speeds = soundSpeeds.result.value;
   const core = soundCore.value;
@@ -101,10 +303,6 @@ export interface HeardCandidate extends StepCandidate {
   atSoundRate?: { images: number; look: Look };
 }
 
-/**
- * The strobe's candidates as the join sees them: the ones the sound agrees with first (in the
- * join's order), then the rest. Undefined until there are readings and a sound to join them with.
- */
 export const heardCandidates = computed<HeardCandidate[] | undefined>(() => {
   const join = soundJoin.result.value;
   const step = finderStep.result.value;

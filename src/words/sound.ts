@@ -4,7 +4,7 @@
 import type { HumLine, SoundConfidence, SoundSpeedCandidate, SoundSpeeds } from '../core';
 import type { SoundCaptureProblem } from '../audio';
 import type { FinderPartKind, SpeedOrigin } from '../state/speedFinder';
-import type { HeardSound } from '../state/soundSpeed';
+import type { FileLimits, HeardSound } from '../state/soundSpeed';
 import { formatNumber } from './format';
 
 /** How sure a speed is, as a short label and a sentence that says what it means. */
@@ -70,12 +70,6 @@ export const PRIVACY_WORDS =
 /** The way round a microphone that cannot be used. */
 const FILE_ROUTE =
   'You can record with the phone’s own voice recorder instead and open the file with “Analyse a recording”.';
-
-/** The limits a picked file is held to, for the sentences that name them. */
-export interface FileLimits {
-  maxFileBytes: number;
-  maxRecordingS: number;
-}
 
 /**
  * What went wrong while getting the sound, in a sentence with what to do next. Microphone

@@ -3,6 +3,7 @@ import { formatNumber } from '../../words/format';
 import { openMachineName } from '../../state/session';
 import { partLabel, activeIndex } from '../../state/model';
 import { setup } from '../../state/setup';
+import { applyHeardSpeed } from '../../state/soundSpeed';
 import {
   featuresInUse,
   saveFoundSpeed,
@@ -42,7 +43,11 @@ export function SavePanel({ speedHz, origin }: Props) {
     try {
       setOutcome({
         kind: 'done',
-        lines: savedSpeedLines(await saveFoundSpeed(speedHz, featuresInUse.peek(), target, origin)),
+        lines: savedSpeedLines(
+          origin
+            ? await applyHeardSpeed(speedHz, origin, target)
+            : await saveFoundSpeed(speedHz, featuresInUse.peek(), target),
+        ),
       });
       if (target.kind === 'new') setName('');
     } catch (error) {

@@ -2,28 +2,22 @@ import { soundPanelOpen } from '../../../state/soundSpeed';
 import { featuresInUse, finderPartKind } from '../../../state/speedFinder';
 import { Panel } from '../../../ui/panel';
 import { FEATURE_WORDS, TONE_NAMES } from '../../../words/sound';
-import type { SoundCapture } from './capture';
 import { soundKit } from './load';
 import style from './style.module.css';
-
-interface Props {
-  /** Where sound comes from; the phone's microphone and picked files when left out (tests pass a fake). */
-  capture?: SoundCapture;
-}
 
 /**
  * The speed finder's second method, by sound (docs/physics.md §11): closed, a line and a
  * button; opened, its code loads (kept out of the first paint), and the user listens or picks
  * a recording, then sees the spectrum and every speed that explains it.
  */
-export function SoundPanel({ capture }: Props) {
+export function SoundPanel() {
   const n = featuresInUse.value;
   const kind = finderPartKind.value;
   const count = `${n} ${n === 1 ? FEATURE_WORDS[kind].one : FEATURE_WORDS[kind].many}`;
   return (
     <Panel title="By sound" id="finder-sound">
       {soundPanelOpen.value ? (
-        <OpenPanel capture={capture} count={count} />
+        <OpenPanel count={count} />
       ) : (
         <>
           <p class={style.quiet}>
@@ -39,9 +33,9 @@ export function SoundPanel({ capture }: Props) {
   );
 }
 
-function OpenPanel({ capture, count }: { capture?: SoundCapture; count: string }) {
+function OpenPanel({ count }: { count: string }) {
   const { module: kit, failed } = soundKit.use();
-  if (kit) return <kit.OpenSound capture={capture} count={count} />;
+  if (kit) return <kit.OpenSound count={count} />;
   return (
     <p class={style.quiet} role="status">
       {failed

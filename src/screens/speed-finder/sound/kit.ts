@@ -4,4 +4,5 @@
 // the first paint or in the tool screens' chunk. Nothing outside this chunk may import the
 // modules it gathers (open-sound, listen-controls, sound-result, capture) except for their types.
 export { OpenSound } from './open-sound';
-export { joinSoundWithStrobe, speedsFromSound } from '../../../core';
+export { phoneCapture } from './capture';
+export { joinSoundWithStrobe, soundSpectrum, speedsFromSound } from '../../../core';

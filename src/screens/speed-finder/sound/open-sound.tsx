@@ -1,19 +1,16 @@
 import { SOUND_CAUTION } from '../../../words/cautions';
 import { PRIVACY_WORDS } from '../../../words/sound';
-import { phoneCapture, type SoundCapture } from './capture';
 import { ListenControls } from './listen-controls';
 import { SoundResult } from './sound-result';
 import style from './style.module.css';
 
 interface Props {
-  /** Where sound comes from (default the phone's microphone and picked files). */
-  capture?: SoundCapture;
   /** The part's features in words: "6 blades". */
   count: string;
 }
 
 /** The open by-sound panel: the cautions, where the sound goes, Listen or a file, and what was heard. */
-export function OpenSound({ capture, count }: Props) {
+export function OpenSound({ count }: Props) {
   return (
     <>
       <aside class={style.caution} aria-label="Before you listen" data-testid="sound-caution">
@@ -22,7 +19,7 @@ export function OpenSound({ capture, count }: Props) {
       <p class={style.quiet}>
         For a part with {count} (set under “The part” above). {PRIVACY_WORDS}
       </p>
-      <ListenControls capture={capture ?? phoneCapture} />
+      <ListenControls />
       <SoundResult />
     </>
   );

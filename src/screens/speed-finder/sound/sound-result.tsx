@@ -1,11 +1,10 @@
 import { useState } from 'preact/hooks';
 import type { SoundSpeedCandidate } from '../../../core';
 import { openMachineName } from '../../../state/session';
-import { forgetSound, heardSound, soundSpeeds } from '../../../state/soundSpeed';
+import { applyHeardSpeed, forgetSound, heardSound, soundSpeeds } from '../../../state/soundSpeed';
 import {
   featuresInUse,
   finderPartKind,
-  saveFoundSpeed,
   type SaveTarget,
   type SpeedOrigin,
 } from '../../../state/speedFinder';
@@ -29,7 +28,7 @@ type Outcome = { kind: 'done' | 'problem'; lines: string[]; speedHz: number } | 
 /**
  * What was heard: where from, the spectrum with the tone, its comb and the hum marked, and every
  * speed that explains it, each with its precision, how sure it is, and one tap to apply it to
- * the part (through saveFoundSpeed, the speed finder's one way to the part).
+ * the part (through applyHeardSpeed, the one way a speed heard reaches the part).
  */
 export function SoundResult() {
   const heard = heardSound.value;
@@ -50,7 +49,7 @@ export function SoundResult() {
     };
     setBusy(true);
     try {
-      const saved = await saveFoundSpeed(c.speedHz, featuresInUse.peek(), target, origin);
+      const saved = await applyHeardSpeed(c.speedHz, origin, target);
       setOutcome({ kind: 'done', lines: savedSpeedLines(saved), speedHz: c.speedHz });
     } catch (error) {
       const message = error instanceof Error ? error.message : String(error);
