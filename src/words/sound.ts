@@ -3,7 +3,11 @@
 // where an applied speed came from. Built from the core's and the capture's codes and numbers.
 import type { HumLine, SoundConfidence, SoundSpeedCandidate, SoundSpeeds } from '../core';
 import type { SoundCaptureProblem } from '../audio';
-import type { FinderPartKind, SpeedOrigin } from '../state/speedFinder';
+import {
+  toleranceFromPrecision,
+  type FinderPartKind,
+  type SpeedOrigin,
+} from '../state/speedFinder';
 import type { FileLimits, HeardSound } from '../state/soundSpeed';
 import { formatNumber } from './format';
 
@@ -143,18 +147,21 @@ export function heardAsWords(c: SoundSpeedCandidate, kind: FinderPartKind): stri
 }
 
 /**
- * A speed heard and its precision in rpm, as figures: the precision rounded up to two
+ * A speed heard and its precision, as figures: the precision in rpm rounded up to two
  * significant figures (never claiming more than was measured), the speed to the same decimals
- * (at most two).
- * @example speedFigures({ speedHz: 29.1572, precisionHz: 0.00132 }) // { rpm: '1,749.43', plusMinus: '0.08' }
+ * (at most two), and the precision as ± percent of the speed, as it becomes the part's
+ * tolerance (toleranceFromPrecision).
+ * @example speedFigures({ speedHz: 29.1572, precisionHz: 0.00132 }) // { rpm: '1,749.43', plusMinus: '0.08', percent: '0.0046' }
  */
 export function speedFigures(c: { speedHz: number; precisionHz: number }): {
   rpm: string;
   plusMinus: string;
+  percent: string;
 } {
   const p = Math.abs(c.precisionHz * 60);
+  const percent = formatNumber(toleranceFromPrecision(c.speedHz, c.precisionHz));
   if (!(p > 0) || !Number.isFinite(p)) {
-    return { rpm: formatNumber(c.speedHz * 60), plusMinus: formatNumber(p) };
+    return { rpm: formatNumber(c.speedHz * 60), plusMinus: formatNumber(p), percent };
   }
   const lead = Math.floor(Math.log10(p));
   const decimals = Math.max(0, Math.min(2, 1 - lead));
@@ -163,16 +170,17 @@ export function speedFigures(c: { speedHz: number; precisionHz: number }): {
   return {
     rpm: formatNumber(c.speedHz * 60, decimals),
     plusMinus: formatNumber(rounded, Math.max(decimals, 1 - lead)),
+    percent,
   };
 }
 
 /**
- * A speed heard, with its precision.
- * @example soundSpeedWords({ speedHz: 29.1572, precisionHz: 0.00132 }) // "1,749.43 rpm ± 0.08 rpm"
+ * A speed heard, with its precision in rpm and in percent.
+ * @example soundSpeedWords({ speedHz: 29.1572, precisionHz: 0.00132 }) // "1,749.43 rpm ± 0.08 rpm (±0.0046 %)"
  */
 export function soundSpeedWords(c: { speedHz: number; precisionHz: number }): string {
-  const { rpm, plusMinus } = speedFigures(c);
-  return `${rpm} rpm ± ${plusMinus} rpm`;
+  const { rpm, plusMinus, percent } = speedFigures(c);
+  return `${rpm} rpm ± ${plusMinus} rpm (±${percent} %)`;
 }
 
 /**

@@ -68,7 +68,11 @@ export function SoundResult() {
       numeric: true,
       cell: (c) => <strong>{speedFigures(c).rpm} rpm</strong>,
     },
-    { label: 'Precision', numeric: true, cell: (c) => `± ${speedFigures(c).plusMinus} rpm` },
+    {
+      label: 'Precision',
+      numeric: true,
+      cell: (c) => `± ${speedFigures(c).plusMinus} rpm (±${speedFigures(c).percent} %)`,
+    },
     {
       label: 'How sure',
       cell: (c) => (
@@ -122,7 +126,9 @@ export function SoundResult() {
         >
           <p class={style.big}>
             {speedFigures(leader).rpm} rpm{' '}
-            <span class={style.plusMinus}>± {speedFigures(leader).plusMinus} rpm</span>
+            <span class={style.plusMinus}>
+              ± {speedFigures(leader).plusMinus} rpm (±{speedFigures(leader).percent} %)
+            </span>
           </p>
           <p>
             <strong>{CONFIDENCE_WORDS[leader.confidence].label}:</strong>{' '}
