@@ -21,26 +21,40 @@ export interface CombMark {
   label: string;
 }
 
+/** A mains hum line, and the part's comb line it hides when they fall together. */
+export type HumMark = Pick<HumLine, 'hz' | 'harmonic' | 'mainsHz'> & {
+  /** The label of the comb line within a hum line's masked lobe ("2×"): it could be either. */
+  onComb?: string;
+};
+
 export interface SpectrumMarks {
   /** The tone the speed was read from (the leading speed's strongest line), Hz. */
   toneHz?: number;
   comb: CombMark[];
-  hum: Array<Pick<HumLine, 'hz' | 'harmonic' | 'mainsHz'>>;
+  hum: HumMark[];
 }
+
+/**
+ * Bins either side of a hum line that the tone finder leaves out (the Hann window's main lobe,
+ * ±2 bins; core/sound/hum.ts): a comb line there can be neither confirmed nor ruled out.
+ */
+const HUM_LOBE_BINS = 2;
 
 /** Pattern harmonics marked: those the tone finder sums (docs/physics.md §11.6). */
 const COMB_HARMONICS = 8;
 
 /**
  * The marks for the leading speed: its pattern comb k·n·f (k = 1…8) inside the band, each
- * marked found when the speed explains a line there, its shaft lines found, and the hum.
- * @example spectrumMarks(undefined, 6, [], { minHz: 20, maxHz: 12000 }) // { comb: [], hum: [] }
+ * marked found when the speed explains a line there, its shaft lines found, and the hum, each
+ * hum line naming the comb line it falls on (within HUM_LOBE_BINS of binHz), if any.
+ * @example spectrumMarks(undefined, 6, [], { minHz: 20, maxHz: 12000 }, 0.5) // { comb: [], hum: [] }
  */
 export function spectrumMarks(
   leader: SoundSpeedCandidate | undefined,
   symmetry: number,
   hum: ReadonlyArray<Pick<HumLine, 'hz' | 'harmonic' | 'mainsHz'>>,
   band: Band,
+  binHz: number,
 ): SpectrumMarks {
   const inBand = (hz: number) => hz >= band.minHz && hz <= band.maxHz;
   const humMarks = hum
@@ -62,7 +76,12 @@ export function spectrumMarks(
     }
   }
   comb.sort((a, b) => a.hz - b.hz);
-  return { toneHz: leader.toneHz, comb, hum: humMarks };
+  const near = HUM_LOBE_BINS * Math.max(0, binHz);
+  const humOnComb = humMarks.map((h): HumMark => {
+    const under = comb.find((c) => c.kind === 'pattern' && Math.abs(c.hz - h.hz) <= near);
+    return under ? { ...h, onComb: under.label } : h;
+  });
+  return { toneHz: leader.toneHz, comb, hum: humOnComb };
 }
 
 /** Lowest level drawn, dB: a bin of no power is shown here rather than as −∞. */

@@ -36,6 +36,8 @@ const TICK_FONT = '13px system-ui, sans-serif';
 const LABEL_FONT = '600 14px system-ui, sans-serif';
 /** Labels over the marks closer than this (CSS pixels) are left out, not overlapped. */
 const LABEL_GAP_PX = 30;
+/** Least room between the centres of two frequency labels, px (three or four characters of 12 px text). */
+const MIN_TICK_GAP_PX = 32;
 
 /** Builds the chart inside `holder`. Throws where the browser has no 2D canvas. */
 export function createSpectrumChart(
@@ -70,7 +72,20 @@ export function createSpectrumChart(
           font: TICK_FONT,
           splits: () => frequencyTicksHz(band),
           filter: (_u, splits) => splits,
-          values: (_u, splits) => splits.map((v) => (v == null ? '' : frequencyTickText(v))),
+          values: (u, splits) => {
+            // On a narrow chart the 1-2-5 ticks crowd: the decades (100, 1k, 10k) are labelled
+            // first, then the others where they leave room; the rest stay blank.
+            const at = splits.map((v) => (v == null ? NaN : u.valToPos(v, 'x')));
+            const kept: number[] = [];
+            const room = (i: number) =>
+              kept.every((k) => Math.abs(at[k] - at[i]) >= MIN_TICK_GAP_PX);
+            const decade = (v: number) => Math.abs(Math.log10(v) % 1) < 1e-9;
+            splits.forEach((v, i) => v != null && decade(v) && room(i) && kept.push(i));
+            splits.forEach((v, i) => v != null && !decade(v) && room(i) && kept.push(i));
+            return splits.map((v, i) =>
+              v != null && kept.includes(i) ? frequencyTickText(v) : '',
+            );
+          },
         },
         {
           stroke: colours.inkSoft,
@@ -115,13 +130,15 @@ function drawMarks(u: uPlot, marks: SpectrumMarks, colours: SpectrumColours): vo
   ctx.font = `600 ${Math.round(12 * dpr)}px system-ui, sans-serif`;
   ctx.textAlign = 'center';
   ctx.textBaseline = 'top';
-  const labelled: number[] = [];
+  // Labels in two rows (the part's, then hum's); one that would overlap another in its row is left out.
+  const labelled: Array<{ at: number; half: number; row: number }> = [];
   const label = (x: number, text: string, colour: string, row: number) => {
-    if (labelled.some((l) => Math.abs(l - x) < LABEL_GAP_PX * dpr)) return;
-    labelled.push(x);
     // Kept inside the plot: a line near an edge has its label moved in, not cut.
     const half = ctx.measureText(text).width / 2 + 2 * dpr;
     const at = Math.min(bbox.left + bbox.width - half, Math.max(bbox.left + half, x));
+    const gap = (LABEL_GAP_PX * dpr) / 4;
+    if (labelled.some((l) => l.row === row && Math.abs(l.at - at) < l.half + half + gap)) return;
+    labelled.push({ at, half, row });
     ctx.fillStyle = colour;
     ctx.fillText(text, at, bbox.top + (2 + row * 15) * dpr);
   };
@@ -150,6 +167,7 @@ function drawMarks(u: uPlot, marks: SpectrumMarks, colours: SpectrumColours): vo
     (a, b) => Number(b.hz === marks.toneHz) - Number(a.hz === marks.toneHz),
   );
   for (const c of ranked) if (c.found) label(x(c.hz), c.label, colours.tone, 0);
-  for (const h of marks.hum) label(x(h.hz), 'hum', colours.hum, 1);
+  for (const h of marks.hum)
+    label(x(h.hz), h.onComb ? `hum or ${h.onComb}` : 'hum', colours.hum, 1);
   ctx.restore();
 }

@@ -115,14 +115,16 @@ export function SpectrumChart({ spectrum, marks, toneName }: Props) {
           {marks.toneHz !== undefined && (
             <li>
               <span class={`${style.swatch} ${style.tone}`} aria-hidden="true" />
-              The {toneName} (1×) and its harmonics: solid where a line was heard, dashed where one
-              is only expected
+              The {toneName} (1×), its harmonics (2×, 3×…) and shaft lines (“shaft”): solid where a
+              line was heard, dotted where one is only expected
             </li>
           )}
           {marks.hum.map((h) => (
             <li key={h.hz}>
               <span class={`${style.swatch} ${style.hum}`} aria-hidden="true" />
-              {humWords(h)}: not the part
+              {h.onComb
+                ? `${humWords(h)}: also where the ${toneName}'s ${h.onComb} line falls, so it may be either; left out of the count`
+                : `${humWords(h)}: not the part`}
             </li>
           ))}
         </ul>

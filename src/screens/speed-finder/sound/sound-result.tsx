@@ -66,12 +66,16 @@ export function SoundResult() {
     {
       label: 'Speed',
       numeric: true,
-      cell: (c) => <strong>{speedFigures(c).rpm} rpm</strong>,
-    },
-    {
-      label: 'Precision',
-      numeric: true,
-      cell: (c) => `± ${speedFigures(c).plusMinus} rpm (±${speedFigures(c).percent} %)`,
+      cell: (c) => {
+        const f = speedFigures(c);
+        return (
+          <span class={style.speedCell}>
+            <strong>{f.rpm} rpm</strong>
+            <span>± {f.plusMinus} rpm</span>
+            <span>(±{f.percent} %)</span>
+          </span>
+        );
+      },
     },
     {
       label: 'How sure',
@@ -139,19 +143,21 @@ export function SoundResult() {
       {speeds && (
         <SpectrumChart
           spectrum={heard.spectrum}
-          marks={spectrumMarks(leader, n, speeds.hum, band)}
+          marks={spectrumMarks(leader, n, speeds.hum, band, heard.spectrum.binHz)}
           toneName={TONE_NAMES[kind]}
         />
       )}
       {candidates.length > 0 && (
-        <ResultTable
-          caption={`${candidates.length === 1 ? 'The speed' : `${candidates.length} speeds`} that explain the sound, best first`}
-          columns={columns}
-          rows={candidates}
-          rowKey={(c) => String(c.speedHz)}
-          rowState={(c) => (c === leader && c.confidence === 'clear' ? 'pass' : undefined)}
-          testId="sound-candidates"
-        />
+        <div class={style.tableBox}>
+          <ResultTable
+            caption={`${candidates.length === 1 ? 'The speed' : `${candidates.length} speeds`} that explain the sound, best first`}
+            columns={columns}
+            rows={candidates}
+            rowKey={(c) => String(c.speedHz)}
+            rowState={(c) => (c === leader && c.confidence === 'clear' ? 'pass' : undefined)}
+            testId="sound-candidates"
+          />
+        </div>
       )}
       {outcome && (
         <div class={style.outcome} data-kind={outcome.kind} data-testid="sound-applied">
