@@ -72,6 +72,14 @@ async function openWithFanAsMicrophone(baseUrl: string): Promise<Session> {
     ],
   });
   await context.grantPermissions(['microphone'], { origin: new URL(baseUrl).origin });
+  // The built page's Content-Security-Policy must let the sound method's chunk and worklet run.
+  await context.addInitScript(() => {
+    const seen: string[] = [];
+    (window as unknown as { violations: string[] }).violations = seen;
+    document.addEventListener('securitypolicyviolation', (e) =>
+      seen.push(`${e.effectiveDirective} ${e.blockedURI}`),
+    );
+  });
   const page = context.pages()[0] ?? (await context.newPage());
   return {
     context,
@@ -94,7 +102,7 @@ interface HeardRow {
 async function heardRows(page: Page): Promise<HeardRow[]> {
   const texts = await page.getByTestId('sound-candidates').locator('tbody tr').allInnerTexts();
   return texts.map((text) => {
-    const m = /([\d,.]+) rpm\s+± ([\d.]+) rpm \(±([\d.]+) %\)/.exec(text);
+    const m = /([\d,.]+) rpm\s+± ([\d.]+) rpm\s+\(±([\d.]+) %\)/.exec(text);
     expect(m, text).not.toBeNull();
     return {
       rpm: Number(m![1].replace(/,/g, '')),
@@ -152,6 +160,40 @@ async function applyTrueSpeed(page: Page, rows: HeardRow[]): Promise<void> {
   );
 }
 
+const shots = resolve(import.meta.dirname, '../../test-output/screenshots');
+
+/**
+ * At a phone's width and at the desktop's narrower column, the spectrum, the headline and the
+ * speeds heard stay inside the by-sound panel (they once spilled over the next column).
+ */
+async function staysInsideItsPanel(page: Page): Promise<void> {
+  mkdirSync(shots, { recursive: true });
+  for (const size of [
+    { width: 390, height: 844 },
+    { width: 1280, height: 800 },
+  ]) {
+    await page.setViewportSize(size);
+    const panel = page.locator('section[aria-labelledby="finder-sound-title"]');
+    await expect
+      .poll(async () => {
+        const outer = (await panel.boundingBox())!;
+        const parts = ['sound-leader', 'spectrum-chart', 'sound-candidates'];
+        const boxes = await Promise.all(parts.map((id) => page.getByTestId(id).boundingBox()));
+        return boxes.every((b) => b !== null && b.x + b.width <= outer.x + outer.width + 0.5);
+      })
+      .toBe(true);
+    expect(
+      await page.evaluate(
+        () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
+      ),
+    ).toBeLessThanOrEqual(0);
+    if (size.width > 390) {
+      await panel.screenshot({ path: `${shots}/speed-finder-sound-desktop.png` });
+    }
+  }
+  await page.setViewportSize({ width: 390, height: 844 });
+}
+
 describe('the speed finder by sound in Chromium', () => {
   test('listens through the fake microphone, offers 1750 rpm within its precision, and applies it', async () => {
     session = await openWithFanAsMicrophone(inject('baseUrl'));
@@ -168,6 +210,11 @@ describe('the speed finder by sound in Chromium', () => {
     expect(await page.getByText(/from the microphone/).count()).toBe(1);
     // The hum is marked as such, not taken for the part.
     expect(await shownText(page)).toMatch(/Mains hum at 100 Hz/);
+    await page.screenshot({ path: `${shots}/speed-finder-sound-phone.png`, fullPage: true });
+    await staysInsideItsPanel(page);
+    expect(
+      await page.evaluate(() => (window as unknown as { violations: string[] }).violations),
+    ).toEqual([]);
     await applyTrueSpeed(page, await heardRows(page));
   });
 
