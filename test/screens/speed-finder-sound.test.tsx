@@ -41,6 +41,7 @@ import {
   finderFeatures,
   toleranceFromPrecision,
 } from '../../src/state/speedFinder';
+import { finderCsv } from '../../src/screens/speed-finder/csv';
 import { tableRows, type } from '../helpers/screen-queries';
 import { fanAt1750Rpm } from '../helpers/sound/machineSound';
 
@@ -187,6 +188,24 @@ describe('the speed finder by sound', () => {
       expect(r.textContent).toMatch(/\((possible|faint)\)\.$/);
     }
     expect(screen.getByTestId('found-speed').textContent).toMatch(/^1,75\d.* rpm ± /);
+  });
+
+  test('writes the speeds heard into the CSV, their precision never tighter than measured', () => {
+    const heard = speedsFromSound(soundSpectrum(fanAt1750Rpm(RATE_HZ, 4), RATE_HZ), {
+      symmetry: 6,
+    }).candidates;
+    const lines = finderCsv([], [], undefined, { candidates: heard, kind: 'fan' }).split('\r\n');
+    const header = lines.indexOf(
+      'heard speed (rpm),precision (± rpm),precision (± %),how sure,heard as',
+    );
+    expect(header).toBeGreaterThan(0);
+    heard.forEach((c, i) => {
+      const [rpm, plusMinusRpm, plusMinusPercent, sure] = lines[header + 1 + i]!.split(',');
+      expect(Number(rpm)).toBeCloseTo(c.speedHz * 60, 2);
+      expect(Number(plusMinusRpm)).toBeGreaterThanOrEqual(c.precisionHz * 60);
+      expect(Number(plusMinusPercent)).toBeGreaterThanOrEqual((100 * c.precisionHz) / c.speedHz);
+      expect(sure).toMatch(/^(Clear|Likely|Tied|Possible|Faint)$/);
+    });
   });
 
   test('says what to do when the microphone is refused, and keeps the file route open', async () => {

@@ -1,8 +1,12 @@
 // The speed finder's table as CSV (RFC 4180 via the core): the candidates, then the readings.
 import { csvTable, type SoundSpeedCandidate, type StepCandidate } from '../../core';
-import type { FinderPartKind, RecordedReading } from '../../state/speedFinder';
+import {
+  toleranceFromPrecision,
+  type FinderPartKind,
+  type RecordedReading,
+} from '../../state/speedFinder';
 import { viewWords } from '../../words/look';
-import { CONFIDENCE_WORDS, heardAsWords } from '../../words/sound';
+import { CONFIDENCE_WORDS, heardAsWords, speedFigures } from '../../words/sound';
 import { candidateNote, candidateStatus } from '../../words/speedFinder';
 
 /**
@@ -52,7 +56,15 @@ function soundCsv(candidates: readonly SoundSpeedCandidate[], kind: FinderPartKi
   return csvTable(
     [
       { label: 'heard speed (rpm)', value: (c: SoundSpeedCandidate) => round2(c.speedHz * 60) },
-      { label: 'precision (± rpm)', value: (c: SoundSpeedCandidate) => round2(c.precisionHz * 60) },
+      // As on screen: rounded up to two significant figures, never tighter than measured.
+      {
+        label: 'precision (± rpm)',
+        value: (c: SoundSpeedCandidate) => Number(speedFigures(c).plusMinus.replace(/,/g, '')),
+      },
+      {
+        label: 'precision (± %)',
+        value: (c: SoundSpeedCandidate) => toleranceFromPrecision(c.speedHz, c.precisionHz),
+      },
       {
         label: 'how sure',
         value: (c: SoundSpeedCandidate) => CONFIDENCE_WORDS[c.confidence].label,
