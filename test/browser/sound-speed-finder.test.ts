@@ -57,8 +57,8 @@ afterEach(async () => {
   session = undefined;
 });
 
-/** A fresh Chromium whose microphone plays the generated fan, allowed for the app. */
-async function openWithFanAsMicrophone(baseUrl: string): Promise<Session> {
+/** A fresh Chromium whose microphone plays the generated fan, allowed for the app (or refused). */
+async function openWithFanAsMicrophone(baseUrl: string, refuse = false): Promise<Session> {
   const profile = mkdtempSync(join(tmpdir(), 'trueturn-sound-finder-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM,
@@ -66,12 +66,14 @@ async function openWithFanAsMicrophone(baseUrl: string): Promise<Session> {
     viewport: { width: 390, height: 844 },
     args: [
       ...CHROMIUM_ARGS,
-      '--use-fake-ui-for-media-stream',
+      ...(refuse ? ['--deny-permission-prompts'] : ['--use-fake-ui-for-media-stream']),
       '--use-fake-device-for-media-stream',
       `--use-file-for-fake-audio-capture=${wavPath}`,
     ],
   });
-  await context.grantPermissions(['microphone'], { origin: new URL(baseUrl).origin });
+  if (!refuse) {
+    await context.grantPermissions(['microphone'], { origin: new URL(baseUrl).origin });
+  }
   // The built page's Content-Security-Policy must let the sound method's chunk and worklet run.
   await context.addInitScript(() => {
     const seen: string[] = [];
@@ -231,5 +233,26 @@ describe('the speed finder by sound in Chromium', () => {
     await page.getByTestId('sound-candidates').waitFor();
     expect(await page.getByText(/from “fan-6-blades-1750rpm\.wav”/).count()).toBe(1);
     await applyTrueSpeed(page, await heardRows(page));
+  });
+
+  test('says the microphone was refused, and the file route still gives the speed', async () => {
+    session = await openWithFanAsMicrophone(inject('baseUrl'), true);
+    const { page } = session;
+    await openApp(page, inject('baseUrl'));
+    await openBySound(page);
+    await page.getByRole('button', { name: 'Listen (4 s)' }).click();
+    const problem = page.getByTestId('sound-problem');
+    await problem.waitFor();
+    expect(await problem.getAttribute('data-code')).toBe('mic-refused');
+    expect(await problem.innerText()).toMatch(/Allow it for this page[\s\S]*Analyse a recording/);
+    const [chooser] = await Promise.all([
+      page.waitForEvent('filechooser'),
+      page.getByText('Analyse a recording', { exact: true }).click(),
+    ]);
+    await chooser.setFiles(wavPath);
+    await page.getByTestId('sound-candidates').waitFor();
+    expect(await page.getByTestId('sound-problem').count()).toBe(0);
+    const rows = await heardRows(page);
+    expect(rows.some((r) => Math.abs(r.rpm - TRUE_RPM) <= Math.max(2, r.plusMinusRpm))).toBe(true);
   });
 });
