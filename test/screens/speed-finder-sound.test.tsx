@@ -43,7 +43,7 @@ import {
 } from '../../src/state/speedFinder';
 import { finderCsv } from '../../src/screens/speed-finder/csv';
 import { tableRows, type } from '../helpers/screen-queries';
-import { fanAt1750Rpm } from '../helpers/sound/machineSound';
+import { fanAt1750Rpm, machineSound, seededRandom } from '../helpers/sound/machineSound';
 
 const RATE_HZ = 48_000;
 const fanRecording = (): SoundRecording => ({
@@ -188,6 +188,40 @@ describe('the speed finder by sound', () => {
       expect(r.textContent).toMatch(/\((possible|faint)\)\.$/);
     }
     expect(screen.getByTestId('found-speed').textContent).toMatch(/^1,75\d.* rpm ± /);
+  });
+
+  test('shows every tied speed alike, never one big number, when the sound cannot choose', async () => {
+    // Two 6-blade fans side by side, equally loud, at 1750 and 1470 rpm (the core's own tie case).
+    const line = (order: number, amplitude: number) => ({ order, amplitude, phase: order });
+    const twoFans = machineSound(
+      {
+        sampleRateHz: RATE_HZ,
+        durationS: 4,
+        speedHz: 1750 / 60,
+        lines: [line(6, 1), line(12, 0.4)],
+        other: { speedHz: 24.5, lines: [line(6, 1), line(12, 0.4)] },
+        noise: { colour: 'white', snrDb: 20 },
+      },
+      seededRandom(5),
+    );
+    const decode = fake.decodeFile;
+    fake.decodeFile = () =>
+      Promise.resolve({ samples: twoFans, sampleRateHz: RATE_HZ, durationS: 4 });
+    try {
+      fireEvent.click(await openBySound());
+      fireEvent.change(screen.getByLabelText('Analyse a recording'), {
+        target: { files: [new File([], 'two-fans.wav')] },
+      });
+      const leader = await screen.findByTestId('sound-leader');
+      expect(leader.dataset.confidence).toBe('tied');
+      const big = leader.querySelector('p')!.textContent ?? '';
+      expect(big).toMatch(/\brpm or \b/);
+      expect(big).toMatch(/1,75\d/);
+      expect(big).toMatch(/1,47\d/);
+      expect(leader.textContent).toMatch(/Tied: Another speed fits the sound just as well/);
+    } finally {
+      fake.decodeFile = decode;
+    }
   });
 
   test('writes the speeds heard into the CSV, their precision never tighter than measured', () => {

@@ -61,6 +61,8 @@ export function SoundResult() {
 
   const candidates = speeds?.candidates ?? [];
   const leader = candidates[0];
+  const tied =
+    leader?.confidence === 'tied' ? candidates.filter((c) => c.confidence === 'tied') : [];
   const band = { minHz: heard.spectrum.minToneHz, maxHz: heard.spectrum.maxToneHz };
   const columns: ReadonlyArray<ResultColumn<SoundSpeedCandidate>> = [
     {
@@ -128,12 +130,17 @@ export function SoundResult() {
           data-rpm={(leader.speedHz * 60).toFixed(2)}
           data-confidence={leader.confidence}
         >
-          <p class={style.big}>
-            {speedFigures(leader).rpm} rpm{' '}
-            <span class={style.plusMinus}>
-              ± {speedFigures(leader).plusMinus} rpm (±{speedFigures(leader).percent} %)
-            </span>
-          </p>
+          {tied.length > 1 ? (
+            // Never one big number where the sound cannot choose: every tied speed, alike.
+            <p class={style.big}>{tied.map((c) => `${speedFigures(c).rpm} rpm`).join(' or ')}</p>
+          ) : (
+            <p class={style.big}>
+              {speedFigures(leader).rpm} rpm{' '}
+              <span class={style.plusMinus}>
+                ± {speedFigures(leader).plusMinus} rpm (±{speedFigures(leader).percent} %)
+              </span>
+            </p>
+          )}
           <p>
             <strong>{CONFIDENCE_WORDS[leader.confidence].label}:</strong>{' '}
             {CONFIDENCE_WORDS[leader.confidence].meaning}
