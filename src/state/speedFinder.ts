@@ -16,23 +16,25 @@ import {
   defaultExpectation,
   partLabel,
   type Expectation,
-  type OriginMethod,
+  type FinderPartKind,
   type Setup,
   activeIndex,
+  activePartOf,
 } from './model';
 import { keepLastGood } from './outcome';
 import { activePart, setSamplerKind, setStrobeRateFpm, setup } from './setup';
 import {
   expectation,
   finderFeatures,
+  finderPartKind,
   readingId,
   readings,
   type RecordedReading,
 } from './toolInputs';
 import { markSaved, openBaseVersion, openMachineId, setHeader, workContent } from './work';
 
-export type { Expectation, RecordedReading };
-export { defaultExpectation, expectation, finderFeatures, readings };
+export type { Expectation, FinderPartKind, RecordedReading };
+export { defaultExpectation, expectation, finderFeatures, finderPartKind, readings };
 
 /** Most images a technician is asked to count: beyond about eight nobody counts them reliably (a judgement). */
 export const MAX_IMAGES_SEEN = 8;
@@ -69,6 +71,19 @@ export const strobeRangeHz = computed<Range>(() => {
  */
 export function expectedRange(e: Expectation): Range | undefined {
   if (e.mode === 'none') return undefined;
+  if (e.mode === 'nameplate') {
+    if (!(e.nameplateRpm > 0) || !(e.plusMinusPercent > 0 && e.plusMinusPercent <= 50)) {
+      throw new InputError(
+        'expected speed',
+        'Give the expected speed above 0 rpm and how far off it may be, more than 0 and at most 50 %.',
+      );
+    }
+    const share = e.plusMinusPercent / 100;
+    return {
+      minHz: (e.nameplateRpm * (1 - share)) / 60,
+      maxHz: (e.nameplateRpm * (1 + share)) / 60,
+    };
+  }
   if (e.mode === 'motor') {
     return motorExpectedRange(e.mainsHz, e.poles, {
       min: e.minSlipPercent / 100,
@@ -107,21 +122,47 @@ export type SpeedChange =
   | { kind: 'leaves-motor' | 'leaves-wheel'; part: string }
   | { kind: 'leaves-drive'; part: string; driver: string }
   | { kind: 'features'; part: string; from: number; to: number }
+  | { kind: 'tolerance'; part: string; fromPercent: number; toPercent: number }
   | { kind: 'driven-speed'; part: string; fromRpm: number; toRpm: number };
+
+/**
+ * Where a speed found came from, when it carries its own precision: heard (by sound), or heard
+ * and confirmed by a strobe reading. The precision becomes the part's tolerance.
+ */
+export interface HeardOrigin {
+  method: 'sound' | 'sound-and-strobe';
+  /** ± rev/s. */
+  precisionHz: number;
+  /** When the sound was heard (ms since 1970), for the note "by sound, 12 Dec, ±0.1 %". */
+  heardAtMs: number;
+}
+
+/**
+ * A precision as a tolerance, ± percent of the speed, rounded up to two significant figures (a
+ * tolerance is never tighter than the measurement), within what a part's tolerance accepts.
+ * @example toleranceFromPrecision(29.1667, 0.01) // 0.035
+ */
+export function toleranceFromPrecision(speedHz: number, precisionHz: number): number {
+  const percent = (100 * Math.abs(precisionHz)) / Math.abs(speedHz);
+  if (!(percent > 0) || !Number.isFinite(percent)) return 0;
+  const step = 10 ** (Math.floor(Math.log10(percent)) - 1);
+  const rounded = Number((Math.ceil(percent / step - 1e-9) * step).toPrecision(2));
+  return Math.min(50, rounded);
+}
 
 /**
  * The set-up with the chosen part turning at the speed found, and what changed. A strobe
  * cannot tell direction, so the part keeps its own; the speed is applied as the part's own
  * (applyDerivedSpeed's step), with where it came from, no longer taken from a motor or a drive;
- * parts it drives follow it.
+ * parts it drives follow it. A speed heard by sound (`heard`) brings its precision as the
+ * part's tolerance.
  * @example withMeasuredSpeed(defaultSetup, 29.5, 6).changes // [{ kind: 'speed', part: 'Fan', fromRpm: 1770, toRpm: 1770 }]
  */
 export function withMeasuredSpeed(
   s: Setup,
   speedHz: number,
   features: number,
-  method: OriginMethod = 'strobe',
-  at?: string,
+  heard?: HeardOrigin,
 ): { setup: Setup; changes: SpeedChange[] } {
   const index = activeIndex(s);
   const before = s.parts[index];
@@ -136,10 +177,32 @@ export function withMeasuredSpeed(
   }
   if (features !== before.features)
     changes.push({ kind: 'features', part, from: before.features, to: features });
+  const tolerancePercent = heard
+    ? toleranceFromPrecision(speedHz, heard.precisionHz)
+    : before.tolerancePercent;
+  if (tolerancePercent !== before.tolerancePercent) {
+    changes.push({
+      kind: 'tolerance',
+      part,
+      fromPercent: before.tolerancePercent,
+      toPercent: tolerancePercent,
+    });
+  }
   const next = setupWithDerivedSpeed(s, index, {
     speedRpm: rpm,
     features,
-    origin: { method, detail: { features }, at },
+    tolerancePercent,
+    origin: heard
+      ? {
+          method: 'sound',
+          detail: {
+            features,
+            precisionPercent: tolerancePercent,
+            ...(heard.method === 'sound-and-strobe' ? { confirmedBy: 'strobe' } : {}),
+          },
+          at: new Date(heard.heardAtMs).toISOString(),
+        }
+      : { method: 'strobe', detail: { features } },
   });
   try {
     const beforeParts = deriveParts(s);
@@ -170,21 +233,24 @@ export interface SavedSpeed {
   machineName: string | null;
   /** What the store did with the machine (absent for the set-up only). */
   saved?: SaveResult;
+  /** For a speed heard by sound: where it came from and the tolerance it gave the part, ± percent. */
+  origin?: HeardOrigin & { tolerancePercent: number };
 }
 
 /**
- * Applies the speed found to the chosen part of the machine on screen (with where it came from:
- * the strobe, or `method` — 'sound' for a speed found by ear) and keeps it as asked. This is the
- * speed finder's one entry point for a found speed. Throws DataError, changing nothing, for a
- * machine name or set-up the saved list refuses, or an open machine that was deleted meanwhile.
+ * Applies the speed found to the chosen part of the machine on screen, with where it came from
+ * (the strobe, or `heard`: by sound, its precision becoming the part's tolerance), and keeps it
+ * as asked. This is the one way a speed found, by strobe or by sound, reaches the part. Throws
+ * DataError, changing nothing, for a machine name or set-up the saved list refuses, or an open
+ * machine that was deleted meanwhile.
  */
 export async function saveFoundSpeed(
   speedHz: number,
   features: number,
   target: SaveTarget,
-  method: OriginMethod = 'strobe',
+  heard?: HeardOrigin,
 ): Promise<SavedSpeed> {
-  const { setup: next, changes } = withMeasuredSpeed(setup.peek(), speedHz, features, method);
+  const { setup: next, changes } = withMeasuredSpeed(setup.peek(), speedHz, features, heard);
   const content = { ...workContent.peek(), setup: next };
   let saved: SaveResult | undefined;
   if (target.kind === 'open') {
@@ -199,5 +265,11 @@ export async function saveFoundSpeed(
     setHeader({ name: saved.machine.name });
   }
   setup.value = next;
-  return { changes, machineName: saved ? saved.machine.name : null, saved };
+  const tolerancePercent = activePartOf(next).tolerancePercent;
+  return {
+    changes,
+    machineName: saved ? saved.machine.name : null,
+    saved,
+    ...(heard ? { origin: { ...heard, tolerancePercent } } : {}),
+  };
 }

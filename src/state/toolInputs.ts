@@ -9,6 +9,7 @@ import {
   type CameraGoalKind,
   type CameraPlanInputs,
   type Expectation,
+  type FinderPartKind,
   type LoggerFilterKind,
   type LoggerInputs,
   type SpeedFinderInputs,
@@ -29,6 +30,8 @@ export const readings = signal<RecordedReading[]>([]);
 /** Features counted on the part; null follows the chosen part of the set-up. */
 export const finderFeatures = signal<number | null>(null);
 export const expectation = signal<Expectation>({ ...defaultExpectation });
+/** What kind of part the finder looks at (blades, teeth or marks). */
+export const finderPartKind = signal<FinderPartKind>('fan');
 
 let nextReadingId = 1;
 
@@ -38,6 +41,7 @@ export function readingId(): number {
 }
 
 const finderInputs = computed<SpeedFinderInputs>(() => ({
+  partKind: finderPartKind.value,
   readings: readings.value.map(({ rateFpm, images }) => ({ rateFpm, images })),
   features: finderFeatures.value,
   expectation: { ...expectation.value },
@@ -46,6 +50,7 @@ const finderInputs = computed<SpeedFinderInputs>(() => ({
 function setFinderInputs(x: SpeedFinderInputs): void {
   readings.value = x.readings.map((r) => ({ id: readingId(), ...r }));
   finderFeatures.value = x.features;
+  finderPartKind.value = x.partKind;
   expectation.value = { ...x.expectation };
 }
 

@@ -74,6 +74,8 @@ const positive = (max: number) => (v: unknown, p: string) => aboveZero(v, p, max
 function expectationFrom(x: unknown, path: string): Expectation {
   const r = readRecord(x, path, [
     'mode',
+    'nameplateRpm',
+    'plusMinusPercent',
     'fromRpm',
     'toRpm',
     'mainsHz',
@@ -82,7 +84,9 @@ function expectationFrom(x: unknown, path: string): Expectation {
     'maxSlipPercent',
   ]);
   return {
-    mode: oneOf(r.mode, pathTo(path, 'mode'), ['none', 'rpm', 'motor'] as const),
+    mode: oneOf(r.mode, pathTo(path, 'mode'), ['none', 'nameplate', 'rpm', 'motor'] as const),
+    nameplateRpm: between(r.nameplateRpm, pathTo(path, 'nameplateRpm'), 0, 1e7),
+    plusMinusPercent: between(r.plusMinusPercent, pathTo(path, 'plusMinusPercent'), 0, 50),
     fromRpm: between(r.fromRpm, pathTo(path, 'fromRpm'), 0, 1e7),
     toRpm: between(r.toRpm, pathTo(path, 'toRpm'), 0, 1e7),
     mainsHz: oneOf(r.mainsHz, pathTo(path, 'mainsHz'), [50, 60] as const),
@@ -93,7 +97,7 @@ function expectationFrom(x: unknown, path: string): Expectation {
 }
 
 function finderFrom(x: unknown, path: string): SpeedFinderInputs {
-  const r = readRecord(x, path, ['readings', 'features', 'expectation']);
+  const r = readRecord(x, path, ['partKind', 'readings', 'features', 'expectation']);
   const readingsPath = pathTo(path, 'readings');
   const readings = readList(r.readings, readingsPath, 0, MAX_TOOL_LIST, 'readings').map(
     (item, i) => {
@@ -106,6 +110,7 @@ function finderFrom(x: unknown, path: string): SpeedFinderInputs {
     },
   );
   return {
+    partKind: oneOf(r.partKind, pathTo(path, 'partKind'), ['fan', 'gear', 'other'] as const),
     readings,
     features: r.features === null ? null : whole(r.features, pathTo(path, 'features'), 1, 100_000),
     expectation: expectationFrom(r.expectation, pathTo(path, 'expectation')),

@@ -134,6 +134,13 @@ export function readPoles(text: string): number {
   return poles;
 }
 
+/** How far a speed may lie from a nameplate's, ± percent: more than 0, at most 50 (beyond it the nameplate says nothing). */
+export function readPlusMinusPercent(text: string): number {
+  const v = within(parseQuantity(text, 'percent', '%', '±'), 0, 50, '±', '%');
+  if (v === 0) throw new InputError('±', 'Give how far off the speed may be: more than 0 %.');
+  return v;
+}
+
 /** Motor slip, percent of synchronous speed. */
 export function readSlipPercent(text: string): number {
   return within(parseQuantity(text, 'percent', '%', 'slip'), 0, 50, 'slip', '%');

@@ -18,6 +18,12 @@ export const FLASHING_CAUTION =
 export const PLANNING_AID_CAUTION =
   "This is a planning aid: local codes, the machine maker's instructions and licensed practice come first.";
 
+/** Listening to a machine (docs/physics.md §11.10): where to stand, the ears, and what the figure is worth. */
+export const SOUND_CAUTION =
+  'Stay outside guards and barriers while recording: hold the phone out from where you stand, never ' +
+  'reach in. Wear hearing protection where it is required. A speed from sound is a planning aid, ' +
+  'like every figure here: a part that looks still under a strobe set from it is still turning.';
+
 export const CAUTION_WORDS: Readonly<Record<CautionCode, string>> = {
   stillness: STILLNESS_CAUTION,
   flashing: FLASHING_CAUTION,

@@ -43,8 +43,14 @@ export function originWords(origin: SpeedOrigin): string {
       return `on the same shaft as ${from ?? 'another part'}`;
     case 'strobe':
       return 'found with the strobe';
-    case 'sound':
-      return 'found by sound';
+    case 'sound': {
+      const precision = num(d, 'precisionPercent');
+      const how =
+        text(d, 'confirmedBy') === 'strobe'
+          ? 'found by sound, confirmed by strobe'
+          : 'found by sound';
+      return precision === undefined ? how : `${how}, ±${formatNumber(precision)} %`;
+    }
     case 'nameplate': {
       const rpm = num(d, 'rpm');
       return rpm === undefined

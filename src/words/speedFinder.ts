@@ -13,6 +13,7 @@ import {
 import type { SavedSpeed, SpeedChange } from '../state/speedFinder';
 import { formatNumber } from './format';
 import { viewWords } from './look';
+import { heardOriginWords } from './sound';
 
 /** The heading over the instruction, per stage of the procedure. */
 export const STAGE_TITLES: Record<SpeedFinderStage, string> = {
@@ -183,14 +184,17 @@ export function speedChangeWords(c: SpeedChange): string {
       return `${c.part} is no longer worked out from the drive from ${c.driver}.`;
     case 'features':
       return `${c.part}: features ${c.from} → ${c.to}.`;
+    case 'tolerance':
+      return `${c.part}: tolerance ±${formatNumber(c.fromPercent)} % → ±${formatNumber(c.toPercent)} %.`;
     case 'driven-speed':
       return `${c.part}, driven from it: speed ${rpmText(c.fromRpm)} → ${rpmText(c.toRpm)}.`;
   }
 }
 
 /**
- * What saving the speed did, a sentence a line: each change, then where it went — "Saved" only
- * when the machine reached the device (saving.ts says what happened otherwise).
+ * What saving the speed did, a sentence a line: each change, where the speed came from, then
+ * where it went — "Saved" only when the machine reached the device (saving.ts says what
+ * happened otherwise).
  */
 export function savedSpeedLines(saved: SavedSpeed): string[] {
   const where =
@@ -199,5 +203,8 @@ export function savedSpeedLines(saved: SavedSpeed): string[] {
       : saved.saved
         ? saveWords(saved.machineName, saved.saved.outcome, `Saved to "${saved.machineName}".`).text
         : `Saved to "${saved.machineName}".`;
-  return [...saved.changes.map(speedChangeWords), where];
+  const origin = saved.origin
+    ? [`Speed found ${heardOriginWords(saved.origin, saved.origin.tolerancePercent)}.`]
+    : [];
+  return [...saved.changes.map(speedChangeWords), ...origin, where];
 }

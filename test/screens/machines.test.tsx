@@ -277,7 +277,9 @@ describe('saved machines', () => {
     await waitFor(() => expect(document.activeElement).toBe(undo));
     fireEvent.click(within(screen.getByTestId('undo-bar')).getByRole('button', { name: 'Close' }));
     await waitFor(() =>
-      expect(document.activeElement).toBe(screen.getByRole('heading', { name: 'Saved machines' })),
+      expect(document.activeElement).toBe(
+        screen.getByRole('heading', { name: 'Saved machines', level: 2 }),
+      ),
     );
     expect(screen.getByText(/No machines saved yet/)).toBeTruthy();
   });

@@ -13,6 +13,7 @@ import {
 import { ChoiceGroup } from '../../ui/choice-group';
 import { NumberField } from '../../ui/number-field';
 import { Panel } from '../../ui/panel';
+import { StrobeRangeFields } from '../../ui/strobe-range-fields';
 import { imagesWords } from '../../words/look';
 import style from './style.module.css';
 
@@ -24,15 +25,15 @@ interface Props {
 const IMAGE_CHOICES = Array.from({ length: MAX_IMAGES_SEEN }, (_, i) => i + 1);
 
 /**
- * The readings so far (each editable, each removable) and a row to add the next one: the rate
- * at which the image stood still and how many images stood there.
+ * The strobe's own range, the readings so far (each editable, each removable) and a row to add
+ * the next one: the rate at which the image stood still and how many images stood there.
  */
 export function ReadingsPanel({ proposedFpm }: Props) {
   const unit = flashUnit.value;
   const list = readings.value;
   const toText = (fpm: number) => numberForField(unit === 'fpm' ? fpm : fpm / 60);
   return (
-    <Panel title="Readings" id="finder-readings">
+    <Panel title="Strobe readings" id="finder-readings">
       <ChoiceGroup
         legend="Rates in"
         name="finder-rate-unit"
@@ -42,6 +43,11 @@ export function ReadingsPanel({ proposedFpm }: Props) {
         ]}
         value={unit}
         onChange={(u) => (flashUnit.value = u)}
+      />
+      <StrobeRangeFields
+        idPrefix="finder-strobe"
+        minLabel="Strobe's lowest rate"
+        maxLabel="Strobe's highest rate"
       />
       {list.length === 0 ? (
         <p class={style.quiet}>

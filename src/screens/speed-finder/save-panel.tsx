@@ -4,15 +4,24 @@ import { machines } from '../../state/machines';
 import { openMachineId } from '../../state/work';
 import { partLabel, activeIndex } from '../../state/model';
 import { setup } from '../../state/setup';
-import { featuresInUse, saveFoundSpeed, type SaveTarget } from '../../state/speedFinder';
+import { applyHeardSpeed } from '../../state/soundSpeed';
+import {
+  featuresInUse,
+  saveFoundSpeed,
+  type SaveTarget,
+  type HeardOrigin,
+} from '../../state/speedFinder';
 import { Panel } from '../../ui/panel';
 import { savedSpeedLines } from '../../words/speedFinder';
+import { soundSpeedWords } from '../../words/sound';
 import { NameLengthNote, nameIsFull, nameNoteId } from '../../ui/name-length-note';
 import style from './style.module.css';
 
 interface Props {
   /** The speed the procedure found, rev/s; absent until it has found one. */
   speedHz?: number;
+  /** Where it came from, when the sound had a part in it (its precision becomes the tolerance). */
+  origin?: HeardOrigin;
 }
 
 type Outcome = { kind: 'done' | 'problem'; lines: string[] } | null;
@@ -21,7 +30,7 @@ type Outcome = { kind: 'done' | 'problem'; lines: string[] } | null;
  * "Save speed to a machine": the speed found goes into the Check screen's part, and into the
  * machine open now or a new one; what changed is said in words.
  */
-export function SavePanel({ speedHz }: Props) {
+export function SavePanel({ speedHz, origin }: Props) {
   const [name, setName] = useState('');
   const [outcome, setOutcome] = useState<Outcome>(null);
   const [busy, setBusy] = useState(false);
@@ -36,7 +45,11 @@ export function SavePanel({ speedHz }: Props) {
     try {
       setOutcome({
         kind: 'done',
-        lines: savedSpeedLines(await saveFoundSpeed(speedHz, featuresInUse.peek(), target)),
+        lines: savedSpeedLines(
+          origin
+            ? await applyHeardSpeed(speedHz, origin, target)
+            : await saveFoundSpeed(speedHz, featuresInUse.peek(), target),
+        ),
       });
       if (target.kind === 'new') setName('');
     } catch (error) {
@@ -58,8 +71,13 @@ export function SavePanel({ speedHz }: Props) {
       ) : (
         <>
           <p>
-            Found: <strong data-testid="found-speed">{formatNumber(speedHz * 60)} rpm</strong>, for{' '}
-            {part} on the Check screen.
+            Found:{' '}
+            <strong data-testid="found-speed">
+              {origin
+                ? soundSpeedWords({ speedHz, precisionHz: origin.precisionHz })
+                : `${formatNumber(speedHz * 60)} rpm`}
+            </strong>
+            , for {part} on the Check screen.
           </p>
           {machineName ? (
             <button

@@ -1,18 +1,32 @@
 import { InputError } from '../../core';
-import { readFeatures, readPoles, readSlipPercent, readSpeedRpm } from '../../ui/fields';
+import {
+  readFeatures,
+  readPlusMinusPercent,
+  readPoles,
+  readSlipPercent,
+  readSpeedRpm,
+} from '../../ui/fields';
 import { formatNumber, numberForField } from '../../words/format';
 import { activePart } from '../../state/setup';
 import {
   expectation,
   featuresInUse,
   finderFeatures,
+  finderPartKind,
   type Expectation,
+  type FinderPartKind,
 } from '../../state/speedFinder';
 import { ChoiceGroup } from '../../ui/choice-group';
 import { NumberField } from '../../ui/number-field';
 import { Panel } from '../../ui/panel';
-import { StrobeRangeFields } from '../../ui/strobe-range-fields';
 import style from './style.module.css';
+
+/** The count field's label for each kind of part ("Blades or marks" stays the fan's, as before). */
+const COUNT_LABELS: Record<FinderPartKind, string> = {
+  fan: 'Blades or marks on the part',
+  gear: 'Teeth on the gear',
+  other: 'Features on the part (spokes, bolts, marks)',
+};
 
 interface Props {
   /** The expected range in rpm as the core reads it, when one is given and good. */
@@ -30,6 +44,12 @@ function startRpmRange(): Partial<Expectation> {
   return { fromRpm: Math.round(rpm * 0.9), toRpm: Math.round(rpm * 1.1) };
 }
 
+/** Starting from a nameplate speed: the set-up's speed for the part, when it has one. */
+function startNameplate(): Partial<Expectation> {
+  const rpm = Math.abs(activePart.peek().speedRpm);
+  return rpm > 0 ? { nameplateRpm: Math.round(rpm) } : {};
+}
+
 /** Starting from a nameplate: the part's own motor, when the set-up has one. */
 function startMotor(): Partial<Expectation> {
   const motor = activePart.peek().motor;
@@ -37,31 +57,39 @@ function startMotor(): Partial<Expectation> {
   return { mainsHz: motor.mainsHz === 60 ? 60 : 50, poles: motor.poles };
 }
 
-/** The part (its features), the strobe's own range, and what speed to expect. */
+/** The part both methods work on (its kind and features) and what speed to expect. */
 export function FinderSetupPanel({ expectedRpm }: Props) {
   const e = expectation.value;
   const part = activePart.value;
+  const kind = finderPartKind.value;
   return (
-    <Panel title="The part and the strobe" id="finder-setup">
+    <Panel title="The part" id="finder-setup">
+      <ChoiceGroup
+        legend="Kind of part"
+        name="finder-kind"
+        options={[
+          { value: 'fan', label: 'Fan or impeller' },
+          { value: 'gear', label: 'Gear' },
+          { value: 'other', label: 'Other' },
+        ]}
+        value={kind}
+        onChange={(k) => (finderPartKind.value = k)}
+      />
       <NumberField
         id="finder-features"
-        label="Blades or marks on the part"
+        label={COUNT_LABELS[kind]}
         value={featuresInUse.value}
         toText={numberForField}
         read={readFeatures}
         onValue={(n) => (finderFeatures.value = n)}
-        hint={`The Check screen's part${part.name.trim() ? ` (${part.name.trim()})` : ''} has ${part.features}. One reflective mark (1) makes the reading unambiguous.`}
-      />
-      <StrobeRangeFields
-        idPrefix="finder-strobe"
-        minLabel="Strobe's lowest rate"
-        maxLabel="Strobe's highest rate"
+        hint={`The Check screen's part${part.name.trim() ? ` (${part.name.trim()})` : ''} has ${part.features}. One reflective mark (1) makes a strobe reading unambiguous.`}
       />
       <ChoiceGroup
         legend="Expected speed"
         name="finder-expect"
         options={[
           { value: 'none', label: 'Not known' },
+          { value: 'nameplate', label: 'A speed ± %' },
           { value: 'rpm', label: 'A range in rpm' },
           { value: 'motor', label: 'Motor nameplate' },
         ]}
@@ -70,10 +98,17 @@ export function FinderSetupPanel({ expectedRpm }: Props) {
           if (mode === e.mode) return;
           change({
             mode,
-            ...(mode === 'rpm' ? startRpmRange() : mode === 'motor' ? startMotor() : {}),
+            ...(mode === 'nameplate'
+              ? startNameplate()
+              : mode === 'rpm'
+                ? startRpmRange()
+                : mode === 'motor'
+                  ? startMotor()
+                  : {}),
           });
         }}
       />
+      {e.mode === 'nameplate' && <NameplateRange e={e} />}
       {e.mode === 'rpm' && <RpmRange e={e} />}
       {e.mode === 'motor' && <MotorRange e={e} />}
       {expectedRpm && (
@@ -83,6 +118,37 @@ export function FinderSetupPanel({ expectedRpm }: Props) {
         </p>
       )}
     </Panel>
+  );
+}
+
+function NameplateRange({ e }: { e: Expectation }) {
+  return (
+    <div class={style.pair}>
+      <NumberField
+        id="expect-nameplate"
+        label="Speed"
+        name="expected speed"
+        value={e.nameplateRpm}
+        toText={numberForField}
+        read={(text) => {
+          const v = Math.abs(readSpeedRpm(text, 'rpm'));
+          if (!(v > 0)) throw new InputError('speed', 'The expected speed must be above 0 rpm.');
+          return v;
+        }}
+        onValue={(nameplateRpm) => change({ nameplateRpm })}
+        unit="rpm"
+      />
+      <NumberField
+        id="expect-plus-minus"
+        label="±"
+        name="expected speed's ±"
+        value={e.plusMinusPercent}
+        toText={numberForField}
+        read={readPlusMinusPercent}
+        onValue={(plusMinusPercent) => change({ plusMinusPercent })}
+        unit="%"
+      />
+    </div>
   );
 }
 

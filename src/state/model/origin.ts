@@ -19,7 +19,8 @@ export type OriginMethod = (typeof ORIGIN_METHODS)[number];
  * The numbers and names behind a derived speed, by method (all optional, so an older or newer
  * detail never blocks a file): road-speed { groundSpeed, unit, tyreSize }; belt { fromPart,
  * driverMm, drivenMm }; gear { fromPart, driverTeeth, drivenTeeth }; shaft { fromPart };
- * strobe and sound { features, readings }; nameplate { rpm }.
+ * strobe { features }; sound { features, precisionPercent, confirmedBy: 'strobe' when a strobe
+ * reading confirmed it }; nameplate { rpm }.
  */
 export type OriginDetail = Record<string, number | string>;
 

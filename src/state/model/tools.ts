@@ -10,8 +10,15 @@ export interface FinderReading {
 }
 
 /** What the technician expects of the speed: nothing, a range in rpm, or a motor's nameplate. */
+/**
+ * What the technician expects of the speed: nothing, a speed ± percent (a nameplate's), a range
+ * in rpm, or a motor's poles and mains. Both speed-finder methods (strobe and sound) read it.
+ */
 export interface Expectation {
-  mode: 'none' | 'rpm' | 'motor';
+  mode: 'none' | 'nameplate' | 'rpm' | 'motor';
+  nameplateRpm: number;
+  /** How far the speed may lie from nameplateRpm, ± percent. */
+  plusMinusPercent: number;
   fromRpm: number;
   toRpm: number;
   mainsHz: 50 | 60;
@@ -21,7 +28,11 @@ export interface Expectation {
   maxSlipPercent: number;
 }
 
+/** What kind of part the speed finder looks at: its features are blades, teeth or marks (the words, and the tone's name, follow it). */
+export type FinderPartKind = 'fan' | 'gear' | 'other';
+
 export interface SpeedFinderInputs {
+  partKind: FinderPartKind;
   readings: FinderReading[];
   /** Features counted on the part; null follows the chosen part. */
   features: number | null;
@@ -74,6 +85,10 @@ export interface ToolInputs {
  */
 export const defaultExpectation: Expectation = {
   mode: 'none',
+  // A nameplate speed ± 5 % until one is typed (nameplates are commonly 2–4 % off the running
+  // speed: belts slip, drives vary; a judgement).
+  nameplateRpm: 1500,
+  plusMinusPercent: 5,
   fromRpm: 1000,
   toRpm: 2000,
   mainsHz: 50,
@@ -119,7 +134,7 @@ export const defaultLoggerInputs: LoggerInputs = {
 /** Fresh inputs for a machine no tool has been used on. */
 export function defaultToolInputs(): ToolInputs {
   return structuredClone({
-    speedFinder: { readings: [], features: null, expectation: defaultExpectation },
+    speedFinder: { partKind: 'fan', readings: [], features: null, expectation: defaultExpectation },
     camera: defaultCameraInputs,
     logger: defaultLoggerInputs,
   });

@@ -6,6 +6,8 @@ import { formatRate, rateNumber, rateUnit, type FlashUnit } from '../../words/ra
 import { partsKey, rateForKey, speedAxisLimitRpm, unresolvedShare } from './chart-data';
 import type { ChartColours, RateChart } from './chart';
 import { STILLNESS_CAUTION } from '../../words/cautions';
+import { cssColours, useColourScheme } from '../chartTheme';
+import { lazyModule } from '../lazyModule';
 import style from './style.module.css';
 
 export interface Props {
@@ -36,7 +38,8 @@ const MAP_POINTS = 2000;
 /** The crowded low end is worth a note once it takes more than this share of the axis (a few pixels). */
 const NOTE_SHARE = 0.01;
 
-type ChartModule = typeof import('./chart');
+/** uPlot and its stylesheet, loaded on first use (the first screen stays small). */
+const chartCode = lazyModule(() => import('./chart'));
 
 /**
  * The rate map: every part's apparent speed against the sampler's rate over its range, the
@@ -56,8 +59,7 @@ export function RateMap(props: Props) {
     class: extra,
   } = props;
   const [log, setLog] = useState(() => props.logAxis ?? range.maxHz / range.minHz > 20);
-  const [chartModule, setChartModule] = useState<ChartModule | null>(null);
-  const [loadFailed, setLoadFailed] = useState(false);
+  const { module: chartModule, failed: loadFailed } = chartCode.use();
   const [drawFailed, setDrawFailed] = useState(false);
   const scheme = useColourScheme();
   const rootRef = useRef<HTMLDivElement>(null);
@@ -82,18 +84,6 @@ export function RateMap(props: Props) {
     return () => cancelAnimationFrame(frame);
   }, [inputsKey]);
   const series = 'series' in computed ? computed.series : null;
-
-  // uPlot, lazily, once.
-  useEffect(() => {
-    let live = true;
-    import('./chart').then(
-      (m) => live && setChartModule(m),
-      () => live && setLoadFailed(true),
-    );
-    return () => {
-      live = false;
-    };
-  }, []);
 
   // The chart itself: rebuilt when the axis kind or the unit changes, resized with its box.
   const hasSeries = series !== null;
@@ -305,20 +295,6 @@ function markDrawn(holder: HTMLElement, log: boolean | null, partsKey: string | 
   }
 }
 
-/** 'dark' or 'light' as the system sets it; the chart's colours are read again when it changes. */
-function useColourScheme(): 'dark' | 'light' {
-  const query =
-    typeof matchMedia === 'function' ? matchMedia('(prefers-color-scheme: dark)') : null;
-  const [dark, setDark] = useState(() => query?.matches ?? false);
-  useEffect(() => {
-    if (!query) return;
-    const onChange = () => setDark(query.matches);
-    query.addEventListener('change', onChange);
-    return () => query.removeEventListener('change', onChange);
-  }, []);
-  return dark ? 'dark' : 'light';
-}
-
 /** The chart's size for its box: full width; shorter on a phone. */
 function chartSize(holder: HTMLElement): { width: number; height: number } {
   const width = Math.max(240, Math.floor(holder.clientWidth));
@@ -329,8 +305,7 @@ function chartSize(holder: HTMLElement): { width: number; height: number } {
 
 /** Chart colours from the custom properties the stylesheet sets on the widget. */
 function readColours(root: Element): ChartColours {
-  const css = getComputedStyle(root);
-  const get = (name: string, fallback: string) => css.getPropertyValue(name).trim() || fallback;
+  const get = cssColours(root);
   return {
     parts: [1, 2, 3, 4, 5, 6].map((i) => get(`--ratemap-part-${i}`, '#0d3b4f')),
     ink: get('--ratemap-ink', '#0f1d24'),
