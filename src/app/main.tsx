@@ -14,7 +14,12 @@ function LaterUpdateNotice() {
 }
 
 render(<App updateNotice={<LaterUpdateNotice />} />, document.getElementById('app')!);
-void startSession();
+// The page says when the starting machine is in place (a share link, or the last visit's
+// working copy): what is typed from then on can no longer be replaced by it. Browser tests
+// wait for this before they type.
+void startSession().finally(() => {
+  document.documentElement.dataset.session = 'open';
+});
 // Fetch the field tools once the first screen is up, so their tabs open at once (and a failed
 // fetch is simply tried again when a tab asks).
 setTimeout(() => void toolScreens.load().catch(() => undefined), 0);

@@ -74,9 +74,21 @@ export async function openBrowser(
 }
 
 /** Loads the app and waits until storage has opened and the first verdict is on screen. */
+/**
+ * Opens the app and waits until its starting machine is in place (src/app/main.tsx marks the
+ * page): typing before that could race the last visit's working copy as it loads.
+ */
 export async function openApp(page: Page, url: string): Promise<void> {
   await page.goto(url);
   await page.getByTestId('verdict').waitFor();
+  await page.locator('html[data-session="open"]').waitFor({ state: 'attached' });
+}
+
+/** Reloads the app and waits, as openApp does, until its starting machine is in place. */
+export async function reloadApp(page: Page): Promise<void> {
+  await page.reload();
+  await page.getByTestId('verdict').waitFor();
+  await page.locator('html[data-session="open"]').waitFor({ state: 'attached' });
 }
 
 /** Replaces a field's text as a person would: select all, type. */

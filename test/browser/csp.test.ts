@@ -7,7 +7,7 @@ import type { Page } from 'playwright-core';
 import { policyText } from '../../scripts/content-security-policy';
 import { blankHeader, defaultSetup, defaultToolInputs } from '../../src/state/model';
 import { encodeShareFragment } from '../../src/state/shareLink';
-import { openApp, openBrowser, type Session } from './browser';
+import { openApp, openBrowser, type Session, reloadApp } from './browser';
 import { TOURS } from './every-screen';
 import { startPreview, type PreviewServer } from './server';
 
@@ -108,12 +108,12 @@ describe('the Content-Security-Policy of the built page', () => {
     await page.evaluate(async () => {
       await navigator.serviceWorker.ready;
     });
-    await page.reload();
+    await reloadApp(page);
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
     await page.getByTestId('verdict').waitFor();
     await server.stop();
     await expect(fetch(server.url)).rejects.toThrow();
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
     await visitEveryScreen(page, true);
     expect(await page.getByTestId('screen-load-failed').count()).toBe(0);

@@ -35,6 +35,11 @@ function markControls(page: Page): Promise<number> {
     const controls = all.filter((el) => {
       if ((el as HTMLButtonElement).disabled || el.tabIndex < 0) return false;
       if (el.closest('[inert], [hidden]')) return false;
+      // Inside a closed disclosure only its summary can be reached (the rest opens with it).
+      const details = el.closest('details');
+      if (details && !details.open && el !== details.querySelector(':scope > summary')) {
+        return false;
+      }
       if (el.getClientRects().length === 0 || getComputedStyle(el).visibility === 'hidden') {
         return false;
       }

@@ -2,7 +2,7 @@
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { openApp, openBrowser, storedSetup, typeInto, type Session } from './browser';
+import { openApp, openBrowser, storedSetup, typeInto, type Session, reloadApp } from './browser';
 
 let session: Session | undefined;
 
@@ -45,7 +45,7 @@ describe('saved machines', () => {
     // The reload must come after the page has stored that change.
     await expect.poll(async () => (await storedSetup(page))?.parts[0].features).toBe(4);
 
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
     await expect.poll(() => page.getByLabel('Speed', { exact: true }).inputValue()).toBe('1480');
     await expect.poll(() => page.getByLabel('Blades or marks').inputValue()).toBe('4');

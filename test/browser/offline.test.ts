@@ -1,7 +1,7 @@
 // Offline use: after the first visit the app and the saved machines must work with the server
 // gone. This test runs its own preview server so stopping it does not disturb other tests.
 import { afterEach, describe, expect, inject, test } from 'vitest';
-import { openApp, openBrowser, storedSetup, typeInto, type Session } from './browser';
+import { openApp, openBrowser, storedSetup, typeInto, type Session, reloadApp } from './browser';
 import { startPreview, type PreviewServer } from './server';
 
 let session: Session | undefined;
@@ -26,7 +26,7 @@ describe('with no network after the first visit', () => {
     await page.evaluate(async () => {
       await navigator.serviceWorker.ready;
     });
-    await page.reload();
+    await reloadApp(page);
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
     await page.getByTestId('verdict').waitFor();
 
@@ -40,7 +40,7 @@ describe('with no network after the first visit', () => {
     // The server is really gone: a direct request fails.
     await expect(fetch(server.url)).rejects.toThrow();
 
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
     // The page paints at once and the last set-up arrives from storage a moment later.
     await expect.poll(() => page.getByLabel('Speed', { exact: true }).inputValue()).toBe('2900');

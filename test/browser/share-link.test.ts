@@ -50,7 +50,7 @@ describe('share links', () => {
     const seen = await first.page.getByTestId('apparent-speed').innerText();
 
     const second = await browser();
-    await second.page.goto(link);
+    await openApp(second.page, link);
     await second.page.getByTestId('verdict').waitFor();
     await expect
       .poll(() => second.page.getByLabel('Speed', { exact: true }).inputValue())
@@ -86,7 +86,7 @@ describe('share links', () => {
       await openApp(s.page, inject('baseUrl') + 'index.html');
       await typeInto(s.page, 'Speed', '2000');
       await expect.poll(async () => (await storedSetup(s.page))?.parts[0].speedRpm).toBe(2000);
-      await s.page.goto(inject('baseUrl') + bad);
+      await openApp(s.page, inject('baseUrl') + bad);
       await s.page.getByTestId('verdict').waitFor();
       await expect
         .poll(() => s.page.getByTestId('session-message').innerText())
@@ -135,7 +135,7 @@ describe('share links', () => {
         ],
       },
     });
-    await s.page.goto(inject('baseUrl') + encodeShareFragment(hostile));
+    await openApp(s.page, inject('baseUrl') + encodeShareFragment(hostile));
     await s.page.getByTestId('verdict').waitFor();
     await expect
       .poll(() => s.page.getByTestId('part-name').innerText())

@@ -3,7 +3,7 @@
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
-import { openApp, openBrowser, typeInto, type Session } from './browser';
+import { openApp, openBrowser, typeInto, type Session, reloadApp } from './browser';
 import {
   clearSiteData,
   deleteDatabaseFrom,
@@ -159,7 +159,7 @@ describe('site data cleared while the app is open', () => {
       );
     expect(await shown(page, 'storage-message')).not.toMatch(/older version/);
 
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
     await expect.poll(() => listedNames(page)).toEqual(all);
     expect(await page.locator('body').innerText()).not.toMatch(/older version|could not be read/);
@@ -183,7 +183,7 @@ describe('site data cleared while the app is open', () => {
       .poll(() => shown(page, 'storage-message'))
       .toMatch(/^Saved data on this device was cleared while Trueturn was open .*: 2 machines/);
 
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
     await expect.poll(() => listedNames(page)).toEqual(all);
     await page.getByRole('button', { name: 'Check', exact: true }).click();
@@ -199,7 +199,7 @@ describe('a device that refuses writes (storage full)', () => {
     expect(await diskNames(page)).toEqual(before);
 
     await page.addInitScript(fullDiskScript, true);
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
     const status = page.getByTestId('storage-status');
     await expect
@@ -227,7 +227,7 @@ describe('a device that refuses writes (storage full)', () => {
       .toMatch(/Saving works again: every change held in this tab is now on this device\./);
     await expect.poll(() => page.getByTestId('held-mark').count()).toBe(0);
 
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
     await expect.poll(() => listedNames(page)).toEqual(held);
     expect(await status.count()).toBe(0);
@@ -263,7 +263,7 @@ describe('a device that refuses writes (storage full)', () => {
     await expect.poll(() => shown(page, 'keep-outcome')).toBe('Saved as "Auger".');
     expect(await listedNames(page)).toEqual(held);
 
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
     await expect.poll(() => listedNames(page)).toEqual(held);
     await page.getByRole('button', { name: 'Check', exact: true }).click();
@@ -345,7 +345,7 @@ describe('the working copy while typing', () => {
   test('a reload right after the last keystroke keeps it', async () => {
     const { page } = await freshApp();
     await typeInto(page, 'Speed', '1234');
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
     await expect.poll(() => page.getByLabel('Speed', { exact: true }).inputValue()).toBe('1234');
     expect((await diskWork(page))?.speedRpm).toBe(1234);

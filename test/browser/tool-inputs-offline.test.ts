@@ -7,7 +7,7 @@
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
 import type { MachineContent } from '../../src/state/model';
-import { openApp, openBrowser, storedWork, type Session } from './browser';
+import { openApp, openBrowser, storedWork, type Session, reloadApp } from './browser';
 import { startPreview, type PreviewServer } from './server';
 
 let session: Session | undefined;
@@ -230,7 +230,7 @@ describe('every tool’s inputs after an offline reload', () => {
     await page.evaluate(async () => {
       await navigator.serviceWorker.ready;
     });
-    await page.reload();
+    await reloadApp(page);
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
     await page.getByTestId('verdict').waitFor();
 
@@ -267,7 +267,7 @@ describe('every tool’s inputs after an offline reload', () => {
     await server.stop();
     // The server is really gone: a direct request fails.
     await expect(fetch(server.url)).rejects.toThrow();
-    await page.reload();
+    await reloadApp(page);
     await page.getByTestId('verdict').waitFor();
 
     // The page paints at once; the working copy arrives from storage a moment later.
