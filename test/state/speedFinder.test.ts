@@ -11,6 +11,7 @@ import {
   withMeasuredSpeed,
 } from '../../src/state/speedFinder';
 import { speedChangeWords } from '../../src/words/speedFinder';
+import { originLine } from '../../src/words/origin';
 
 describe('an expected speed given as a nameplate speed ± %', () => {
   it('spans the speed less and more the share (1500 rpm ± 5 %: 1425 to 1575 rpm, worked by hand)', () => {
@@ -67,11 +68,32 @@ describe('withMeasuredSpeed with an origin', () => {
     expect(setup.parts[0]!.tolerancePercent).toBe(0.035);
     const said = changes.map(speedChangeWords);
     expect(said).toContain('Fan: tolerance ±1 % → ±0.035 %.');
+    // The part says where its speed came from, and when it was heard.
+    expect(setup.parts[0]!.origin).toEqual({
+      method: 'sound',
+      detail: { features: 6, precisionPercent: 0.035 },
+      at: '1970-01-01T00:00:00.000Z',
+    });
+    expect(originLine(setup.parts[0]!.origin!)).toBe(
+      'Speed found by sound, ±0.035 %, applied on 1970-01-01.',
+    );
   });
 
-  it('keeps the part’s tolerance for a strobe speed, which has no origin', () => {
+  it('a heard speed confirmed by a strobe reading says so on the part', () => {
+    const { setup } = withMeasuredSpeed(defaultSetup, 1750 / 60, 6, {
+      method: 'sound-and-strobe',
+      precisionHz: 0.01,
+      heardAtMs: Date.UTC(2026, 11, 2),
+    });
+    expect(originLine(setup.parts[0]!.origin!)).toBe(
+      'Speed found by sound, confirmed by strobe, ±0.035 %, applied on 2026-12-02.',
+    );
+  });
+
+  it('keeps the part’s tolerance for a strobe speed, which has no precision of its own', () => {
     const { setup, changes } = withMeasuredSpeed(defaultSetup, 1750 / 60, 6);
     expect(setup.parts[0]!.tolerancePercent).toBe(defaultSetup.parts[0]!.tolerancePercent);
+    expect(setup.parts[0]!.origin?.method).toBe('strobe');
     expect(changes.some((c) => c.kind === 'tolerance')).toBe(false);
   });
 });
