@@ -142,12 +142,21 @@ async function tabTo(
  * dropped to the page body (a screen reader user would be sent back to the top).
  */
 async function expectFocusHeld(page: Page, after: string): Promise<void> {
-  const where = await page.evaluate(() => {
-    const el = document.activeElement;
-    return !el || el === document.body || el === document.documentElement ? null : el.tagName;
-  });
-  expect(where, `focus after ${after}`).not.toBeNull();
-  expect(await focusIndicator(page), `focus indicator after ${after}`).not.toBeNull();
+  // The control that had focus may be gone (a part removed): focus moves on once the list has
+  // re-rendered, so wait for where it settles rather than reading it once.
+  await expect
+    .poll(
+      () =>
+        page.evaluate(() => {
+          const el = document.activeElement;
+          return !el || el === document.body || el === document.documentElement ? null : el.tagName;
+        }),
+      { message: `focus after ${after}` },
+    )
+    .not.toBeNull();
+  await expect
+    .poll(() => focusIndicator(page), { message: `focus indicator after ${after}` })
+    .not.toBeNull();
 }
 
 describe('the keyboard alone', () => {

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'preact/hooks';
+import { useLayoutEffect, useRef, useState } from 'preact/hooks';
 import { apparentMotion, cautionFlags, type CautionContext } from '../../core';
 import { openCheckScreen } from '../../state/navigation';
 import { formatRate, formatRateSpan } from '../../words/rates';
@@ -62,7 +62,8 @@ export function WholeMachineScreen(_props: Props) {
   const cardList = useRef<HTMLOListElement>(null);
   const addButton = useRef<HTMLButtonElement>(null);
   const removedAt = useRef<number | null>(null);
-  useEffect(() => {
+  // Before the paint, so no frame passes with focus on the page body.
+  useLayoutEffect(() => {
     const at = removedAt.current;
     if (at === null) return;
     removedAt.current = null;

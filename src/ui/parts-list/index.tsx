@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'preact/hooks';
+import { useLayoutEffect, useRef, useState } from 'preact/hooks';
 import { formatNumber } from '../../words/format';
 import { useFollowingText } from '../followingText';
 import { partLabel, activeIndex } from '../../state/model';
@@ -32,7 +32,8 @@ export function PartsList({ class: extra, title = 'Parts' }: Props) {
   // The remove button goes disabled (or its part away) under the keyboard's focus, which would
   // drop to the page body: after a removal, focus moves to the part now chosen (WCAG 2.4.3).
   const focusChosen = useRef(false);
-  useEffect(() => {
+  // Before the paint, so no frame passes with focus on the page body.
+  useLayoutEffect(() => {
     if (!focusChosen.current) return;
     focusChosen.current = false;
     list.current?.querySelector<HTMLButtonElement>('button[aria-pressed="true"]')?.focus();
