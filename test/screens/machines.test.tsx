@@ -54,6 +54,8 @@ async function saveAs(name: string) {
   fireEvent.input(screen.getByLabelText('Machine name'), { target: { value: name } });
   fireEvent.click(screen.getByRole('button', { name: 'Save as new machine' }));
   await waitFor(() => expect(machines.value.some((m) => m.name === name.trim())).toBe(true));
+  // And the panel shows the machine as the one open (under load its render can lag the store).
+  await waitFor(() => expect(document.body.textContent).toContain(`Opened from ${name.trim()}`));
 }
 
 describe('saved machines', () => {
