@@ -4,6 +4,7 @@ import { cleanup, configure, fireEvent, render, screen, waitFor } from '@testing
 import { afterEach, beforeAll, describe, expect, test } from 'vitest';
 import { App } from '../../src/app/app';
 import { toolScreens } from '../../src/app/screen-list';
+import { results } from '../../src/screens/check/lazy-results';
 import { machines } from '../../src/state/machines';
 import { startSession } from '../../src/state/session';
 
@@ -12,6 +13,8 @@ beforeAll(async () => {
   await startSession();
   // The Machines screen loads after the first paint, with the field tools.
   await toolScreens.load();
+  // Keeping a machine sits with the check screen's lists, which load after the first paint.
+  await results.load();
 });
 
 afterEach(cleanup);

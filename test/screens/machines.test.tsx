@@ -12,6 +12,7 @@ import {
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
 import { App } from '../../src/app/app';
 import { toolScreens } from '../../src/app/screen-list';
+import { results } from '../../src/screens/check/lazy-results';
 import { currentScreen, openScreen } from '../../src/state/navigation';
 import { EXAMPLE_MACHINE_NAME, exampleSetup } from '../../src/state/example';
 import { exportAll, machines } from '../../src/state/machines';
@@ -23,6 +24,8 @@ beforeAll(async () => {
   await startSession();
   // The Machines screen loads after the first paint, with the field tools.
   await toolScreens.load();
+  // Keeping a machine sits with the check screen's lists, which load after the first paint.
+  await results.load();
 });
 
 beforeEach(() => {

@@ -9,7 +9,8 @@ import {
   rateBands,
   rollingSkewDegrees,
 } from '../../src/core';
-import { computeCheck, verdictOf } from '../../src/state/check';
+import { verdictOf } from '../../src/state/check';
+import { computeCheck } from '../../src/state/check/lists';
 import { attempt } from '../../src/state/outcome';
 import { activeCorePart as corePart, defaultSetup, type Setup } from '../../src/state/model';
 import {

@@ -21,8 +21,14 @@ export function AppFrame({ notices, current, children }: Props) {
   const screen = current;
   const heading = screenEntry(screen).heading;
   const tabBar = useRef<HTMLElement>(null);
-  // On a phone the tab row scrolls sideways: keep the open tab in view.
+  // On a phone the tab row scrolls sideways: keep the open tab in view. The first tab is in
+  // view when the page opens, and asking would lay the whole page out early, before its first
+  // paint is even done with: only another tab is scrolled to.
+  const opened = useRef(false);
   useEffect(() => {
+    const first = !opened.current;
+    opened.current = true;
+    if (first && screen === SCREENS[0].id) return;
     const open = tabBar.current?.querySelector<HTMLElement>('[aria-current="page"]');
     open?.scrollIntoView?.({ block: 'nearest', inline: 'nearest' });
   }, [screen]);

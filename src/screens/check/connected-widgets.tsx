@@ -1,9 +1,11 @@
-// The preview and the rate map, fed from the set-up on screen. Both load after the first paint
+// The preview and the rate map, fed from the set-up the lists show (a paint behind the entries:
+// src/state/check/listed.ts). Both load after the first paint
 // (lazy-widgets.ts); until then a placeholder of about their size holds their place.
-import { check, checkProblem } from '../../state/check';
+import { computed } from '@preact/signals';
+import { check, checkProblem, listedAnswer, listedSetup } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
 import { VERDICT_FIELDS } from './field-ids';
-import { flashUnit, setSamplerRateHz, setup } from '../../state/setup';
+import { flashUnit, setSamplerRateHz } from '../../state/setup';
 import { Panel } from '../../ui/panel';
 import { widgets as lazyWidgets } from './lazy-widgets';
 import { previewInputOf, rateMapInputOf } from './widget-inputs';
@@ -11,15 +13,15 @@ import style from './style.module.css';
 
 /**
  * The screen shows the stillness caution: for an aliased view, and while the verdict is
- * withdrawn (nothing then says the view is true).
+ * withdrawn (nothing then says the view is true). Computed apart, so the pictures re-render
+ * when it flips, not on every keystroke.
  */
-function screenShowsSafety(): boolean {
-  return (
+const screenShowsSafety = computed(
+  () =>
     check.value.showSafety ||
     problemsAmong(VERDICT_FIELDS).length > 0 ||
-    checkProblem.value !== undefined
-  );
-}
+    checkProblem.value !== undefined,
+);
 
 /**
  * The part being checked as the sampler shows it, beside the part as it really turns. Its
@@ -27,15 +29,14 @@ function screenShowsSafety(): boolean {
  * verdict that is not to be trusted); otherwise the preview gives it itself.
  */
 export function CheckPreview() {
-  const result = check.value;
-  const input = previewInputOf(result, setup.value);
+  const input = previewInputOf(listedAnswer.value, listedSetup.value);
   const { module: widgets, failed } = lazyWidgets.use();
   return (
     <Panel title="Preview" id="preview">
       {input === null ? (
         <p class={style.quiet}>Steady light samples nothing: the part looks as it really turns.</p>
       ) : widgets ? (
-        <widgets.Preview {...input} showCautions={!screenShowsSafety()} />
+        <widgets.Preview {...input} showCautions={!screenShowsSafety.value} />
       ) : (
         <div class={style.previewPlaceholder} data-testid="preview-placeholder">
           <div class={style.square} />
@@ -56,8 +57,7 @@ export function CheckPreview() {
  * through the same setter as the suggested rates, so the rate field follows.
  */
 export function CheckRateMap() {
-  const result = check.value;
-  const input = rateMapInputOf(result, setup.value);
+  const input = rateMapInputOf(listedAnswer.value, listedSetup.value);
   const { module: widgets, failed } = lazyWidgets.use();
   return (
     <Panel title="Rate map" id="rate-map">
@@ -66,7 +66,7 @@ export function CheckRateMap() {
           {...input}
           onRateChange={setSamplerRateHz}
           flashUnit={flashUnit.value}
-          showCautions={!screenShowsSafety()}
+          showCautions={!screenShowsSafety.value}
         />
       ) : (
         <div class={style.mapPlaceholder} data-testid="rate-map-placeholder">

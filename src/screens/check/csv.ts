@@ -1,7 +1,7 @@
 // The check screen as CSV (RFC 4180 via the core): what the viewer sees, then the rates nearby
 // that lock the part. Numbers as rounded on screen, units in the headings, words for yes and no.
 import { csvTable, type CsvValue } from '../../core';
-import type { CheckResult } from '../../state/check';
+import type { CheckResult } from '../../state/check/lists';
 import type { SamplerKind } from '../../state/model';
 import { verdictHeadline } from '../../words/check';
 import { preciseNumber, shownNumber } from '../../words/format';

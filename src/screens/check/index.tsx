@@ -2,23 +2,16 @@ import type { ComponentChildren } from 'preact';
 import { useRef } from 'preact/hooks';
 import { check, checkProblem } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
-import { CameraReadout } from './camera-readout';
 import { Cautions } from '../../ui/cautions';
-import { KeepShare } from './keep-share';
-import { LightingReadout } from '../../ui/lighting-readout';
 import { NotCurrent } from '../../ui/not-current';
 import { PartForm } from '../../ui/part-form';
-import { RateSuggestions } from './rate-suggestions';
-import { SafeBands } from './safe-bands';
 import { SamplerForm } from './sampler-form';
 import { VerdictPanel } from './verdict-panel';
 import { CheckPreview, CheckRateMap } from './connected-widgets';
 import { RESULT_FIELDS, VERDICT_FIELDS } from './field-ids';
 import { CHECK_NOTE_WORDS } from '../../words/check';
-import { ReportBar } from '../../ui/report-bar';
-import { partLabel, activeIndex } from '../../state/model';
-import { flashUnit, setup } from '../../state/setup';
-import { checkCsv } from './csv';
+import { results } from './lazy-results';
+import { Following, ResultsGuard } from './results-guard';
 import { useStickyInset } from './sticky-inset';
 import style from './style.module.css';
 
@@ -61,28 +54,48 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
         <SamplerForm />
         {chart && (
           <div class={style.slot}>
-            <ResultsGuard>{chart}</ResultsGuard>
+            <ResultsGuard>
+              <Following>{chart}</Following>
+            </ResultsGuard>
           </div>
         )}
       </div>
       <div class={style.results}>
         {preview && (
           <div class={style.slot}>
-            <ResultsGuard>{preview}</ResultsGuard>
+            <ResultsGuard>
+              <Following>{preview}</Following>
+            </ResultsGuard>
           </div>
         )}
-        <RateSuggestions />
-        <ResultsGuard>
-          <SafeBands />
-          <CameraReadout />
-          <LightingReadout />
-        </ResultsGuard>
-        <KeepShare />
+        <LaterResults part="lists" />
       </div>
       <div class={style.report}>
-        <CheckReport />
+        <LaterResults part="report" />
       </div>
     </div>
+  );
+}
+
+/** The lists under the answer, or the report, once their chunk has loaded (lazy-results.ts). */
+function LaterResults({ part }: { part: 'lists' | 'report' }) {
+  const { module, failed } = results.use();
+  if (module) {
+    return part === 'lists' ? (
+      <Following>
+        <module.CheckLists />
+      </Following>
+    ) : (
+      <module.CheckReport />
+    );
+  }
+  if (part === 'report') return null;
+  return (
+    <p class={style.quiet} aria-busy={failed ? undefined : 'true'} data-testid="results-loading">
+      {failed
+        ? 'The rates to try could not be loaded: reload the page to try again.'
+        : 'Working out the rates to try…'}
+    </p>
   );
 }
 
@@ -110,44 +123,5 @@ function CheckWarnings() {
         </NotCurrent>
       )}
     </>
-  );
-}
-
-/** Print and CSV of the check, with the cautions the verdict carries; no CSV while it is withdrawn. */
-function CheckReport() {
-  const refusal = checkProblem.value;
-  const r = check.value;
-  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
-  return (
-    <ReportBar
-      title="Check"
-      cautions={{
-        apparentStillness: r.showSafety || withdrawn,
-        flashRatesHz: r.showPhotosensitivity ? [r.rateHz] : [],
-      }}
-      csv={
-        withdrawn
-          ? undefined
-          : () =>
-              checkCsv(
-                r,
-                partLabel(setup.value, activeIndex(setup.value)),
-                r.samplerKind,
-                flashUnit.value,
-              )
-      }
-    />
-  );
-}
-
-/**
- * Results worked out from the entries, marked not current while one is refused. Reads only the
- * refusals: the results inside follow the check result themselves.
- */
-function ResultsGuard({ children }: { children: ComponentChildren }) {
-  return (
-    <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={checkProblem.value}>
-      {children}
-    </NotCurrent>
   );
 }

@@ -16,9 +16,14 @@ export function useStickyInset(ref: MutableRef<HTMLElement | null>): void {
     const part = ref.current;
     if (!part || typeof ResizeObserver !== 'function') return;
     const root = document.documentElement;
+    let written = '';
     const write = () => {
       const topPx = parseFloat(getComputedStyle(part).top) || 0;
-      root.style.setProperty(PROPERTY, `${Math.ceil(topPx + part.offsetHeight + GAP_PX)}px`);
+      const value = `${Math.ceil(topPx + part.offsetHeight + GAP_PX)}px`;
+      // Only a new height is written: each write restyles the page's root.
+      if (value === written) return;
+      written = value;
+      root.style.setProperty(PROPERTY, value);
     };
     const observer = new ResizeObserver(write);
     observer.observe(part);

@@ -1,7 +1,7 @@
 // What the check screen hands its two pictures: plain values taken from the check result and
 // the set-up, so the wiring can be tested without drawing anything.
 import type { Part, Range, Sampler } from '../../core';
-import type { CheckResult } from '../../state/check';
+import type { CheckAnswer } from '../../state/check';
 import { type SamplerKind, type Setup, activeIndex, corePartOf } from '../../state/model';
 
 /** What the preview draws: one part as one sampler shows it. */
@@ -28,7 +28,7 @@ export interface RateMapInput {
  * last set-up the core accepted). null for steady light: with no flicker there is no sampling,
  * and the part looks as it really turns.
  */
-export function previewInputOf(result: CheckResult, setup: Setup): PreviewInput | null {
+export function previewInputOf(result: CheckAnswer, setup: Setup): PreviewInput | null {
   if (result.lighting && result.lighting.modulationPercent === 0) return null;
   const camera = result.camera;
   return {
@@ -46,7 +46,7 @@ export function previewInputOf(result: CheckResult, setup: Setup): PreviewInput 
  * part being checked takes the values of the check result, so the map agrees with the verdict
  * when the newest entry was refused.
  */
-export function rateMapInputOf(result: CheckResult, setup: Setup): RateMapInput {
+export function rateMapInputOf(result: CheckAnswer, setup: Setup): RateMapInput {
   const active = activeIndex(setup);
   const parts = setup.parts.map((p, i) => {
     const name = p.name.trim() || undefined;

@@ -1,6 +1,7 @@
-// What the check screen shows, computed from the set-up by the core: pure (set-up in, plain
-// result out) so it can be tested without a screen. Codes and numbers only; src/words/check.ts
-// says them in words.
+// What the check screen shows at the top, computed from the set-up by the core: pure (set-up
+// in, plain result out) so it can be tested without a screen. Codes and numbers only;
+// src/words/check.ts says them in words. The rates to try and the bands under it are worked
+// out apart (lists.ts): they cost more, load later and follow a paint behind.
 import {
   apparentMotion,
   blurDegrees,
@@ -21,15 +22,6 @@ import {
 } from '../../core';
 import { activeCorePart, samplerOf, type SamplerKind, type Setup } from '../model';
 import { flickerHzOf, lightWaveOf, samplerRateHz } from '../setup';
-import {
-  bandSummary,
-  creepRates,
-  nearbyLocks,
-  type BandSummary,
-  type CreepMissing,
-  type CreepRate,
-  type SuggestedRate,
-} from './nearby';
 import { isAliased, verdictOf, type Verdict } from './verdict';
 
 export interface CameraResult {
@@ -66,7 +58,8 @@ export interface LightingResult {
 /** Something about the entries worth saying beside the verdict (src/words/check.ts). */
 export type CheckNote = 'rate-outside-range' | 'exposure-capped' | 'readout-too-long';
 
-export interface CheckResult {
+/** The answer at the top of the check screen: what the viewer sees, and the cautions it needs. */
+export interface CheckAnswer {
   samplerKind: SamplerKind;
   sampler: Sampler;
   rateHz: number;
@@ -75,14 +68,6 @@ export interface CheckResult {
   part: Required<Part>;
   motion: ApparentMotion;
   verdict: Verdict;
-  locks: SuggestedRate[];
-  /** Some lock-in rates near the current one freeze the part over too narrow a band to set and hold, and are left out. */
-  narrowLocksLeftOut: boolean;
-  creep: CreepRate[];
-  creepRpm: number;
-  /** Why no creep rate is offered, when none is. */
-  creepMissing?: CreepMissing;
-  bands: BandSummary;
   camera?: CameraResult;
   lighting?: LightingResult;
   /**
@@ -106,7 +91,8 @@ export const SHARP_BLUR_DEG = 1;
 /** Rolling-shutter bend up to this looks straight, degrees (a judgement, docs/physics.md §12). */
 export const STRAIGHT_SKEW_DEG = 2;
 
-function samplerRange(s: Setup, rateHz: number): Range {
+/** The rates the sampler can be set to (a camera's or a light's widened to take in the rate set). */
+export function samplerRange(s: Setup, rateHz: number): Range {
   if (s.samplerKind === 'strobe')
     return { minHz: s.strobe.minFpm / 60, maxHz: s.strobe.maxFpm / 60 };
   const base = s.samplerKind === 'camera' ? CAMERA_RANGE : LIGHTING_RANGE;
@@ -164,8 +150,8 @@ export function lightingResult(
   };
 }
 
-/** Everything the check screen shows for a set-up. Throws the core's InputError for a set-up it refuses. */
-export function computeCheck(s: Setup): CheckResult {
+/** The check screen's answer for a set-up. Throws the core's InputError for a set-up it refuses. */
+export function computeCheckAnswer(s: Setup): CheckAnswer {
   const part = activeCorePart(s);
   const sampler = samplerOf(s.samplerKind);
   const rateHz = samplerRateHz(s);
@@ -176,7 +162,6 @@ export function computeCheck(s: Setup): CheckResult {
 
   const motion = apparentMotion(part, rateHz, { sampler });
   const steadyLight = s.samplerKind === 'lighting' && s.lighting.modulationPercent === 0;
-  const creep = creepRates(part, s.creepRpm, rateHz, range, sampler);
   const camera = s.samplerKind === 'camera' ? cameraResult(s, part, notes) : undefined;
   const lighting =
     s.samplerKind === 'lighting'
@@ -187,7 +172,6 @@ export function computeCheck(s: Setup): CheckResult {
         )
       : undefined;
   const flashes = sampler === 'flash' && !steadyLight;
-  const { locks, narrowLeftOut } = nearbyLocks(part, rateHz, range, sampler);
 
   return {
     samplerKind: s.samplerKind,
@@ -198,12 +182,6 @@ export function computeCheck(s: Setup): CheckResult {
     part,
     motion,
     verdict: verdictOf(motion, part, steadyLight),
-    locks,
-    narrowLocksLeftOut: narrowLeftOut,
-    creep: creep.rates,
-    creepRpm: s.creepRpm,
-    ...(creep.missing === undefined ? {} : { creepMissing: creep.missing }),
-    bands: bandSummary(part, rateHz, range, sampler),
     camera,
     lighting,
     showSafety: !steadyLight && isAliased(motion),

@@ -1,19 +1,23 @@
-// The check screen's state: its result for the set-up on screen, as signals. A refused set-up
-// leaves the last good result on screen (keepLastGood) and says why beside it.
+// The check screen's state: its answer for the set-up on screen, as signals. A refused set-up
+// leaves the last good answer on screen (keepLastGood) and says why beside it. The lists under
+// the answer follow a paint behind (listed.ts, lists.ts).
 import { computed } from '@preact/signals';
 import { defaultSetup } from '../model';
 import { keepLastGood } from '../outcome';
 import { setup } from '../setup';
-import { computeCheck, type CheckResult } from './compute';
+import { computeCheckAnswer, type CheckAnswer } from './compute';
 
 export * from './compute';
-export * from './nearby';
+export * from './listed';
 export * from './verdict';
+export type { BandSummary, CreepMissing, CreepRate, Side, SuggestedRate } from './nearby';
 
-const kept = keepLastGood(() => computeCheck(setup.value));
+const kept = keepLastGood(() => computeCheckAnswer(setup.value));
 
-/** The newest result the core accepted; the default set-up's until the first one was. */
-export const check = computed<CheckResult>(() => kept.result.value ?? computeCheck(defaultSetup));
+/** The newest answer the core accepted; the default set-up's until the first one was. */
+export const check = computed<CheckAnswer>(
+  () => kept.result.value ?? computeCheckAnswer(defaultSetup),
+);
 
 /** The core's refusal of the current set-up, if any (shown above the results). */
 export const checkProblem = kept.problem;

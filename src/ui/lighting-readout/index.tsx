@@ -1,5 +1,5 @@
 import { formatNumber, formatPercent } from '../../words/format';
-import { check, type LightingResult } from '../../state/check';
+import { listedAnswer, type LightingResult } from '../../state/check';
 import { Panel } from '../panel';
 import { RISK_LINE_WORDS } from '../../words/lighting';
 import style from './style.module.css';
@@ -28,7 +28,7 @@ function waveWords(l: LightingResult): string {
  * from the light's harmonics up to 2 kHz.
  */
 export function LightingReadout({ class: extra, lighting }: Props) {
-  const l = lighting ?? check.value.lighting;
+  const l = lighting ?? listedAnswer.value.lighting;
   if (!l) return null;
   const visible = l.svm >= 1;
   const steady = l.modulationPercent === 0;

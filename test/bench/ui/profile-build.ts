@@ -11,6 +11,9 @@ function countRenders(): Plugin {
   return {
     name: 'trueturn-bench-count-renders',
     transform(code, id) {
+      // package.json's "sideEffects" list would let the bundler drop a bare import of the
+      // counter: it is kept by saying it has effects.
+      if (id === counter) return { code, map: null, moduleSideEffects: true };
       if (!id.endsWith('/src/app/main.tsx')) return null;
       return { code: `import ${JSON.stringify(counter)};\n${code}`, map: null };
     },

@@ -16,6 +16,7 @@ import { check } from '../../../src/state/check';
 import { defaultSetup } from '../../../src/state/model';
 import { flashUnit, replaceSetup, setup, speedUnit } from '../../../src/state/setup';
 import { startSession } from '../../../src/state/session';
+import { listsCaughtUp } from '../../helpers/screen-queries';
 
 beforeAll(async () => {
   await startSession();
@@ -89,7 +90,7 @@ describe('the check screen', () => {
     expect(verdict()).toBe('Looks still');
   });
 
-  test('a speed made invalid after a good one withdraws the verdict where it stands and marks every list not current', () => {
+  test('a speed made invalid after a good one withdraws the verdict where it stands and marks every list not current', async () => {
     // A fan at 1750 rpm, 6 blades, strobe 1748 flashes/min; then "1750x".
     type('Speed', '1750');
     type('Flash rate', '1748');
@@ -100,6 +101,7 @@ describe('the check screen', () => {
     expect(verdict()).toBe('No verdict until Speed is fixed');
     expect(within(panel).getByText(/Speed: "x" is not a unit for speed/)).toBeTruthy();
     // Every list worked out from the speed says so, and is out of reach while it does.
+    await listsCaughtUp();
     const marks = screen.getAllByTestId('not-current');
     expect(marks.length).toBeGreaterThanOrEqual(4); // rate map, preview, locks, creep, bands
     for (const m of marks) expect(m.textContent).toMatch(/^Not current: fix Speed first/);
@@ -110,6 +112,7 @@ describe('the check screen', () => {
     expect(document.activeElement).toBe(field('Speed'));
     type('Speed', '1750');
     expect(verdict()).toBe('Creeping forward');
+    await listsCaughtUp();
     expect(screen.queryAllByTestId('not-current')).toHaveLength(0);
   });
 
@@ -128,9 +131,10 @@ describe('the check screen', () => {
     expect(screen.getByTestId('verdict').closest('section')!.textContent).not.toMatch(/17 rpm/);
   });
 
-  test('a bad creep speed marks only the creep list not current; the verdict stands', () => {
+  test('a bad creep speed marks only the creep list not current; the verdict stands', async () => {
     type('Creep speed wanted', 'slow');
     expect(verdict()).toBe('Looks still');
+    await listsCaughtUp();
     const marks = screen.getAllByTestId('not-current');
     expect(marks).toHaveLength(1);
     expect(marks[0].textContent).toMatch(/fix Creep speed wanted/);
@@ -144,7 +148,7 @@ describe('the check screen', () => {
     expect(screen.getAllByTestId('not-current')[0].textContent).toMatch(/fix Tolerance/);
   });
 
-  test('nothing on screen says NaN or Infinity, whatever is typed', () => {
+  test('nothing on screen says NaN or Infinity, whatever is typed', async () => {
     for (const text of ['', 'abc', 'NaN', '1e999', '-', '0', '-0', '1e-320', '99999999999']) {
       for (const label of [
         'Speed',
@@ -157,15 +161,17 @@ describe('the check screen', () => {
       ]) {
         type(label, text);
       }
+      await listsCaughtUp();
       const shown = document.body.textContent!.replace(/"[^"]*"/g, '');
       expect(shown, text).not.toMatch(/NaN|Infinity/);
     }
   });
 
-  test('tapping a suggested lock-in rate sets the flash rate', () => {
+  test('tapping a suggested lock-in rate sets the flash rate', async () => {
     type('Speed', '3600');
     type('Blades or marks', '1');
     type('Flash rate', '3500');
+    await listsCaughtUp();
     const list = screen.getByTestId('lock-list');
     const single = within(list)
       .getAllByRole('button')
@@ -177,11 +183,12 @@ describe('the check screen', () => {
     expect(verdict()).toBe('Looks still');
   });
 
-  test('tapping the creep rate makes the part creep forward at the wanted speed', () => {
+  test('tapping the creep rate makes the part creep forward at the wanted speed', async () => {
     type('Speed', '1800');
     type('Blades or marks', '1');
     type('Flash rate', '2000');
     type('Creep speed wanted', '30');
+    await listsCaughtUp();
     const button = within(screen.getByTestId('creep-list'))
       .getAllByRole('button')
       .find((b) => b.textContent?.startsWith('1,770 fpm'));
@@ -215,8 +222,9 @@ describe('the check screen', () => {
     expect(setup.value.strobe.minFpm).toBe(30);
   });
 
-  test('a camera shows blur per frame and the rolling-shutter bend from the core', () => {
+  test('a camera shows blur per frame and the rolling-shutter bend from the core', async () => {
     fireEvent.click(screen.getByLabelText('Camera'));
+    await listsCaughtUp();
     const t = exposureFromShutterAngle(180, 30000 / 1001);
     const blur = blurDegrees(1770 / 60, t);
     expect(screen.getByTestId('blur').textContent).toContain(`${formatNumber(blur)}°`);
@@ -247,8 +255,9 @@ describe('the check screen', () => {
     expect(setup.value.camera.exposure).toEqual({ mode: 'time', seconds: 1 / 1000 });
   });
 
-  test('lighting shows its flicker risk and visibility', () => {
+  test('lighting shows its flicker risk and visibility', async () => {
     fireEvent.click(screen.getByLabelText('Lighting'));
+    await listsCaughtUp();
     expect(screen.getByTestId('flicker-risk').textContent).toBe('Above the low-risk line');
     type('Modulation (percent flicker)', '0');
     expect(verdict()).toBe('Steady light: true motion');

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { computeCheck } from '../../../src/state/check';
+import { computeCheck } from '../../../src/state/check/lists';
 import { defaultSetup, type Setup } from '../../../src/state/model';
 import { previewInputOf, rateMapInputOf } from '../../../src/screens/check/widget-inputs';
 

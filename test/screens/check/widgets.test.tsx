@@ -8,6 +8,7 @@ import { apparentMotion } from '../../../src/core';
 import { defaultSetup, type Setup } from '../../../src/state/model';
 import { replaceSetup, setSamplerRateHz, setup } from '../../../src/state/setup';
 import { CheckScreen } from '../../../src/screens/check';
+import { listsCaughtUp } from '../../helpers/screen-queries';
 
 const stillness = /still turning at full speed/;
 
@@ -67,6 +68,7 @@ describe('the check screen’s preview and rate map', () => {
       strobe: { rateFpm: 125 * 60, minFpm: 30, maxFpm: 12000 },
     });
     await waitFor(() => expect(screen.queryByTestId('safety-notice')).toBeNull());
+    await listsCaughtUp();
     expect(apparentMotion({ speedHz: 60, symmetry: 1 }, 125).look).toBe('true');
     expect(within(preview).queryByText(stillness)).toBeNull();
     expect(within(map).getByText(stillness)).toBeTruthy();
@@ -88,6 +90,7 @@ describe('the check screen’s preview and rate map', () => {
     });
     // Once the map is there, the widgets have loaded.
     await screen.findByRole('slider', { name: /Rate map/ });
+    await listsCaughtUp();
     expect(screen.getByText(/Steady light samples nothing/)).toBeTruthy();
     expect(screen.queryByRole('region', { name: 'Preview of the turning part' })).toBeNull();
   });

@@ -1,5 +1,5 @@
 import { formatExposure, formatNumber } from '../../../words/format';
-import { check } from '../../../state/check';
+import { listedAnswer } from '../../../state/check';
 import { BLUR_WORDS, SKEW_WORDS } from '../../../words/check';
 import { Panel } from '../../../ui/panel';
 import style from './style.module.css';
@@ -10,7 +10,7 @@ interface Props {
 
 /** For a camera: blur per frame and the rolling-shutter bend. */
 export function CameraReadout({ class: extra }: Props) {
-  const c = check.value.camera;
+  const c = listedAnswer.value.camera;
   if (!c) return null;
   return (
     <Panel title="In each frame" id="camera-readout" class={extra}>

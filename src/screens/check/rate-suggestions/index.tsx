@@ -1,9 +1,11 @@
+import { computed } from '@preact/signals';
 import { formatNumber, numberForField } from '../../../words/format';
 import { readCreepRpm } from '../../../ui/fields';
 import { formatRate, formatRateSpan, type FlashUnit } from '../../../words/rates';
 import type { SamplerKind } from '../../../state/model';
 import { memoWith } from '../../../ui/memo';
-import { check, checkProblem, type SuggestedRate } from '../../../state/check';
+import { checkProblem, type SuggestedRate } from '../../../state/check';
+import { listedCheck } from '../../../state/check/lists';
 import { problemsAmong } from '../../../state/fieldProblems';
 import { CREEP_FIELDS, RESULT_FIELDS } from '../field-ids';
 import { NotCurrent } from '../../../ui/not-current';
@@ -18,9 +20,12 @@ interface Props {
   class?: string;
 }
 
+/** The creep speed field's value: read apart, so other entries do not re-render the list at once. */
+const creepRpmOnScreen = computed(() => setup.value.creepRpm);
+
 /** Rates worth tapping: the nearest lock-in rates, and the rate for a slow forward creep. */
 export function RateSuggestions({ class: extra }: Props) {
-  const r = check.value;
+  const r = listedCheck.value;
   const unit = flashUnit.value;
   const kind = r.samplerKind;
   const rate = (hz: number) => formatRate(hz, kind, unit);
@@ -69,7 +74,7 @@ export function RateSuggestions({ class: extra }: Props) {
         <NumberField
           id="creep"
           label="Creep speed wanted"
-          value={setup.value.creepRpm}
+          value={creepRpmOnScreen.value}
           toText={numberForField}
           read={readCreepRpm}
           onValue={setCreepRpm}

@@ -1,7 +1,7 @@
 import { defaultLookOptions } from '../../../core';
 import { formatNumber, formatPercent } from '../../../words/format';
 import { formatRateSpan, settingStepWords } from '../../../words/rates';
-import { check } from '../../../state/check';
+import { listedCheck } from '../../../state/check/lists';
 import { flashUnit, setSamplerRateHz } from '../../../state/setup';
 import { Panel } from '../../../ui/panel';
 import { bandWords } from '../../../words/bands';
@@ -20,7 +20,7 @@ const NEARLY_STILL_RPM = defaultLookOptions.nearlyStillHz * 60;
  * every speed within the tolerance), and where the rate lies now. `safe` in the core.
  */
 export function SafeBands({ class: extra }: Props) {
-  const r = check.value;
+  const r = listedCheck.value;
   const unit = flashUnit.value;
   const span = (from: number, to: number) => formatRateSpan(from, to, r.samplerKind, unit);
   const b = r.bands;

@@ -1,0 +1,37 @@
+// Wrappers for what the check screen works out from its entries.
+import type { ComponentChildren } from 'preact';
+import { checkProblem, listsBehind } from '../../state/check';
+import { problemsAmong } from '../../state/fieldProblems';
+import { NotCurrent } from '../../ui/not-current';
+import { RESULT_FIELDS } from './field-ids';
+import style from './style.module.css';
+
+/**
+ * Results worked out from the entries, marked not current while one is refused. Reads only the
+ * refusals: the results inside follow the check result themselves.
+ */
+export function ResultsGuard({ children }: { children: ComponentChildren }) {
+  return (
+    <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={checkProblem.value}>
+      {children}
+    </NotCurrent>
+  );
+}
+
+/**
+ * Results that follow the entries a paint behind (src/state/check/listed.ts): from a keystroke
+ * until they catch up they are marked busy and take no taps, so nothing acts on a rate worked out
+ * for the set-up before. The refusals above them come at once (ResultsGuard).
+ */
+export function Following({ children }: { children: ComponentChildren }) {
+  const behind = listsBehind.value;
+  return (
+    <div
+      class={style.following}
+      aria-busy={behind ? 'true' : undefined}
+      data-behind={behind ? 'true' : undefined}
+    >
+      {children}
+    </div>
+  );
+}
