@@ -3,12 +3,16 @@ import { defineConfig } from 'vite';
 import preact from '@preact/preset-vite';
 import { VitePWA } from 'vite-plugin-pwa';
 import { contentSecurityPolicy } from './scripts/content-security-policy.ts';
+import { firstPaintChunk } from './scripts/first-paint-chunk.ts';
+
+const firstPaint = firstPaintChunk();
 
 // The app is fully static and must work with no network after the first visit:
 // every built file and icon is precached by the generated service worker.
 export default defineConfig({
   plugins: [
     preact(),
+    firstPaint.plugin,
     // The built page allows scripts, styles, workers and connections from its own origin only.
     contentSecurityPolicy(),
     VitePWA({
@@ -62,6 +66,21 @@ export default defineConfig({
       // bundler's default.
       treeshake: {
         moduleSideEffects: (id) => (id.includes('/src/core/') ? false : undefined),
+      },
+      // What the first screen needs, in one script and one style sheet (scripts/first-paint-chunk.ts).
+      output: {
+        codeSplitting: {
+          groups: [
+            {
+              name: 'first-paint',
+              test: (id) =>
+                firstPaint.holds(id) &&
+                !id.includes('/src/core/') &&
+                !id.endsWith('/src/app/main.tsx'),
+              priority: 10,
+            },
+          ],
+        },
       },
     },
   },

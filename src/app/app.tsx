@@ -1,7 +1,7 @@
 import type { ComponentChildren } from 'preact';
 import { currentScreen } from '../state/navigation';
-import { acceptOfferedShare, offeredShare, sessionMessage, storageOpened } from '../state/session';
-import { storageMessage, storageStatus } from '../state/store';
+import { offeredShare, sessionMessage, storageOpened } from '../state/sessionNotices';
+import { storageMessage, storageStatus } from '../state/store/status';
 import { Banner } from './banner';
 import { AppFrame } from './frame';
 import { screenEntry, toolScreens, type ScreenEntry } from './screen-list';
@@ -11,6 +11,11 @@ import './theme/print.css';
 interface Props {
   /** The service-worker notice (main.tsx passes it; tests leave it out). */
   updateNotice?: ComponentChildren;
+}
+
+/** Opens the offered machine (the session's code is loaded by then: it made the offer). */
+function acceptOfferedShare(): void {
+  void import('../state/session').then((session) => session.acceptOfferedShare());
 }
 
 /** Page layout and navigation: the frame, the notices, and the screen the tab bar chose. */

@@ -58,6 +58,34 @@ export function buildPixelTables(
   return tables;
 }
 
+/** Tables built lately, newest last: the preview's two canvases share one size. */
+const recent: Array<{ hubRadius: number; tipRadius: number; tables: PixelTables }> = [];
+const RECENT_KEPT = 2;
+
+/**
+ * The tables for a canvas, shared by every renderer that asks for the same size and radii:
+ * building them is the costliest step of a first frame, and they are only ever read.
+ */
+export function sharedPixelTables(
+  width: number,
+  height: number,
+  hubRadius: number,
+  tipRadius: number,
+): PixelTables {
+  const found = recent.find(
+    (r) =>
+      r.tables.width === width &&
+      r.tables.height === height &&
+      r.hubRadius === hubRadius &&
+      r.tipRadius === tipRadius,
+  );
+  if (found) return found.tables;
+  const tables = buildPixelTables(width, height, hubRadius, tipRadius);
+  recent.push({ hubRadius, tipRadius, tables });
+  if (recent.length > RECENT_KEPT) recent.shift();
+  return tables;
+}
+
 function clamp01(v: number): number {
   return v < 0 ? 0 : v > 1 ? 1 : v;
 }

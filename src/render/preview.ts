@@ -9,7 +9,7 @@
 // long-running clock loses no precision. The part's angle at time t is f·t turns.
 import { drawFlashes, drawSwept } from './kernels';
 import { bladeDutyFor, defaultPreviewLook, type PreviewLook } from './look';
-import { buildPixelTables, type PixelTables } from './pixelTables';
+import { sharedPixelTables, type PixelTables } from './pixelTables';
 import { checkScene, sampleIndexAt, type PreviewScene } from './scene';
 
 /** Anything shaped like ImageData: RGBA bytes, row by row. */
@@ -120,7 +120,7 @@ export class PreviewRenderer {
   private tablesFor(width: number, height: number): PixelTables {
     const t = this.tables;
     if (t && t.width === width && t.height === height) return t;
-    this.tables = buildPixelTables(width, height, this.look.hubRadius, this.look.tipRadius);
+    this.tables = sharedPixelTables(width, height, this.look.hubRadius, this.look.tipRadius);
     return this.tables;
   }
 

@@ -6,7 +6,7 @@ import { InputError } from '../core';
 import { withChainSpeeds } from './driveChain';
 import { withDerivedSpeed, type OriginDetail, type OriginMethod, type Setup } from './model';
 import { setup } from './setup';
-import { DataError } from './validate';
+import { DataError } from './read';
 
 /** A speed worked out by a tool, with how. `at` defaults to now. */
 export interface DerivedSpeedInput {

@@ -29,7 +29,8 @@ import {
 } from './model';
 import { keepLastGood } from './outcome';
 import { defaultMotor, defaultWheelInputs, setup } from './setup';
-import { DataError, requirePartRoom } from './validate';
+import { requirePartRoom } from './partRoom';
+import { DataError } from './read';
 
 /** Where a part's speed comes from. */
 export type SpeedSource = 'typed' | 'motor' | 'wheel' | 'drive';

@@ -1,28 +1,21 @@
 // The session: where the machine on screen comes from when the page opens (a share link, the
 // last visit's working copy, a fresh machine), share links opened while the app is open, and
 // what the page says about them. A refused link never replaces what was on screen.
-import { computed, signal } from '@preact/signals';
+import { computed } from '@preact/signals';
 import { loadMachines, machines } from './machines';
 import type { MachineContent } from './model';
 import { decodeShareFragment, type DecodeShareResult } from './shareLink';
 import { loadAll, openStore, type WorkRecord } from './store';
+import { offeredShare, sessionMessage, storageOpened } from './sessionNotices';
 import { header, keepWork, loadWork, openMachineId, workRecord } from './work';
 
 export { openMachineId } from './work';
+export { offeredShare, sessionMessage, storageOpened } from './sessionNotices';
 
 /** Name of the machine on screen, or undefined while it has none (report headers). */
 export const openMachineName = computed<string | undefined>(
   () => header.value.name.trim() || undefined,
 );
-
-/** A message about how the session opened (a refused share link), for the top of the screen. */
-export const sessionMessage = signal<{ kind: 'info' | 'problem'; text: string } | null>(null);
-
-/** A shared machine opened while the app was open, offered before it replaces anything. */
-export const offeredShare = signal<MachineContent | null>(null);
-
-/** True once storage has been opened (or found unusable), so its status is worth showing. */
-export const storageOpened = signal(false);
 
 /** Where the starting machine comes from: the page address, and the working copy kept on the device. */
 export interface SessionSources {

@@ -39,19 +39,10 @@ import {
   type StrobeSpec,
   type WheelSpec,
 } from './model';
+import { MAX_PARTS } from './partRoom';
 
-/** Most parts one set-up may hold: enough for a drive train, small enough to fit a share link. */
-export const MAX_PARTS = 20;
+export { MAX_PARTS, requirePartRoom } from './partRoom';
 
-/** Throws DataError when a set-up has no room for one more part (it holds MAX_PARTS). */
-export function requirePartRoom(s: Setup): void {
-  if (s.parts.length >= MAX_PARTS) {
-    throw new DataError(
-      'parts',
-      `A set-up holds at most ${MAX_PARTS} parts; remove one before adding another.`,
-    );
-  }
-}
 const ID = /^[A-Za-z0-9_-]{1,100}$/;
 
 function partFrom(x: unknown, path: string, index: number): PartSpec {

@@ -73,9 +73,14 @@ export async function main(args: readonly string[]): Promise<void> {
     await server.stop();
   }
   if (typingOnly) {
-    for (const [name, runs] of [['4×', throttled], ['unthrottled', unthrottled]] as const) {
+    for (const [name, runs] of [
+      ['4×', throttled],
+      ['unthrottled', unthrottled],
+    ] as const) {
       const all = runs.flatMap((r) => r.keyToRafMs);
-      log(`${name}: ${typingLine({ ...runs[0], keyToRafMs: all, keyToFrameDoneMs: runs.flatMap((r) => r.keyToFrameDoneMs), longTasksMs: runs.flatMap((r) => r.longTasksMs) })} (all runs pooled)`);
+      log(
+        `${name}: ${typingLine({ ...runs[0], keyToRafMs: all, keyToFrameDoneMs: runs.flatMap((r) => r.keyToFrameDoneMs), longTasksMs: runs.flatMap((r) => r.longTasksMs) })} (all runs pooled)`,
+      );
     }
     return;
   }
