@@ -116,6 +116,30 @@ describe('the check screen', () => {
     expect(screen.queryAllByTestId('not-current')).toHaveLength(0);
   });
 
+  test('the answer follows each keystroke at once; the lists follow a paint later, marked busy until then', async () => {
+    await listsCaughtUp();
+    type('Speed', '3600');
+    type('Blades or marks', '1');
+    type('Flash rate', '3500');
+    // The answer is new at once: one mark at 60 rev/s under 3500 flashes/min.
+    const m = apparentMotion({ speedHz: 60, symmetry: 1 }, 3500 / 60);
+    expect(screen.getByTestId('apparent-speed').textContent).toBe(
+      formatRpmWithDirection(m.apparentHz * 60, 1),
+    );
+    expect(screen.getByTestId('true-speed').textContent).toBe('3,600 rpm');
+    // The lists still hold the rates worked out for the set-up before: they say they are busy
+    // and take no taps (pointer-events: none in the style sheet) until they catch up.
+    const behind = document.querySelectorAll('[data-behind="true"]');
+    expect(behind.length).toBeGreaterThanOrEqual(1);
+    for (const b of behind) expect(b.getAttribute('aria-busy')).toBe('true');
+    expect(within(screen.getByTestId('lock-list')).queryByText(/^3,600 fpm/)).toBeNull();
+    await listsCaughtUp();
+    expect(document.querySelectorAll('[data-behind]')).toHaveLength(0);
+    expect(
+      within(screen.getByTestId('lock-list')).getAllByText(/^3,600 fpm/).length,
+    ).toBeGreaterThan(0);
+  });
+
   test('"17OO" typed key by key never shows the verdict for 17 rpm once the text is refused', () => {
     // The letter O typed for a zero.
     const seen: string[] = [];
