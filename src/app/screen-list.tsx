@@ -7,9 +7,9 @@ import { CHECK_SCREEN } from '../state/navigation';
 import { lazyModule } from '../ui/lazyModule';
 
 /**
- * The Machines screen and the five field tools load after the first paint, keeping the first screen's JavaScript small;
- * the service worker precaches their chunk, so they open offline too. main.tsx asks for them
- * once the first screen is up, so a tap on their tab rarely waits.
+ * The Machines screen and the five field tools load on demand, keeping the first screen's
+ * JavaScript small; the service worker precaches their chunk, so they open offline too. The tab
+ * bar asks for them as soon as a finger or the keyboard reaches a tab, so a tap rarely waits.
  */
 export const toolScreens = lazyModule(() => import('./tool-screens'));
 

@@ -22,7 +22,9 @@ export function useFrameLoop(
     const element = target.current;
     if (!element || typeof requestAnimationFrame !== 'function') return;
     let frame = 0;
-    let onScreen = true;
+    // Off screen until the observer's first report says otherwise (it always gives one): a
+    // widget below the fold draws nothing while the page opens.
+    let onScreen = typeof IntersectionObserver !== 'function';
     let wanted = true;
     const visible = () => onScreen && document.visibilityState !== 'hidden';
     const run = (now: number) => {

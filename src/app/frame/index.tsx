@@ -1,7 +1,7 @@
 import type { ComponentChildren } from 'preact';
 import { useEffect, useRef } from 'preact/hooks';
 import { openScreen } from '../../state/navigation';
-import { SCREENS, screenEntry } from '../screen-list';
+import { SCREENS, screenEntry, toolScreens } from '../screen-list';
 import style from './style.module.css';
 
 interface Props {
@@ -10,6 +10,11 @@ interface Props {
   /** The id of the open screen: its tab is marked. */
   current: string;
   children: ComponentChildren;
+}
+
+/** Starts fetching the tools' chunk (a failed fetch is tried again when a screen asks). */
+function prefetchTools(): void {
+  toolScreens.load().catch(() => undefined);
 }
 
 /**
@@ -73,11 +78,15 @@ export function AppFrame({ notices, current, children }: Props) {
               class={style.tab}
               aria-current={t.id === screen ? 'page' : undefined}
               onClick={() => openScreen(t.id)}
+              // The tools load when a finger or the keyboard reaches a tab, not with the first
+              // screen: a tap rarely waits, and a page opened only to check costs nothing more.
+              onPointerDown={prefetchTools}
               // Chromium leaves a tab that peeks in at the edge where it is, under the fade:
               // bring the whole tab into view when the keyboard reaches it.
-              onFocus={(e) =>
-                e.currentTarget.scrollIntoView?.({ block: 'nearest', inline: 'nearest' })
-              }
+              onFocus={(e) => {
+                prefetchTools();
+                e.currentTarget.scrollIntoView?.({ block: 'nearest', inline: 'nearest' });
+              }}
             >
               <svg class={style.icon} viewBox="0 0 24 24" aria-hidden="true">
                 <path d={t.icon} />

@@ -20,8 +20,10 @@ export function ResultsGuard({ children }: { children: ComponentChildren }) {
 
 /**
  * Results that follow the entries a paint behind (src/state/check/listed.ts): from a keystroke
- * until they catch up they are marked busy and take no taps, so nothing acts on a rate worked out
- * for the set-up before. The refusals above them come at once (ResultsGuard).
+ * until they catch up they are marked busy and a tap on them does nothing, so nothing acts on a
+ * rate worked out for the set-up before. The refusals above them come at once (ResultsGuard).
+ * The tap is stopped here rather than with a style: a style that changes on every keystroke
+ * would restyle every list under it twice a key.
  */
 export function Following({ children }: { children: ComponentChildren }) {
   const behind = listsBehind.value;
@@ -30,8 +32,15 @@ export function Following({ children }: { children: ComponentChildren }) {
       class={style.following}
       aria-busy={behind ? 'true' : undefined}
       data-behind={behind ? 'true' : undefined}
+      onClickCapture={ignoreWhileBehind}
     >
       {children}
     </div>
   );
+}
+
+function ignoreWhileBehind(event: Event): void {
+  if (!listsBehind.peek()) return;
+  event.preventDefault();
+  event.stopPropagation();
 }

@@ -6,6 +6,7 @@
 import { computed, effect, signal } from '@preact/signals';
 import { defaultSetup, type Setup } from '../model';
 import { keepLastGood } from '../outcome';
+import { afterNextPaint } from '../afterNextPaint';
 import { setup } from '../setup';
 import { computeCheckAnswer, type CheckAnswer } from './compute';
 
@@ -21,26 +22,6 @@ const kept = keepLastGood(() => computeCheckAnswer(listedSetup.value));
 export const listedAnswer = computed<CheckAnswer>(
   () => kept.result.value ?? computeCheckAnswer(defaultSetup),
 );
-
-/**
- * Runs `work` in a task after the next paint: a frame callback hands it to a task, which the
- * browser runs once that frame is drawn. A page that draws no frames (hidden, or no
- * requestAnimationFrame) runs it after a short wait instead.
- */
-function afterNextPaint(work: () => void): void {
-  let done = false;
-  const once = () => {
-    if (done) return;
-    done = true;
-    work();
-  };
-  const fallback = setTimeout(once, 100);
-  if (typeof requestAnimationFrame !== 'function') return;
-  requestAnimationFrame(() => {
-    clearTimeout(fallback);
-    setTimeout(once, 0);
-  });
-}
 
 let catchingUp = false;
 effect(() => {

@@ -8,7 +8,7 @@
 //    function (CPU slowdown stretches a profile unevenly, so it is recorded at 1×), and which
 //    components render how often per key;
 // and keeps the traces and CPU profiles for Chrome DevTools.
-import { writeFileSync } from 'node:fs';
+import { existsSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { CDPSession } from 'playwright-core';
 import { benchOutputDir, buildForBench, serveBench } from './server';
@@ -102,7 +102,8 @@ export async function profileRun(log: Log): Promise<void> {
   );
   for (const file of firstPaintFiles(sourceMapDir)) {
     log(`  ${file.file}: ${(file.gzipBytes / 1000).toFixed(1)} kB gzip (${file.why})`);
-    if (!file.file.endsWith('.js')) continue;
+    // The bundler's own runtime chunk comes with no source map: nothing to break down.
+    if (!file.file.endsWith('.js') || !existsSync(join(sourceMapDir, `${file.file}.map`))) continue;
     for (const m of chunkModules(join(sourceMapDir, file.file)).filter((x) => x.gzipKb >= 0.3)) {
       log(`    ${m.gzipKb.toFixed(1).padStart(5)} kB  ${m.module}`);
     }

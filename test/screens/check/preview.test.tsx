@@ -1,9 +1,30 @@
 // @vitest-environment happy-dom
-import { cleanup, fireEvent, render, screen } from '@testing-library/preact';
-import { afterEach, describe, expect, it } from 'vitest';
+import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/preact';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { Preview } from '../../../src/screens/check/preview';
 
-afterEach(cleanup);
+/**
+ * happy-dom's IntersectionObserver never reports. This one reports each observed element once,
+ * as a browser does first, on screen or not as `onScreen` says.
+ */
+let onScreen = true;
+class ReportingObserver {
+  constructor(private readonly report: (entries: Array<{ isIntersecting: boolean }>) => void) {}
+  observe() {
+    queueMicrotask(() => this.report([{ isIntersecting: onScreen }]));
+  }
+  disconnect() {}
+}
+
+beforeEach(() => {
+  onScreen = true;
+  vi.stubGlobal('IntersectionObserver', ReportingObserver);
+});
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
 
 // A fictional packing-line fan: 6 blades at 1780 rpm.
 const fan = { speedHz: 1780 / 60, symmetry: 6 };
@@ -16,22 +37,28 @@ describe('Preview', () => {
     expect(screen.getByRole('img', { name: 'As it really turns' })).toBeTruthy();
   });
 
-  it('steps one flash at a time and shows the sample count and the part’s clock', () => {
+  it('steps one flash at a time and shows the sample count and the part’s clock', async () => {
     render(<Preview part={fan} sampler="flash" rateHz={100} exposureS={0} />);
     const next = screen.getByRole('button', { name: 'Next flash' });
     fireEvent.click(next);
     fireEvent.click(next);
     fireEvent.click(next);
     expect(screen.getByRole('button', { name: 'Play' }).getAttribute('aria-pressed')).toBe('false');
-    // The counter follows on the next animation frame.
-    return new Promise<void>((resolve) =>
-      requestAnimationFrame(() => {
-        expect(screen.getByTestId('preview-counter').textContent).toBe(
-          'Flash 3 · 0.03 s · real time',
-        );
-        resolve();
-      }),
+    // The counter follows with the next frame drawn (once the preview is known to be on screen).
+    await waitFor(() =>
+      expect(screen.getByTestId('preview-counter').textContent).toBe(
+        'Flash 3 · 0.03 s · real time',
+      ),
     );
+  });
+
+  it('draws nothing while it is off screen', async () => {
+    onScreen = false;
+    render(<Preview part={fan} sampler="flash" rateHz={100} exposureS={0} />);
+    fireEvent.click(screen.getByRole('button', { name: 'Next flash' }));
+    for (let i = 0; i < 4; i++) await new Promise((resolve) => requestAnimationFrame(resolve));
+    // Nothing was drawn: the counter still holds what the first render wrote.
+    expect(screen.getByTestId('preview-counter').textContent).toBe('Flash 0 · 0 s · real time');
   });
 
   it('names frames for a camera and offers slowed playback', () => {
