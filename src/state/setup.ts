@@ -34,6 +34,19 @@ export const flashUnit = signal<'fpm' | 'Hz'>('fpm');
 /** The part being checked. */
 export const activePart = computed<PartSpec>(() => activePartOf(setup.value));
 
+// Slices of the set-up: a form that reads one re-renders when that slice changes, not on
+// every keystroke elsewhere (the setters keep untouched slices as they were).
+/** What looks at the part. */
+export const samplerKindShown = computed<SamplerKind>(() => setup.value.samplerKind);
+/** The strobe's settings. */
+export const strobeShown = computed(() => setup.value.strobe);
+/** The camera's settings. */
+export const cameraShown = computed<CameraSpec>(() => setup.value.camera);
+/** The lighting's settings. */
+export const lightingShown = computed<LightingSpec>(() => setup.value.lighting);
+/** Index of the part being checked. */
+export const activeIndexShown = computed<number>(() => activeIndex(setup.value));
+
 /** Replaces the whole set-up (opening a machine, a share link, a stored session). */
 export function replaceSetup(next: Setup): void {
   setup.value = copySetup(next);

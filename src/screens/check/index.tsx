@@ -82,9 +82,12 @@ function LaterResults({ part }: { part: 'lists' | 'report' }) {
   const { module, failed } = results.use();
   if (module) {
     return part === 'lists' ? (
-      <Following>
-        <module.CheckLists />
-      </Following>
+      <>
+        <Following>
+          <module.CheckLists />
+        </Following>
+        <module.KeepShare />
+      </>
     ) : (
       <module.CheckReport />
     );

@@ -27,10 +27,12 @@ export function CheckLists() {
         <CameraReadout />
         <LightingReadout />
       </ResultsGuard>
-      <KeepShare />
     </>
   );
 }
+
+/** Keeping and sharing the machine: it works on the set-up on screen, never a paint behind. */
+export { KeepShare };
 
 /** Print and CSV of the check, with the cautions the verdict carries; no CSV while it is withdrawn. */
 export function CheckReport() {

@@ -8,7 +8,7 @@ import {
   setMainsHz,
   setModulationPercent,
   setWaveform,
-  setup,
+  lightingShown,
 } from '../../state/setup';
 import { ChoiceGroup } from '../choice-group';
 import { NumberField } from '../number-field';
@@ -31,7 +31,7 @@ const WAVEFORM_NOTES: Record<LightWaveform, string> = {
 
 /** Mains, flicker, modulation and waveform of the set-up's lighting (also used by the lighting check). */
 export function LightingFields() {
-  const lighting = setup.value.lighting;
+  const lighting = lightingShown.value;
   const waveform = lighting.waveform ?? 'sine';
   return (
     <div class={style.fields}>

@@ -6,7 +6,6 @@ import { readFeatures, readSpeedRpm, readTolerancePercent } from '../fields';
 import { applyDerivedSpeed } from '../../state/derivedSpeed';
 import {
   PART_KINDS,
-  activeIndex,
   kindOf,
   type PartKind,
   type PartSpec,
@@ -21,7 +20,7 @@ import {
   setSpeedRpm,
   setTolerancePercent,
   setWheel,
-  setup,
+  activeIndexShown,
   speedUnit,
 } from '../../state/setup';
 import { MotorFields } from '../motor-fields';
@@ -59,7 +58,7 @@ function motorGivenOf(part: PartSpec): MotorGiven {
  */
 export function PartForm({ class: extra }: Props) {
   const part = activePart.value;
-  const index = activeIndex(setup.value);
+  const index = activeIndexShown.value;
   const unit = speedUnit.value;
   const motor = part.motor;
   const kind = kindOf(part);

@@ -1,7 +1,7 @@
 import { InputError } from '../../core';
 import { readFlashRateFpm } from '../fields';
 import { numberForField } from '../../words/format';
-import { flashUnit, setStrobeRange, setup } from '../../state/setup';
+import { flashUnit, setStrobeRange, strobeShown } from '../../state/setup';
 import { NumberField } from '../number-field';
 import style from './style.module.css';
 
@@ -18,7 +18,7 @@ interface Props {
  * One pair of fields for every screen that edits it: each refuses an empty or inverted range.
  */
 export function StrobeRangeFields({ idPrefix, minLabel, maxLabel }: Props) {
-  const strobe = setup.value.strobe;
+  const strobe = strobeShown.value;
   const unit = flashUnit.value;
   const toText = (fpm: number) => numberForField(unit === 'fpm' ? fpm : fpm / 60);
   const unitWord = unit === 'fpm' ? 'fpm' : 'Hz';
@@ -32,11 +32,11 @@ export function StrobeRangeFields({ idPrefix, minLabel, maxLabel }: Props) {
         toText={toText}
         read={(text) => {
           const v = readFlashRateFpm(text, unit, 'lowest rate');
-          if (v >= setup.peek().strobe.maxFpm)
+          if (v >= strobeShown.peek().maxFpm)
             throw new InputError('lowest rate', 'The lowest rate must be below the highest.');
           return v;
         }}
-        onValue={(v) => setStrobeRange(v, setup.peek().strobe.maxFpm)}
+        onValue={(v) => setStrobeRange(v, strobeShown.peek().maxFpm)}
         unit={unitWord}
       />
       <NumberField
@@ -47,11 +47,11 @@ export function StrobeRangeFields({ idPrefix, minLabel, maxLabel }: Props) {
         toText={toText}
         read={(text) => {
           const v = readFlashRateFpm(text, unit, 'highest rate');
-          if (v <= setup.peek().strobe.minFpm)
+          if (v <= strobeShown.peek().minFpm)
             throw new InputError('highest rate', 'The highest rate must be above the lowest.');
           return v;
         }}
-        onValue={(v) => setStrobeRange(setup.peek().strobe.minFpm, v)}
+        onValue={(v) => setStrobeRange(strobeShown.peek().minFpm, v)}
         unit={unitWord}
       />
     </div>

@@ -15,7 +15,9 @@ import {
   setSamplerKind,
   setShutterAngle,
   setStrobeRateFpm,
-  setup,
+  cameraShown,
+  samplerKindShown,
+  strobeShown,
 } from '../../../state/setup';
 import { ChoiceGroup } from '../../../ui/choice-group';
 import { NumberField } from '../../../ui/number-field';
@@ -37,7 +39,7 @@ const KINDS: ReadonlyArray<{ value: SamplerKind; label: string }> = [
 
 /** What looks at the part: a strobe, a camera, or the room's lighting. */
 export function SamplerForm({ class: extra }: Props) {
-  const kind = setup.value.samplerKind;
+  const kind = samplerKindShown.value;
   return (
     <Panel title="Seen by" id="sampler" class={extra}>
       <ChoiceGroup
@@ -56,7 +58,7 @@ export function SamplerForm({ class: extra }: Props) {
 }
 
 function CameraFields() {
-  const camera = setup.value.camera;
+  const camera = cameraShown.value;
   const preset = presetFor(camera.frameRate);
   const groups = ['Cinema', 'Broadcast', 'High speed'] as const;
   return (
@@ -151,7 +153,7 @@ function CameraFields() {
 }
 
 function StrobeFields() {
-  const strobe = setup.value.strobe;
+  const strobe = strobeShown.value;
   const unit = flashUnit.value;
   const toText = (fpm: number) => numberForField(unit === 'fpm' ? fpm : fpm / 60);
   return (
