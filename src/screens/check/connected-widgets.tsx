@@ -1,8 +1,8 @@
-// The preview and the rate map, fed from the set-up the lists show (a paint behind the entries:
+// The preview and the rate map, fed from the set-up they follow (two paints behind the entries:
 // src/state/check/listed.ts). Both load after the first paint
 // (lazy-widgets.ts); until then a placeholder of about their size holds their place.
 import { computed } from '@preact/signals';
-import { check, checkProblem, listedAnswer, listedSetup } from '../../state/check';
+import { check, checkProblem, picturedAnswer, picturedSetup } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
 import { VERDICT_FIELDS } from './field-ids';
 import { flashUnit, setSamplerRateHz } from '../../state/setup';
@@ -29,7 +29,7 @@ const screenShowsSafety = computed(
  * verdict that is not to be trusted); otherwise the preview gives it itself.
  */
 export function CheckPreview() {
-  const input = previewInputOf(listedAnswer.value, listedSetup.value);
+  const input = previewInputOf(picturedAnswer.value, picturedSetup.value);
   const { module: widgets, failed } = lazyWidgets.use();
   return (
     <Panel title="Preview" id="preview">
@@ -57,7 +57,7 @@ export function CheckPreview() {
  * through the same setter as the suggested rates, so the rate field follows.
  */
 export function CheckRateMap() {
-  const input = rateMapInputOf(listedAnswer.value, listedSetup.value);
+  const input = rateMapInputOf(picturedAnswer.value, picturedSetup.value);
   const { module: widgets, failed } = lazyWidgets.use();
   return (
     <Panel title="Rate map" id="rate-map">

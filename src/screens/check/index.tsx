@@ -1,6 +1,6 @@
 import type { ComponentChildren } from 'preact';
 import { useRef } from 'preact/hooks';
-import { check, checkProblem } from '../../state/check';
+import { check, checkProblem, picturesBehind } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
 import { Cautions } from '../../ui/cautions';
 import { NotCurrent } from '../../ui/not-current';
@@ -55,7 +55,7 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
         {chart && (
           <div class={style.slot}>
             <ResultsGuard>
-              <Following>{chart}</Following>
+              <Following behind={picturesBehind}>{chart}</Following>
             </ResultsGuard>
           </div>
         )}
@@ -64,7 +64,7 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
         {preview && (
           <div class={style.slot}>
             <ResultsGuard>
-              <Following>{preview}</Following>
+              <Following behind={picturesBehind}>{preview}</Following>
             </ResultsGuard>
           </div>
         )}

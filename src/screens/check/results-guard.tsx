@@ -1,4 +1,5 @@
 // Wrappers for what the check screen works out from its entries.
+import type { ReadonlySignal } from '@preact/signals';
 import type { ComponentChildren } from 'preact';
 import { checkProblem, listsBehind } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
@@ -25,22 +26,30 @@ export function ResultsGuard({ children }: { children: ComponentChildren }) {
  * The tap is stopped here rather than with a style: a style that changes on every keystroke
  * would restyle every list under it twice a key.
  */
-export function Following({ children }: { children: ComponentChildren }) {
-  const behind = listsBehind.value;
+export function Following({
+  behind: following = listsBehind,
+  children,
+}: {
+  /** Whether what is inside is behind the entries (default: the lists'). */
+  behind?: ReadonlySignal<boolean>;
+  children: ComponentChildren;
+}) {
+  const behind = following.value;
   return (
     <div
       class={style.following}
       aria-busy={behind ? 'true' : undefined}
       data-behind={behind ? 'true' : undefined}
-      onClickCapture={ignoreWhileBehind}
+      onClickCapture={(event) => {
+        if (following.peek()) ignore(event);
+      }}
     >
       {children}
     </div>
   );
 }
 
-function ignoreWhileBehind(event: Event): void {
-  if (!listsBehind.peek()) return;
+function ignore(event: Event): void {
   event.preventDefault();
   event.stopPropagation();
 }
