@@ -70,16 +70,7 @@ export default defineConfig({
       // What the first screen needs, in one script and one style sheet (scripts/first-paint-chunk.ts).
       output: {
         codeSplitting: {
-          groups: [
-            {
-              name: 'first-paint',
-              test: (id) =>
-                firstPaint.holds(id) &&
-                !id.includes('/src/core/') &&
-                !id.endsWith('/src/app/main.tsx'),
-              priority: 10,
-            },
-          ],
+          groups: [{ name: 'first-paint', test: (id) => firstPaint.holds(id), priority: 10 }],
         },
       },
     },

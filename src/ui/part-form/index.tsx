@@ -3,7 +3,6 @@ import { formatNumber, numberForField } from '../../words/format';
 import { KIND_WORDS } from '../../words/partKinds';
 import { originLine } from '../../words/origin';
 import { readFeatures, readSpeedRpm, readTolerancePercent } from '../fields';
-import { applyDerivedSpeed } from '../../state/derivedSpeed';
 import {
   PART_KINDS,
   kindOf,
@@ -26,7 +25,8 @@ import {
 import { MotorFields } from '../motor-fields';
 import { NumberField } from '../number-field';
 import { Panel } from '../panel';
-import { WheelApply, WheelFields } from '../wheel-fields';
+import { lazyModule } from '../lazyModule';
+import type { DerivedSpeedInput } from '../../state/derivedSpeed';
 import style from './style.module.css';
 
 interface Props {
@@ -35,6 +35,42 @@ interface Props {
 }
 
 const SPEED_UNITS: SpeedUnit[] = ['rpm', 'Hz', 'rad/s'];
+
+// A wheel's fields and a motor's nameplate speed go through the drive chain, which the first
+// screen does not need until a part is a wheel or a nameplate is used: both load then.
+const wheelFields = lazyModule(() => import('../wheel-fields'));
+const derivedSpeed = lazyModule(() => import('../../state/derivedSpeed'));
+
+/** Applies a speed worked out for part `index` (a motor's nameplate) once its code is in. */
+function applyDerived(index: number, input: DerivedSpeedInput): void {
+  void derivedSpeed.load().then((m) => m.applyDerivedSpeed(index, input));
+}
+
+/** A wheel's road speed and tyre, and the button that applies them. */
+function WheelPart({ index, part }: { index: number; part: PartSpec }) {
+  const { module, failed } = wheelFields.use();
+  if (!part.wheel) return null;
+  if (!module) {
+    return (
+      <p class={style.loading} aria-busy={failed ? undefined : 'true'}>
+        {failed
+          ? 'The wheel fields could not be loaded: reload the page to try again.'
+          : 'Opening the wheel fields…'}
+      </p>
+    );
+  }
+  return (
+    <>
+      <module.WheelFields
+        id={(field) => `wheel-${field}`}
+        named={(label) => label}
+        wheel={part.wheel}
+        onWheel={setWheel}
+      />
+      <module.WheelApply index={index} part={part} wheel={part.wheel} />
+    </>
+  );
+}
 
 /** rpm shown in the chosen unit. */
 function speedInUnit(rpm: number, unit: SpeedUnit): number {
@@ -86,7 +122,7 @@ export function PartForm({ class: extra }: Props) {
     if (next === 'poles') setMotor({ ...defaultMotor });
     else if (next === 'nameplate') {
       const rpm = Math.abs(part.speedRpm);
-      applyDerivedSpeed(index, {
+      applyDerived(index, {
         speedRpm: part.speedRpm,
         origin: { method: 'nameplate', detail: { rpm } },
       });
@@ -130,17 +166,7 @@ export function PartForm({ class: extra }: Props) {
               : 'A unit may be typed too: 1780 rpm, 29.7 Hz.'
         }
       />
-      {kind === 'wheel' && part.wheel && (
-        <>
-          <WheelFields
-            id={(field) => `wheel-${field}`}
-            named={(label) => label}
-            wheel={part.wheel}
-            onWheel={setWheel}
-          />
-          <WheelApply index={index} part={part} wheel={part.wheel} />
-        </>
-      )}
+      {kind === 'wheel' && part.wheel && <WheelPart index={index} part={part} />}
       {kind !== 'wheel' && (
         <label class={style.toggle}>
           <input
@@ -185,7 +211,7 @@ export function PartForm({ class: extra }: Props) {
               toText={numberForField}
               read={(text) => readSpeedRpm(text, 'rpm')}
               onValue={(rpm) =>
-                applyDerivedSpeed(index, {
+                applyDerived(index, {
                   speedRpm: (part.speedRpm < 0 ? -1 : 1) * Math.abs(rpm),
                   origin: { method: 'nameplate', detail: { rpm: Math.abs(rpm) } },
                 })

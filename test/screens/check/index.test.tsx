@@ -1,6 +1,6 @@
 // @vitest-environment happy-dom
 import 'fake-indexeddb/auto';
-import { cleanup, fireEvent, render, screen, within } from '@testing-library/preact';
+import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/preact';
 import { afterEach, beforeAll, beforeEach, describe, expect, test } from 'vitest';
 import {
   apparentMotion,
@@ -289,6 +289,30 @@ describe('the check screen', () => {
     type('Modulation (percent flicker)', '0');
     expect(verdict()).toBe('Steady light: true motion');
     expect(screen.queryByTestId('safety-notice')).toBeNull();
+  });
+
+  test('a wheel part shows its road speed and tyre once they load, and one tap applies the speed', async () => {
+    fireEvent.change(screen.getByLabelText('Kind of part'), { target: { value: 'wheel' } });
+    await screen.findByLabelText('Ground speed');
+    // ISO 4000-1 size designation 205/55R16: rim 16 in (406.4 mm) plus two sidewalls of 55 % of
+    // 205 mm makes a 631.9 mm tyre; at the default 50 km/h it turns (50 / 3.6) / (π · 0.6319 m)
+    // times a second.
+    const rpm = (50 / 3.6 / (Math.PI * ((16 * 25.4 + 2 * 205 * 0.55) / 1000))) * 60;
+    expect(formatNumber(rpm)).toBe('419.8');
+    fireEvent.click(screen.getByRole('button', { name: /^Use 419\.8 rpm/ }));
+    expect(setup.value.parts[0].speedRpm).toBeCloseTo(rpm, 6);
+    expect(setup.value.parts[0].origin?.method).toBe('road-speed');
+  });
+
+  test('a motor’s nameplate speed becomes the part’s speed, with where it came from', async () => {
+    fireEvent.click(screen.getByLabelText('Speed from an induction motor'));
+    fireEvent.click(screen.getByLabelText('Its nameplate rpm'));
+    // The nameplate goes through the drive chain's code, which loads on first use.
+    await screen.findByLabelText('Nameplate speed');
+    type('Nameplate speed', '1460');
+    await waitFor(() => expect(setup.value.parts[0].speedRpm).toBe(1460));
+    expect(setup.value.parts[0].origin?.method).toBe('nameplate');
+    expect(field('Speed').value).toBe('1460');
   });
 
   test('the speed can come from a motor', () => {
