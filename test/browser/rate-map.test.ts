@@ -126,7 +126,10 @@ async function expectRateNear(page: Page, x: number, width: number, log: boolean
   await expect
     .poll(async () => Math.abs((await fieldRateHz(page)) - want))
     .toBeLessThanOrEqual(halfPixel);
-  expect(Math.abs((await mapRateHz(page)) - want)).toBeLessThanOrEqual(halfPixel);
+  // The map follows the entries a paint or two later (src/state/check/listed.ts).
+  await expect
+    .poll(async () => Math.abs((await mapRateHz(page)) - want))
+    .toBeLessThanOrEqual(halfPixel);
   // The field shows the rate the set-up holds, to the field's seven significant figures.
   expect(Math.abs((await fieldRateHz(page)) - (await mapRateHz(page)))).toBeLessThanOrEqual(
     (await mapRateHz(page)) * 1e-6,
@@ -196,7 +199,7 @@ describe('the rate map on the check screen', () => {
     await expect
       .poll(() => page.getByLabel('Flash rate', { exact: true }).inputValue())
       .toBe('600');
-    expect(await mapRateHz(page)).toBeCloseTo(10, 12);
+    await expect.poll(() => mapRateHz(page)).toBeCloseTo(10, 12);
     // docs/physics.md §3: one flash per turn freezes a single mark.
     expect(apparentMotion(mark, 10).look).toBe('still');
     expect(await page.getByTestId('verdict').innerText()).toMatch(/^Looks still/);

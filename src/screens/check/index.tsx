@@ -55,7 +55,9 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
         {chart && (
           <div class={style.slot}>
             <ResultsGuard>
-              <Following behind={picturesBehind}>{chart}</Following>
+              <Following behind={picturesBehind} keepTaps>
+                {chart}
+              </Following>
             </ResultsGuard>
           </div>
         )}
@@ -64,7 +66,9 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
         {preview && (
           <div class={style.slot}>
             <ResultsGuard>
-              <Following behind={picturesBehind}>{preview}</Following>
+              <Following behind={picturesBehind} keepTaps>
+                {preview}
+              </Following>
             </ResultsGuard>
           </div>
         )}

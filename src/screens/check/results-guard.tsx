@@ -28,10 +28,17 @@ export function ResultsGuard({ children }: { children: ComponentChildren }) {
  */
 export function Following({
   behind: following = listsBehind,
+  keepTaps = false,
   children,
 }: {
   /** Whether what is inside is behind the entries (default: the lists'). */
   behind?: ReadonlySignal<boolean>;
+  /**
+   * Let taps through while behind: for the pictures, whose taps act on the rate axis (which
+   * only the sampler's range changes) and on the playback, never on a rate listed for the
+   * set-up before.
+   */
+  keepTaps?: boolean;
   children: ComponentChildren;
 }) {
   const behind = following.value;
@@ -41,7 +48,7 @@ export function Following({
       aria-busy={behind ? 'true' : undefined}
       data-behind={behind ? 'true' : undefined}
       onClickCapture={(event) => {
-        if (following.peek()) ignore(event);
+        if (!keepTaps && following.peek()) ignore(event);
       }}
     >
       {children}
