@@ -1,6 +1,7 @@
 import { render } from 'preact';
 import { afterNextPaint } from '../state/afterNextPaint';
 import { storageOpened } from '../state/sessionNotices';
+import { setup } from '../state/setup';
 import { storageStatus } from '../state/store/status';
 import { lazyModule } from '../ui/lazyModule';
 import { App } from './app';
@@ -14,17 +15,18 @@ function LaterUpdateNotice() {
   return module ? <module.ServiceWorkerNotice /> : null;
 }
 
+// The set-up the page opens with: one that differs when the session starts was typed on.
+const openedWith = setup.peek();
 render(<App updateNotice={<LaterUpdateNotice />} />, document.getElementById('app')!);
 // The session's code (storage, saved machines, share links) is asked for once the first screen
-// is painted, so that paint waits for none of it. The page says when the starting machine is in
-// place (a share link, or the last visit's working copy): what is typed from then on can no
-// longer be replaced by it. Browser tests wait for this before they type.
-const session = new Promise<typeof import('../state/session')>((resolve, reject) =>
-  afterNextPaint(() => import('../state/session').then(resolve, reject)),
-);
-void session
-  .then((s) => s.startSession())
-  .catch(() => {
+// is painted, so that paint waits for none of it.
+afterNextPaint(() => void openSession());
+
+async function openSession(): Promise<void> {
+  let session: typeof import('../state/session');
+  try {
+    session = await import('../state/session');
+  } catch {
     // Its chunk could not be fetched (an old page after an update, offline): say so.
     storageStatus.value = {
       mode: 'memory',
@@ -32,7 +34,25 @@ void session
         'Saving could not be started: changes last only until this tab is closed. Reload the page to try again.',
     };
     storageOpened.value = true;
-  })
-  .finally(() => {
-    document.documentElement.dataset.session = 'open';
-  });
+    markOpen();
+    return;
+  }
+  try {
+    // What typed on before this keeps what was typed (and saves it).
+    await session.startSession(openedWith);
+  } catch (error) {
+    // Storage faults are told by the store itself; anything else is a bug worth a trace.
+    console.error(error);
+  } finally {
+    markOpen();
+  }
+}
+
+/**
+ * The page says when the starting machine is in place (a share link, or the last visit's working
+ * copy): what is typed from then on can no longer be replaced by it. Browser tests wait for this
+ * before they type.
+ */
+function markOpen(): void {
+  document.documentElement.dataset.session = 'open';
+}

@@ -3,10 +3,11 @@
 // what the page says about them. A refused link never replaces what was on screen.
 import { computed } from '@preact/signals';
 import { loadMachines, machines } from './machines';
-import type { MachineContent } from './model';
+import type { MachineContent, Setup } from './model';
 import { decodeShareFragment, type DecodeShareResult } from './shareLink';
 import { loadAll, openStore, type WorkRecord } from './store';
 import { offeredShare, sessionMessage, storageOpened } from './sessionNotices';
+import { setup } from './setup';
 import { header, keepWork, loadWork, openMachineId, workRecord } from './work';
 
 export { openMachineId } from './work';
@@ -41,7 +42,7 @@ function sharedName(content: MachineContent): string {
  */
 export async function openSession(
   sources: SessionSources,
-  untouched: WorkRecord = workRecord.peek(),
+  untouched: WorkRecord | null = workRecord.peek(),
 ): Promise<void> {
   const shared = sources.decodeShare(sources.hash);
   if (shared.ok) {
@@ -100,12 +101,15 @@ export function acceptOfferedShare(): void {
  * reads the share link in the address or the last visit's working copy, loads the saved
  * machines, and listens for share links opened later.
  */
-export async function startSession(): Promise<void> {
+export async function startSession(openedWith?: Setup): Promise<void> {
   // What the page opened with: anything typed while storage opens must win over the last visit,
-  // and is kept from the first keystroke (a reload a moment later must not lose it).
-  const untouched = workRecord.peek();
+  // and is kept from the first keystroke (a reload a moment later must not lose it). This code
+  // loads after the first paint: a set-up that is no longer the one the page opened with
+  // (`openedWith`, from main.tsx) was typed on meanwhile, and is kept as it is.
+  const typedAlready = openedWith !== undefined && setup.peek() !== openedWith;
+  const untouched = typedAlready ? null : workRecord.peek();
   const hash = location.hash;
-  keepWork();
+  keepWork(typedAlready);
   const clearHash = () =>
     history.replaceState(history.state, '', location.pathname + location.search);
   await openStore();

@@ -95,10 +95,12 @@ export const WORK_SAVE_DELAY_MS = 400;
  * and at once when the page is hidden or left, so the last keystroke is never lost. Nothing is
  * written until something changes (the last visit's copy stays there to be read). When another
  * tab's save of the open machine made this tab's change a copy, the working copy follows the copy.
- * Returns a function that stops it.
+ * `changedAlready`: something was typed before (it is written too). Returns a function that
+ * stops it.
  */
-export function keepWork(): () => void {
-  const untouched = workRecord.peek();
+export function keepWork(changedAlready = false): () => void {
+  // A page typed on before it kept anything writes what is on screen at once.
+  const untouched = changedAlready ? null : workRecord.peek();
   let timer: ReturnType<typeof setTimeout> | undefined;
   let dirty = false;
   const writeNow = () => {

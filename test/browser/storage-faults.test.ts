@@ -351,6 +351,33 @@ describe('the working copy while typing', () => {
     expect((await diskWork(page))?.speedRpm).toBe(1234);
   });
 
+  test('typing before the session has opened keeps what was typed, over the last visit, and saves it', async () => {
+    const { page } = await freshApp();
+    await typeInto(page, 'Speed', '1234');
+    await expect.poll(async () => (await diskWork(page))?.speedRpm).toBe(1234);
+    // The session's code loads after the first paint: hold it back, type, then let it in. The
+    // service worker would serve it from its cache, past the hold: it is taken off first.
+    await page.evaluate(async () => {
+      for (const r of await navigator.serviceWorker.getRegistrations()) await r.unregister();
+    });
+    let release: () => void = () => undefined;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route(/\/assets\/session-[^/]*\.js$/, async (route) => {
+      await held;
+      await route.continue();
+    });
+    await page.reload();
+    const speed = page.getByLabel('Speed', { exact: true });
+    await speed.waitFor();
+    expect(await page.locator('html[data-session="open"]').count()).toBe(0);
+    await typeInto(page, 'Speed', '2468');
+    release();
+    await page.locator('html[data-session="open"]').waitFor({ state: 'attached' });
+    // The last visit's 1234 did not replace the typing, and the typing reaches the device.
+    expect(await speed.inputValue()).toBe('2468');
+    await expect.poll(async () => (await diskWork(page))?.speedRpm).toBe(2468);
+  });
+
   test('closing the tab right after the last keystroke keeps it', async () => {
     const { context, page } = await freshApp();
     await typeInto(page, 'Speed', '4321');
