@@ -51,6 +51,11 @@ export default defineConfig({
         // The whole app (every script, style sheet and page); icons come through the manifest.
         globPatterns: ['**/*.{js,css,html}'],
         navigateFallback: 'index.html',
+        // The first visit's page is served by the worker as soon as it is installed, so the
+        // parts that load on first use (the tools, the wheel fields) come from its cache when
+        // the connection goes before they were opened. A later version still waits for the
+        // user's go-ahead: only the first worker takes the page over by itself.
+        clientsClaim: true,
         cleanupOutdatedCaches: true,
       },
     }),

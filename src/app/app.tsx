@@ -15,7 +15,14 @@ interface Props {
 
 /** Opens the offered machine (the session's code is loaded by then: it made the offer). */
 function acceptOfferedShare(): void {
-  void import('../state/session').then((session) => session.acceptOfferedShare());
+  import('../state/session')
+    .then((session) => session.acceptOfferedShare())
+    .catch(() => {
+      sessionMessage.value = {
+        kind: 'problem',
+        text: 'The shared machine could not be opened: reload the page, then open the link again.',
+      };
+    });
 }
 
 /** Page layout and navigation: the frame, the notices, and the screen the tab bar chose. */

@@ -5,7 +5,7 @@ import { computed } from '@preact/signals';
 import { check, checkProblem, picturedAnswer, picturedSetup } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
 import { VERDICT_FIELDS } from './field-ids';
-import { flashUnit, setSamplerRateHz } from '../../state/setup';
+import { flashUnit, samplerRateHz, setSamplerRateHz, setup } from '../../state/setup';
 import { Panel } from '../../ui/panel';
 import { widgets as lazyWidgets } from './lazy-widgets';
 import { previewInputOf, rateMapInputOf } from './widget-inputs';
@@ -52,6 +52,9 @@ export function CheckPreview() {
   );
 }
 
+/** The rate set right now (the map is drawn two paints behind it). */
+const rateOnScreen = () => samplerRateHz(setup.peek());
+
 /**
  * Every part's apparent speed over the sampler's range. Tapping or dragging it sets the rate
  * through the same setter as the suggested rates, so the rate field follows.
@@ -65,6 +68,7 @@ export function CheckRateMap() {
         <widgets.RateMap
           {...input}
           onRateChange={setSamplerRateHz}
+          currentRateHz={rateOnScreen}
           flashUnit={flashUnit.value}
           showCautions={!screenShowsSafety.value}
         />

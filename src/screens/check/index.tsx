@@ -100,7 +100,7 @@ function LaterResults({ part }: { part: 'lists' | 'report' }) {
   return (
     <p class={style.quiet} aria-busy={failed ? undefined : 'true'} data-testid="results-loading">
       {failed
-        ? 'The rates to try could not be loaded: reload the page to try again.'
+        ? 'The rates to try, keeping the machine and the report could not be loaded: reload the page to try again.'
         : 'Working out the rates to try…'}
     </p>
   );

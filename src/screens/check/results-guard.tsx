@@ -11,9 +11,16 @@ import style from './style.module.css';
  * Results worked out from the entries, marked not current while one is refused. Reads only the
  * refusals: the results inside follow the check result themselves.
  */
-export function ResultsGuard({ children }: { children: ComponentChildren }) {
+export function ResultsGuard({
+  refusal,
+  children,
+}: {
+  /** A refusal of these results alone (the lists'), beside the answer's. */
+  refusal?: string;
+  children: ComponentChildren;
+}) {
   return (
-    <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={checkProblem.value}>
+    <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={checkProblem.value ?? refusal}>
       {children}
     </NotCurrent>
   );
@@ -21,7 +28,7 @@ export function ResultsGuard({ children }: { children: ComponentChildren }) {
 
 /**
  * Results that follow the entries a paint behind (src/state/check/listed.ts): from a keystroke
- * until they catch up they are marked busy and a tap on them does nothing, so nothing acts on a
+ * until they catch up they are marked (data-behind) and a tap on them does nothing, so nothing acts on a
  * rate worked out for the set-up before. The refusals above them come at once (ResultsGuard).
  * The tap is stopped here rather than with a style: a style that changes on every keystroke
  * would restyle every list under it twice a key.
@@ -45,7 +52,6 @@ export function Following({
   return (
     <div
       class={style.following}
-      aria-busy={behind ? 'true' : undefined}
       data-behind={behind ? 'true' : undefined}
       onClickCapture={(event) => {
         if (!keepTaps && following.peek()) ignore(event);

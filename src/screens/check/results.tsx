@@ -1,12 +1,14 @@
 // What the check screen shows under its answer, in a chunk of its own (lazy-results.ts): the
 // rates to try, the bands that show the true way, the camera and lighting read-outs, keeping
-// and sharing the machine, and the report. None of it is needed for the first paint, and all
-// of it follows the set-up a paint behind the answer (src/state/check/listed.ts).
-import { checkProblem, listedAnswer, listedSetup } from '../../state/check';
-import { listedCheck } from '../../state/check/lists';
+// and sharing the machine, and the report. None of it is needed for the first paint. The lists
+// follow the set-up a paint behind the answer (src/state/check/listed.ts); keeping, sharing and
+// the report work on the set-up on screen.
+import { computed } from '@preact/signals';
+import { check, checkProblem } from '../../state/check';
+import { computeCheck, listsProblem } from '../../state/check/lists';
 import { problemsAmong } from '../../state/fieldProblems';
 import { activeIndex, partLabel } from '../../state/model';
-import { flashUnit } from '../../state/setup';
+import { flashUnit, setup } from '../../state/setup';
 import { LightingReadout } from '../../ui/lighting-readout';
 import { ReportBar } from '../../ui/report-bar';
 import { CameraReadout } from './camera-readout';
@@ -22,7 +24,7 @@ export function CheckLists() {
   return (
     <>
       <RateSuggestions />
-      <ResultsGuard>
+      <ResultsGuard refusal={listsProblem.value}>
         <SafeBands />
         <CameraReadout />
         <LightingReadout />
@@ -34,32 +36,34 @@ export function CheckLists() {
 /** Keeping and sharing the machine: it works on the set-up on screen, never a paint behind. */
 export { KeepShare };
 
-/** Print and CSV of the check, with the cautions the verdict carries; no CSV while it is withdrawn. */
+/** The stillness caution the screen shows now (a flag, so the report re-renders when it flips). */
+const stillnessNow = computed(() => check.value.showSafety);
+/** The flash rate that needs the photosensitivity caution now, if any. */
+const flashingNow = computed(() => (check.value.showPhotosensitivity ? check.value.rateHz : null));
+
+/**
+ * Print and CSV of the check, with the cautions the verdict carries; no CSV while it is
+ * withdrawn. Both are of the set-up on screen, never of the lists a paint behind it.
+ */
 export function CheckReport() {
   const refusal = checkProblem.value;
-  const r = listedAnswer.value;
   const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
+  const flashing = flashingNow.value;
   return (
     <ReportBar
       title="Check"
       cautions={{
-        apparentStillness: r.showSafety || withdrawn,
-        flashRatesHz: r.showPhotosensitivity ? [r.rateHz] : [],
+        apparentStillness: stillnessNow.value || withdrawn,
+        flashRatesHz: flashing === null ? [] : [flashing],
       }}
-      csv={
-        withdrawn
-          ? undefined
-          : () => {
-              const s = listedSetup.peek();
-              const shown = listedCheck.peek();
-              return checkCsv(
-                shown,
-                partLabel(s, activeIndex(s)),
-                shown.samplerKind,
-                flashUnit.peek(),
-              );
-            }
-      }
+      csv={withdrawn ? undefined : checkTable}
     />
   );
+}
+
+/** The check as CSV, worked out from the set-up on screen (the core's refusal is said by the bar). */
+function checkTable(): string {
+  const s = setup.peek();
+  const r = computeCheck(s);
+  return checkCsv(r, partLabel(s, activeIndex(s)), r.samplerKind, flashUnit.peek());
 }

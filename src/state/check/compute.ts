@@ -92,7 +92,7 @@ export const SHARP_BLUR_DEG = 1;
 export const STRAIGHT_SKEW_DEG = 2;
 
 /** The rates the sampler can be set to (a camera's or a light's widened to take in the rate set). */
-export function samplerRange(s: Setup, rateHz: number): Range {
+function samplerRange(s: Setup, rateHz: number): Range {
   if (s.samplerKind === 'strobe')
     return { minHz: s.strobe.minFpm / 60, maxHz: s.strobe.maxFpm / 60 };
   const base = s.samplerKind === 'camera' ? CAMERA_RANGE : LIGHTING_RANGE;

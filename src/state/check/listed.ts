@@ -2,8 +2,8 @@
 // keystroke re-renders the field and the answer at once and paints them; the lists catch up in
 // a task of their own after that paint, and the pictures (the rate map and the preview) after
 // the next, so typing on a slow phone is held up by none of them and no task grows long. While
-// they are behind, `listsBehind` and `picturesBehind` say so, and the screen marks them busy
-// and keeps taps off them (src/screens/check).
+// they are behind, `listsBehind` and `picturesBehind` say so, and the screen keeps taps off the
+// lists (src/screens/check/results-guard.tsx).
 import { computed, effect, signal, type ReadonlySignal } from '@preact/signals';
 import { defaultSetup, type Setup } from '../model';
 import { keepLastGood } from '../outcome';

@@ -57,6 +57,9 @@ const kept = keepLastGood(() => {
   return computeCheckLists(s, computeCheckAnswer(s));
 });
 
+/** The core's refusal of the listed set-up's lists, if any (they are then marked not current). */
+export const listsProblem = kept.problem;
+
 /**
  * What the lists show: the listed set-up's answer and lists, each the last the core accepted
  * (a refused set-up is marked not current by the screen, from the refusals of the set-up on

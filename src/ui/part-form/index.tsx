@@ -27,6 +27,8 @@ import { NumberField } from '../number-field';
 import { Panel } from '../panel';
 import { lazyModule } from '../lazyModule';
 import type { DerivedSpeedInput } from '../../state/derivedSpeed';
+import { DataError } from '../../state/read';
+import { sessionMessage } from '../../state/sessionNotices';
 import style from './style.module.css';
 
 interface Props {
@@ -43,7 +45,18 @@ const derivedSpeed = lazyModule(() => import('../../state/derivedSpeed'));
 
 /** Applies a speed worked out for part `index` (a motor's nameplate) once its code is in. */
 function applyDerived(index: number, input: DerivedSpeedInput): void {
-  void derivedSpeed.load().then((m) => m.applyDerivedSpeed(index, input));
+  derivedSpeed
+    .load()
+    .then((m) => m.applyDerivedSpeed(index, input))
+    .catch((error: unknown) => {
+      sessionMessage.value = {
+        kind: 'problem',
+        text:
+          error instanceof DataError
+            ? error.message
+            : 'The motor’s speed could not be applied: this part of Trueturn did not load. Reload the page, then try again.',
+      };
+    });
 }
 
 /** A wheel's road speed and tyre, and the button that applies them. */

@@ -19,6 +19,11 @@ export interface Props {
   rateHz: number;
   /** Called with a rate inside the range, Hz, when the chart is tapped, dragged or keyed. */
   onRateChange: (rateHz: number) => void;
+  /**
+   * The rate set right now, Hz, where the map may be drawn a paint behind it (the check screen):
+   * a key steps from it, so quick presses lose no step. Default: `rateHz`.
+   */
+  currentRateHz?: () => number;
   /** Which sampler: decides the locks and bands (camera frames or flashes) and the rate's unit. */
   samplerKind: SamplerKind;
   /** Strobe rates in flashes per minute or Hz. Default 'fpm'. */
@@ -53,6 +58,7 @@ export function RateMap(props: Props) {
     range,
     rateHz,
     onRateChange,
+    currentRateHz,
     samplerKind,
     flashUnit = 'fpm',
     showCautions = true,
@@ -158,7 +164,7 @@ export function RateMap(props: Props) {
   }, [rateHz]);
 
   const onKey = (event: KeyboardEvent) => {
-    const next = rateForKey(event.key, rateHz, range, log);
+    const next = rateForKey(event.key, currentRateHz?.() ?? rateHz, range, log);
     if (next === null) return;
     event.preventDefault();
     onRateChange(next);

@@ -143,6 +143,30 @@ describe('RateMap', () => {
     expect(picked[0]).toBeCloseTo(31, 12); // 1 % of the 100 fps span, linear for a 6:1 range
   });
 
+  it('steps a key from the rate set now when it is drawn behind it: quick presses lose no step', () => {
+    const picked: number[] = [];
+    let now = 30;
+    render(
+      <RateMap
+        parts={parts}
+        range={{ minHz: 20, maxHz: 120 }}
+        rateHz={30}
+        currentRateHz={() => now}
+        onRateChange={(r) => {
+          picked.push(r);
+          now = r;
+        }}
+        samplerKind="camera"
+      />,
+    );
+    const slider = screen.getByRole('slider');
+    // Two presses before the map is drawn again: its rateHz is still 30.
+    fireEvent.keyDown(slider, { key: 'ArrowRight' });
+    fireEvent.keyDown(slider, { key: 'ArrowRight' });
+    expect(picked[0]).toBeCloseTo(31, 12);
+    expect(picked[1]).toBeCloseTo(32, 12);
+  });
+
   it('says so, and keeps the legend, where the browser cannot draw the chart', async () => {
     noCanvas = true;
     render(

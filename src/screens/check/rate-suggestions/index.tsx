@@ -5,7 +5,7 @@ import { formatRate, formatRateSpan, type FlashUnit } from '../../../words/rates
 import type { SamplerKind } from '../../../state/model';
 import { memoWith } from '../../../ui/memo';
 import { checkProblem, type SuggestedRate } from '../../../state/check';
-import { listedCheck } from '../../../state/check/lists';
+import { listedCheck, listsProblem } from '../../../state/check/lists';
 import { problemsAmong } from '../../../state/fieldProblems';
 import { CREEP_FIELDS, RESULT_FIELDS } from '../field-ids';
 import { NotCurrent } from '../../../ui/not-current';
@@ -31,7 +31,7 @@ export function RateSuggestions({ class: extra }: Props) {
   const rate = (hz: number) => formatRate(hz, kind, unit);
   const tolerance = r.part.tolerance > 0;
   // Rates worked out from a refused entry are marked not current, out of reach (docs/physics.md §10).
-  const refusal = checkProblem.value;
+  const refusal = checkProblem.value ?? listsProblem.value;
   return (
     <Panel title="Rates to try" id="suggestions" class={extra}>
       <div class={style.block}>
