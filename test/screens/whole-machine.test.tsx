@@ -32,6 +32,7 @@ import {
   noStillBandsShown,
 } from '../../src/screens/whole-machine/band-lists';
 import { wholeMachineCsv } from '../../src/screens/whole-machine/csv';
+import { reportIntersections } from '../helpers/intersection';
 
 /** Each drawing of the rate map, first and after new data: how many parts it shows. */
 const charts: Array<{ parts: number }> = [];
@@ -60,6 +61,8 @@ beforeAll(async () => {
 });
 
 beforeEach(() => {
+  // The rate map draws once it is near the screen.
+  reportIntersections();
   replaceSetup(defaultSetup);
   flashUnit.value = 'fpm';
   charts.length = 0;
@@ -67,7 +70,10 @@ beforeEach(() => {
   render(<App />);
 });
 
-afterEach(cleanup);
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
 
 function card(index: number) {
   return within(screen.getByTestId(`chain-part-${index}`));

@@ -8,6 +8,7 @@ import type { ChartColours, RateChart } from './chart';
 import { STILLNESS_CAUTION } from '../../words/cautions';
 import { cssColours, useColourScheme } from '../chartTheme';
 import { lazyModule } from '../lazyModule';
+import { useSeen } from '../seen';
 import style from './style.module.css';
 
 export interface Props {
@@ -71,6 +72,9 @@ export function RateMap(props: Props) {
   const rootRef = useRef<HTMLDivElement>(null);
   const holderRef = useRef<HTMLDivElement>(null);
   const chart = useRef<RateChart | null>(null);
+  // Drawn once it comes near the screen: below the fold on a phone, it costs the page's opening
+  // nothing (its box holds its size meanwhile: .plot in style.module.css).
+  const seen = useSeen(rootRef);
   const latest = useRef({ onRateChange, rateHz });
   latest.current = { onRateChange, rateHz };
 
@@ -96,7 +100,7 @@ export function RateMap(props: Props) {
   useEffect(() => {
     const holder = holderRef.current;
     const root = rootRef.current;
-    if (!chartModule || !holder || !root || !series || !('limit' in computed)) return;
+    if (!seen || !chartModule || !holder || !root || !series || !('limit' in computed)) return;
     const unit = rateUnit(samplerKind, flashUnit);
     const size = chartSize(holder);
     let made: RateChart;
@@ -139,6 +143,7 @@ export function RateMap(props: Props) {
     };
     // Data and rate changes go through update() and setRate() below, without a rebuild.
   }, [
+    seen,
     chartModule,
     computed.log,
     samplerKind,

@@ -2,24 +2,9 @@
 import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/preact';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { Preview } from '../../../src/screens/check/preview';
+import { reportIntersections } from '../../helpers/intersection';
 
-/**
- * happy-dom's IntersectionObserver never reports. This one reports each observed element once,
- * as a browser does first, on screen or not as `onScreen` says.
- */
-let onScreen = true;
-class ReportingObserver {
-  constructor(private readonly report: (entries: Array<{ isIntersecting: boolean }>) => void) {}
-  observe() {
-    queueMicrotask(() => this.report([{ isIntersecting: onScreen }]));
-  }
-  disconnect() {}
-}
-
-beforeEach(() => {
-  onScreen = true;
-  vi.stubGlobal('IntersectionObserver', ReportingObserver);
-});
+beforeEach(() => reportIntersections());
 
 afterEach(() => {
   cleanup();
@@ -53,7 +38,7 @@ describe('Preview', () => {
   });
 
   it('draws nothing while it is off screen', async () => {
-    onScreen = false;
+    reportIntersections(false);
     render(<Preview part={fan} sampler="flash" rateHz={100} exposureS={0} />);
     fireEvent.click(screen.getByRole('button', { name: 'Next flash' }));
     for (let i = 0; i < 4; i++) await new Promise((resolve) => requestAnimationFrame(resolve));

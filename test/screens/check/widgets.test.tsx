@@ -3,12 +3,13 @@
 // stillness caution on screen whenever either can show stillness. happy-dom has no 2D canvas,
 // so the map says it cannot draw; the chart itself is checked in Chromium (test/browser/rate-map).
 import { cleanup, render, screen, waitFor, within } from '@testing-library/preact';
-import { afterEach, beforeEach, describe, expect, test } from 'vitest';
+import { afterEach, beforeEach, describe, expect, test, vi } from 'vitest';
 import { apparentMotion } from '../../../src/core';
 import { defaultSetup, type Setup } from '../../../src/state/model';
 import { replaceSetup, setSamplerRateHz, setup } from '../../../src/state/setup';
 import { CheckScreen } from '../../../src/screens/check';
 import { listsCaughtUp } from '../../helpers/screen-queries';
+import { reportIntersections } from '../../helpers/intersection';
 
 const stillness = /still turning at full speed/;
 
@@ -23,8 +24,15 @@ async function widgets() {
   return { preview, map: map.closest('section')! };
 }
 
-beforeEach(() => replaceSetup(defaultSetup));
-afterEach(cleanup);
+beforeEach(() => {
+  // The rate map draws once it is near the screen.
+  reportIntersections();
+  replaceSetup(defaultSetup);
+});
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
 
 describe('the check screen’s preview and rate map', () => {
   test('show the part being checked at the current rate, in the strobe’s own unit', async () => {

@@ -5,6 +5,7 @@ import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/pr
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { RateChart, RateChartOptions } from '../../../src/ui/rate-map/chart';
 import type { RateMapSeries } from '../../../src/core';
+import { reportIntersections } from '../../helpers/intersection';
 
 interface Made {
   options: RateChartOptions;
@@ -54,10 +55,15 @@ const parts = [
 const range = { minHz: 1, maxHz: 1000 };
 
 beforeEach(() => {
+  // The rate map draws once it is near the screen.
+  reportIntersections();
   made.length = 0;
   noCanvas = false;
 });
-afterEach(cleanup);
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+});
 
 describe('RateMap', () => {
   it('loads the chart with every part’s column, the range and the current rate, on a log axis for a wide range', async () => {
@@ -80,6 +86,23 @@ describe('RateMap', () => {
     expect(rateHz).toBe(88);
     expect(screen.getByText('Cooling fan')).toBeTruthy();
     expect(screen.getByText('Drive pulley')).toBeTruthy();
+  });
+
+  it('draws nothing while it is off screen: a map below the fold costs the page’s opening nothing', async () => {
+    reportIntersections(false);
+    render(
+      <RateMap
+        parts={parts}
+        range={range}
+        rateHz={88}
+        onRateChange={() => {}}
+        samplerKind="strobe"
+      />,
+    );
+    // The chart's code has loaded (the legend is up) and still nothing is drawn.
+    await screen.findByText('Cooling fan');
+    for (let i = 0; i < 5; i++) await new Promise((resolve) => setTimeout(resolve, 10));
+    expect(made).toHaveLength(0);
   });
 
   it('hands a tapped rate to onRateChange and moves the cursor when the rate comes back', async () => {
