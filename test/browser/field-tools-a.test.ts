@@ -279,7 +279,8 @@ describe('the whole machine at phone size', () => {
       /Fan[\s\S]*Looks still/,
     );
 
-    // The rate map draws every part.
+    // The rate map draws every part (once it comes near the screen).
+    await page.getByTestId('rate-map').scrollIntoViewIfNeeded();
     await page.getByTestId('rate-map').locator('canvas').first().waitFor();
     expect(await page.locator('[id="chain-map-title"]').isVisible()).toBe(true);
     expect(await shownText(page)).not.toMatch(/NaN|Infinity/);

@@ -294,6 +294,8 @@ describe('screenshots of the check screen with the preview and the rate map', ()
         });
         const { page } = session;
         await openApp(page, inject('baseUrl'));
+        // The map draws once it comes near the screen: below the fold on a phone.
+        await page.getByTestId('rate-map').scrollIntoViewIfNeeded();
         await page.getByTestId('rate-map').locator('canvas').waitFor();
         await page.getByTestId('preview-sampled').waitFor();
         await frames(page, 2);
