@@ -41,21 +41,29 @@ export function useFrameLoop(
 
     const observer =
       typeof IntersectionObserver === 'function'
-        ? new IntersectionObserver((entries) => {
-            onScreen = entries.some((e) => e.isIntersecting);
-            if (onScreen && wanted) wake();
-          })
+        ? new IntersectionObserver(
+            (entries) => {
+              onScreen = entries.some((e) => e.isIntersecting);
+              if (onScreen && wanted) wake();
+            },
+            // Drawn a little before it scrolls in, so it never shows an undrawn canvas.
+            { rootMargin: '200px' },
+          )
         : null;
     observer?.observe(element);
     const onVisibility = () => {
       if (visible() && wanted) wake();
     };
     document.addEventListener('visibilitychange', onVisibility);
+    // A printed page shows everything: one frame is drawn at once for it, seen or not.
+    const onPrint = () => void latestTick.current(performance.now());
+    addEventListener('beforeprint', onPrint);
     wake();
     return () => {
       if (frame !== 0) cancelAnimationFrame(frame);
       observer?.disconnect();
       document.removeEventListener('visibilitychange', onVisibility);
+      removeEventListener('beforeprint', onPrint);
       wakeLoop.current = () => undefined;
     };
   }, [target]);

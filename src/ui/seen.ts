@@ -4,8 +4,8 @@ import type { RefObject } from 'preact';
 import { useEffect, useState } from 'preact/hooks';
 
 /**
- * True once `target` has come within `margin` of the viewport, and from then on. Where the
- * browser has no IntersectionObserver, true at once.
+ * True once `target` has come within `margin` of the viewport, or the page is about to be
+ * printed, and from then on. Where the browser has no IntersectionObserver, true at once.
  */
 export function useSeen(target: RefObject<Element>, margin = '300px'): boolean {
   const [seen, setSeen] = useState(() => typeof IntersectionObserver !== 'function');
@@ -21,7 +21,13 @@ export function useSeen(target: RefObject<Element>, margin = '300px'): boolean {
       { rootMargin: margin },
     );
     observer.observe(element);
-    return () => observer.disconnect();
+    // A printed page shows everything: what was never scrolled to is drawn for it too.
+    const print = () => setSeen(true);
+    addEventListener('beforeprint', print);
+    return () => {
+      observer.disconnect();
+      removeEventListener('beforeprint', print);
+    };
   }, [seen]);
   return seen;
 }

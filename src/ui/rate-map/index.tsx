@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'preact/hooks';
+import { useEffect, useLayoutEffect, useRef, useState } from 'preact/hooks';
 import { InputError, rateMapSeries, type Part, type Range, type RateMapSeries } from '../../core';
 import type { SamplerKind } from '../../state/model';
 import { formatNumber } from '../../words/format';
@@ -96,8 +96,10 @@ export function RateMap(props: Props) {
   const series = 'series' in computed ? computed.series : null;
 
   // The chart itself: rebuilt when the axis kind or the unit changes, resized with its box.
+  // Made as soon as the map is rendered seen (a layout effect): a page about to be printed gets
+  // its chart before the printout is laid out.
   const hasSeries = series !== null;
-  useEffect(() => {
+  useLayoutEffect(() => {
     const holder = holderRef.current;
     const root = rootRef.current;
     if (!seen || !chartModule || !holder || !root || !series || !('limit' in computed)) return;
