@@ -1,6 +1,7 @@
 // @vitest-environment happy-dom
 // The chart library draws on a real canvas, which happy-dom lacks: the uPlot adapter is
 // replaced by a recorder here; the real chart is checked in Chromium by the browser tests.
+import type { ComponentProps } from 'preact';
 import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/preact';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { RateChart, RateChartOptions } from '../../../src/ui/rate-map/chart';
@@ -65,17 +66,23 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
+/** The map of the two test parts under a strobe at 88 Hz, with `props` over those. */
+function strobeMap(props: Partial<ComponentProps<typeof RateMap>> = {}) {
+  return (
+    <RateMap
+      parts={parts}
+      range={range}
+      rateHz={88}
+      onRateChange={() => {}}
+      samplerKind="strobe"
+      {...props}
+    />
+  );
+}
+
 describe('RateMap', () => {
   it('loads the chart with every part’s column, the range and the current rate, on a log axis for a wide range', async () => {
-    render(
-      <RateMap
-        parts={parts}
-        range={range}
-        rateHz={88}
-        onRateChange={() => {}}
-        samplerKind="strobe"
-      />,
-    );
+    render(strobeMap());
     await waitFor(() => expect(made).toHaveLength(1));
     const { options, series, rateHz } = made[0];
     expect(series.apparentRpm).toHaveLength(2);
@@ -90,15 +97,7 @@ describe('RateMap', () => {
 
   it('draws nothing while it is off screen: a map below the fold costs the page’s opening nothing', async () => {
     reportIntersections(false);
-    render(
-      <RateMap
-        parts={parts}
-        range={range}
-        rateHz={88}
-        onRateChange={() => {}}
-        samplerKind="strobe"
-      />,
-    );
+    render(strobeMap());
     // The chart's code has loaded (the legend is up) and still nothing is drawn.
     await screen.findByText('Cooling fan');
     for (let i = 0; i < 5; i++) await new Promise((resolve) => setTimeout(resolve, 10));
@@ -133,15 +132,7 @@ describe('RateMap', () => {
   });
 
   it('rebuilds the chart on a linear axis when the log axis is turned off', async () => {
-    render(
-      <RateMap
-        parts={parts}
-        range={range}
-        rateHz={88}
-        onRateChange={() => {}}
-        samplerKind="strobe"
-      />,
-    );
+    render(strobeMap());
     await waitFor(() => expect(made).toHaveLength(1));
     fireEvent.click(screen.getByLabelText('Logarithmic rate axis'));
     await waitFor(() => expect(made).toHaveLength(2));
@@ -192,15 +183,7 @@ describe('RateMap', () => {
 
   it('says so, and keeps the legend, where the browser cannot draw the chart', async () => {
     noCanvas = true;
-    render(
-      <RateMap
-        parts={parts}
-        range={range}
-        rateHz={88}
-        onRateChange={() => {}}
-        samplerKind="strobe"
-      />,
-    );
+    render(strobeMap());
     await waitFor(() =>
       expect(screen.getByText('This browser cannot draw the rate map.')).toBeTruthy(),
     );
@@ -223,26 +206,9 @@ describe('RateMap', () => {
   });
 
   it('warns that parts looking still are still turning, unless the screen shows it beside the map', () => {
-    const { rerender } = render(
-      <RateMap
-        parts={parts}
-        range={range}
-        rateHz={88}
-        onRateChange={() => {}}
-        samplerKind="strobe"
-      />,
-    );
+    const { rerender } = render(strobeMap());
     expect(screen.getByText(/still turning at full speed/)).toBeTruthy();
-    rerender(
-      <RateMap
-        parts={parts}
-        range={range}
-        rateHz={88}
-        onRateChange={() => {}}
-        samplerKind="strobe"
-        showCautions={false}
-      />,
-    );
+    rerender(strobeMap({ showCautions: false }));
     expect(screen.queryByText(/still turning at full speed/)).toBeNull();
   });
 });
