@@ -71,9 +71,12 @@ export interface SaveResult {
   outcome: Outcome;
 }
 
-const collator = new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' });
+// Made on the first sort, not as the session opens: building a collator takes milliseconds on a
+// phone.
+let collator: Intl.Collator | undefined;
 
 function byName(a: Machine, b: Machine): number {
+  collator ??= new Intl.Collator(undefined, { numeric: true, sensitivity: 'base' });
   return (
     collator.compare(a.name, b.name) ||
     a.createdAt.localeCompare(b.createdAt) ||

@@ -4,18 +4,49 @@
 /** Shown in place of a number that cannot be computed. */
 export const NO_VALUE = '—';
 
-const grouped = new Map<number, Intl.NumberFormat>();
+/**
+ * `value` rounded to at most `decimals` places, trailing zeros dropped, thousands grouped with
+ * commas: what `new Intl.NumberFormat('en-US', { maximumFractionDigits: decimals })` writes.
+ * Like it, this rounds the number's shortest decimal form (1.005 is "1.005", not the binary
+ * 1.00499…) half away from zero; test/words/format.test.ts compares the two. Written by hand
+ * because building each Intl formatter costs milliseconds on a phone, on the way to the first
+ * paint.
+ */
+function groupedFixed(value: number, decimals: number): string {
+  const { whole, fraction } = roundedDecimal(Math.abs(value), decimals);
+  let grouped = whole.slice(0, ((whole.length - 1) % 3) + 1);
+  for (let i = grouped.length; i < whole.length; i += 3) grouped += ',' + whole.slice(i, i + 3);
+  return (value < 0 ? '-' : '') + grouped + (fraction ? '.' + fraction : '');
+}
 
-function formatter(decimals: number): Intl.NumberFormat {
-  let f = grouped.get(decimals);
-  if (!f) {
-    f = new Intl.NumberFormat('en-US', {
-      maximumFractionDigits: decimals,
-      minimumFractionDigits: 0,
-    });
-    grouped.set(decimals, f);
+/** The digits of `abs` (finite, not negative) rounded half up at `decimals` places, trailing zeros dropped. */
+function roundedDecimal(abs: number, decimals: number): { whole: string; fraction: string } {
+  // The shortest text that reads back as abs: "1.005", "1.2e-7", "1e+21".
+  const [mantissa, exponent] = String(abs).split('e');
+  const [intPart, fracPart = ''] = mantissa.split('.');
+  let digits = intPart + fracPart;
+  // Where the decimal point falls among the digits.
+  let point = intPart.length + (exponent ? Number(exponent) : 0);
+  if (point < 0) {
+    digits = '0'.repeat(-point) + digits;
+    point = 0;
   }
-  return f;
+  if (point > digits.length) digits = digits.padEnd(point, '0');
+  const keep = point + decimals;
+  let kept = digits.slice(0, keep).padEnd(keep, '0');
+  if (digits.length > keep && digits[keep] >= '5') {
+    // Carry the one up through the nines.
+    let i = kept.length - 1;
+    while (i >= 0 && kept[i] === '9') i--;
+    kept =
+      i < 0
+        ? '1' + '0'.repeat(kept.length)
+        : kept.slice(0, i) + String(Number(kept[i]) + 1) + '0'.repeat(kept.length - i - 1);
+    if (i < 0) point++;
+  }
+  const whole = kept.slice(0, point).replace(/^0+(?=\d)/, '') || '0';
+  const fraction = kept.slice(point).replace(/0+$/, '');
+  return { whole, fraction };
 }
 
 /** Decimals that keep about four significant figures without printing noise. */
@@ -37,7 +68,7 @@ function decimalsFor(abs: number): number {
 export function formatNumber(value: number, decimals?: number): string {
   if (typeof value !== 'number' || !Number.isFinite(value)) return NO_VALUE;
   const d = decimals ?? decimalsFor(Math.abs(value));
-  const text = formatter(d).format(value);
+  const text = groupedFixed(value, d);
   // Rounding can leave "-0": a speed of zero has no direction.
   return /^-0(\.0*)?$/.test(text) ? '0' : text;
 }

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
 import {
   formatExposure,
@@ -10,7 +11,54 @@ import {
 } from '../../src/words/format';
 import { formatRate, formatRateSpan } from '../../src/words/rates';
 
+/** The reference: the browser's own en-US number formatting (ECMA-402 Intl.NumberFormat). */
+function intlText(value: number, decimals: number): string {
+  const text = new Intl.NumberFormat('en-US', { maximumFractionDigits: decimals }).format(value);
+  return /^-0(\.0*)?$/.test(text) ? '0' : text;
+}
+
 describe('formatNumber', () => {
+  test('writes what Intl.NumberFormat en-US writes, for any finite number and decimals 0–6', () => {
+    // Reference library: ECMA-402 Intl.NumberFormat, as built into Node. Halfway cases of the
+    // exact binary value (0.125, 2.5, 1,234.5) and values that only look halfway (1.005) both
+    // round the same way in each.
+    for (const [v, d] of [
+      [0.125, 2],
+      [2.5, 0],
+      [-2.5, 0],
+      [1234.5, 0],
+      [1.005, 2],
+      [999.95, 1],
+      [999999.5, 0],
+      [-0.0004, 3],
+      [1e21, 0],
+      [123456789012345680000, 2],
+    ] as const) {
+      expect(formatNumber(v, d), `${v} to ${d}`).toBe(intlText(v, d));
+    }
+    fc.assert(
+      fc.property(
+        fc.double({ noNaN: true, noDefaultInfinity: true, min: -1e22, max: 1e22 }),
+        fc.integer({ min: 0, max: 6 }),
+        (v, d) => formatNumber(v, d) === intlText(v, d),
+      ),
+      { numRuns: 20_000 },
+    );
+    fc.assert(
+      fc.property(
+        fc.integer({ min: -10_000_000, max: 10_000_000 }),
+        fc.integer({ min: 0, max: 4 }),
+        (n, d) => {
+          const v = n / 1000;
+          return (
+            formatNumber(v, d) === intlText(v, d) && formatNumber(v) === intlText(v, decimalsOf(v))
+          );
+        },
+      ),
+      { numRuns: 20_000 },
+    );
+  });
+
   test('groups thousands and keeps about four significant figures', () => {
     expect(formatNumber(1770)).toBe('1,770');
     expect(formatNumber(123.456)).toBe('123.5');
@@ -114,3 +162,9 @@ describe("rates in each sampler's unit", () => {
     expect(formatRateSpan(29, 30, 'strobe', 'fpm')).toBe('1,740 – 1,800 fpm');
   });
 });
+
+/** The decimals formatNumber picks itself: about four significant figures. */
+function decimalsOf(v: number): number {
+  const abs = Math.abs(v);
+  return abs >= 1000 ? 0 : abs >= 100 ? 1 : abs >= 10 ? 2 : abs >= 1 ? 3 : 4;
+}

@@ -32,7 +32,7 @@ export function CheckPreview() {
   const input = previewInputOf(picturedAnswer.value, picturedSetup.value);
   const { module: widgets, failed } = lazyWidgets.use();
   return (
-    <Panel title="Preview" id="preview">
+    <Panel title="Preview" id="preview" offscreenSkipped>
       {input === null ? (
         <p class={style.quiet}>Steady light samples nothing: the part looks as it really turns.</p>
       ) : widgets ? (
@@ -63,7 +63,7 @@ export function CheckRateMap() {
   const input = rateMapInputOf(picturedAnswer.value, picturedSetup.value);
   const { module: widgets, failed } = lazyWidgets.use();
   return (
-    <Panel title="Rate map" id="rate-map">
+    <Panel title="Rate map" id="rate-map" offscreenSkipped>
       {widgets ? (
         <widgets.RateMap
           {...input}

@@ -1,7 +1,13 @@
 import { useLayoutEffect, useRef, useState } from 'preact/hooks';
-import { apparentMotion, cautionFlags, type CautionContext } from '../../core';
+import {
+  apparentMotion,
+  cautionFlags,
+  type CautionContext,
+  type Part,
+  type Range,
+} from '../../core';
 import { openCheckScreen } from '../../state/navigation';
-import { formatRate, formatRateSpan } from '../../words/rates';
+import { formatRate, formatRateSpan, type FlashUnit } from '../../words/rates';
 import {
   chain,
   editChain,
@@ -17,7 +23,9 @@ import { MAX_PARTS } from '../../state/validate';
 import { Cautions } from '../../ui/cautions';
 import { ChoiceGroup } from '../../ui/choice-group';
 import { Panel } from '../../ui/panel';
+import { useAfterPaint } from '../../ui/afterPaint';
 import { RateMap } from '../../ui/rate-map';
+import { partsKey } from '../../ui/rate-map/chart-data';
 import { ReportBar } from '../../ui/report-bar';
 import { ResultTable, type ResultColumn } from '../../ui/result-table';
 import { ToolLayout } from '../../ui/tool-layout';
@@ -235,19 +243,13 @@ export function WholeMachineScreen(_props: Props) {
         </p>
       </Panel>
       <Panel title="Rate map" id="chain-map">
-        <RateMap
-          parts={parts.map((p) => ({
-            name: p.name,
-            speedHz: p.speedHz,
-            symmetry: p.symmetry,
-            tolerance: p.tolerance,
-          }))}
+        <LaterRateMap
+          parts={parts}
           range={r.range}
           rateHz={r.rateHz}
           onRateChange={useRate}
           samplerKind={kind}
           flashUnit={unit}
-          showCautions={false}
         />
       </Panel>
       <ReportBar
@@ -275,4 +277,41 @@ export function WholeMachineScreen(_props: Props) {
 function lookAt(p: DerivedPart, rateHz: number, sampler: 'flash' | 'frames'): string {
   const part = { speedHz: p.speedHz, symmetry: p.symmetry, tolerance: p.tolerance };
   return verdictHeadline(verdictOf(apparentMotion(part, rateHz, { sampler }), part));
+}
+
+/**
+ * The rate map of the chain's parts, drawn a paint after a keystroke changes them: the key
+ * paints first, and the map's series and drawing follow in a task of their own.
+ */
+function LaterRateMap(props: {
+  parts: ReadonlyArray<Part & { name: string }>;
+  range: Range;
+  rateHz: number;
+  onRateChange: (rateHz: number) => void;
+  samplerKind: SamplerKind;
+  flashUnit: FlashUnit;
+}) {
+  const now = {
+    parts: props.parts.map((p) => ({
+      name: p.name,
+      speedHz: p.speedHz,
+      symmetry: p.symmetry,
+      tolerance: p.tolerance,
+    })),
+    range: props.range,
+    samplerKind: props.samplerKind,
+  };
+  const later = useAfterPaint(
+    now,
+    `${partsKey(now.parts)}|${now.range.minHz}|${now.range.maxHz}|${now.samplerKind}`,
+  );
+  return (
+    <RateMap
+      {...later}
+      rateHz={props.rateHz}
+      onRateChange={props.onRateChange}
+      flashUnit={props.flashUnit}
+      showCautions={false}
+    />
+  );
 }

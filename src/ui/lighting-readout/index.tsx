@@ -33,7 +33,7 @@ export function LightingReadout({ class: extra, lighting }: Props) {
   const visible = l.svm >= 1;
   const steady = l.modulationPercent === 0;
   return (
-    <Panel title="The light" id="lighting-readout" class={extra}>
+    <Panel title="The light" id="lighting-readout" class={extra} offscreenSkipped>
       <dl class={style.facts}>
         <div>
           <dt>Flicker</dt>

@@ -10,15 +10,26 @@ interface Props {
   class?: string;
   /** The heading can take focus from code (tabIndex -1): a place to land when what had focus went away. */
   focusableTitle?: boolean;
+  /**
+   * The browser may skip rendering the panel while it is off screen (content-visibility): for
+   * results that change with every keystroke. Not for panels of controls, whose size and place
+   * a page's own checks and a screen reader's virtual cursor rely on while they are off screen.
+   */
+  offscreenSkipped?: boolean;
 }
 
 /** A titled card: the building block of every screen. */
-export function Panel({ title, id, children, class: extra, focusableTitle }: Props) {
+export function Panel({
+  title,
+  id,
+  children,
+  class: extra,
+  focusableTitle,
+  offscreenSkipped,
+}: Props) {
+  const classes = [style.panel, offscreenSkipped && style.offscreenSkipped, extra].filter(Boolean);
   return (
-    <section
-      class={extra ? `${style.panel} ${extra}` : style.panel}
-      aria-labelledby={`${id}-title`}
-    >
+    <section class={classes.join(' ')} aria-labelledby={`${id}-title`}>
       <h2 id={`${id}-title`} class={style.title} tabIndex={focusableTitle ? -1 : undefined}>
         {title}
       </h2>

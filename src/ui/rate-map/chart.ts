@@ -46,10 +46,10 @@ export interface RateChartOptions {
 
 export interface RateChart {
   /**
-   * New data (parts, range or sampler changed); the cursor moves to `rateHz`. Drawn in the next
-   * animation frame, then `drawn` is called.
+   * New data (parts, range or sampler changed); the cursor moves to `rateHz`. Drawn before this
+   * task ends (uPlot draws in a microtask).
    */
-  update(series: RateMapSeries, rateHz: number, speedLimitRpm: number, drawn?: () => void): void;
+  update(series: RateMapSeries, rateHz: number, speedLimitRpm: number): void;
   /** Moves the current-rate cursor; redraws in the next frame without rebuilding the lines. */
   setRate(rateHz: number): void;
   resize(width: number, height: number): void;
@@ -182,39 +182,26 @@ export function createRateChart(
   over.addEventListener('pointerup', up);
   over.addEventListener('pointercancel', up);
 
-  // At most one drawing per animation frame, of the newest data and rate: new lines (setData)
-  // when the data changed since the last drawing, else only the overlay with the cursor.
-  let newData = false;
+  // New data is drawn at once (the map hands it over in the task that worked it out); the cursor
+  // alone, which a drag moves many times a frame, at most once per animation frame.
   let frame = 0;
-  let onDrawn: Array<() => void> = [];
-  const draw = () => {
+  const drawRate = () => {
     frame = 0;
-    if (newData) {
-      plot.scales.y.asinh = speedLinearWithinRpm(current.speedLimitRpm);
-      plot.setData(toChartColumns(current.series) as uPlot.AlignedData);
-    } else {
-      plot.redraw(false, false);
-    }
-    newData = false;
-    const waiting = onDrawn;
-    onDrawn = [];
-    for (const done of waiting) done();
-  };
-  const drawSoon = () => {
-    frame ||= requestAnimationFrame(draw);
+    plot.redraw(false, false);
   };
 
   return {
-    update(next, nextRate, speedLimitRpm, drawn) {
+    update(next, nextRate, speedLimitRpm) {
       current = { series: next, rateHz: nextRate, speedLimitRpm };
-      newData = true;
-      if (drawn) onDrawn.push(drawn);
-      drawSoon();
+      cancelAnimationFrame(frame);
+      frame = 0;
+      plot.scales.y.asinh = speedLinearWithinRpm(speedLimitRpm);
+      plot.setData(toChartColumns(next) as uPlot.AlignedData);
     },
     setRate(nextRate) {
       if (nextRate === current.rateHz) return;
       current = { ...current, rateHz: nextRate };
-      drawSoon();
+      frame ||= requestAnimationFrame(drawRate);
     },
     resize(width, height) {
       if (width > 0 && height > 0 && (width !== plot.width || height !== plot.height))

@@ -1,4 +1,4 @@
-import { useEffect, useLayoutEffect, useRef, useState } from 'preact/hooks';
+import { useEffect, useLayoutEffect, useMemo, useRef, useState } from 'preact/hooks';
 import { InputError, rateMapSeries, type Part, type Range, type RateMapSeries } from '../../core';
 import type { SamplerKind } from '../../state/model';
 import { formatNumber } from '../../words/format';
@@ -72,6 +72,8 @@ export function RateMap(props: Props) {
   const rootRef = useRef<HTMLDivElement>(null);
   const holderRef = useRef<HTMLDivElement>(null);
   const chart = useRef<RateChart | null>(null);
+  /** The worked-out map the chart shows. */
+  const drawnFrom = useRef<Computed | null>(null);
   // Drawn once it comes near the screen: below the fold on a phone, it costs the page's opening
   // nothing (its box holds its size meanwhile: .plot in style.module.css).
   const seen = useSeen(rootRef);
@@ -83,17 +85,15 @@ export function RateMap(props: Props) {
   // Everything the series is worked out from; `key` stands for the parts' numbers, so a new
   // array with the same parts reuses the map.
   const inputsKey = `${key}|${range.minHz}|${range.maxHz}|${log}|${sampler}`;
-  // Worked out at once for the first drawing; after that, out of the keystroke's way: once per
-  // animation frame at most, and only for the newest inputs (a newer key cancels the frame).
-  const [computed, setComputed] = useState(() => computeMap(parts, range, log, sampler, key));
-  useEffect(() => {
-    if (computed.inputsKey === inputsKey) return;
-    const frame = requestAnimationFrame(() =>
-      setComputed(computeMap(parts, range, log, sampler, key)),
-    );
-    return () => cancelAnimationFrame(frame);
-  }, [inputsKey]);
-  const series = 'series' in computed ? computed.series : null;
+  // Worked out as the map renders, and only once it has come near the screen: a map below the
+  // fold costs a keystroke nothing. A screen that renders it on every keystroke hands it its
+  // parts a paint later (the check screen: src/state/check/listed.ts; the whole machine:
+  // useAfterPaint), so the series and its drawing never hold up the key that changed them.
+  const computed = useMemo(
+    () => (seen ? computeMap(parts, range, log, sampler, key) : null),
+    [seen, inputsKey],
+  );
+  const series = computed !== null && 'series' in computed ? computed.series : null;
 
   // The chart itself: rebuilt when the axis kind or the unit changes, resized with its box.
   // Made as soon as the map is rendered seen (a layout effect): a page about to be printed gets
@@ -102,7 +102,8 @@ export function RateMap(props: Props) {
   useLayoutEffect(() => {
     const holder = holderRef.current;
     const root = rootRef.current;
-    if (!seen || !chartModule || !holder || !root || !series || !('limit' in computed)) return;
+    if (!seen || !chartModule || !holder || !root || !series) return;
+    if (computed === null || !('limit' in computed)) return;
     const unit = rateUnit(samplerKind, flashUnit);
     const size = chartSize(holder);
     let made: RateChart;
@@ -131,6 +132,7 @@ export function RateMap(props: Props) {
     }
     setDrawFailed(false);
     chart.current = made;
+    drawnFrom.current = computed;
     markDrawn(holder, computed.log, computed.partsKey);
     const observer =
       typeof ResizeObserver === 'function'
@@ -141,29 +143,31 @@ export function RateMap(props: Props) {
       observer?.disconnect();
       made.destroy();
       chart.current = null;
+      drawnFrom.current = null;
       markDrawn(holder, null, null);
     };
     // Data and rate changes go through update() and setRate() below, without a rebuild.
   }, [
     seen,
     chartModule,
-    computed.log,
+    computed?.log,
     samplerKind,
     flashUnit,
     hasSeries,
-    computed.range.minHz,
-    computed.range.maxHz,
+    computed?.range.minHz,
+    computed?.range.maxHz,
     scheme,
   ]);
 
-  useEffect(() => {
+  // New data is drawn in the task that rendered it, before the browser paints: no frame of its
+  // own that a keystroke could have to wait behind.
+  useLayoutEffect(() => {
     const holder = holderRef.current;
-    if (series && 'limit' in computed && chart.current && holder) {
-      // The markers say what is drawn: set once the chart has drawn this series.
-      chart.current.update(series, latest.current.rateHz, computed.limit, () =>
-        markDrawn(holder, computed.log, computed.partsKey),
-      );
-    }
+    if (!series || computed === null || !('limit' in computed) || !chart.current || !holder) return;
+    if (drawnFrom.current === computed) return;
+    drawnFrom.current = computed;
+    chart.current.update(series, latest.current.rateHz, computed.limit);
+    markDrawn(holder, computed.log, computed.partsKey);
   }, [computed]);
 
   useEffect(() => {
@@ -192,7 +196,7 @@ export function RateMap(props: Props) {
           <span>Logarithmic rate axis</span>
         </label>
       </div>
-      {'error' in computed ? (
+      {computed !== null && 'error' in computed ? (
         <p class={style.problem} role="alert">
           {computed.error}
         </p>
@@ -244,6 +248,7 @@ export function RateMap(props: Props) {
         </li>
       </ul>
       {series &&
+        computed !== null &&
         unresolvedShare(series.resolvedFromHz, computed.range, computed.log) > NOTE_SHARE && (
           <p class={style.note}>
             Below {formatRate(Math.max(...series.resolvedFromHz), samplerKind, flashUnit)} the

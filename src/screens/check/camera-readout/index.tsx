@@ -13,7 +13,7 @@ export function CameraReadout({ class: extra }: Props) {
   const c = listedAnswer.value.camera;
   if (!c) return null;
   return (
-    <Panel title="In each frame" id="camera-readout" class={extra}>
+    <Panel title="In each frame" id="camera-readout" class={extra} offscreenSkipped>
       <dl class={style.facts}>
         <div>
           <dt>Exposure</dt>

@@ -33,7 +33,7 @@ export function RateSuggestions({ class: extra }: Props) {
   // Rates worked out from a refused entry are marked not current, out of reach (docs/physics.md §10).
   const refusal = checkProblem.value ?? listsProblem.value;
   return (
-    <Panel title="Rates to try" id="suggestions" class={extra}>
+    <Panel title="Rates to try" id="suggestions" class={extra} offscreenSkipped>
       <div class={style.block}>
         <h3 class={style.subtitle}>
           {r.sampler === 'frames' ? 'Rates that freeze it' : 'Lock-in rates nearby'}

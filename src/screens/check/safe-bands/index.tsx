@@ -29,7 +29,7 @@ export function SafeBands({ class: extra }: Props) {
     r.part.tolerance > 0 ? ` for any speed within ±${formatPercent(r.part.tolerance * 100)}` : '';
   const step = settingStepWords(r.sampler);
   return (
-    <Panel title="Rates that show its true way" id="bands" class={extra}>
+    <Panel title="Rates that show its true way" id="bands" class={extra} offscreenSkipped>
       {current && (
         <p
           class={style.current}
