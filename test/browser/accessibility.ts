@@ -24,6 +24,17 @@ export interface AxeViolation {
  * Content-Security-Policy does not govern (an injected <script> tag would be refused).
  */
 export async function axeViolations(page: Page): Promise<AxeViolation[]> {
+  // The browser skips drawing result panels while they are off screen (content-visibility),
+  // keeping their last drawn size: scroll through once, as a person would, so every panel is
+  // drawn at its present size before axe measures where things are.
+  await page.evaluate(async () => {
+    const frame = () => new Promise((drawn) => requestAnimationFrame(() => drawn(null)));
+    for (let y = 0; y < document.documentElement.scrollHeight; y += innerHeight / 2) {
+      window.scrollTo(0, y);
+      await frame();
+      await frame();
+    }
+  });
   // From the top of the page, so no sticky part covers text whose contrast axe must measure.
   await page.evaluate(() => window.scrollTo(0, 0));
   const loaded = await page.evaluate(() => 'axe' in window);
