@@ -42,3 +42,12 @@ export function reportCsv(
 export function yesNo(value: boolean): string {
   return value ? 'yes' : 'no';
 }
+
+/**
+ * When a report was printed, in the device's local time: "2026-12-02 15:48". Written by hand:
+ * toLocaleString builds a date formatter, which costs milliseconds on a phone at every render.
+ */
+export function printedAt(date: Date): string {
+  const two = (n: number) => String(n).padStart(2, '0');
+  return `${date.getFullYear()}-${two(date.getMonth() + 1)}-${two(date.getDate())} ${two(date.getHours())}:${two(date.getMinutes())}`;
+}

@@ -1,8 +1,8 @@
-import { useState } from 'preact/hooks';
+import { useEffect, useState } from 'preact/hooks';
 import type { CautionContext } from '../../core';
 import { header } from '../../state/work';
 import { PLANNING_AID_CAUTION, safetyCautions } from '../../words/cautions';
-import { headerLines, reportCsv } from '../../words/report';
+import { headerLines, printedAt, reportCsv } from '../../words/report';
 import { downloadText, fileStem } from '../download';
 import { ReportHeaderFields } from './header-fields';
 import style from './style.module.css';
@@ -24,7 +24,13 @@ interface Props {
  */
 export function ReportBar({ title, csv, cautions }: Props) {
   const [problem, setProblem] = useState<string | null>(null);
-  const printed = new Date();
+  // The time on the printout: taken again as the page is about to print.
+  const [printed, setPrinted] = useState(() => new Date());
+  useEffect(() => {
+    const now = () => setPrinted(new Date());
+    addEventListener('beforeprint', now);
+    return () => removeEventListener('beforeprint', now);
+  }, []);
   const h = header.value;
   const lines = safeCautions(cautions);
   const save = () => {
@@ -65,7 +71,7 @@ export function ReportBar({ title, csv, cautions }: Props) {
             </div>
           ))}
         </dl>
-        <p>Printed {printed.toLocaleString()}</p>
+        <p>Printed {printedAt(printed)}</p>
         <ul class={style.printCautions}>
           {lines.map((line) => (
             <li key={line}>{line}</li>
