@@ -44,14 +44,14 @@ const MAP_POINTS = 2000;
 /** The crowded low end is worth a note once it takes more than this share of the axis (a few pixels). */
 const NOTE_SHARE = 0.01;
 
-/** uPlot and its stylesheet, loaded on first use (the first screen stays small). */
+/** uPlot and its stylesheet, loaded once the map comes near the screen. */
 const chartCode = lazyModule(() => import('./chart'));
 
 /**
  * The rate map: every part's apparent speed against the sampler's rate over its range, the
  * alias sawtooth with breaks at its edges, lock-in rates marked with their image counts,
  * misleading bands shaded, the current rate as a cursor. Tap or drag to set the rate.
- * uPlot and its stylesheet load on first use.
+ * uPlot and its stylesheet load once the map comes near the screen.
  */
 export function RateMap(props: Props) {
   const {
@@ -66,7 +66,6 @@ export function RateMap(props: Props) {
     class: extra,
   } = props;
   const [log, setLog] = useState(() => props.logAxis ?? range.maxHz / range.minHz > 20);
-  const { module: chartModule, failed: loadFailed } = chartCode.use();
   const [drawFailed, setDrawFailed] = useState(false);
   const scheme = useColourScheme();
   const rootRef = useRef<HTMLDivElement>(null);
@@ -75,8 +74,12 @@ export function RateMap(props: Props) {
   /** The worked-out map the chart shows. */
   const drawnFrom = useRef<Computed | null>(null);
   // Drawn once it comes near the screen: below the fold on a phone, it costs the page's opening
-  // nothing (its box holds its size meanwhile: .plot in style.module.css).
+  // nothing (its box holds its size meanwhile: .plot in style.module.css). uPlot itself is
+  // fetched then too: building its number and date formatters as it loads takes about 20 ms on
+  // a desktop, four times that on a phone. A page printed before the map was ever near the
+  // screen prints it undrawn.
   const seen = useSeen(rootRef);
+  const { module: chartModule, failed: loadFailed } = chartCode.use(seen);
   const latest = useRef({ onRateChange, rateHz });
   latest.current = { onRateChange, rateHz };
 
