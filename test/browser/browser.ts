@@ -208,3 +208,21 @@ export async function printedHeaderLines(page: Page): Promise<Record<string, str
       return out;
     });
 }
+
+/**
+ * A picture of the whole page with every part drawn. Chromium skips drawing result panels off
+ * screen (content-visibility) and a plain full-page capture can come before it draws them, so
+ * the window is made as tall as the page for the capture, then put back.
+ */
+export async function wholePageScreenshot(page: Page, path: string): Promise<void> {
+  const size = page.viewportSize()!;
+  const height = await page.evaluate(() => document.documentElement.scrollHeight);
+  await page.setViewportSize({ width: size.width, height });
+  // Two frames: one to find the panels now on screen, one to draw them.
+  await page.evaluate(
+    () =>
+      new Promise((drawn) => requestAnimationFrame(() => requestAnimationFrame(() => drawn(null)))),
+  );
+  await page.screenshot({ path, fullPage: true });
+  await page.setViewportSize(size);
+}

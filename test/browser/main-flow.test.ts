@@ -11,7 +11,7 @@ import {
   rollingSkewDegrees,
 } from '../../src/core';
 import { formatNumber, formatRpmWithDirection } from '../../src/words/format';
-import { openApp, openBrowser, typeInto, type Session } from './browser';
+import { openApp, openBrowser, typeInto, type Session, wholePageScreenshot } from './browser';
 
 let session: Session | undefined;
 
@@ -128,7 +128,7 @@ describe('the main flow', () => {
     // A camera's frames are not flashes: no photosensitivity caution.
     expect(await page.getByTestId('photosensitivity-notice').count()).toBe(0);
     mkdirSync(shots, { recursive: true });
-    await page.screenshot({ path: `${shots}/check-phone-camera-full.png`, fullPage: true });
+    await wholePageScreenshot(page, `${shots}/check-phone-camera-full.png`);
   });
 
   test('lighting shows the flicker risk class the core gives', async () => {
@@ -144,6 +144,6 @@ describe('the main flow', () => {
       .poll(() => page.getByTestId('flicker-risk').innerText())
       .toBe('Between the no-effect and low-risk lines');
     mkdirSync(shots, { recursive: true });
-    await page.screenshot({ path: `${shots}/check-desktop-lighting-full.png`, fullPage: true });
+    await wholePageScreenshot(page, `${shots}/check-desktop-lighting-full.png`);
   });
 });

@@ -6,7 +6,14 @@ import { mkdirSync } from 'node:fs';
 import type { Locator, Page } from 'playwright-core';
 import { apparentMotion, lockRates, type Part, type Range } from '../../src/core';
 import { formatRpmWithDirection } from '../../src/words/format';
-import { openApp, openBrowser, typeInto, type Session, SIZES } from './browser';
+import {
+  openApp,
+  openBrowser,
+  typeInto,
+  type Session,
+  SIZES,
+  wholePageScreenshot,
+} from './browser';
 
 let session: Session | undefined;
 
@@ -303,10 +310,7 @@ describe('screenshots of the check screen with the preview and the rate map', ()
           () => document.documentElement.scrollWidth - window.innerWidth,
         );
         expect(overflow).toBeLessThanOrEqual(0);
-        await page.screenshot({
-          path: `${shots}/check-with-views-${size.name}-${scheme}.png`,
-          fullPage: true,
-        });
+        await wholePageScreenshot(page, `${shots}/check-with-views-${size.name}-${scheme}.png`);
         // Each widget as it looks on screen, scrolled to the middle, clear of the pinned verdict.
         for (const [name, id] of [
           ['map', 'rate-map-title'],

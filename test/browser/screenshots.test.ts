@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import { mkdirSync, statSync } from 'node:fs';
-import { openApp, openBrowser, type Session, SIZES } from './browser';
+import { openApp, openBrowser, type Session, SIZES, wholePageScreenshot } from './browser';
 
 const dir = 'test-output/screenshots';
 let session: Session | undefined;
@@ -24,10 +24,7 @@ describe('screenshots of the check and machines screens', () => {
         await openApp(page, inject('baseUrl'));
         const checkFile = `${dir}/check-${size.name}-${scheme}.png`;
         await page.screenshot({ path: checkFile });
-        await page.screenshot({
-          path: `${dir}/check-${size.name}-${scheme}-full.png`,
-          fullPage: true,
-        });
+        await wholePageScreenshot(page, `${dir}/check-${size.name}-${scheme}-full.png`);
         // Nothing may stick out sideways: a phone would scroll the whole page.
         const overflow = await page.evaluate(
           () => document.documentElement.scrollWidth - window.innerWidth,
