@@ -3,6 +3,7 @@ import { useRef } from 'preact/hooks';
 import { check, checkProblem, picturesBehind } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
 import { Cautions } from '../../ui/cautions';
+import { Later } from '../../ui/later';
 import { NotCurrent } from '../../ui/not-current';
 import { PartForm } from '../../ui/part-form';
 import { SamplerForm } from './sampler-form';
@@ -85,15 +86,21 @@ export function CheckScreen({ preview = <CheckPreview />, chart = <CheckRateMap 
 function LaterResults({ part }: { part: 'lists' | 'report' }) {
   const { module, failed } = results.use();
   if (module) {
+    // Keeping the machine and the report come a paint and two after the lists: each is made in
+    // a task of its own.
     return part === 'lists' ? (
       <>
         <Following>
           <module.CheckLists />
         </Following>
-        <module.KeepShare />
+        <Later paints={1}>
+          <module.KeepShare />
+        </Later>
       </>
     ) : (
-      <module.CheckReport />
+      <Later paints={2}>
+        <module.CheckReport />
+      </Later>
     );
   }
   if (part === 'report') return null;

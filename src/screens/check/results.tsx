@@ -5,7 +5,7 @@
 // the report work on the set-up on screen.
 import { computed } from '@preact/signals';
 import { check, checkProblem } from '../../state/check';
-import { computeCheck, listsProblem } from '../../state/check/lists';
+import { computeCheck, listedCheck, listsProblem } from '../../state/check/lists';
 import { problemsAmong } from '../../state/fieldProblems';
 import { activeIndex, partLabel } from '../../state/model';
 import { flashUnit, setup } from '../../state/setup';
@@ -18,6 +18,11 @@ import { KeepShare } from './keep-share';
 import { RateSuggestions } from './rate-suggestions';
 import { ResultsGuard } from './results-guard';
 import { SafeBands } from './safe-bands';
+
+/** Works out the lists before they are first drawn (lazy-results.ts), in a task of its own. */
+export function workOutLists(): void {
+  void listedCheck.value;
+}
 
 /** The lists under the answer, each marked not current while an entry is refused. */
 export function CheckLists() {
