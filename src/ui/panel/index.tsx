@@ -11,9 +11,11 @@ interface Props {
   /** The heading can take focus from code (tabIndex -1): a place to land when what had focus went away. */
   focusableTitle?: boolean;
   /**
-   * The browser may skip rendering the panel while it is off screen (content-visibility): for
-   * results that change with every keystroke. Not for panels of controls, whose size and place
-   * a page's own checks and a screen reader's virtual cursor rely on while they are off screen.
+   * The browser may skip rendering the panel while it is off screen (content-visibility; its
+   * content stays in the page and in the accessibility tree): for results that change with every
+   * keystroke. Not for panels of controls: off screen, a skipped panel's inner boxes do not stand
+   * where they will, and code that measures a control (scrolling it clear of the pinned verdict)
+   * would measure wrong.
    */
   offscreenSkipped?: boolean;
 }

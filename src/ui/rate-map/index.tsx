@@ -99,8 +99,8 @@ export function RateMap(props: Props) {
   const series = computed !== null && 'series' in computed ? computed.series : null;
 
   // The chart itself: rebuilt when the axis kind or the unit changes, resized with its box.
-  // Made as soon as the map is rendered seen (a layout effect): a page about to be printed gets
-  // its chart before the printout is laid out.
+  // Made as soon as the map is rendered seen with uPlot loaded (a layout effect): a page about
+  // to be printed gets its chart before the printout is laid out, once uPlot has come.
   const hasSeries = series !== null;
   useLayoutEffect(() => {
     const holder = holderRef.current;
