@@ -4,6 +4,7 @@ import preact from '@preact/preset-vite';
 import { VitePWA } from 'vite-plugin-pwa';
 import { contentSecurityPolicy } from './scripts/content-security-policy.ts';
 import { firstPaintChunk } from './scripts/first-paint-chunk.ts';
+import { lazyUplotFormattersPlugin } from './scripts/lazy-uplot-formatters.ts';
 
 const firstPaint = firstPaintChunk();
 
@@ -13,6 +14,8 @@ export default defineConfig({
   plugins: [
     preact(),
     firstPaint.plugin,
+    // uPlot builds its Intl formatters when first used, not as it loads.
+    lazyUplotFormattersPlugin(),
     // The built page allows scripts, styles, workers and connections from its own origin only.
     contentSecurityPolicy(),
     VitePWA({
@@ -89,7 +92,7 @@ export default defineConfig({
           // Every folder of test/ but the real-browser tests and the benchmarks.
           include: [
             'test/*.test.ts',
-            'test/{app,audio,core,render,screens,state,ui,words}/**/*.test.{ts,tsx}',
+            'test/{app,audio,core,render,screens,scripts,state,ui,words}/**/*.test.{ts,tsx}',
           ],
           environment: 'node',
         },

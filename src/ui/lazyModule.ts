@@ -6,11 +6,8 @@ import { useEffect, useState } from 'preact/hooks';
 export interface LazyModule<T> {
   /** The module, loaded once. */
   load(): Promise<T>;
-  /**
-   * Hook: the module once loaded (at once when loaded before), or whether loading failed. It is
-   * asked for once `wanted` (default true): a part below the fold can wait until it is near.
-   */
-  use(wanted?: boolean): { module: T | null; failed: boolean };
+  /** Hook: the module once loaded (at once when loaded before), or whether loading failed. */
+  use(): { module: T | null; failed: boolean };
 }
 
 /**
@@ -30,10 +27,10 @@ export function lazyModule<T>(importer: () => Promise<T>): LazyModule<T> {
     );
     return pending;
   };
-  const use = (wanted = true) => {
+  const use = () => {
     const [state, setState] = useState(() => ({ module: loaded, failed: false }));
     useEffect(() => {
-      if (state.module || !wanted) return;
+      if (state.module) return;
       let live = true;
       load().then(
         (module) => live && setState({ module, failed: false }),
@@ -42,7 +39,7 @@ export function lazyModule<T>(importer: () => Promise<T>): LazyModule<T> {
       return () => {
         live = false;
       };
-    }, [wanted]);
+    }, []);
     return state;
   };
   return { load, use };

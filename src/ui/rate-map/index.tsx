@@ -44,14 +44,14 @@ const MAP_POINTS = 2000;
 /** The crowded low end is worth a note once it takes more than this share of the axis (a few pixels). */
 const NOTE_SHARE = 0.01;
 
-/** uPlot and its stylesheet, loaded once the map comes near the screen. */
+/** uPlot and its stylesheet, loaded after the first paint (the first screen stays small). */
 const chartCode = lazyModule(() => import('./chart'));
 
 /**
  * The rate map: every part's apparent speed against the sampler's rate over its range, the
  * alias sawtooth with breaks at its edges, lock-in rates marked with their image counts,
  * misleading bands shaded, the current rate as a cursor. Tap or drag to set the rate.
- * uPlot and its stylesheet load once the map comes near the screen.
+ * uPlot and its stylesheet load after the first paint.
  */
 export function RateMap(props: Props) {
   const {
@@ -74,12 +74,12 @@ export function RateMap(props: Props) {
   /** The worked-out map the chart shows. */
   const drawnFrom = useRef<Computed | null>(null);
   // Drawn once it comes near the screen: below the fold on a phone, it costs the page's opening
-  // nothing (its box holds its size meanwhile: .plot in style.module.css). uPlot itself is
-  // fetched then too: building its number and date formatters as it loads takes about 20 ms on
-  // a desktop, four times that on a phone. A page printed before the map was ever near the
-  // screen prints it undrawn.
+  // nothing (its box holds its size meanwhile: .plot in style.module.css). uPlot is fetched at
+  // once, so a page printed before the map was near the screen still gets its chart; loading it
+  // is cheap since it no longer builds Intl formatters as it loads
+  // (scripts/lazy-uplot-formatters.ts).
   const seen = useSeen(rootRef);
-  const { module: chartModule, failed: loadFailed } = chartCode.use(seen);
+  const { module: chartModule, failed: loadFailed } = chartCode.use();
   const latest = useRef({ onRateChange, rateHz });
   latest.current = { onRateChange, rateHz };
 
@@ -99,8 +99,8 @@ export function RateMap(props: Props) {
   const series = computed !== null && 'series' in computed ? computed.series : null;
 
   // The chart itself: rebuilt when the axis kind or the unit changes, resized with its box.
-  // Made as soon as the map is rendered seen with uPlot loaded (a layout effect): a page about
-  // to be printed gets its chart before the printout is laid out, once uPlot has come.
+  // Made as soon as the map is rendered seen (a layout effect): a page about to be printed gets
+  // its chart before the printout is laid out.
   const hasSeries = series !== null;
   useLayoutEffect(() => {
     const holder = holderRef.current;
