@@ -2,9 +2,8 @@
 // src/state/check/listed.ts). Both load after the first paint
 // (lazy-widgets.ts); until then a placeholder of about their size holds their place.
 import { computed } from '@preact/signals';
-import { check, checkProblem, picturedAnswer, picturedSetup } from '../../state/check';
-import { problemsAmong } from '../../state/fieldProblems';
-import { VERDICT_FIELDS } from './field-ids';
+import { picturedAnswer, picturedSetup } from '../../state/check';
+import { screenShowsSafety } from './screen-flags';
 import { flashUnit, samplerRateHz, setSamplerRateHz, setup } from '../../state/setup';
 import { Panel } from '../../ui/panel';
 import { widgets as lazyWidgets } from './lazy-widgets';
@@ -12,16 +11,10 @@ import { previewInputOf, rateMapInputOf } from './widget-inputs';
 import style from './style.module.css';
 
 /**
- * The screen shows the stillness caution: for an aliased view, and while the verdict is
- * withdrawn (nothing then says the view is true). Computed apart, so the pictures re-render
- * when it flips, not on every keystroke.
+ * Whether the pictures give the caution themselves. Handed over as a signal: only their caution
+ * re-renders when it flips, which a keystroke can do, not the chart or the preview.
  */
-const screenShowsSafety = computed(
-  () =>
-    check.value.showSafety ||
-    problemsAmong(VERDICT_FIELDS).length > 0 ||
-    checkProblem.value !== undefined,
-);
+const picturesGiveCaution = computed(() => !screenShowsSafety.value);
 
 /**
  * The part being checked as the sampler shows it, beside the part as it really turns. Its
@@ -36,7 +29,7 @@ export function CheckPreview() {
       {input === null ? (
         <p class={style.quiet}>Steady light samples nothing: the part looks as it really turns.</p>
       ) : widgets ? (
-        <widgets.Preview {...input} showCautions={!screenShowsSafety.value} />
+        <widgets.Preview {...input} showCautions={picturesGiveCaution} />
       ) : (
         <div class={style.previewPlaceholder} data-testid="preview-placeholder">
           <div class={style.square} />
@@ -70,7 +63,7 @@ export function CheckRateMap() {
           onRateChange={setSamplerRateHz}
           currentRateHz={rateOnScreen}
           flashUnit={flashUnit.value}
-          showCautions={!screenShowsSafety.value}
+          showCautions={picturesGiveCaution}
         />
       ) : (
         <div class={style.mapPlaceholder} data-testid="rate-map-placeholder">

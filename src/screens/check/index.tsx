@@ -1,6 +1,6 @@
 import type { ComponentChildren } from 'preact';
 import { useRef } from 'preact/hooks';
-import { check, checkProblem, picturesBehind } from '../../state/check';
+import { checkProblem, picturesBehind } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
 import { Cautions } from '../../ui/cautions';
 import { Later } from '../../ui/later';
@@ -9,7 +9,8 @@ import { PartForm } from '../../ui/part-form';
 import { SamplerForm } from './sampler-form';
 import { VerdictPanel } from './verdict-panel';
 import { CheckPreview, CheckRateMap } from './connected-widgets';
-import { RESULT_FIELDS, VERDICT_FIELDS } from './field-ids';
+import { RESULT_FIELDS } from './field-ids';
+import { checkNotes, screenShowsFlashing, screenShowsSafety } from './screen-flags';
 import { CHECK_NOTE_WORDS } from '../../words/check';
 import { results } from './lazy-results';
 import { Following, ResultsGuard } from './results-guard';
@@ -113,24 +114,19 @@ function LaterResults({ part }: { part: 'lists' | 'report' }) {
   );
 }
 
-/** The cautions and notes under the verdict. */
+/** The cautions and notes under the verdict: they re-render when one comes or goes. */
 function CheckWarnings() {
-  const refusal = checkProblem.value;
-  const r = check.value;
-  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
+  const notes = checkNotes.value;
   return (
     <>
       {/* With the verdict withdrawn nothing says the view is true: keep the stillness caution. */}
       <Cautions
-        show={{
-          safety: r.showSafety || withdrawn,
-          photosensitivity: r.showPhotosensitivity,
-        }}
+        show={{ safety: screenShowsSafety.value, photosensitivity: screenShowsFlashing.value }}
       />
-      {r.notes.length > 0 && (
-        <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={refusal}>
+      {notes.length > 0 && (
+        <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={checkProblem.value}>
           <ul class={style.notes} data-testid="check-notes">
-            {r.notes.map((n) => (
+            {notes.map((n) => (
               <li key={n}>{CHECK_NOTE_WORDS[n]}</li>
             ))}
           </ul>

@@ -1,5 +1,6 @@
 // Wrappers for what the check screen works out from its entries.
-import type { ReadonlySignal } from '@preact/signals';
+import { effect, type ReadonlySignal } from '@preact/signals';
+import { useEffect, useRef } from 'preact/hooks';
 import type { ComponentChildren } from 'preact';
 import { checkProblem, listsBehind } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
@@ -48,11 +49,26 @@ export function Following({
   keepTaps?: boolean;
   children: ComponentChildren;
 }) {
-  const behind = following.value;
+  // Marked straight on the element as the flag flips: a re-render for it would cost each
+  // keystroke a render of every wrapper, twice.
+  // (A plain effect: it marks the element as the flag flips, where useSignalEffect would wait
+  // for the next frame.)
+  const ref = useRef<HTMLDivElement>(null);
+  useEffect(
+    () =>
+      effect(() => {
+        const behind = following.value;
+        const element = ref.current;
+        if (!element) return;
+        if (behind) element.dataset.behind = 'true';
+        else delete element.dataset.behind;
+      }),
+    [following],
+  );
   return (
     <div
+      ref={ref}
       class={style.following}
-      data-behind={behind ? 'true' : undefined}
       onClickCapture={(event) => {
         if (!keepTaps && following.peek()) ignore(event);
       }}

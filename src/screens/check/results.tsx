@@ -4,6 +4,7 @@
 // follow the set-up a paint behind the answer (src/state/check/listed.ts); keeping, sharing and
 // the report work on the set-up on screen.
 import { computed } from '@preact/signals';
+import type { CautionContext } from '../../core';
 import { check, checkProblem } from '../../state/check';
 import { computeCheck, listedCheck, listsProblem } from '../../state/check/lists';
 import { problemsAmong } from '../../state/fieldProblems';
@@ -17,6 +18,7 @@ import { VERDICT_FIELDS } from './field-ids';
 import { KeepShare } from './keep-share';
 import { RateSuggestions } from './rate-suggestions';
 import { ResultsGuard } from './results-guard';
+import { screenShowsFlashing, screenShowsSafety } from './screen-flags';
 import { SafeBands } from './safe-bands';
 
 /** Works out the lists before they are first drawn (lazy-results.ts), in a task of its own. */
@@ -41,27 +43,34 @@ export function CheckLists() {
 /** Keeping and sharing the machine: it works on the set-up on screen, never a paint behind. */
 export { KeepShare };
 
-/** The stillness caution the screen shows now (a flag, so the report re-renders when it flips). */
-const stillnessNow = computed(() => check.value.showSafety);
+/** The verdict is withdrawn: a field it reads is refused, or the core refused the set-up. */
+const withdrawnNow = computed(
+  () => problemsAmong(VERDICT_FIELDS).length > 0 || checkProblem.value !== undefined,
+);
 /** The flash rate that needs the photosensitivity caution now, if any. */
-const flashingNow = computed(() => (check.value.showPhotosensitivity ? check.value.rateHz : null));
+const flashingNow = computed(() => (screenShowsFlashing.value ? check.value.rateHz : null));
+/**
+ * The cautions the report carries, as the screen shows them. A signal: a keystroke that flips one
+ * re-renders the printed cautions, not the report bar.
+ */
+const reportCautions = computed<CautionContext>(() => {
+  const flashing = flashingNow.value;
+  return {
+    apparentStillness: screenShowsSafety.value,
+    flashRatesHz: flashing === null ? [] : [flashing],
+  };
+});
 
 /**
  * Print and CSV of the check, with the cautions the verdict carries; no CSV while it is
  * withdrawn. Both are of the set-up on screen, never of the lists a paint behind it.
  */
 export function CheckReport() {
-  const refusal = checkProblem.value;
-  const withdrawn = problemsAmong(VERDICT_FIELDS).length > 0 || refusal !== undefined;
-  const flashing = flashingNow.value;
   return (
     <ReportBar
       title="Check"
-      cautions={{
-        apparentStillness: stillnessNow.value || withdrawn,
-        flashRatesHz: flashing === null ? [] : [flashing],
-      }}
-      csv={withdrawn ? undefined : checkTable}
+      cautions={reportCautions}
+      csv={withdrawnNow.value ? undefined : checkTable}
     />
   );
 }

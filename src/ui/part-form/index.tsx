@@ -1,3 +1,4 @@
+import { computed } from '@preact/signals';
 import { motorSpeedHz, synchronousSpeedHz } from '../../core';
 import { formatNumber, numberForField } from '../../words/format';
 import { KIND_WORDS } from '../../words/partKinds';
@@ -59,8 +60,9 @@ function applyDerived(index: number, input: DerivedSpeedInput): void {
     });
 }
 
-/** A wheel's road speed and tyre, and the button that applies them. */
-function WheelPart({ index, part }: { index: number; part: PartSpec }) {
+/** A wheel's road speed and tyre, and the button that applies them (to the speed on screen). */
+function WheelPart({ index }: { index: number }) {
+  const part = activePart.value;
   const { module, failed } = wheelFields.use();
   if (!part.wheel) return null;
   if (!module) {
@@ -95,10 +97,30 @@ function speedInUnit(rpm: number, unit: SpeedUnit): number {
 /** How a motor's speed is given: straight from its nameplate, or from mains, poles and slip. */
 type MotorGiven = 'none' | 'nameplate' | 'poles';
 
-function motorGivenOf(part: PartSpec): MotorGiven {
+function motorGivenOf(part: PartShape): MotorGiven {
   if (part.motor) return 'poles';
   return part.origin?.method === 'nameplate' ? 'nameplate' : 'none';
 }
+
+/** The part as its form lays it out: everything but the speed, which its own field follows. */
+type PartShape = Omit<PartSpec, 'speedRpm'>;
+
+let lastShape: PartShape | null = null;
+/**
+ * The active part without its speed, the same object for as long as nothing else about it
+ * changes: a keystroke in the Speed field re-renders that field, not the whole form.
+ */
+const partShape = computed<PartShape>(() => {
+  const { speedRpm: _speed, ...shape } = activePart.value;
+  const before = lastShape;
+  const keys = Object.keys(shape) as Array<keyof PartShape>;
+  const same =
+    before !== null &&
+    keys.length === Object.keys(before).length &&
+    keys.every((k) => Object.is(shape[k], before[k]));
+  if (!same) lastShape = shape;
+  return lastShape!;
+});
 
 /**
  * The turning part: its kind (which sets its words and fields), its speed (typed, from a
@@ -106,41 +128,24 @@ function motorGivenOf(part: PartSpec): MotorGiven {
  * its features and the speed tolerance, with where the speed came from.
  */
 export function PartForm({ class: extra }: Props) {
-  const part = activePart.value;
+  const part = partShape.value;
   const index = activeIndexShown.value;
-  const unit = speedUnit.value;
   const motor = part.motor;
   const kind = kindOf(part);
   const words = KIND_WORDS[kind];
   const given = motorGivenOf(part);
 
-  const unitChooser = (
-    <select
-      class={style.select}
-      aria-label="Speed unit"
-      value={unit}
-      onChange={(e) =>
-        (speedUnit.value = (e.currentTarget as HTMLSelectElement).value as SpeedUnit)
-      }
-    >
-      {SPEED_UNITS.map((u) => (
-        <option key={u} value={u}>
-          {u}
-        </option>
-      ))}
-    </select>
-  );
-
   const setGiven = (next: MotorGiven) => {
+    const speedRpm = activePart.peek().speedRpm;
     if (next === 'poles') setMotor({ ...defaultMotor });
     else if (next === 'nameplate') {
-      const rpm = Math.abs(part.speedRpm);
+      const rpm = Math.abs(speedRpm);
       applyDerived(index, {
-        speedRpm: part.speedRpm,
+        speedRpm,
         origin: { method: 'nameplate', detail: { rpm } },
       });
     } else if (motor) setMotor(undefined);
-    else setSpeedRpm(part.speedRpm);
+    else setSpeedRpm(speedRpm);
   };
 
   return (
@@ -162,24 +167,8 @@ export function PartForm({ class: extra }: Props) {
           ))}
         </select>
       </div>
-      <NumberField
-        id="speed"
-        label="Speed"
-        value={part.speedRpm}
-        unitKey={unit}
-        toText={(rpm) => numberForField(speedInUnit(rpm, unit))}
-        read={(text) => readSpeedRpm(text, unit)}
-        onValue={setSpeedRpm}
-        unit={unitChooser}
-        hint={
-          motor
-            ? 'From the motor below. Typing a speed here stops following the motor.'
-            : part.origin
-              ? `${originLine(part.origin)} Typing a speed here replaces it.`
-              : 'A unit may be typed too: 1780 rpm, 29.7 Hz.'
-        }
-      />
-      {kind === 'wheel' && part.wheel && <WheelPart index={index} part={part} />}
+      <SpeedField />
+      {kind === 'wheel' && part.wheel && <WheelPart index={index} />}
       {kind !== 'wheel' && (
         <label class={style.toggle}>
           <input
@@ -216,23 +205,7 @@ export function PartForm({ class: extra }: Props) {
             </label>
           </fieldset>
           {given === 'poles' && motor && <MotorWithSpeeds motor={motor} />}
-          {given === 'nameplate' && (
-            <NumberField
-              id="nameplate-rpm"
-              label="Nameplate speed"
-              value={Math.abs(part.speedRpm)}
-              toText={numberForField}
-              read={(text) => readSpeedRpm(text, 'rpm')}
-              onValue={(rpm) =>
-                applyDerived(index, {
-                  speedRpm: (part.speedRpm < 0 ? -1 : 1) * Math.abs(rpm),
-                  origin: { method: 'nameplate', detail: { rpm: Math.abs(rpm) } },
-                })
-              }
-              unit="rpm"
-              hint="The rated speed on the motor's plate, at full load."
-            />
-          )}
+          {given === 'nameplate' && <NameplateField index={index} />}
         </div>
       )}
       <div class={style.pair}>
@@ -275,5 +248,67 @@ function MotorWithSpeeds({ motor }: MotorProps) {
         {formatNumber(runRpm)} rpm.
       </p>
     </>
+  );
+}
+
+/** The Speed field, in the unit chosen, with where the speed came from. */
+function SpeedField() {
+  const part = activePart.value;
+  const unit = speedUnit.value;
+  return (
+    <NumberField
+      id="speed"
+      label="Speed"
+      value={part.speedRpm}
+      unitKey={unit}
+      toText={(rpm) => numberForField(speedInUnit(rpm, unit))}
+      read={(text) => readSpeedRpm(text, unit)}
+      onValue={setSpeedRpm}
+      unit={
+        <select
+          class={style.select}
+          aria-label="Speed unit"
+          value={unit}
+          onChange={(e) =>
+            (speedUnit.value = (e.currentTarget as HTMLSelectElement).value as SpeedUnit)
+          }
+        >
+          {SPEED_UNITS.map((u) => (
+            <option key={u} value={u}>
+              {u}
+            </option>
+          ))}
+        </select>
+      }
+      hint={
+        part.motor
+          ? 'From the motor below. Typing a speed here stops following the motor.'
+          : part.origin
+            ? `${originLine(part.origin)} Typing a speed here replaces it.`
+            : 'A unit may be typed too: 1780 rpm, 29.7 Hz.'
+      }
+    />
+  );
+}
+
+/** A motor's nameplate rpm, which sets the part's speed (its sign kept). */
+function NameplateField({ index }: { index: number }) {
+  const speedRpm = activePart.value.speedRpm;
+  return (
+    <NumberField
+      id="nameplate-rpm"
+      label="Nameplate speed"
+      value={Math.abs(speedRpm)}
+      toText={numberForField}
+      read={(text) => readSpeedRpm(text, 'rpm')}
+      onValue={(rpm) =>
+        applyDerived(index, {
+          speedRpm: (speedRpm < 0 ? -1 : 1) * Math.abs(rpm),
+          origin: { method: 'nameplate', detail: { rpm: Math.abs(rpm) } },
+        })
+      }
+      unit="rpm"
+      hint="The rated speed on the motor's plate, at full load."
+    />
   );
 }

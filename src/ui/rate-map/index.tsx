@@ -8,6 +8,7 @@ import type { ChartColours, RateChart } from './chart';
 import { STILLNESS_CAUTION } from '../../words/cautions';
 import { cssColours, useColourScheme } from '../chartTheme';
 import { lazyModule } from '../lazyModule';
+import { readLive, type Live } from '../live';
 import { useSeen } from '../seen';
 import style from './style.module.css';
 
@@ -33,9 +34,10 @@ export interface Props {
   logAxis?: boolean;
   /**
    * Show the stillness caution of docs/physics.md §10 under the map (default true); the map marks
-   * rates where parts look still. Pass false only where the screen shows it right beside.
+   * rates where parts look still. Pass false only where the screen shows it right beside; a signal
+   * where that changes as the entries do (only the caution follows it).
    */
-  showCautions?: boolean;
+  showCautions?: Live<boolean>;
   class?: string;
 }
 
@@ -185,7 +187,6 @@ export function RateMap(props: Props) {
   };
 
   const unit = rateUnit(samplerKind, flashUnit);
-  const caution = showCautions ? STILLNESS_CAUTION : null;
 
   return (
     <div ref={rootRef} class={`${style.rateMap} ${extra ?? ''}`}>
@@ -259,9 +260,14 @@ export function RateMap(props: Props) {
             and lock markers are left out.
           </p>
         )}
-      {caution && <p class={style.caution}>{caution}</p>}
+      <MapCaution show={showCautions} />
     </div>
   );
+}
+
+/** The stillness caution under the map, when the map is to give it. */
+function MapCaution({ show }: { show: Live<boolean> }) {
+  return readLive(show) ? <p class={style.caution}>{STILLNESS_CAUTION}</p> : null;
 }
 
 type Computed = { inputsKey: string; log: boolean; partsKey: string; range: Range } & (

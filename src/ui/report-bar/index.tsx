@@ -4,6 +4,7 @@ import { header } from '../../state/work';
 import { PLANNING_AID_CAUTION, safetyCautions } from '../../words/cautions';
 import { headerLines, printedAt, reportCsv } from '../../words/report';
 import { downloadText, fileStem } from '../download';
+import { readLive, type Live } from '../live';
 import { ReportHeaderFields } from './header-fields';
 import style from './style.module.css';
 
@@ -12,8 +13,11 @@ interface Props {
   title: string;
   /** The tool's main table as CSV (RFC 4180, built with the core's csv helpers); omit when there is none. */
   csv?: () => string;
-  /** Which cautions the printed page must carry (docs/physics.md §10). */
-  cautions: CautionContext;
+  /**
+   * Which cautions the printed page must carry (docs/physics.md §10); a signal where they change
+   * as the entries do (only the printed cautions follow it).
+   */
+  cautions: Live<CautionContext>;
 }
 
 /**
@@ -32,11 +36,10 @@ export function ReportBar({ title, csv, cautions }: Props) {
     return () => removeEventListener('beforeprint', now);
   }, []);
   const h = header.value;
-  const lines = safeCautions(cautions);
   const save = () => {
     if (!csv) return;
     try {
-      const text = reportCsv(title, h, lines, csv(), new Date());
+      const text = reportCsv(title, h, safeCautions(readLive(cautions)), csv(), new Date());
       downloadText(`${fileStem(`${title} ${h.name}`)}.csv`, text, 'text/csv;charset=utf-8');
       setProblem(null);
     } catch (error) {
@@ -72,13 +75,19 @@ export function ReportBar({ title, csv, cautions }: Props) {
           ))}
         </dl>
         <p>Printed {printedAt(printed)}</p>
-        <ul class={style.printCautions}>
-          {lines.map((line) => (
-            <li key={line}>{line}</li>
-          ))}
-        </ul>
+        <PrintedCautions cautions={cautions} />
       </header>
     </div>
+  );
+}
+
+function PrintedCautions({ cautions }: { cautions: Live<CautionContext> }) {
+  return (
+    <ul class={style.printCautions}>
+      {safeCautions(readLive(cautions)).map((line) => (
+        <li key={line}>{line}</li>
+      ))}
+    </ul>
   );
 }
 

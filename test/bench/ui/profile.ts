@@ -61,6 +61,7 @@ async function cpuProfileRun(url: string) {
   let startUp: CpuProfile | undefined;
   let typing: CpuProfile | undefined;
   let renders: Record<string, number> = {};
+  let renderMs: Record<string, number> = {};
   const stop = async (cdp: CDPSession, name: string) => {
     const { profile } = (await cdp.send('Profiler.stop')) as unknown as { profile: CpuProfile };
     writeFileSync(join(benchOutputDir, `${name}.cpuprofile`), JSON.stringify(profile));
@@ -77,18 +78,21 @@ async function cpuProfileRun(url: string) {
       startUp = await stop(cdp, 'profile-start-up-1x');
       await page.evaluate(() => {
         const counts = window.__trueturnRenders;
-        if (!counts) throw new Error('the render counter is not in this build');
+        const times = window.__trueturnRenderMs;
+        if (!counts || !times) throw new Error('the render counter is not in this build');
         for (const name of Object.keys(counts)) delete counts[name];
+        for (const name of Object.keys(times)) delete times[name];
       });
       await start(cdp);
     },
     async afterTyping(page, cdp) {
       typing = await stop(cdp, 'profile-typing-1x');
       renders = await page.evaluate(() => ({ ...window.__trueturnRenders }));
+      renderMs = await page.evaluate(() => ({ ...window.__trueturnRenderMs }));
     },
   });
   if (!startUp || !typing) throw new Error('the CPU profiles did not finish');
-  return { startUp, typing, renders, keyToRafMs: run.keyToRafMs };
+  return { startUp, typing, renders, renderMs, keyToRafMs: run.keyToRafMs };
 }
 
 export async function profileRun(log: Log): Promise<void> {
@@ -145,6 +149,9 @@ export async function profileRun(log: Log): Promise<void> {
   log('    component renders per key:');
   const renders = Object.entries(profiled.renders).sort((a, b) => b[1] - a[1]);
   log(`      ${renders.map(([name, n]) => `${name} ${(n / keys).toFixed(1)}`).join(', ')}`);
+  log('    component render time per key (ms, each including what it renders; while profiling):');
+  const renderMs = Object.entries(profiled.renderMs).sort((a, b) => b[1] - a[1]);
+  log(`      ${renderMs.map(([name, ms]) => `${name} ${(ms / keys).toFixed(2)}`).join(', ')}`);
   log();
   log(`Recordings: ${benchOutputDir}/profile-{start-up,typing}-{4x.trace.json,1x.cpuprofile}`);
 }

@@ -40,7 +40,9 @@ export interface ScriptMap {
 
 export function readScriptMap(scriptPath: string): ScriptMap {
   const mapPath = `${scriptPath}.map`;
-  if (!existsSync(mapPath)) throw new Error(`no source map at ${mapPath}`);
+  // The bundler's own runtime chunk (rolldown-runtime-*.js) comes without a map: all of it is
+  // the bundler's.
+  if (!existsSync(mapPath)) return { code: readFileSync(scriptPath, 'utf8'), lines: [] };
   const map = JSON.parse(readFileSync(mapPath, 'utf8')) as { sources: string[]; mappings: string };
   const modules = map.sources.map(moduleName);
   let source = 0;

@@ -5,6 +5,7 @@ import { checkScene, sampleIndexAt, sampleTimeS, type PreviewScene } from '../..
 
 import { lookFromCss } from './css-colour';
 import { useFrameLoop } from '../../../ui/frameLoop';
+import { readLive, type Live } from '../../../ui/live';
 import { safetyCautions } from '../../../words/cautions';
 import { lookPhrase } from '../../../words/look';
 import {
@@ -30,9 +31,10 @@ export interface Props {
   /**
    * Show the stillness caution of docs/physics.md §10 when what is drawn can mislead (default true).
    * Pass false only where the screen shows it right beside the preview. The caution about the
-   * playback's own flashing shows either way: only the preview knows how fast it flashes.
+   * playback's own flashing shows either way: only the preview knows how fast it flashes. A
+   * signal where that changes as the entries do (only the cautions follow it).
    */
-  showCautions?: boolean;
+  showCautions?: Live<boolean>;
   class?: string;
 }
 
@@ -178,12 +180,6 @@ export function Preview({
 
   const sampleWord = sampler === 'flash' ? 'flash' : 'frame';
   const samplerView = sampler === 'flash' ? 'As the flashes show it' : 'As the camera shows it';
-  // Stillness that is not real, and a playback that flashes at 3–60 a second. The closing
-  // planning-aid line, which always applies, is the screen's to show once.
-  const cautions = safetyCautions({
-    apparentStillness: showCautions && motion !== null && motion.look !== 'true',
-    flashRatesHz: sampler === 'flash' && playing ? [rateHz / slow] : [],
-  }).slice(0, -1);
 
   return (
     <section
@@ -252,15 +248,41 @@ export function Preview({
           </output>
         </div>
       )}
-      {cautions.length > 0 && (
-        <ul class={style.cautions}>
-          {cautions.map((c) => (
-            <li key={c} class={style.caution}>
-              {c}
-            </li>
-          ))}
-        </ul>
-      )}
+      <PreviewCautions
+        show={showCautions}
+        misleading={motion !== null && motion.look !== 'true'}
+        flashRatesHz={sampler === 'flash' && playing ? [rateHz / slow] : []}
+      />
     </section>
+  );
+}
+
+/**
+ * Stillness that is not real (when the preview is to give that caution and what it draws can
+ * mislead), and a playback that flashes at 3–60 a second. The closing planning-aid line, which
+ * always applies, is the screen's to show once.
+ */
+function PreviewCautions({
+  show,
+  misleading,
+  flashRatesHz,
+}: {
+  show: Live<boolean>;
+  misleading: boolean;
+  flashRatesHz: number[];
+}) {
+  const cautions = safetyCautions({
+    apparentStillness: readLive(show) && misleading,
+    flashRatesHz,
+  }).slice(0, -1);
+  if (cautions.length === 0) return null;
+  return (
+    <ul class={style.cautions}>
+      {cautions.map((c) => (
+        <li key={c} class={style.caution}>
+          {c}
+        </li>
+      ))}
+    </ul>
   );
 }
