@@ -108,19 +108,23 @@ export function TextField({
         {label}
       </label>
       <div class={style.row}>
-        <input
-          id={id}
-          class={style.input}
-          type="text"
-          inputMode={inputMode}
-          autoComplete="off"
-          spellcheck={false}
-          value={text}
-          onInput={onInput}
-          aria-invalid={message ? 'true' : undefined}
-          aria-describedby={describedBy}
-          disabled={disabled}
-        />
+        <div class={style.control}>
+          <div class={style.box}>
+            <input
+              id={id}
+              class={style.input}
+              type="text"
+              inputMode={inputMode}
+              autoComplete="off"
+              spellcheck={false}
+              value={text}
+              onInput={onInput}
+              aria-invalid={message ? 'true' : undefined}
+              aria-describedby={describedBy}
+              disabled={disabled}
+            />
+          </div>
+        </div>
         {unit !== undefined && <span class={style.unit}>{unit}</span>}
       </div>
       {message && (
