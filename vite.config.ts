@@ -3,6 +3,7 @@ import { defineConfig } from 'vite';
 import preact from '@preact/preset-vite';
 import { VitePWA } from 'vite-plugin-pwa';
 import { contentSecurityPolicy } from './scripts/content-security-policy.ts';
+import { compileHint } from './scripts/compile-hint.ts';
 import { firstPaintChunk } from './scripts/first-paint-chunk.ts';
 import { lazyUplotFormattersPlugin } from './scripts/lazy-uplot-formatters.ts';
 
@@ -18,6 +19,8 @@ export default defineConfig({
     lazyUplotFormattersPlugin(),
     // The built page allows scripts, styles, workers and connections from its own origin only.
     contentSecurityPolicy(),
+    // Chrome compiles the first screen's script as it loads, not function by function.
+    compileHint('first-paint'),
     VitePWA({
       // A new version waits for the user's go-ahead (src/app/update-notice); registration is
       // done by the useRegisterSW hook, so no extra script is injected.

@@ -25,9 +25,10 @@ export function useStickyInset(ref: MutableRef<HTMLElement | null>): void {
       written = value;
       root.style.setProperty(PROPERTY, value);
     };
+    // Measured only in the observer, which runs once layout is done (and first as it starts
+    // observing, before the next paint): never a forced layout of its own.
     const observer = new ResizeObserver(write);
     observer.observe(part);
-    write();
     return () => {
       observer.disconnect();
       root.style.removeProperty(PROPERTY);
