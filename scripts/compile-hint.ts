@@ -25,8 +25,15 @@ export function compileHint(chunkName: string): Plugin {
         for (const file of Object.values(bundle)) {
           if (file.type !== 'chunk' || file.name !== chunkName) continue;
           file.code = `${COMPILE_HINT}\n${file.code}`;
-          // One more line in front: every mapped line moves down one.
+          // One more line in front: every mapped line moves down one, in the chunk's map and in
+          // the map file already emitted beside it.
           if (file.map) file.map.mappings = `;${file.map.mappings}`;
+          const mapFile = bundle[`${file.fileName}.map`];
+          if (mapFile?.type === 'asset') {
+            const map = JSON.parse(String(mapFile.source)) as { mappings: string };
+            map.mappings = `;${map.mappings}`;
+            mapFile.source = JSON.stringify(map);
+          }
         }
       },
     },

@@ -1,4 +1,5 @@
 // @vitest-environment happy-dom
+import { signal } from '@preact/signals';
 import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/preact';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { Preview } from '../../../src/screens/check/preview';
@@ -86,6 +87,16 @@ describe('Preview', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Play' }));
     // Played in real time the preview flashes 30 times a second: only the preview knows it.
     expect(screen.getByText(/photosensitive epilepsy/)).toBeTruthy();
+  });
+
+  it('follows a caution flag handed over as a signal', async () => {
+    const give = signal(true);
+    render(<Preview part={fan} sampler="flash" rateHz={30} exposureS={0} showCautions={give} />);
+    expect(screen.getByText(/still turning at full speed/)).toBeTruthy();
+    give.value = false;
+    await waitFor(() => expect(screen.queryByText(/still turning at full speed/)).toBeNull());
+    give.value = true;
+    await waitFor(() => expect(screen.getByText(/still turning at full speed/)).toBeTruthy());
   });
 
   it('says what is wrong instead of drawing when a setting cannot be drawn', () => {

@@ -1,6 +1,7 @@
 // @vitest-environment happy-dom
 // The chart library draws on a real canvas, which happy-dom lacks: the uPlot adapter is
 // replaced by a recorder here; the real chart is checked in Chromium by the browser tests.
+import { signal } from '@preact/signals';
 import type { ComponentProps } from 'preact';
 import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/preact';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
@@ -211,5 +212,20 @@ describe('RateMap', () => {
     expect(screen.getByText(/still turning at full speed/)).toBeTruthy();
     rerender(strobeMap({ showCautions: false }));
     expect(screen.queryByText(/still turning at full speed/)).toBeNull();
+  });
+
+  it('follows a caution flag handed over as a signal, without drawing the map again', async () => {
+    const give = signal(false);
+    render(strobeMap({ showCautions: give }));
+    await waitFor(() => expect(made).toHaveLength(1));
+    expect(screen.queryByText(/still turning at full speed/)).toBeNull();
+    const drawn = { updates: made[0].chart.updates, made: made.length };
+    give.value = true;
+    await waitFor(() => expect(screen.getByText(/still turning at full speed/)).toBeTruthy());
+    give.value = false;
+    await waitFor(() => expect(screen.queryByText(/still turning at full speed/)).toBeNull());
+    // The chart itself was neither made again nor handed its data again.
+    expect(made).toHaveLength(drawn.made);
+    expect(made[0].chart.updates).toBe(drawn.updates);
   });
 });
