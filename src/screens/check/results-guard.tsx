@@ -49,10 +49,9 @@ export function Following({
   keepTaps?: boolean;
   children: ComponentChildren;
 }) {
-  // Marked straight on the element as the flag flips: a re-render for it would cost each
-  // keystroke a render of every wrapper, twice.
-  // (A plain effect: it marks the element as the flag flips, where useSignalEffect would wait
-  // for the next frame.)
+  // Marked straight on the element as the flag flips, by a plain effect (useSignalEffect would
+  // wait for the next frame): a re-render for it would cost each keystroke a render of every
+  // wrapper, twice.
   const ref = useRef<HTMLDivElement>(null);
   useEffect(
     () =>

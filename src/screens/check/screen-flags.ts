@@ -2,6 +2,7 @@
 // parts that read them re-render then, not on every keystroke.
 import { computed } from '@preact/signals';
 import { check, checkProblem } from '../../state/check';
+import { computedSame, sameItems } from '../../state/computedSame';
 import { problemsAmong } from '../../state/fieldProblems';
 import { VERDICT_FIELDS } from './field-ids';
 
@@ -19,11 +20,5 @@ export const screenShowsSafety = computed(
 /** The screen shows the caution about flashing light. */
 export const screenShowsFlashing = computed(() => check.value.showPhotosensitivity);
 
-let lastNotes: readonly string[] = [];
 /** The check's notes; the same list (the same object) for as long as they stay the same. */
-export const checkNotes = computed(() => {
-  const notes = check.value.notes;
-  const same = notes.length === lastNotes.length && notes.every((n, i) => n === lastNotes[i]);
-  if (!same) lastNotes = notes;
-  return lastNotes as typeof notes;
-});
+export const checkNotes = computedSame(() => check.value.notes, sameItems);

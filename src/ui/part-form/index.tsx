@@ -1,4 +1,3 @@
-import { computed } from '@preact/signals';
 import { motorSpeedHz, synchronousSpeedHz } from '../../core';
 import { formatNumber, numberForField } from '../../words/format';
 import { KIND_WORDS } from '../../words/partKinds';
@@ -29,6 +28,7 @@ import { Panel } from '../panel';
 import { lazyModule } from '../lazyModule';
 import type { DerivedSpeedInput } from '../../state/derivedSpeed';
 import { DataError } from '../../state/read';
+import { computedSame, sameFields } from '../../state/computedSame';
 import { sessionMessage } from '../../state/sessionNotices';
 import style from './style.module.css';
 
@@ -105,22 +105,14 @@ function motorGivenOf(part: PartShape): MotorGiven {
 /** The part as its form lays it out: everything but the speed, which its own field follows. */
 type PartShape = Omit<PartSpec, 'speedRpm'>;
 
-let lastShape: PartShape | null = null;
 /**
  * The active part without its speed, the same object for as long as nothing else about it
  * changes: a keystroke in the Speed field re-renders that field, not the whole form.
  */
-const partShape = computed<PartShape>(() => {
+const partShape = computedSame<PartShape>(() => {
   const { speedRpm: _speed, ...shape } = activePart.value;
-  const before = lastShape;
-  const keys = Object.keys(shape) as Array<keyof PartShape>;
-  const same =
-    before !== null &&
-    keys.length === Object.keys(before).length &&
-    keys.every((k) => Object.is(shape[k], before[k]));
-  if (!same) lastShape = shape;
-  return lastShape!;
-});
+  return shape;
+}, sameFields);
 
 /**
  * The turning part: its kind (which sets its words and fields), its speed (typed, from a
