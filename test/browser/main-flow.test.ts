@@ -76,6 +76,34 @@ describe('the main flow', () => {
     ).toEqual([]);
   });
 
+  test('printed, the check keeps its rates to try and its bands as text, and drops its controls', async () => {
+    session = await openBrowser();
+    const { page } = session;
+    await openApp(page, inject('baseUrl'));
+    // The default fan: 6 blades at 1770 rpm under 1770 fpm.
+    const locks = page.getByTestId('lock-list');
+    const bands = page.getByTestId('safe-bands');
+    // Off-screen result panels are skipped by the browser until near the screen: look at them.
+    await locks.scrollIntoViewIfNeeded();
+    await expect.poll(() => locks.innerText()).toMatch(/1,770 fpm/);
+    const onScreen = { locks: await locks.innerText(), bands: await bands.innerText() };
+    // The first visit ends with the notice that the app now works with no network.
+    const notice = page.getByTestId('update-notice');
+    await expect.poll(() => notice.isVisible(), { timeout: 20_000 }).toBe(true);
+    expect(onScreen.bands).toMatch(/fpm/);
+    await page.emulateMedia({ media: 'print' });
+    // The rates are buttons on screen (a tap sets the rate); on paper they are the text they show.
+    expect(await locks.innerText()).toBe(onScreen.locks);
+    expect(await bands.innerText()).toBe(onScreen.bands);
+    expect(await locks.getByRole('button').first().isVisible()).toBe(true);
+    // The controls are not printed.
+    expect(await page.getByRole('button', { name: 'Print report' }).isVisible()).toBe(false);
+    expect(await page.getByRole('navigation').first().isVisible()).toBe(false);
+    // Nor the notice that floats at the foot of the window: it would stand over every page.
+    expect(await notice.isVisible()).toBe(false);
+    await page.emulateMedia({ media: 'screen' });
+  });
+
   test('each keystroke updates the verdict within the same frame or the next', async () => {
     session = await openBrowser();
     const { page } = session;

@@ -47,12 +47,15 @@ export function UpdateNotice({ updateReady, offlineReady, onUpdate, onDismiss }:
   );
 }
 
-/** The notice's box, floating at the foot of the window with room kept for it. */
+/**
+ * The notice's box, floating at the foot of the window with room kept for it. Not printed: it
+ * would stand over the report on every page.
+ */
 function FloatingNotice({ children }: { children: ComponentChildren }) {
   const box = useRef<HTMLDivElement>(null);
   useFloatInset(box);
   return (
-    <div class={style.notice} role="status" data-testid="update-notice" ref={box}>
+    <div class={style.notice} role="status" data-testid="update-notice" data-print="hide" ref={box}>
       {children}
     </div>
   );

@@ -120,7 +120,7 @@ function RateButton({
   onUse: (hz: number) => void;
 }) {
   return (
-    <button type="button" class={style.rateButton} onClick={() => onUse(hz)}>
+    <button type="button" class={style.rateButton} data-print="show" onClick={() => onUse(hz)}>
       {label}
     </button>
   );

@@ -89,6 +89,7 @@ export function RateSuggestions({ class: extra }: Props) {
                     type="button"
                     class={style.rate}
                     data-side={c.side}
+                    data-print="show"
                     onClick={() => setSamplerRateHz(c.rateHz)}
                   >
                     <span class={style.value}>{rate(c.rateHz)}</span>
@@ -127,6 +128,7 @@ function LockButtonView({ lock, kind, unit, tolerance }: LockProps) {
       type="button"
       class={style.rate}
       data-side={lock.side}
+      data-print="show"
       aria-current={here ? 'true' : undefined}
       onClick={() => setSamplerRateHz(lock.rateHz)}
     >

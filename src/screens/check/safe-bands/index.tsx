@@ -55,6 +55,7 @@ export function SafeBands({ class: extra }: Props) {
                 <button
                   type="button"
                   class={style.band}
+                  data-print="show"
                   aria-current={band === current ? 'true' : undefined}
                   onClick={() => setSamplerRateHz(Math.sqrt(band.fromHz * band.toHz))}
                 >
