@@ -5,20 +5,18 @@
 // the report work on the set-up on screen.
 import { computed } from '@preact/signals';
 import type { CautionContext } from '../../core';
-import { check, checkProblem } from '../../state/check';
+import { check } from '../../state/check';
 import { computeCheck, listedCheck, listsProblem } from '../../state/check/lists';
-import { problemsAmong } from '../../state/fieldProblems';
 import { activeIndex, partLabel } from '../../state/model';
 import { flashUnit, setup } from '../../state/setup';
 import { LightingReadout } from '../../ui/lighting-readout';
 import { ReportBar } from '../../ui/report-bar';
 import { CameraReadout } from './camera-readout';
 import { checkCsv } from './csv';
-import { VERDICT_FIELDS } from './field-ids';
 import { KeepShare } from './keep-share';
 import { RateSuggestions } from './rate-suggestions';
 import { ResultsGuard } from './results-guard';
-import { screenShowsFlashing, screenShowsSafety } from './screen-flags';
+import { screenShowsFlashing, screenShowsSafety, verdictWithdrawn } from './screen-flags';
 import { SafeBands } from './safe-bands';
 
 /** Works out the lists before they are first drawn (lazy-results.ts), in a task of its own. */
@@ -43,10 +41,6 @@ export function CheckLists() {
 /** Keeping and sharing the machine: it works on the set-up on screen, never a paint behind. */
 export { KeepShare };
 
-/** The verdict is withdrawn: a field it reads is refused, or the core refused the set-up. */
-const withdrawnNow = computed(
-  () => problemsAmong(VERDICT_FIELDS).length > 0 || checkProblem.value !== undefined,
-);
 /** The flash rate that needs the photosensitivity caution now, if any. */
 const flashingNow = computed(() => (screenShowsFlashing.value ? check.value.rateHz : null));
 /**
@@ -70,7 +64,7 @@ export function CheckReport() {
     <ReportBar
       title="Check"
       cautions={reportCautions}
-      csv={withdrawnNow.value ? undefined : checkTable}
+      csv={verdictWithdrawn.value ? undefined : checkTable}
     />
   );
 }

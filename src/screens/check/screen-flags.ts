@@ -6,16 +6,16 @@ import { computedSame, sameItems } from '../../state/computedSame';
 import { problemsAmong } from '../../state/fieldProblems';
 import { VERDICT_FIELDS } from './field-ids';
 
+/** The verdict is withdrawn: a field it reads is refused, or the core refused the set-up. */
+export const verdictWithdrawn = computed(
+  () => problemsAmong(VERDICT_FIELDS).length > 0 || checkProblem.value !== undefined,
+);
+
 /**
  * The screen shows the stillness caution: for an aliased view, and while the verdict is
  * withdrawn (nothing then says the view is true).
  */
-export const screenShowsSafety = computed(
-  () =>
-    check.value.showSafety ||
-    problemsAmong(VERDICT_FIELDS).length > 0 ||
-    checkProblem.value !== undefined,
-);
+export const screenShowsSafety = computed(() => check.value.showSafety || verdictWithdrawn.value);
 
 /** The screen shows the caution about flashing light. */
 export const screenShowsFlashing = computed(() => check.value.showPhotosensitivity);
