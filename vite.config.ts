@@ -19,8 +19,15 @@ export default defineConfig({
     lazyUplotFormattersPlugin(),
     // The built page allows scripts, styles, workers and connections from its own origin only.
     contentSecurityPolicy(),
-    // Chrome compiles the first screen's script as it loads, not function by function.
-    compileHint('first-paint'),
+    // Chrome compiles these as they load, not function by function: the first screen's script,
+    // and the rate map with its chart and uPlot, drawn all at once when the map comes near the
+    // screen (scripts/compile-hint.ts).
+    compileHint([
+      'first-paint',
+      '/src/ui/rate-map/index.tsx',
+      '/src/ui/rate-map/chart.ts',
+      '/node_modules/uplot/dist/uPlot.esm.js',
+    ]),
     VitePWA({
       // A new version waits for the user's go-ahead (src/app/update-notice); registration is
       // done by the useRegisterSW hook, so no extra script is injected.

@@ -8,8 +8,11 @@ import { describe, expect, test } from 'vitest';
 import { COMPILE_HINT, compileHint } from '../../scripts/compile-hint';
 import { moduleAt, readScriptMap } from '../bench/ui/source-map';
 
-/** Builds an entry that imports `shared.js` at once and `later.js` on demand; returns the output folder. */
-async function buildFixture(): Promise<string> {
+/**
+ * Builds an entry that imports `shared.js` at once and `later.js` on demand, hinting `targets`;
+ * returns the output folder.
+ */
+async function buildFixture(targets: readonly string[]): Promise<string> {
   const root = mkdtempSync(join(tmpdir(), 'compile-hint-'));
   writeFileSync(
     join(root, 'index.html'),
@@ -28,7 +31,7 @@ async function buildFixture(): Promise<string> {
     root,
     configFile: false,
     logLevel: 'silent',
-    plugins: [compileHint('shared')],
+    plugins: [compileHint(targets)],
     build: {
       outDir,
       sourcemap: true,
@@ -46,7 +49,7 @@ async function buildFixture(): Promise<string> {
 
 describe('compileHint', () => {
   test('starts the named chunk with the hint, leaves the others alone, and keeps its source map true', async () => {
-    const assets = await buildFixture();
+    const assets = await buildFixture(['shared']);
     const scripts = readdirSync(assets).filter((f) => f.endsWith('.js'));
     const hinted = scripts.filter((f) =>
       readFileSync(join(assets, f), 'utf8').startsWith(`${COMPILE_HINT}\n`),
@@ -66,5 +69,19 @@ describe('compileHint', () => {
     expect(line).toBeGreaterThan(0);
     expect(moduleAt(map, line, lines[line].indexOf('*2'))).toMatch(/shared\.js$/);
     expect(map.lines[0]).toEqual([]);
+  }, 60_000);
+
+  test('also finds a chunk by a module it holds, and fails the build for a target with no chunk', async () => {
+    const assets = await buildFixture(['shared', '/later.js']);
+    const hinted = readdirSync(assets)
+      .filter((f) => f.endsWith('.js'))
+      .filter((f) => readFileSync(join(assets, f), 'utf8').startsWith(`${COMPILE_HINT}\n`))
+      .sort();
+    expect(hinted).toHaveLength(2);
+    expect(hinted[0]).toMatch(/^later-/);
+    expect(hinted[1]).toMatch(/^shared-/);
+    await expect(buildFixture(['shared', '/gone.js'])).rejects.toThrow(
+      /compile hint: no chunk for \/gone\.js/,
+    );
   }, 60_000);
 });

@@ -95,19 +95,20 @@ export function RateMap(props: Props) {
   // parts a paint later (the check screen: src/state/check/listed.ts; the whole machine:
   // useAfterPaint), so the series and its drawing never hold up the key that changed them.
   const computed = useMemo(
-    () => (seen ? computeMap(parts, range, log, sampler, key) : null),
-    [seen, inputsKey],
+    () => (seen.near ? computeMap(parts, range, log, sampler, key) : null),
+    [seen.near, inputsKey],
   );
   const series = computed !== null && 'series' in computed ? computed.series : null;
 
   // The chart itself: rebuilt when the axis kind or the unit changes, resized with its box.
-  // Made as soon as the map is rendered seen (a layout effect): a page about to be printed gets
-  // its chart before the printout is laid out.
+  // Made a task after the series when the map scrolls near (each alone a shorter wait for a tap
+  // or key than both together); at once, in a layout effect, for a page about to be printed, so
+  // the printout has it.
   const hasSeries = series !== null;
   useLayoutEffect(() => {
     const holder = holderRef.current;
     const root = rootRef.current;
-    if (!seen || !chartModule || !holder || !root || !series) return;
+    if (!seen.later || !chartModule || !holder || !root || !series) return;
     if (computed === null || !('limit' in computed)) return;
     const unit = rateUnit(samplerKind, flashUnit);
     const size = chartSize(holder);
@@ -153,7 +154,7 @@ export function RateMap(props: Props) {
     };
     // Data and rate changes go through update() and setRate() below, without a rebuild.
   }, [
-    seen,
+    seen.later,
     chartModule,
     computed?.log,
     samplerKind,

@@ -6,7 +6,7 @@ import type { LighthouseFigures } from './lighthouse';
 import type { FigureRow } from './report';
 import { ms } from './report';
 import { median, percentile } from './stats';
-import { MEASURED_KEYS, type TypingFigures } from './typing';
+import { MEASURED_KEYS, textsAfterKeys, type TypingFigures } from './typing';
 
 export interface Runs {
   lighthouse: LighthouseFigures[];
@@ -105,13 +105,26 @@ export function typingDetails(runs: Runs): string[] {
   const done = (r: TypingFigures) => r.keyToFrameDoneMs;
   const slow = runs.throttled;
   const fast = runs.unthrottled;
-  const longTasks = slow.reduce((n, r) => n + r.longTasksMs.length, 0);
   return [
     `keydown → that frame's style, layout and paint done (main thread), 4×: median ${over(slow, done, 50)} / p90 ${over(slow, done, 90)} ms; unthrottled: median ${over(fast, done, 50)} / p90 ${over(fast, done, 90)} ms`,
     `keydown → next frame, unthrottled, median: ${over(fast, (r) => r.keyToRafMs, 50)} ms`,
     `Event Timing keydown duration (to the next paint; 8 ms steps, under 16 ms not reported), 4×: ${eventTiming(slow)}; unthrottled: ${eventTiming(fast)}`,
-    `long tasks while typing at 4×: ${longTasks} in ${slow.length} runs of ${MEASURED_KEYS} keys`,
+    longTaskLine(slow),
   ];
+}
+
+/** How many long tasks came while typing at 4×, and which key each followed. */
+export function longTaskLine(slow: TypingFigures[]): string {
+  const texts = textsAfterKeys();
+  const where = slow.flatMap((r) =>
+    r.longTasksMs.map((d, i) => {
+      const key = r.longTaskKeys[i];
+      const after = key === 0 ? 'before the first key' : `after key ${key} ("${texts[key - 1]}")`;
+      return `${d.toFixed(0)} ms ${after}`;
+    }),
+  );
+  const list = where.length ? `: ${where.join('; ')}` : '';
+  return `long tasks while typing at 4×: ${where.length} in ${slow.length} runs of ${MEASURED_KEYS} keys${list}`;
 }
 
 /** Median and p90 of Event Timing durations, a key with no entry counting as under 16 ms. */

@@ -22,7 +22,8 @@ export interface ProbeRecords {
   samples: KeySample[];
   /** Event Timing keydown entries: start (= the keydown's timeStamp) and duration. */
   eventTimings: Array<{ startMs: number; durationMs: number }>;
-  longTasksMs: number[];
+  /** Long tasks: start (page clock) and duration. */
+  longTasks: Array<{ startMs: number; durationMs: number }>;
 }
 
 export interface KeyProbe {
@@ -44,7 +45,7 @@ declare global {
 export function installKeyProbe(): void {
   const samples: KeySample[] = [];
   const eventTimings: ProbeRecords['eventTimings'] = [];
-  const longTasksMs: number[] = [];
+  const longTasks: ProbeRecords['longTasks'] = [];
   let pending: { key: string; keydownMs: number } | null = null;
   let changed: () => void = () => undefined;
 
@@ -76,10 +77,11 @@ export function installKeyProbe(): void {
   };
   const events = new PerformanceObserver((list) => keepEvents(list.getEntries()));
   events.observe({ type: 'event', durationThreshold: 16 } as PerformanceObserverInit);
-  const longTasks = new PerformanceObserver((list) => {
-    for (const e of list.getEntries()) longTasksMs.push(e.duration);
+  const longTaskObserver = new PerformanceObserver((list) => {
+    for (const e of list.getEntries())
+      longTasks.push({ startMs: e.startTime, durationMs: e.duration });
   });
-  longTasks.observe({ type: 'longtask' });
+  longTaskObserver.observe({ type: 'longtask' });
 
   const nextFrame = () => new Promise<void>((r) => requestAnimationFrame(() => r()));
 
@@ -111,11 +113,13 @@ export function installKeyProbe(): void {
       await nextFrame();
       keepEvents(events.takeRecords());
       events.disconnect();
-      for (const e of longTasks.takeRecords()) longTasksMs.push(e.duration);
-      longTasks.disconnect();
+      for (const e of longTaskObserver.takeRecords()) {
+        longTasks.push({ startMs: e.startTime, durationMs: e.duration });
+      }
+      longTaskObserver.disconnect();
       window.removeEventListener('keydown', onKeydown, true);
       document.removeEventListener('input', onInput);
-      return { samples, eventTimings, longTasksMs };
+      return { samples, eventTimings, longTasks };
     },
   };
 }

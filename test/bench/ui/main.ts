@@ -9,7 +9,7 @@ import { benchDistDir, benchOutputDir, buildForBench, serveBench } from './serve
 import { lighthouseRun, type LighthouseFigures } from './lighthouse';
 import { firstPaintFiles } from './first-paint';
 import { typingRun, type TypingFigures } from './typing';
-import { figureRows, typingDetails, typingLine } from './figures';
+import { figureRows, longTaskLine, typingDetails, typingLine } from './figures';
 import { formatTable, ms, summaryLine } from './report';
 import { lighthouseDiagnostics } from './diagnostics';
 import { profileRun } from './profile';
@@ -82,6 +82,7 @@ export async function main(args: readonly string[]): Promise<void> {
         `${name}: ${typingLine({ ...runs[0], keyToRafMs: all, keyToFrameDoneMs: runs.flatMap((r) => r.keyToFrameDoneMs), longTasksMs: runs.flatMap((r) => r.longTasksMs) })} (all runs pooled)`,
       );
     }
+    log(longTaskLine(throttled));
     return;
   }
   const firstPaint = await stage('first-paint size', () => firstPaintFiles(benchDistDir));

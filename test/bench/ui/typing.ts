@@ -54,6 +54,8 @@ export interface TypingFigures {
   eventTimingMs: Array<number | null>;
   /** Every long task (≥ 50 ms) while typing. */
   longTasksMs: number[];
+  /** For each long task, the measured key (1-based) pressed last before it began; 0: before the first. */
+  longTaskKeys: number[];
   finalText: string;
 }
 
@@ -116,7 +118,10 @@ export async function typingRun(
           records.eventTimings.find((e) => Math.abs(e.startMs - s.keydownMs) < 1)?.durationMs ??
           null,
       ),
-      longTasksMs: records.longTasksMs,
+      longTasksMs: records.longTasks.map((t) => t.durationMs),
+      longTaskKeys: records.longTasks.map(
+        (t) => records.samples.filter((s) => s.keydownMs <= t.startMs + 1).length,
+      ),
       finalText,
     };
   } finally {
