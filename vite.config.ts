@@ -6,6 +6,7 @@ import { contentSecurityPolicy } from './scripts/content-security-policy.ts';
 import { compileHint } from './scripts/compile-hint.ts';
 import { firstPaintChunk } from './scripts/first-paint-chunk.ts';
 import { lazyUplotFormattersPlugin } from './scripts/lazy-uplot-formatters.ts';
+import { prerenderFirstScreen } from './scripts/prerender.ts';
 
 const firstPaint = firstPaintChunk();
 
@@ -17,6 +18,8 @@ export default defineConfig({
     firstPaint.plugin,
     // uPlot builds its Intl formatters when first used, not as it loads.
     lazyUplotFormattersPlugin(),
+    // The built page holds the first screen as HTML, painted before the script runs.
+    prerenderFirstScreen(),
     // The built page allows scripts, styles, workers and connections from its own origin only.
     contentSecurityPolicy(),
     // Chrome compiles these as they load, not function by function: the first screen's script,

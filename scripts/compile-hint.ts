@@ -26,7 +26,8 @@ export const COMPILE_HINT = '//# allFunctionsCalledOnLoad';
 export function compileHint(targets: readonly string[]): Plugin {
   return {
     name: 'trueturn-compile-hint',
-    apply: 'build',
+    // The page's own build: a server-side build (the prerender) has no such chunks.
+    apply: (_config, env) => env.command === 'build' && !env.isSsrBuild,
     enforce: 'post',
     generateBundle: {
       // After Vite's own generateBundle, which puts its list of preloaded files on the first line.

@@ -17,7 +17,11 @@ function LaterUpdateNotice() {
 
 // The set-up the page opens with: one that differs when the session starts was typed on.
 const openedWith = setup.peek();
-render(<App updateNotice={<LaterUpdateNotice />} />, document.getElementById('app')!);
+const mount = document.getElementById('app')!;
+// The built page holds this same first screen as HTML (scripts/prerender.ts), inert until now:
+// the render takes its elements over, and from here on they answer.
+render(<App updateNotice={<LaterUpdateNotice />} />, mount);
+mount.removeAttribute('inert');
 // The session's code (storage, saved machines, share links) is asked for once the first screen
 // is painted, so that paint waits for none of it.
 afterNextPaint(() => void openSession());

@@ -51,7 +51,13 @@ export interface Session {
 }
 
 export async function openBrowser(
-  options: { width?: number; height?: number; colorScheme?: 'light' | 'dark' } = {},
+  options: {
+    width?: number;
+    height?: number;
+    colorScheme?: 'light' | 'dark';
+    /** false: the page's scripts do not run (what the built HTML shows on its own). */
+    javaScript?: boolean;
+  } = {},
 ): Promise<Session> {
   const profile = mkdtempSync(join(tmpdir(), 'trueturn-browser-'));
   const context = await chromium.launchPersistentContext(profile, {
@@ -59,6 +65,7 @@ export async function openBrowser(
     headless: true,
     viewport: { width: options.width ?? 390, height: options.height ?? 844 },
     colorScheme: options.colorScheme ?? 'light',
+    javaScriptEnabled: options.javaScript ?? true,
     acceptDownloads: true,
     args: CHROMIUM_ARGS,
   });
