@@ -23,7 +23,14 @@ const RANK: Record<string, number> = {
 
 /** Packages each layer may use; the rest of src uses none beyond these. */
 const PACKAGES: Record<string, readonly string[]> = {
-  app: ['preact', 'preact/hooks', '@preact/signals', 'virtual:pwa-register/preact'],
+  // preact-render-to-string: only app/prerender.tsx, run at build time (scripts/prerender.ts).
+  app: [
+    'preact',
+    'preact/hooks',
+    '@preact/signals',
+    'virtual:pwa-register/preact',
+    'preact-render-to-string',
+  ],
   screens: ['preact', 'preact/hooks', '@preact/signals'],
   ui: ['preact', 'preact/hooks', '@preact/signals', 'uplot', 'uplot/dist/uPlot.min.css'],
   words: [],
