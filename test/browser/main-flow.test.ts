@@ -153,8 +153,11 @@ describe('the main flow', () => {
       .toBe(
         `${formatNumber(rollingSkewDegrees(f, 0.03))}° top to bottom, ${formatNumber((rollingSkewDegrees(f, 0.03) * 6) / 360)} pitches`,
       );
-    // A camera's frames are not flashes: no photosensitivity caution.
-    expect(await page.getByTestId('photosensitivity-notice').count()).toBe(0);
+    // A camera's frames are not flashes: no photosensitivity caution (once the screen has stood
+    // still: a caution leaves only when typing pauses).
+    await expect
+      .poll(() => page.getByTestId('photosensitivity-notice').count(), { timeout: 10_000 })
+      .toBe(0);
     mkdirSync(shots, { recursive: true });
     await wholePageScreenshot(page, `${shots}/check-phone-camera-full.png`);
   });

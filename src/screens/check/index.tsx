@@ -1,8 +1,10 @@
 import type { ComponentChildren } from 'preact';
 import { useRef } from 'preact/hooks';
-import { checkProblem, picturesBehind } from '../../state/check';
+import { check, checkProblem, picturesBehind } from '../../state/check';
 import { problemsAmong } from '../../state/fieldProblems';
 import { Cautions } from '../../ui/cautions';
+import { useHeldOn } from '../../ui/heldOn';
+import { SETTLE_MS } from '../../ui/settled-status';
 import { Later } from '../../ui/later';
 import { NotCurrent } from '../../ui/not-current';
 import { PartForm } from '../../ui/part-form';
@@ -114,15 +116,20 @@ function LaterResults({ part }: { part: 'lists' | 'report' }) {
   );
 }
 
-/** The cautions and notes under the verdict: they re-render when one comes or goes. */
+/**
+ * The cautions and notes under the verdict: they re-render when one comes or goes. A caution
+ * comes at once; while a value is being typed it stays until typing pauses (SETTLE_MS, as the
+ * spoken verdict waits), so the values passed on the way do not flash it in and out and move
+ * the form under the typing finger.
+ */
 function CheckWarnings() {
   const notes = checkNotes.value;
+  const safety = useHeldOn(screenShowsSafety, check, SETTLE_MS);
+  const flashing = useHeldOn(screenShowsFlashing, check, SETTLE_MS);
   return (
     <>
       {/* With the verdict withdrawn nothing says the view is true: keep the stillness caution. */}
-      <Cautions
-        show={{ safety: screenShowsSafety.value, photosensitivity: screenShowsFlashing.value }}
-      />
+      <Cautions show={{ safety: safety.value, photosensitivity: flashing.value }} />
       {notes.length > 0 && (
         <NotCurrent problems={problemsAmong(RESULT_FIELDS)} refusal={checkProblem.value}>
           <ul class={style.notes} data-testid="check-notes">

@@ -75,7 +75,10 @@ describe('the check screen’s preview and rate map', () => {
       parts: [{ name: 'Disc', speedRpm: 3600, features: 1, tolerancePercent: 0 }],
       strobe: { rateFpm: 125 * 60, minFpm: 30, maxFpm: 12000 },
     });
-    await waitFor(() => expect(screen.queryByTestId('safety-notice')).toBeNull());
+    // The screen's caution leaves once the entries have stood still (SETTLE_MS).
+    await waitFor(() => expect(screen.queryByTestId('safety-notice')).toBeNull(), {
+      timeout: 5000,
+    });
     await listsCaughtUp();
     expect(apparentMotion({ speedHz: 60, symmetry: 1 }, 125).look).toBe('true');
     expect(within(preview).queryByText(stillness)).toBeNull();
