@@ -4,7 +4,7 @@ import preact from '@preact/preset-vite';
 import { VitePWA } from 'vite-plugin-pwa';
 import { contentSecurityPolicy } from './scripts/content-security-policy.ts';
 import { compileHint } from './scripts/compile-hint.ts';
-import { FIRST_PAINT_CHUNK, firstPaintChunk } from './scripts/first-paint-chunk.ts';
+import { firstPaintChunk } from './scripts/first-paint-chunk.ts';
 import { lazyUplotFormattersPlugin } from './scripts/lazy-uplot-formatters.ts';
 import { prerenderFirstScreen } from './scripts/prerender.ts';
 
@@ -26,7 +26,7 @@ export default defineConfig({
     // and the rate map with its chart and uPlot, drawn all at once when the map comes near the
     // screen (scripts/compile-hint.ts).
     compileHint([
-      FIRST_PAINT_CHUNK,
+      'first-paint',
       '/src/ui/rate-map/index.tsx',
       '/src/ui/rate-map/chart.ts',
       '/node_modules/uplot/dist/uPlot.esm.js',
@@ -88,16 +88,10 @@ export default defineConfig({
       treeshake: {
         moduleSideEffects: (id) => (id.includes('/src/core/') ? false : undefined),
       },
-      // What the first screen needs to answer, in one script and one style sheet
-      // (scripts/first-paint-chunk.ts).
+      // What the first screen needs, in one script and one style sheet (scripts/first-paint-chunk.ts).
       output: {
         codeSplitting: {
-          groups: [
-            // What the page's entry itself imports stays in the entry's chunk (named after it),
-            // so the entry fetches nothing more before the first paint.
-            { name: 'index', test: (id) => firstPaint.entryHolds(id), priority: 20 },
-            { name: FIRST_PAINT_CHUNK, test: (id) => firstPaint.holds(id), priority: 10 },
-          ],
+          groups: [{ name: 'first-paint', test: (id) => firstPaint.holds(id), priority: 10 }],
         },
       },
     },

@@ -3,7 +3,7 @@
 // caution as soon as the page and its style sheet arrive, without waiting for the script: the
 // largest paint no longer waits on script (bench:ui, Lighthouse mobile LCP).
 //
-// The markup is inert until the script has rendered over it (src/app/start.tsx removes the
+// The markup is inert until the script has rendered over it (src/app/main.tsx removes the
 // attribute): a field typed into before then would lose its text to the first render.
 // The script's first render reuses these elements (Preact's render over existing children), so
 // the painted verdict stays where it is and nothing shifts.

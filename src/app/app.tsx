@@ -9,7 +9,7 @@ import './theme/global.css';
 import './theme/print.css';
 
 interface Props {
-  /** The service-worker notice (start.tsx passes it; tests leave it out). */
+  /** The service-worker notice (main.tsx passes it; tests leave it out). */
   updateNotice?: ComponentChildren;
 }
 

@@ -1,18 +1,62 @@
-// The page's entry. The built page already holds the first screen as HTML (scripts/prerender.ts),
-// so the app's script (start.tsx: the render that brings that screen to life, then the session)
-// is asked for only once the screen has been painted. From the service worker's cache the script
-// would otherwise arrive at once and run before the first paint, holding the screen back for
-// the length of its first render. This module imports only the paint helper, so it stays a few
-// hundred bytes in front of the paint (scripts/first-paint-chunk.ts keeps the app out of it).
+import { render } from 'preact';
 import { afterNextPaint } from '../state/afterNextPaint';
+import { storageOpened } from '../state/sessionNotices';
+import { setup } from '../state/setup';
+import { storageStatus } from '../state/store/status';
+import { lazyModule } from '../ui/lazyModule';
+import { App } from './app';
 
-afterNextPaint(() => {
-  import('./start').catch(() => {
-    // Its chunk could not be fetched (an old page after an update, offline before the first
-    // visit finished): the screen would stay inert, so say so on it.
-    const notice = document.createElement('p');
-    notice.setAttribute('role', 'alert');
-    notice.textContent = 'Trueturn could not load its script. Reload the page to try again.';
-    document.body.prepend(notice);
-  });
-});
+// The service worker's registration and its notice need nothing before the first paint: they
+// load in a chunk of their own just after it (the worker itself only precaches for next time).
+const updateNotice = lazyModule(() => import('./update-notice/connected'));
+
+function LaterUpdateNotice() {
+  const { module } = updateNotice.use();
+  return module ? <module.ServiceWorkerNotice /> : null;
+}
+
+// The set-up the page opens with: one that differs when the session starts was typed on.
+const openedWith = setup.peek();
+const mount = document.getElementById('app')!;
+// The built page holds this same first screen as HTML (scripts/prerender.ts), inert until now:
+// the render takes its elements over, and from here on they answer.
+render(<App updateNotice={<LaterUpdateNotice />} />, mount);
+mount.removeAttribute('inert');
+// The session's code (storage, saved machines, share links) is asked for once the first screen
+// is painted, so that paint waits for none of it.
+afterNextPaint(() => void openSession());
+
+async function openSession(): Promise<void> {
+  let session: typeof import('../state/session');
+  try {
+    session = await import('../state/session');
+  } catch {
+    // Its chunk could not be fetched (an old page after an update, offline): say so.
+    storageStatus.value = {
+      mode: 'memory',
+      reason:
+        'Saving could not be started: changes last only until this tab is closed. Reload the page to try again.',
+    };
+    storageOpened.value = true;
+    markOpen();
+    return;
+  }
+  try {
+    // What typed on before this keeps what was typed (and saves it).
+    await session.startSession(openedWith);
+  } catch (error) {
+    // Storage faults are told by the store itself; anything else is a bug worth a trace.
+    console.error(error);
+  } finally {
+    markOpen();
+  }
+}
+
+/**
+ * The page says when the starting machine is in place (a share link, or the last visit's working
+ * copy): what is typed from then on can no longer be replaced by it. Browser tests wait for this
+ * before they type.
+ */
+function markOpen(): void {
+  document.documentElement.dataset.session = 'open';
+}

@@ -105,7 +105,7 @@ export async function startSession(openedWith?: Setup): Promise<void> {
   // What the page opened with: anything typed while storage opens must win over the last visit,
   // and is kept from the first keystroke (a reload a moment later must not lose it). This code
   // loads after the first paint: a set-up that is no longer the one the page opened with
-  // (`openedWith`, from start.tsx) was typed on meanwhile, and is kept as it is.
+  // (`openedWith`, from main.tsx) was typed on meanwhile, and is kept as it is.
   const typedAlready = openedWith !== undefined && setup.peek() !== openedWith;
   const untouched = typedAlready ? null : workRecord.peek();
   const hash = location.hash;

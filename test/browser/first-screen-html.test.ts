@@ -1,7 +1,6 @@
 // The built page holds its first screen as HTML (scripts/prerender.ts): it paints the verdict
 // and the stillness caution before any script runs, cannot be typed into until the script has
 // taken it over, and the script's first render keeps those elements rather than drawing anew.
-// Before that paint the page loads only its small entry and the style sheet.
 import { afterEach, describe, expect, inject, test } from 'vitest';
 import { STILLNESS_CAUTION } from '../../src/words/cautions';
 import { openApp, openBrowser, typeInto, type Session } from './browser';
@@ -26,21 +25,6 @@ describe('the first screen in the built HTML', () => {
     expect(await page.locator('#app').getAttribute('inert')).toBe('');
     await page.getByLabel('Speed', { exact: true }).click({ force: true });
     expect(await page.evaluate(() => document.activeElement?.id ?? '')).not.toBe('speed');
-  });
-
-  test('loads one small script and the style sheet before the first paint, the app only after it', async () => {
-    // src/app/main.tsx asks for the app once the prerendered screen is painted: the page may
-    // load nothing more before that paint than that entry (no preload, no static import).
-    const base = inject('baseUrl');
-    const html = await (await fetch(base)).text();
-    const scripts = [...html.matchAll(/<script\b[^>]*\bsrc="([^"]+)"/g)].map((m) => m[1]);
-    expect(scripts).toHaveLength(1);
-    expect(html).not.toMatch(/rel="modulepreload"/);
-    expect(html).toMatch(/<link rel="stylesheet"[^>]*href="\/assets\/first-paint-[^"]+\.css"/);
-    const entry = await (await fetch(new URL(scripts[0], base))).text();
-    expect(entry.match(/\bimport\s*[{*\w][^;]*?from\s*["']/g) ?? []).toEqual([]);
-    expect(entry).toMatch(/import\(`\.\/first-paint-[\w-]+\.js`\)/);
-    expect(new TextEncoder().encode(entry).length).toBeLessThan(4000);
   });
 
   test('is taken over by the script: the same caution element, one verdict, and a field that answers', async () => {

@@ -1,9 +1,7 @@
 // The script and style bytes the built page needs before its first paint: what index.html
 // loads (scripts, module preloads, style sheets, inline code) and every chunk the entry imports
-// statically, with their CSS, as Vite's manifest records them. Then, marked as after the paint,
-// what the entry module imports by script (src/app/main.tsx asks for the app's start once the
-// prerendered screen is painted): the bytes the screen needs before it answers. Other dynamic
-// imports load later still and are left out. Each file is gzipped on its own (level 9).
+// statically, with their CSS, as Vite's manifest records them. Dynamic imports load after the
+// first paint and are left out. Each file is gzipped on its own (level 9) and the sizes summed.
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
@@ -11,10 +9,8 @@ import { gzipSync } from 'node:zlib';
 export interface FirstPaintFile {
   /** Path inside the build, or "index.html (inline …)" for code written into the page. */
   file: string;
-  /** Why it loads. */
+  /** Why it loads before the first paint. */
   why: string;
-  /** False for the start the entry asks for once the first screen is painted. */
-  beforePaint: boolean;
   bytes: number;
   gzipBytes: number;
 }
@@ -23,7 +19,6 @@ interface ManifestChunk {
   file: string;
   imports?: string[];
   css?: string[];
-  dynamicImports?: string[];
   isEntry?: boolean;
 }
 
@@ -34,13 +29,12 @@ export function firstPaintFiles(distDir: string): FirstPaintFile[] {
   const manifest = JSON.parse(readFileSync(manifestPath, 'utf8')) as Record<string, ManifestChunk>;
   const byFile = new Map(Object.values(manifest).map((chunk) => [chunk.file, chunk]));
 
-  const found = new Map<string, { why: string; content: Buffer; beforePaint: boolean }>();
-  let beforePaint = true;
+  const found = new Map<string, { why: string; content: Buffer }>();
   const add = (file: string, why: string) => {
     if (found.has(file)) return;
     const path = join(distDir, file);
     if (!existsSync(path)) throw new Error(`index.html or the manifest names ${file}, not built`);
-    found.set(file, { why, content: readFileSync(path), beforePaint });
+    found.set(file, { why, content: readFileSync(path) });
   };
   const addChunk = (chunk: ManifestChunk, why: string) => {
     add(chunk.file, why);
@@ -53,25 +47,21 @@ export function firstPaintFiles(distDir: string): FirstPaintFile[] {
   };
 
   let inline = 0;
-  const entries: ManifestChunk[] = [];
   for (const tag of tags(html)) {
     if (tag.name === 'script' && tag.attrs.src) {
       const file = local(tag.attrs.src);
       const chunk = byFile.get(file);
       if (chunk) addChunk(chunk, tag.attrs.type === 'module' ? 'entry module' : 'script');
       else add(file, 'script');
-      if (chunk && tag.attrs.type === 'module') entries.push(chunk);
     } else if (tag.name === 'script' && tag.body.trim()) {
       found.set(`index.html (inline script ${++inline})`, {
         why: 'inline script',
         content: Buffer.from(tag.body),
-        beforePaint,
       });
     } else if (tag.name === 'style' && tag.body.trim()) {
       found.set(`index.html (inline style ${++inline})`, {
         why: 'inline style',
         content: Buffer.from(tag.body),
-        beforePaint,
       });
     } else if (tag.name === 'link' && tag.attrs.href) {
       const rel = (tag.attrs.rel ?? '').toLowerCase();
@@ -80,18 +70,9 @@ export function firstPaintFiles(distDir: string): FirstPaintFile[] {
     }
   }
   if (found.size === 0) throw new Error('index.html loads no script or style sheet');
-  beforePaint = false;
-  for (const entry of entries) {
-    for (const key of entry.dynamicImports ?? []) {
-      const imported = manifest[key];
-      if (!imported) throw new Error(`manifest: ${entry.file} imports ${key}, not in the manifest`);
-      addChunk(imported, `imported by ${entry.file} once the first screen is painted`);
-    }
-  }
-  return [...found].map(([file, { why, content, beforePaint }]) => ({
+  return [...found].map(([file, { why, content }]) => ({
     file,
     why,
-    beforePaint,
     bytes: content.length,
     gzipBytes: gzipSync(content, { level: 9 }).length,
   }));

@@ -96,15 +96,10 @@ export async function main(args: readonly string[]): Promise<void> {
   log();
   log(formatTable(rows));
   log();
-  const kb = (bytes: number) => (bytes / 1000).toFixed(1);
-  for (const [title, before] of [
-    ['Before first paint (each file gzip -9; kB = 1000 bytes):', true],
-    ['Asked for once the first screen is painted, before it answers:', false],
-  ] as const) {
-    log(title);
-    for (const f of firstPaint.filter((file) => file.beforePaint === before)) {
-      log(`  ${kb(f.gzipBytes).padStart(5)} kB gzip (${kb(f.bytes)} kB raw)  ${f.file}: ${f.why}`);
-    }
+  log('Before first paint (each file gzip -9; kB = 1000 bytes):');
+  for (const f of firstPaint) {
+    const kb = (bytes: number) => (bytes / 1000).toFixed(1);
+    log(`  ${kb(f.gzipBytes).padStart(5)} kB gzip (${kb(f.bytes)} kB raw)  ${f.file}: ${f.why}`);
   }
   log();
   log('Typing: "next frame" is the first animation-frame callback after the update. Also:');

@@ -1,6 +1,6 @@
 // The build `bench:ui --profile` records: the app as it ships but not minified (function and
 // component names kept), with source maps, and with render-counter.ts bundled in front of
-// src/app/start.tsx (the app's source is not changed).
+// src/app/main.tsx (the app's source is not changed).
 import { resolve } from 'node:path';
 import { build, type Plugin } from 'vite';
 
@@ -14,7 +14,7 @@ function countRenders(): Plugin {
       // package.json's "sideEffects" list would let the bundler drop a bare import of the
       // counter: it is kept by saying it has effects.
       if (id === counter) return { code, map: null, moduleSideEffects: true };
-      if (!id.endsWith('/src/app/start.tsx')) return null;
+      if (!id.endsWith('/src/app/main.tsx')) return null;
       return { code: `import ${JSON.stringify(counter)};\n${code}`, map: null };
     },
   };

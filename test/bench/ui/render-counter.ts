@@ -1,5 +1,5 @@
 // Bundled into the app by `bench:ui --profile` only (profile-build.ts puts it first in
-// src/app/start.tsx's build; the app's source is not changed): counts each component's renders
+// src/app/main.tsx's build; the app's source is not changed): counts each component's renders
 // through Preact's option hooks, and times each render from the start of its diff to its end
 // (so a component's time includes the components it renders), so the profile can say what
 // re-renders per keystroke and what that costs. Preact names its diff-start and render hooks
