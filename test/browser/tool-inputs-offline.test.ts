@@ -164,82 +164,123 @@ async function openTab(page: Page, tab: string): Promise<void> {
 }
 
 /**
- * What the working copy on the device does not yet hold of every tool's inputs as typed, each
- * named by its condition (empty once it holds them all; a reload before that would lose the
- * last of them; the page writes a moment after typing stops). Named, so a failure says which.
+ * The part of the working copy on the device that this test types, field by field (undefined
+ * before anything is stored). It must come to equal TYPED: a reload before that would lose the
+ * last inputs; the page writes a moment after typing stops. On a miss, the diff names the field.
  */
-function notYetHeld(c: MachineContent | undefined): string[] {
-  if (!c) return ['no working copy stored'];
+function storedInputs(c: MachineContent | undefined) {
+  if (!c) return undefined;
   const [fan, drum] = c.setup.parts;
   const { speedFinder, camera, logger } = c.tools;
+  const { lighting } = c.setup;
   const reading = speedFinder.readings[0];
-  const belt = drum?.drive?.kind === 'belt' ? drum.drive : undefined;
-  const wanted: [string, () => boolean][] = [
-    ["c.name === 'Kiln 5 exhaust fan'", () => c.name === 'Kiln 5 exhaust fan'],
-    [
-      "c.site === 'Harrowgate Tile Works, kiln hall'",
-      () => c.site === 'Harrowgate Tile Works, kiln hall',
-    ],
-    ["c.assessedBy === 'R. Okafor'", () => c.assessedBy === 'R. Okafor'],
-    ['fan.speedRpm === 2400', () => fan.speedRpm === 2400],
-    ['fan.features === 5', () => fan.features === 5],
-    ['fan.tolerancePercent === 2', () => fan.tolerancePercent === 2],
-    ['c.setup.creepRpm === 3', () => c.setup.creepRpm === 3],
-    ["c.setup.samplerKind === 'camera'", () => c.setup.samplerKind === 'camera'],
-    ['c.setup.camera.frameRate === 100', () => c.setup.camera.frameRate === 100],
-    ['c.setup.activePart === 0', () => c.setup.activePart === 0],
-    ['speedFinder.readings.length === 1', () => speedFinder.readings.length === 1],
-    ['reading 1: rateFpm === 1780', () => reading?.rateFpm === 1780],
-    ['reading 1: images === 1', () => reading?.images === 1],
-    ['speedFinder.features === 6', () => speedFinder.features === 6],
-    ["speedFinder.expectation.mode === 'rpm'", () => speedFinder.expectation.mode === 'rpm'],
-    ['speedFinder.expectation.fromRpm === 200', () => speedFinder.expectation.fromRpm === 200],
-    ['speedFinder.expectation.toRpm === 400', () => speedFinder.expectation.toRpm === 400],
-    ["!camera.standardLabels.includes('24')", () => !camera.standardLabels.includes('24')],
-    [
-      "camera.otherRatesHz.join(' ') === '100 200'",
-      () => camera.otherRatesHz.join(' ') === '100 200',
-    ],
-    [
-      "camera.shutterAnglesDeg.join(' ') === '90 180'",
-      () => camera.shutterAnglesDeg.join(' ') === '90 180',
-    ],
-    [
-      "camera.exposuresS.join(' ') === `${1 / 250} ${1 / 1000}`",
-      () => camera.exposuresS.join(' ') === `${1 / 250} ${1 / 1000}`,
-    ],
-    ['camera.readoutMs === 12', () => camera.readoutMs === 12],
-    ["camera.goal === 'creep'", () => camera.goal === 'creep'],
-    ['logger.harmonics === 3', () => logger.harmonics === 3],
-    ["logger.blades?.join(' ') === '5 7'", () => logger.blades?.join(' ') === '5 7'],
-    ["logger.gearTeeth.join(' ') === '17'", () => logger.gearTeeth.join(' ') === '17'],
-    [
-      "logger.extraTonesHz.join(' ') === '50 100'",
-      () => logger.extraTonesHz.join(' ') === '50 100',
-    ],
-    ['logger.sampleHz === 2000', () => logger.sampleHz === 2000],
-    ['logger.bits === 12', () => logger.bits === 12],
-    ["logger.filterKind === 'butterworth'", () => logger.filterKind === 'butterworth'],
-    ['logger.order === 6', () => logger.order === 6],
-    ['logger.cutoffHz === 400', () => logger.cutoffHz === 400],
-    ['c.setup.lighting.mainsHz === 60', () => c.setup.lighting.mainsHz === 60],
-    ["c.setup.lighting.flicker === 'custom'", () => c.setup.lighting.flicker === 'custom'],
-    ['c.setup.lighting.customHz === 240', () => c.setup.lighting.customHz === 240],
-    [
-      "c.setup.lighting.waveform === 'rectangular'",
-      () => c.setup.lighting.waveform === 'rectangular',
-    ],
-    ['c.setup.lighting.dutyPercent === 25', () => c.setup.lighting.dutyPercent === 25],
-    ['c.setup.lighting.modulationPercent === 80', () => c.setup.lighting.modulationPercent === 80],
-    ["drum?.name === 'Drum'", () => drum?.name === 'Drum'],
-    ["drum's drive is a belt", () => belt !== undefined],
-    ['belt.from === 0', () => belt?.from === 0],
-    ['belt.driverMm === 100', () => belt?.driverMm === 100],
-    ['belt.drivenMm === 250', () => belt?.drivenMm === 250],
-    ['belt.slipPercent === 2', () => belt?.slipPercent === 2],
-  ];
-  return wanted.filter(([, holds]) => !holds()).map(([what]) => what);
+  const drive = drum?.drive;
+  return {
+    name: c.name,
+    site: c.site,
+    assessedBy: c.assessedBy,
+    fan: { speedRpm: fan.speedRpm, features: fan.features, tolerancePercent: fan.tolerancePercent },
+    creepRpm: c.setup.creepRpm,
+    samplerKind: c.setup.samplerKind,
+    frameRate: c.setup.camera.frameRate,
+    activePart: c.setup.activePart,
+    readings: speedFinder.readings.length,
+    reading: { rateFpm: reading?.rateFpm, images: reading?.images },
+    finderFeatures: speedFinder.features,
+    expectation: {
+      mode: speedFinder.expectation.mode,
+      fromRpm: speedFinder.expectation.fromRpm,
+      toRpm: speedFinder.expectation.toRpm,
+    },
+    camera: {
+      has24: camera.standardLabels.includes('24'),
+      otherRatesHz: camera.otherRatesHz.join(' '),
+      shutterAnglesDeg: camera.shutterAnglesDeg.join(' '),
+      exposuresS: camera.exposuresS.join(' '),
+      readoutMs: camera.readoutMs,
+      goal: camera.goal,
+    },
+    logger: {
+      harmonics: logger.harmonics,
+      blades: logger.blades?.join(' '),
+      gearTeeth: logger.gearTeeth.join(' '),
+      extraTonesHz: logger.extraTonesHz.join(' '),
+      sampleHz: logger.sampleHz,
+      bits: logger.bits,
+      filterKind: logger.filterKind,
+      order: logger.order,
+      cutoffHz: logger.cutoffHz,
+    },
+    lighting: {
+      mainsHz: lighting.mainsHz,
+      flicker: lighting.flicker,
+      customHz: lighting.customHz,
+      waveform: lighting.waveform,
+      dutyPercent: lighting.dutyPercent,
+      modulationPercent: lighting.modulationPercent,
+    },
+    drum: {
+      name: drum?.name,
+      drive:
+        drive?.kind === 'belt'
+          ? {
+              kind: drive.kind,
+              from: drive.from,
+              driverMm: drive.driverMm,
+              drivenMm: drive.drivenMm,
+              slipPercent: drive.slipPercent,
+            }
+          : drive?.kind,
+    },
+  };
 }
+
+/** What this test types into every tool, as storedInputs reads it back. */
+const TYPED: ReturnType<typeof storedInputs> = {
+  name: 'Kiln 5 exhaust fan',
+  site: 'Harrowgate Tile Works, kiln hall',
+  assessedBy: 'R. Okafor',
+  fan: { speedRpm: 2400, features: 5, tolerancePercent: 2 },
+  creepRpm: 3,
+  samplerKind: 'camera',
+  frameRate: 100,
+  activePart: 0,
+  readings: 1,
+  reading: { rateFpm: 1780, images: 1 },
+  finderFeatures: 6,
+  expectation: { mode: 'rpm', fromRpm: 200, toRpm: 400 },
+  camera: {
+    has24: false,
+    otherRatesHz: '100 200',
+    shutterAnglesDeg: '90 180',
+    exposuresS: `${1 / 250} ${1 / 1000}`,
+    readoutMs: 12,
+    goal: 'creep',
+  },
+  logger: {
+    harmonics: 3,
+    blades: '5 7',
+    gearTeeth: '17',
+    extraTonesHz: '50 100',
+    sampleHz: 2000,
+    bits: 12,
+    filterKind: 'butterworth',
+    order: 6,
+    cutoffHz: 400,
+  },
+  lighting: {
+    mainsHz: 60,
+    flicker: 'custom',
+    customHz: 240,
+    waveform: 'rectangular',
+    dutyPercent: 25,
+    modulationPercent: 80,
+  },
+  drum: {
+    name: 'Drum',
+    drive: { kind: 'belt', from: 0, driverMm: 100, drivenMm: 250, slipPercent: 2 },
+  },
+};
 
 describe('every tool’s inputs after an offline reload', () => {
   test('the set-up, readings, camera plan, logger set-up, lighting and links all come back', async () => {
@@ -283,8 +324,8 @@ describe('every tool’s inputs after an offline reload', () => {
       }
     }
     await expect
-      .poll(async () => notYetHeld(await storedWork(page)), { timeout: 20_000 })
-      .toEqual([]);
+      .poll(async () => storedInputs(await storedWork(page)), { timeout: 20_000 })
+      .toEqual(TYPED);
 
     await server.stop();
     // The server is really gone: a direct request fails.
