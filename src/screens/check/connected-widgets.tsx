@@ -3,7 +3,7 @@
 // (lazy-widgets.ts); until then a placeholder of about their size holds their place.
 import { computed } from '@preact/signals';
 import { picturedAnswer, picturedSetup } from '../../state/check';
-import { screenShowsSafety } from './screen-flags';
+import { verdictWithdrawn } from './screen-flags';
 import { flashUnit, samplerRateHz, setSamplerRateHz, setup } from '../../state/setup';
 import { Panel } from '../../ui/panel';
 import { widgets as lazyWidgets } from './lazy-widgets';
@@ -11,10 +11,17 @@ import { previewInputOf, rateMapInputOf } from './widget-inputs';
 import style from './style.module.css';
 
 /**
- * Whether the pictures give the caution themselves. Handed over as a signal: only their caution
- * re-renders when it flips, which a keystroke can do, not the chart or the preview.
+ * Whether the pictures give the caution themselves: when the screen would not give it for the
+ * set-up they picture. It follows that set-up (two paints behind the entries) rather than the
+ * one on screen, so a keystroke that flips it leaves the pictures alone until they redraw, and
+ * the caution stays the one for what they show. Nothing goes uncautioned in between: the screen
+ * gives its own caution at once and keeps it until typing pauses (src/ui/heldOn.ts), far longer
+ * than two paints. Handed over as a signal: only their caution re-renders when it flips, not the
+ * chart or the preview.
  */
-const picturesGiveCaution = computed(() => !screenShowsSafety.value);
+const picturesGiveCaution = computed(
+  () => !(picturedAnswer.value.showSafety || verdictWithdrawn.value),
+);
 
 /**
  * The part being checked as the sampler shows it, beside the part as it really turns. Its

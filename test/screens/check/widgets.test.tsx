@@ -2,10 +2,11 @@
 // The preview and the rate map mounted on the check screen: fed from the set-up, and the
 // stillness caution on screen whenever either can show stillness. happy-dom has no 2D canvas,
 // so the map says it cannot draw; the chart itself is checked in Chromium (test/browser/rate-map).
-import { cleanup, render, screen, waitFor, within } from '@testing-library/preact';
+import { act, cleanup, render, screen, waitFor, within } from '@testing-library/preact';
 import { afterEach, beforeEach, describe, expect, test, vi } from 'vitest';
 import { apparentMotion } from '../../../src/core';
 import { defaultSetup, type Setup } from '../../../src/state/model';
+import { picturesBehind } from '../../../src/state/check';
 import { replaceSetup, setSamplerRateHz, setup } from '../../../src/state/setup';
 import { CheckScreen } from '../../../src/screens/check';
 import { listsCaughtUp } from '../../helpers/screen-queries';
@@ -83,6 +84,31 @@ describe('the check screen’s preview and rate map', () => {
     expect(apparentMotion({ speedHz: 60, symmetry: 1 }, 125).look).toBe('true');
     expect(within(preview).queryByText(stillness)).toBeNull();
     expect(within(map).getByText(stillness)).toBeTruthy();
+  });
+
+  test('change their own caution with what they picture, while the screen gives its caution at once', async () => {
+    // One mark at 60 rev/s under 125 flashes a second: the true motion (Shannon 1949), so
+    // the screen shows no stillness caution and the map gives it.
+    open({
+      ...structuredClone(defaultSetup),
+      parts: [{ name: 'Disc', speedRpm: 3600, features: 1, tolerancePercent: 0 }],
+      strobe: { rateFpm: 125 * 60, minFpm: 30, maxFpm: 12000 },
+    });
+    const { map } = await widgets();
+    await listsCaughtUp();
+    expect(screen.queryByTestId('safety-notice')).toBeNull();
+    expect(within(map).getByText(stillness)).toBeTruthy();
+
+    // The default set-up looks still. The screen's caution comes in the same render as the
+    // change; the map, still drawn for the set-up before, keeps the caution of that picture.
+    act(() => replaceSetup(defaultSetup));
+    expect(picturesBehind.peek()).toBe(true);
+    expect(screen.getByTestId('safety-notice')).toBeTruthy();
+    expect(within(map).getByText(stillness)).toBeTruthy();
+    // Once the map shows the new set-up, the screen's caution is the one given.
+    await listsCaughtUp();
+    expect(within(map).queryByText(stillness)).toBeNull();
+    expect(screen.getByTestId('safety-notice')).toBeTruthy();
   });
 
   test('say so where the browser cannot draw the chart, instead of failing', async () => {
