@@ -57,6 +57,8 @@ export async function openBrowser(
     colorScheme?: 'light' | 'dark';
     /** false: the page's scripts do not run (what the built HTML shows on its own). */
     javaScript?: boolean;
+    /** A phone's screen: touch input and no mouse pointer over the page (nothing hovered). */
+    touch?: boolean;
   } = {},
 ): Promise<Session> {
   const profile = mkdtempSync(join(tmpdir(), 'trueturn-browser-'));
@@ -66,6 +68,8 @@ export async function openBrowser(
     viewport: { width: options.width ?? 390, height: options.height ?? 844 },
     colorScheme: options.colorScheme ?? 'light',
     javaScriptEnabled: options.javaScript ?? true,
+    isMobile: options.touch ?? false,
+    hasTouch: options.touch ?? false,
     acceptDownloads: true,
     args: CHROMIUM_ARGS,
   });
