@@ -45,6 +45,27 @@ describe('lazyModule', () => {
     expect(screen.getByTestId('shown').textContent).toBe('ready');
   });
 
+  test('asks for the module in a task after the render, and not at all for a component gone by then', async () => {
+    let requests = 0;
+    const lazy = lazyModule(async () => {
+      requests++;
+      return { word: 'ready' };
+    });
+    function Shows() {
+      const { module } = lazy.use();
+      return <p data-testid="shown">{module?.word ?? 'waiting'}</p>;
+    }
+    // render() runs the effects too: the request waits for a task of its own.
+    const first = render(<Shows />);
+    expect(requests).toBe(0);
+    first.unmount();
+    await new Promise((done) => setTimeout(done, 20));
+    expect(requests).toBe(0);
+    render(<Shows />);
+    await screen.findByText('ready');
+    expect(requests).toBe(1);
+  });
+
   test('reports a failed load to the component', async () => {
     const lazy = lazyModule<{ word: string }>(() => Promise.reject(new Error('offline')));
     function Shows() {
