@@ -3,7 +3,7 @@
 // (lazy-widgets.ts); until then a placeholder of about their size holds their place.
 import { computed } from '@preact/signals';
 import { picturedAnswer, picturedSetup } from '../../state/check';
-import { verdictWithdrawn } from './screen-flags';
+import { screenGivesSafetyFor } from './screen-flags';
 import { flashUnit, samplerRateHz, setSamplerRateHz, setup } from '../../state/setup';
 import { Panel } from '../../ui/panel';
 import { widgets as lazyWidgets } from './lazy-widgets';
@@ -19,9 +19,7 @@ import style from './style.module.css';
  * than two paints. Handed over as a signal: only their caution re-renders when it flips, not the
  * chart or the preview.
  */
-const picturesGiveCaution = computed(
-  () => !(picturedAnswer.value.showSafety || verdictWithdrawn.value),
-);
+const picturesGiveCaution = computed(() => !screenGivesSafetyFor(picturedAnswer.value));
 
 /**
  * The part being checked as the sampler shows it, beside the part as it really turns. Its

@@ -1,7 +1,7 @@
 // What the check screen shows above its results, as flags that change only when they flip: the
 // parts that read them re-render then, not on every keystroke.
 import { computed } from '@preact/signals';
-import { check, checkProblem } from '../../state/check';
+import { check, checkProblem, type CheckAnswer } from '../../state/check';
 import { computedSame, sameItems } from '../../state/computedSame';
 import { problemsAmong } from '../../state/fieldProblems';
 import { VERDICT_FIELDS } from './field-ids';
@@ -12,10 +12,15 @@ export const verdictWithdrawn = computed(
 );
 
 /**
- * The screen shows the stillness caution: for an aliased view, and while the verdict is
- * withdrawn (nothing then says the view is true).
+ * Whether the screen gives the stillness caution for `answer`: for an aliased view, and while
+ * the verdict is withdrawn (nothing then says the view is true). Reads the withdrawal signal.
  */
-export const screenShowsSafety = computed(() => check.value.showSafety || verdictWithdrawn.value);
+export function screenGivesSafetyFor(answer: CheckAnswer): boolean {
+  return answer.showSafety || verdictWithdrawn.value;
+}
+
+/** The screen shows the stillness caution for the set-up on screen. */
+export const screenShowsSafety = computed(() => screenGivesSafetyFor(check.value));
 
 /** The screen shows the caution about flashing light. */
 export const screenShowsFlashing = computed(() => check.value.showPhotosensitivity);
