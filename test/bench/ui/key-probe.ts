@@ -32,6 +32,8 @@ export interface KeyProbe {
    * last one was pressed (a person's typing pace); rejects after `timeoutMs`.
    */
   waitFor(count: number, gapMs: number, timeoutMs: number): Promise<void>;
+  /** Resolves after the next frame and at least `gapMs` from now: the pace of a step that is no key. */
+  pause(gapMs: number): Promise<void>;
   /** Stops observing (after two more frames, so late Event Timing entries come in) and hands back what was seen. */
   finish(): Promise<ProbeRecords>;
 }
@@ -107,6 +109,12 @@ export function installKeyProbe(): void {
         changed = check;
         check();
       });
+    },
+    async pause(gapMs) {
+      const from = performance.now();
+      await nextFrame();
+      const wait = from + gapMs - performance.now();
+      if (wait > 0) await new Promise((r) => setTimeout(r, wait));
     },
     async finish() {
       await nextFrame();
