@@ -84,10 +84,10 @@ export async function openBrowser(
   };
 }
 
-/** Loads the app and waits until storage has opened and the first verdict is on screen. */
 /**
- * Opens the app and waits until its starting machine is in place (src/app/main.tsx marks the
- * page): typing before that could race the last visit's working copy as it loads.
+ * Opens the app and waits until the first verdict is on screen and its starting machine is in
+ * place (src/app/main.tsx marks the page): typing before that could race the last visit's
+ * working copy as it loads.
  */
 export async function openApp(page: Page, url: string): Promise<void> {
   await page.goto(url);
