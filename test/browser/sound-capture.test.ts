@@ -1,6 +1,11 @@
 // The sound capture module (src/audio) in real Chromium, fed by its fake microphone: a WAV of
 // a 6-blade fan at 1750 rpm with 100 Hz hum (test/helpers/sound) plays as the microphone
-// (--use-fake-device-for-media-stream --use-file-for-fake-audio-capture). The module is not
+// (--use-fake-device-for-media-stream --use-file-for-fake-audio-capture). The device starts the
+// file when the stream opens, and the recording begins a moment later, later still on a busy
+// machine: so the microphone's fan is steady and its file long (30 s), and any 4 s of it holds
+// 1750 rpm. The 6 s file, whose speed ramps 0.1 %, gave 1748.8 to 1750.6 rpm by where the 4 s
+// fell, and past its end the device starts it again mid-turn: 1752.65 rpm once in a full
+// browser run. A picked file is decoded whole, so that test keeps the ramping 6 s file. The module is not
 // on any app screen yet, so a small page that only loads it is built here, into test-output/,
 // with Vite (as the app is: the worklet bundled as its own file, loaded from the page's origin).
 import { mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -21,6 +26,7 @@ const work = resolve(root, 'test-output/sound-capture');
 const pageDir = join(work, 'page');
 const distDir = join(work, 'dist');
 const wavPath = join(work, 'fan-1750rpm.wav');
+const micWavPath = join(work, 'fan-1750rpm-steady-30s.wav');
 
 /** The page's script: the capture module and the core, driven from the test. */
 const MAIN = `
@@ -126,6 +132,7 @@ beforeAll(async () => {
   );
   writeFileSync(join(pageDir, 'main.js'), MAIN);
   writeWav(wavPath, fanAt1750Rpm(48_000, 6), 48_000);
+  writeWav(micWavPath, fanAt1750Rpm(48_000, 30, 1750, 0), 48_000);
   await build({
     root: pageDir,
     configFile: false,
@@ -156,7 +163,7 @@ describe('sound capture in Chromium', () => {
       [
         '--use-fake-ui-for-media-stream',
         '--use-fake-device-for-media-stream',
-        `--use-file-for-fake-audio-capture=${wavPath}`,
+        `--use-file-for-fake-audio-capture=${micWavPath}`,
       ],
       true,
     );
@@ -194,7 +201,7 @@ describe('sound capture in Chromium', () => {
       [
         '--use-fake-ui-for-media-stream',
         '--use-fake-device-for-media-stream',
-        `--use-file-for-fake-audio-capture=${wavPath}`,
+        `--use-file-for-fake-audio-capture=${micWavPath}`,
       ],
       true,
     );
@@ -224,7 +231,7 @@ describe('sound capture in Chromium', () => {
       [
         '--use-fake-ui-for-media-stream',
         '--use-fake-device-for-media-stream',
-        `--use-file-for-fake-audio-capture=${wavPath}`,
+        `--use-file-for-fake-audio-capture=${micWavPath}`,
       ],
       true,
     );

@@ -135,17 +135,23 @@ function normalise(x: Float64Array): Float64Array {
 
 /**
  * The sound of a 6-blade fan at 1750 rpm on a 50 Hz site: blade pass at 175 Hz with two
- * harmonics, a faint shaft line, 100 Hz hum, pink noise 10 dB down, the speed drifting 0.1 %.
- * Invented test data (the fan of the issue's browser check), peak 0.5 of full scale.
+ * harmonics, a faint shaft line, 100 Hz hum, pink noise 10 dB down, the speed drifting 0.1 %
+ * over the recording (`drift`; 0 for a steady fan). Invented test data (the fan of the issue's
+ * browser check), peak 0.5 of full scale.
  */
-export function fanAt1750Rpm(sampleRateHz = 48_000, durationS = 6, seed = 1750): Float32Array {
+export function fanAt1750Rpm(
+  sampleRateHz = 48_000,
+  durationS = 6,
+  seed = 1750,
+  drift = 0.001,
+): Float32Array {
   const random = seededRandom(seed);
   const samples = machineSound(
     {
       sampleRateHz,
       durationS,
       speedHz: 1750 / 60,
-      drift: 0.001,
+      drift,
       lines: [
         { order: 6, amplitude: 1, phase: 0.4 },
         { order: 12, amplitude: 0.45, phase: 2.1 },
