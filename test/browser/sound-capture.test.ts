@@ -4,10 +4,12 @@
 // file when the stream opens, and the recording begins a moment later, later still on a busy
 // machine: so the microphone's fan is steady and its file long (30 s), and any 4 s of it holds
 // 1750 rpm. The 6 s file, whose speed ramps 0.1 %, gave 1748.8 to 1750.6 rpm by where the 4 s
-// fell, and past its end the device starts it again mid-turn: 1752.65 rpm once in a full
-// browser run. A picked file is decoded whole, so that test keeps the ramping 6 s file. The module is not
-// on any app screen yet, so a small page that only loads it is built here, into test-output/,
-// with Vite (as the app is: the worklet bundled as its own file, loaded from the page's origin).
+// fell, and 1752.65 rpm once in a full browser run. The device also keeps its own time, not the
+// page's audio clock: what it plays is held to 0.5 % (test/helpers/sound/fakeMicrophone.ts). A
+// picked file is decoded whole, so that test keeps the ramping 6 s file and the 2 rpm bar. The
+// module is not on any app screen yet, so a small page that only loads it is built here, into
+// test-output/, with Vite (as the app is: the worklet bundled as its own file, loaded from the
+// page's origin).
 import { mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
